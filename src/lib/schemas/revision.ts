@@ -1,0 +1,80 @@
+// The structured fields of a revision: parts rows, readings, cautions, difficulty. One schema for all sides.
+import { z } from 'zod';
+
+export const cautionKinds = ['mains', 'stored_charge', 'laser', 'heat', 'sharp_edges', 'spring'] as const;
+export const cautionKindSchema = z.enum(cautionKinds);
+export type CautionKind = z.infer<typeof cautionKindSchema>;
+
+export const cautionLabels: Record<CautionKind, string> = {
+  mains: 'Mains voltage',
+  stored_charge: 'Stored charge',
+  laser: 'Laser radiation',
+  heat: 'Hot parts',
+  sharp_edges: 'Sharp edges',
+  spring: 'Spring under tension',
+};
+
+export const difficulties = ['routine', 'careful', 'skilled', 'specialist'] as const;
+export const difficultySchema = z.enum(difficulties);
+export type Difficulty = z.infer<typeof difficultySchema>;
+
+export const difficultyLabels: Record<Difficulty, string> = {
+  routine: 'Routine: basic hand tools',
+  careful: 'Careful: some disassembly',
+  skilled: 'Skilled: soldering and measuring',
+  specialist: 'Specialist: alignment or live work',
+};
+
+export const partKinds = [
+  'capacitor',
+  'resistor',
+  'diode',
+  'transistor',
+  'ic',
+  'fuse',
+  'belt',
+  'idler_tyre',
+  'pinch_roller',
+  'switch',
+  'motor',
+  'optical_pickup',
+  'lamp',
+  'connector',
+  'mechanical',
+  'other',
+] as const;
+export const partKindSchema = z.enum(partKinds);
+export type PartKind = z.infer<typeof partKindSchema>;
+
+export const partRowSchema = z.object({
+  /** Reference designator on the board, e.g. C512; empty for mechanical parts without one. */
+  ref: z.string().trim().max(40).default(''),
+  kind: partKindSchema,
+  /** Value as written: "470uF", "2k2", "belt 92 mm x 4 mm flat". */
+  value: z.string().trim().min(1, 'Give the part value, e.g. 470uF or 2k2.').max(120),
+  /** Rating: voltage, temperature class, wattage, size: "16V 105C", "0.25W". */
+  rating: z.string().trim().max(120).default(''),
+  quantity: z.number().int().min(1, 'Quantity is at least 1.').max(999),
+  notes: z.string().trim().max(500).default(''),
+});
+export type PartRow = z.infer<typeof partRowSchema>;
+
+export const readingSchema = z.object({
+  testPoint: z.string().trim().min(1, 'Name the test point, e.g. TP12 or the 5 V rail at C512.').max(120),
+  expected: z.string().trim().min(1, 'Give the expected value, e.g. 5.0 V.').max(80),
+  /** What a faulty unit typically shows; optional. */
+  measured: z.string().trim().max(80).default(''),
+  note: z.string().trim().max(300).default(''),
+});
+export type Reading = z.infer<typeof readingSchema>;
+
+export const cautionSchema = z.object({
+  kind: cautionKindSchema,
+  /** What this fix in particular asks the reader to watch for. */
+  detail: z.string().trim().max(600).default(''),
+});
+export type Caution = z.infer<typeof cautionSchema>;
+
+export const revisionStates = ['draft', 'submitted', 'proofed', 'returned', 'withdrawn'] as const;
+export const revisionStateSchema = z.enum(revisionStates);
+export type RevisionState = z.infer<typeof revisionStateSchema>;
