@@ -14,7 +14,7 @@ const config = {
     directory: './migrations',
     tableName: 'knex_migrations',
     loadExtensions: ['.js'],
-    stub: './migrations/.stub.js',
+    stub: './scripts/migration-stub.js',
   },
 };
 

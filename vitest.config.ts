@@ -1,8 +1,11 @@
 // Three test projects: unit (pure code, fast), integration (real PostgreSQL), e2e (real Chromium).
 import { defineConfig } from 'vitest/config';
 import { fileURLToPath } from 'node:url';
+import { testEnv } from './tests/support/test-env';
 
 const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) };
+// Integration and browser tests never touch the app's own database.
+const env = Object.fromEntries(Object.entries(testEnv()).filter((e): e is [string, string] => e[1] !== undefined));
 
 export default defineConfig({
   resolve: { alias },
@@ -18,6 +21,7 @@ export default defineConfig({
           name: 'integration',
           include: ['tests/integration/**/*.test.ts'],
           globalSetup: ['tests/integration/global-setup.ts'],
+          env,
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,
@@ -29,6 +33,7 @@ export default defineConfig({
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/e2e/global-setup.ts'],
+          env,
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,

@@ -10,6 +10,8 @@ const schema = z.object({
   BENCHLORE_PG_PORT: port.default(54329),
   BENCHLORE_DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('benchlore'),
   BENCHLORE_DATA_DIR: z.string().default('.data'),
+  /** Where local-disk storage keeps photos; defaults to <data>/media. */
+  BENCHLORE_MEDIA_DIR: z.string().optional(),
   PUBLIC_ORIGIN: z.string().url().default('http://127.0.0.1:4321'),
   AUTH_SECRET: z.string().min(16).optional(),
   SMTP_URL: z.string().optional(),

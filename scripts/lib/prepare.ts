@@ -1,0 +1,38 @@
+// Shared set-up for `npm start` and `npm test`: database up and migrated, demo world seeded, server built.
+import { spawnSync } from 'node:child_process';
+import { readConfig } from '../../src/server/config.ts';
+import * as localPg from './local-pg.ts';
+import { buildIsCurrent, markBuilt } from './build-stamp.ts';
+
+export function run(cmd: string, args: string[], env: NodeJS.ProcessEnv = process.env): void {
+  const res = spawnSync(cmd, args, { stdio: 'inherit', env });
+  if (res.status !== 0) {
+    console.error(`\n${cmd} ${args.join(' ')} failed (exit ${res.status ?? res.signal}).`);
+    process.exit(res.status ?? 1);
+  }
+}
+
+/** Starts the local cluster (unless DATABASE_URL is set) and makes sure the database exists. */
+export async function ensureDatabase(env: NodeJS.ProcessEnv, options: { fresh?: boolean } = {}): Promise<void> {
+  const config = readConfig(env);
+  if (config.DATABASE_URL) return;
+  const pg = localPg.locate(config.BENCHLORE_DATA_DIR, config.BENCHLORE_PG_PORT);
+  localPg.init(pg);
+  await localPg.start(pg);
+  if (options.fresh) localPg.dropDatabase(pg, config.BENCHLORE_DB_NAME);
+  localPg.ensureDatabase(pg, config.BENCHLORE_DB_NAME);
+}
+
+export function migrateAndSeed(env: NodeJS.ProcessEnv): void {
+  run(process.execPath, ['--import', 'tsx', 'scripts/migrate.ts'], env);
+  run(process.execPath, ['--import', 'tsx', 'scripts/seed.ts'], env);
+}
+
+export function buildIfStale(env: NodeJS.ProcessEnv): void {
+  if (buildIsCurrent()) {
+    console.log('The built server is up to date.');
+    return;
+  }
+  run(process.execPath, ['node_modules/astro/astro.js', 'build'], { ...env, NODE_ENV: 'production' });
+  markBuilt();
+}

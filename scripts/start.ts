@@ -1,0 +1,31 @@
+// `npm start`: local PostgreSQL, migrations, the demo world, a build when sources changed, then the server.
+import { spawn } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { randomBytes } from 'node:crypto';
+import { join } from 'node:path';
+import { readConfig } from '../src/server/config.ts';
+import { buildIfStale, ensureDatabase, migrateAndSeed } from './lib/prepare.ts';
+
+const config = readConfig();
+const env: NodeJS.ProcessEnv = { ...process.env, AUTH_SECRET: process.env.AUTH_SECRET ?? localSecret(config.BENCHLORE_DATA_DIR) };
+
+await ensureDatabase(env);
+migrateAndSeed(env);
+buildIfStale(env);
+
+const port = process.env.PORT ?? '4321';
+const host = process.env.HOST ?? '127.0.0.1';
+console.log(`\nBenchlore is starting on http://${host}:${port}  (Ctrl+C stops it; \`npm run db -- stop\` stops PostgreSQL)\n`);
+const server = spawn(process.execPath, ['dist/server/entry.mjs'], { stdio: 'inherit', env: { ...env, HOST: host, PORT: port } });
+for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => server.kill(signal));
+server.on('exit', (code) => process.exit(code ?? 0));
+
+/** A sign-in secret for this machine's local runs, kept under the data folder (never in git). */
+function localSecret(dataDir: string): string {
+  const file = join(dataDir, 'auth-secret');
+  if (existsSync(file)) return readFileSync(file, 'utf8').trim();
+  mkdirSync(dataDir, { recursive: true });
+  const secret = randomBytes(32).toString('base64url');
+  writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}

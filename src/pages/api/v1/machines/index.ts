@@ -1,0 +1,10 @@
+// GET /api/v1/machines: the catalogue with filters (maker, deviceType, format, region, chassis) and pages.
+import type { APIRoute } from 'astro';
+import { listMachines, machineFilterSchema } from '@/server/catalogue';
+import { json, parseSearchParams } from '@/server/http';
+
+export const GET: APIRoute = async ({ url }) => {
+  const query = parseSearchParams(machineFilterSchema, url);
+  if (!query.ok) return query.response;
+  return json(await listMachines(query.data));
+};

@@ -1,0 +1,12 @@
+// Copies each fix's bench score and report count into fix_search, where ranking reads it.
+import type { Knex } from 'knex';
+import { benchScoresFor } from '../bench-scores';
+
+export async function refreshBenchScoreColumns(knex: Knex, fixIds?: number[]): Promise<void> {
+  const ids: number[] = fixIds ?? (await knex('fix_search').pluck('fix_id'));
+  const scores = await benchScoresFor(ids);
+  for (const id of ids) {
+    const s = scores.get(id);
+    await knex('fix_search').where({ fix_id: id }).update({ bench_score: s?.score ?? null, report_count: s?.counted ?? 0 });
+  }
+}
