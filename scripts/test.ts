@@ -11,7 +11,7 @@ await ensureDatabase(env, { fresh: true });
 migrateAndSeed(env);
 buildIfStale(env);
 
-const report = join(env.BENCHLORE_DATA_DIR ?? '.data', 'vitest-report.json');
+const report = join(env.BENCHLORE_DATA_DIR ?? '.data', `vitest-report-${env.BENCHLORE_DB_NAME}.json`);
 const args = ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)];
 const res = spawnSync(process.execPath, args, { stdio: 'inherit', env });
 

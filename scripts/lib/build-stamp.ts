@@ -4,7 +4,8 @@ import { existsSync, readFileSync, readdirSync, statSync, writeFileSync } from '
 import { join } from 'node:path';
 
 const SOURCES = ['src', 'public', 'astro.config.mjs', 'tailwind.config.cjs', 'package-lock.json', 'tsconfig.json', 'auth.config.ts'];
-const STAMP = join('dist', '.source-hash');
+const DIST = process.env.BENCHLORE_DIST ?? 'dist';
+const STAMP = join(DIST, '.source-hash');
 
 function walk(path: string, hash: ReturnType<typeof createHash>): void {
   if (!existsSync(path)) return;
@@ -23,8 +24,10 @@ export function sourceHash(): string {
 }
 
 export function buildIsCurrent(): boolean {
-  return existsSync(join('dist', 'server', 'entry.mjs')) && existsSync(STAMP) && readFileSync(STAMP, 'utf8') === sourceHash();
+  return existsSync(join(DIST, 'server', 'entry.mjs')) && existsSync(STAMP) && readFileSync(STAMP, 'utf8') === sourceHash();
 }
+
+export const distDir = DIST;
 
 export function markBuilt(): void {
   writeFileSync(STAMP, sourceHash());

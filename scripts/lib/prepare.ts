@@ -2,7 +2,7 @@
 import { spawnSync } from 'node:child_process';
 import { readConfig } from '../../src/server/config.ts';
 import * as localPg from './local-pg.ts';
-import { buildIsCurrent, markBuilt } from './build-stamp.ts';
+import { buildIsCurrent, distDir, markBuilt } from './build-stamp.ts';
 
 export function run(cmd: string, args: string[], env: NodeJS.ProcessEnv = process.env): void {
   const res = spawnSync(cmd, args, { stdio: 'inherit', env });
@@ -33,6 +33,6 @@ export function buildIfStale(env: NodeJS.ProcessEnv): void {
     console.log('The built server is up to date.');
     return;
   }
-  run(process.execPath, ['node_modules/astro/astro.js', 'build'], { ...env, NODE_ENV: 'production' });
+  run(process.execPath, ['node_modules/astro/astro.js', 'build', '--outDir', distDir], { ...env, NODE_ENV: 'production' });
   markBuilt();
 }

@@ -59,7 +59,9 @@ export async function benchScoresFor(fixIds: number[]): Promise<Map<number, Benc
     else t.view.onOlderRevisions += n;
   }
   for (const [fixId, t] of tallies) {
-    t.view.score = benchScore({ current: t.current, older: t.older }).score;
+    const result = benchScore({ current: t.current, older: t.older });
+    // The counts come from the database and are always valid input; a failure would be a bug, shown as no score.
+    t.view.score = result.ok ? result.value.score : null;
     scores.set(fixId, t.view);
   }
   return scores;

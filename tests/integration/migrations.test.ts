@@ -3,8 +3,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Knex } from 'knex';
 import knexConfig from '../../knexfile.js';
 import { testDb } from '../support/db';
+import { TEST_DB } from '../support/test-env';
 
-const SCRATCH = 'benchlore_test_migrations';
+const SCRATCH = `${TEST_DB}_migrations`;
 let admin: Knex;
 let scratch: Knex;
 

@@ -1,9 +1,9 @@
 // Starts the built Astro server for tests on a port of its own and stops it afterwards.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { testEnv } from './test-env';
+import { DIST_DIR, testEnv } from './test-env';
 
 export async function startServer(port: number): Promise<() => Promise<void>> {
-  const child: ChildProcess = spawn(process.execPath, ['dist/server/entry.mjs'], {
+  const child: ChildProcess = spawn(process.execPath, [`${DIST_DIR}/server/entry.mjs`], {
     env: { ...testEnv(), HOST: '127.0.0.1', PORT: String(port), PUBLIC_ORIGIN: `http://127.0.0.1:${port}` },
     stdio: ['ignore', 'pipe', 'pipe'],
   });

@@ -1,7 +1,9 @@
 // The environment every test process uses: its own database and media folder, never the app's database.
-export const TEST_DB = 'benchlore_test';
-export const INTEGRATION_PORT = 4392;
-export const E2E_PORT = 4391;
+// Several engineers may run tests side by side: each may choose a database, ports and a build folder.
+export const TEST_DB = process.env.BENCHLORE_TEST_DB ?? 'benchlore_test';
+export const INTEGRATION_PORT = Number(process.env.BENCHLORE_TEST_PORT ?? 4392);
+export const E2E_PORT = INTEGRATION_PORT - 1;
+export const DIST_DIR = process.env.BENCHLORE_DIST ?? 'dist';
 
 export function testEnv(): NodeJS.ProcessEnv {
   const dataDir = process.env.BENCHLORE_DATA_DIR ?? '.data';
@@ -10,7 +12,7 @@ export function testEnv(): NodeJS.ProcessEnv {
     NODE_ENV: 'test',
     BENCHLORE_DATA_DIR: dataDir,
     BENCHLORE_DB_NAME: TEST_DB,
-    BENCHLORE_MEDIA_DIR: `${dataDir}/test-media`,
+    BENCHLORE_MEDIA_DIR: `${dataDir}/media-${TEST_DB}`,
     AUTH_SECRET: 'test-secret-not-for-production-0123456789',
     LOG_LEVEL: 'warn',
   };

@@ -1,5 +1,5 @@
 // IEC 60062 marking codes: RKM codes (4R7, 4K7, 4u7) and the three-digit capacitance code in pF (104, 475).
-import { exampleOf, type PrefixSymbol, type Quantity } from './quantities';
+import { allowedPrefixes, exampleOf, withArticle, type PrefixSymbol, type Quantity } from './quantities';
 import { fail, ok, type Result } from './result';
 import { toleranceFromLetter } from './tolerance';
 import type { RawReading } from './reading';
@@ -32,8 +32,10 @@ export function readRkm(compact: string, expect?: Quantity): Result<RawReading> 
   const [, before = '', letter = '', after = '', toleranceLetter] = match;
   const meaning = rkmLetters[letter];
   if (!meaning) return undefined;
-  if (meaning.implies && expect && meaning.implies !== expect && meaning.prefix !== 'm') {
-    return fail(`"${compact}" reads as a ${meaning.implies}, but a ${expect} is expected here.`, exampleOf[expect]);
+  // R always means ohms; other letters only clash when the expected unit does not take their prefix.
+  const clashes = meaning.prefix === '' || !allowedPrefixes[expect ?? 'resistance'].includes(meaning.prefix);
+  if (meaning.implies && expect && meaning.implies !== expect && clashes) {
+    return fail(`"${compact}" reads as ${withArticle(meaning.implies)}, but ${withArticle(expect)} is expected here.`, exampleOf[expect]);
   }
   const reading: RawReading = {
     digits: `${before || '0'}.${after}`,

@@ -37,6 +37,11 @@ export const quantityOfUnit: Record<UnitSymbol, Quantity> = {
   A: 'current',
 };
 
+/** "a capacitance", "an inductance": for messages. */
+export function withArticle(quantity: Quantity): string {
+  return `${quantity === 'inductance' ? 'an' : 'a'} ${quantity}`;
+}
+
 /** Example input per quantity, shown in error messages. */
 export const exampleOf: Record<Quantity, string> = {
   capacitance: '4.7 µF, 4u7, 100nF or 104',

@@ -1,6 +1,7 @@
 // Reads the rating text of a parts row ("16V 105C low-ESR", "0.25W 1%", "Ø10x16mm P5") into fields.
 import { parseValue } from './parse-value';
 import { formatMagnitude } from './format-value';
+import { withArticle } from './quantities';
 import { fail, ok, type Result } from './result';
 import { parseTemperature } from './temperature';
 import { parseTolerance, sameTolerance, type Tolerance } from './tolerance';
@@ -71,7 +72,7 @@ const extractors: Extractor[] = [
     apply: (m, f) => readTolerance(m[0], f),
   },
   {
-    pattern: /(?:[-+]?\d+\s*(?:°|º|deg)?\s*C?\s*(?:~|\.\.\.?|…|\/|to)\s*)?\+?\d+(?:\.\d+)?\s*(?:°|º|deg\.?)?\s*C(?![a-z])/gi,
+    pattern: /(?:[-+]?\d+\s*(?:°|º|o|deg)?\s*C?\s*(?:~|\.\.\.?|…|\/|to)\s*)?\+?\d+(?:\.\d+)?\s*(?:°|º|o|deg\.?)?\s*C(?![a-z])/gi,
     apply: (m, f) => {
       const temperature = parseTemperature(m[0]);
       return temperature.ok ? setField(f, 'temperatureC', temperature.value) : temperature;
@@ -128,7 +129,7 @@ function readToken(token: string, fields: RatingFields): Result<true> {
   if (quantity === 'power') return setField(fields, 'powerW', magnitude);
   if (quantity === 'current') return setField(fields, 'rippleCurrentA', magnitude);
   return fail(
-    `The rating holds a ${quantity} (${formatMagnitude(value.value)}); a part has one value, written in the value column.`,
+    `The rating holds ${withArticle(quantity)} (${formatMagnitude(value.value)}); a part has one value, written in the value column.`,
     RATING_EXAMPLE,
   );
 }

@@ -7,6 +7,7 @@ import {
   prefixExponents,
   quantityOfUnit,
   unitOf,
+  withArticle,
   type PrefixSymbol,
   type Quantity,
   type UnitSymbol,
@@ -46,7 +47,7 @@ export function finishReading(reading: RawReading, original: string, expect?: Qu
     return fail(`"${original}" has no unit, so it could be anything.`, exampleFor(expect));
   }
   if (expect && quantity !== expect) {
-    return fail(`"${original}" is a ${quantity}, but a ${expect} is expected here.`, exampleOf[expect]);
+    return fail(`"${original}" is ${withArticle(quantity)}, but ${withArticle(expect)} is expected here.`, exampleOf[expect]);
   }
   if (!allowedPrefixes[quantity].includes(reading.prefix)) {
     return fail(`The prefix "${reading.prefix}" is not used with ${unitOf[quantity]} on parts.`, exampleOf[quantity]);
@@ -70,7 +71,7 @@ function checkMagnitude(magnitude: number, writtenZero: boolean, quantity: Quant
   if (magnitude === 0 && writtenZero) {
     return quantity === 'resistance'
       ? ok(true)
-      : fail(`"${original}" is zero; a ${quantity} must be above zero.`, exampleOf[quantity]);
+      : fail(`"${original}" is zero; ${withArticle(quantity)} must be above zero.`, exampleOf[quantity]);
   }
   const range = magnitudeRange(quantity);
   if (magnitude < range.min || magnitude === 0) return fail(`"${original}" is too small to be a component value.`, exampleOf[quantity]);

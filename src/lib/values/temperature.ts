@@ -4,7 +4,7 @@ import { fail, ok, type Result } from './result';
 const TEMPERATURE_EXAMPLE = '85 °C, 105C or -40~+105 °C';
 /** An optional lower limit and a separator, then the upper limit with its degree mark and C. */
 const temperaturePattern =
-  /^(?:[-+]?\d+(?:\.\d+)?\s*(?:°|º|deg)?\s*C?\s*(?:~|\.\.\.?|…|\/|to)\s*)?\+?(\d+(?:\.\d+)?)\s*(?:°|º|deg\.?)?\s*C$/i;
+  /^(?:[-+]?\d+(?:\.\d+)?\s*(?:°|º|o|deg)?\s*C?\s*(?:~|\.\.\.?|…|\/|to)\s*)?\+?(\d+(?:\.\d+)?)\s*(?:°|º|o|deg\.?)?\s*C$/i;
 
 /** Reads a temperature class; the lowest class in use is 40 °C and none exceeds 200 °C. */
 export function parseTemperature(text: string): Result<number> {

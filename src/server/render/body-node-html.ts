@@ -10,15 +10,19 @@ import { attributesHtml, escapeHtml } from './escape';
 
 export type NodeHtmlProps = NodeProps<PMNode, string | string[]>;
 
+/** Matches a caution whose writer already deferred to local codes, so the standard line is not shown twice. */
+const alreadyDefers = /local electrical codes and licensed practice/i;
+
 export function cautionHtml({ node, children }: NodeHtmlProps): string {
   const kind: unknown = node.attrs.kind;
   // The sanitiser guarantees a known kind; a caution without one must not render as an ordinary box.
   if (!isCautionKind(kind)) throw new Error('caution node without a known kind');
+  const deferral = alreadyDefers.test(node.textContent) ? '' : `<p class="caution__deferral">${escapeHtml(cautionDeferral)}</p>`;
   return (
     `<aside class="caution caution--${kind}" role="note">` +
     `<p class="caution__label">${escapeHtml(cautionHeading(kind))}</p>` +
     serializeChildrenToHTMLString(children) +
-    `<p class="caution__deferral">${escapeHtml(cautionDeferral)}</p>` +
+    deferral +
     '</aside>'
   );
 }
@@ -26,9 +30,7 @@ export function cautionHtml({ node, children }: NodeHtmlProps): string {
 function readingRow(reading: ReadingAttrs, field: 'testPoint' | 'expected' | 'measured'): string {
   const modifier = field === 'testPoint' ? 'test-point' : field;
   return (
-    `<div class="reading__${modifier}">` +
-    `<dt>${escapeHtml(readingLabels[field])}</dt><dd>${escapeHtml(reading[field])}</dd>` +
-    '</div>'
+    `<div class="reading__${modifier}">` + `<dt>${escapeHtml(readingLabels[field])}</dt><dd>${escapeHtml(reading[field])}</dd>` + '</div>'
   );
 }
 

@@ -45,7 +45,11 @@ function bodyRenderer(): { extensions: Extensions; schema: Schema } {
 }
 
 function failed(reason: string, options: RenderFixBodyOptions | undefined): FixBodyHtml {
-  options?.onFailure?.(reason);
+  try {
+    options?.onFailure?.(reason);
+  } catch {
+    // A failing logger must not turn a placeholder into a crashed page.
+  }
   return { ok: false, html: renderFailedHtml };
 }
 

@@ -17,7 +17,9 @@ function nested(depth: number): unknown {
 
 describe('renderFixBody with hostile input', () => {
   it('drops a script node together with its text', () => {
-    const result = renderFixBody(doc({ type: 'script', content: [{ type: 'text', text: 'alert(1)' }] }, paragraph({ type: 'text', text: 'ok' })));
+    const result = renderFixBody(
+      doc({ type: 'script', content: [{ type: 'text', text: 'alert(1)' }] }, paragraph({ type: 'text', text: 'ok' })),
+    );
     expect(result).toEqual({ ok: true, html: '<p>ok</p>' });
   });
 
@@ -49,14 +51,20 @@ describe('renderFixBody with hostile input', () => {
     expect(result).toEqual({ ok: true, html: '<p>click</p>' });
   });
 
-  it.each(['data:image/png;base64,iVBORw0KGgo=', 'javascript:alert(1)', 'http://example.org/a.jpg', 'x', '/media/../secret', '//example.org/a.jpg'])(
-    'removes an image whose src is %j',
-    (src) => {
-      const result = renderFixBody(doc({ type: 'image', attrs: { src, alt: 'a' } }, { type: 'figure', attrs: { src, alt: 'b', caption: 'c' } }));
-      expect(result.ok).toBe(true);
-      expect(parseHtml(result.html).querySelectorAll('img')).toHaveLength(0);
-    },
-  );
+  it.each([
+    'data:image/png;base64,iVBORw0KGgo=',
+    'javascript:alert(1)',
+    'http://example.org/a.jpg',
+    'x',
+    '/media/../secret',
+    '//example.org/a.jpg',
+  ])('removes an image whose src is %j', (src) => {
+    const result = renderFixBody(
+      doc({ type: 'image', attrs: { src, alt: 'a' } }, { type: 'figure', attrs: { src, alt: 'b', caption: 'c' } }),
+    );
+    expect(result.ok).toBe(true);
+    expect(parseHtml(result.html).querySelectorAll('img')).toHaveLength(0);
+  });
 
   it('shows markup typed into text as text, not as an element', () => {
     const result = renderFixBody(doc(paragraph({ type: 'text', text: '<img src=x onerror=alert(1)>' })));
@@ -70,7 +78,9 @@ describe('renderFixBody with hostile input', () => {
   });
 
   it('turns a caution of unknown kind into plain paragraphs, not a caution box', () => {
-    const result = renderFixBody(doc({ type: 'caution', attrs: { kind: '"><script>' }, content: [paragraph({ type: 'text', text: 'careful' })] }));
+    const result = renderFixBody(
+      doc({ type: 'caution', attrs: { kind: '"><script>' }, content: [paragraph({ type: 'text', text: 'careful' })] }),
+    );
     expect(result).toEqual({ ok: true, html: '<p>careful</p>' });
   });
 
@@ -106,7 +116,12 @@ describe('renderFixBody with hostile input', () => {
 
   it('shows the placeholder block when reading the input throws', () => {
     const trap = {};
-    Object.defineProperty(trap, 'type', { enumerable: true, get: () => { throw new Error('trap'); } });
+    Object.defineProperty(trap, 'type', {
+      enumerable: true,
+      get: () => {
+        throw new Error('trap');
+      },
+    });
     expect(renderFixBody(doc(trap))).toEqual({ ok: false, html: renderFailedHtml });
     const revoked = Proxy.revocable({}, {});
     revoked.revoke();
@@ -117,6 +132,13 @@ describe('renderFixBody with hostile input', () => {
     const reasons: string[] = [];
     renderFixBody('not json', { onFailure: (reason) => reasons.push(reason) });
     expect(reasons).toEqual(['The body must be a JSON object of type "doc".']);
+  });
+
+  it('still answers with the placeholder when the failure callback itself throws', () => {
+    const throwing = (): void => {
+      throw new Error('logger down');
+    };
+    expect(renderFixBody(null, { onFailure: throwing })).toEqual({ ok: false, html: renderFailedHtml });
   });
 
   it('skips malformed children but renders the rest', () => {

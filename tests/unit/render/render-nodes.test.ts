@@ -7,9 +7,10 @@ import { realisticBody } from './support/realistic-body';
 
 afterAll(closeHtmlParser);
 
-const text = (value: string, marks?: BodyNode['marks']): BodyNode => (marks ? { type: 'text', text: value, marks } : { type: 'text', text: value });
+const text = (value: string, marks?: BodyNode['marks']): BodyNode =>
+  marks ? { type: 'text', text: value, marks } : { type: 'text', text: value };
 const paragraph = (...content: BodyNode[]): BodyNode => ({ type: 'paragraph', content });
-const render = (...content: BodyNode[]): string => {
+const render = (...content: unknown[]): string => {
   const result = renderFixBody({ type: 'doc', content });
   expect(result.ok).toBe(true);
   return result.html;
@@ -66,7 +67,11 @@ describe('renderFixBody', () => {
   });
 
   it('renders tables with header cells and spans but no inline styles', () => {
-    const cell = (type: string, value: string, attrs?: BodyNode['attrs']): BodyNode => ({ type, attrs, content: [paragraph(text(value))] });
+    const cell = (type: string, value: string, attrs?: Record<string, unknown>): unknown => ({
+      type,
+      attrs,
+      content: [paragraph(text(value))],
+    });
     const html = render({
       type: 'table',
       content: [
@@ -86,6 +91,16 @@ describe('renderFixBody', () => {
       '<aside class="caution caution--mains" role="note"><p class="caution__label">Caution: mains voltage</p>' +
         '<p>Unplug first.</p><p class="caution__deferral">Follow your local electrical codes and licensed practice.</p></aside>',
     );
+  });
+
+  it('does not repeat the deferral when the caution already defers to local codes', () => {
+    const html = render({
+      type: 'caution',
+      attrs: { kind: 'heat' },
+      content: [paragraph(text('Let the regulator cool; follow your local electrical codes and licensed practice.'))],
+    });
+    expect(html.match(/local electrical codes and licensed practice/g)).toHaveLength(1);
+    expect(html).not.toContain('caution__deferral');
   });
 
   it.each([

@@ -53,16 +53,9 @@ export const FigureNode = Node.create({
   renderHTML({ node, HTMLAttributes }) {
     const figure = figureAttrsOf(node.attrs);
     // An unsafe source is left out rather than passed to the browser.
-    const imageAttrs: Record<string, string> = isSafeImageSrc(figure.src)
-      ? { src: figure.src, alt: figure.alt }
-      : { alt: figure.alt };
+    const imageAttrs: Record<string, string> = isSafeImageSrc(figure.src) ? { src: figure.src, alt: figure.alt } : { alt: figure.alt };
     const captionSpec: DOMOutputSpec[] = figure.caption === '' ? [] : [['figcaption', figure.caption]];
-    return [
-      'figure',
-      mergeAttributes({ class: 'figure', 'data-figure': '' }, HTMLAttributes),
-      ['img', imageAttrs],
-      ...captionSpec,
-    ];
+    return ['figure', mergeAttributes({ class: 'figure', 'data-figure': '' }, HTMLAttributes), ['img', imageAttrs], ...captionSpec];
   },
 
   renderText({ node }) {

@@ -1,13 +1,7 @@
 // Cleans the attributes of one allowed node: unknown ones removed, known ones bounded, unusable nodes refused.
 import { isCautionKind } from '../nodes/caution-kind';
 import { readingFields } from '../nodes/reading';
-import {
-  allowedNodeAttributes,
-  attributeLengthLimits,
-  numberRanges,
-  quietlyRemovedAttributes,
-  type BodyNodeType,
-} from '../rules';
+import { allowedNodeAttributes, attributeLengthLimits, numberRanges, quietlyRemovedAttributes, type BodyNodeType } from '../rules';
 import type { BodyAttrValue } from '../types';
 import { isSafeImageSrc } from '../urls';
 import { nameForNote } from './context';
@@ -48,13 +42,14 @@ function readingAttrs(raw: RawAttrs, note: Note): AttrsResult {
   return { attrs };
 }
 
+/** Spans of 1 are the schema default and are left out, so cells made by the sanitiser and cells read back agree. */
 function spanAttrs(type: string, raw: RawAttrs, note: Note): AttrsResult {
-  return {
-    attrs: {
-      colspan: clampedInteger(raw.colspan, numberRanges.cellSpan, `${type}.colspan`, note),
-      rowspan: clampedInteger(raw.rowspan, numberRanges.cellSpan, `${type}.rowspan`, note),
-    },
-  };
+  const attrs: Record<string, BodyAttrValue> = {};
+  for (const name of ['colspan', 'rowspan'] as const) {
+    const span = clampedInteger(raw[name], numberRanges.cellSpan, `${type}.${name}`, note);
+    if (span !== 1) attrs[name] = span;
+  }
+  return { attrs };
 }
 
 export function cleanNodeAttrs(type: BodyNodeType, raw: RawAttrs, note: Note): AttrsResult {

@@ -1,6 +1,7 @@
 // Readers for single attribute values: bounded strings and clamped integers.
 
 /** C0/C1 control characters other than tab and newline. */
+// eslint-disable-next-line no-control-regex -- finding control characters is the point
 const CONTROL_CHARACTERS = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/g;
 
 export function withoutControlCharacters(text: string): string {
@@ -8,12 +9,7 @@ export function withoutControlCharacters(text: string): string {
 }
 
 /** A string attribute: strings and finite numbers are accepted, control characters removed, length capped. */
-export function boundedString(
-  value: unknown,
-  maxLength: number,
-  label: string,
-  note: (message: string) => void,
-): string {
+export function boundedString(value: unknown, maxLength: number, label: string, note: (message: string) => void): string {
   if (value === undefined || value === null) return '';
   if (typeof value !== 'string' && !(typeof value === 'number' && Number.isFinite(value))) {
     note(`${label}: not text, left empty`);

@@ -5,8 +5,24 @@ const window = new Window();
 
 /** Elements that execute, embed or restyle; a fix body has no use for any of them. */
 const forbiddenTags = [
-  'script', 'style', 'iframe', 'frame', 'object', 'embed', 'applet', 'svg', 'math',
-  'link', 'meta', 'base', 'form', 'input', 'button', 'textarea', 'template', 'noscript',
+  'script',
+  'style',
+  'iframe',
+  'frame',
+  'object',
+  'embed',
+  'applet',
+  'svg',
+  'math',
+  'link',
+  'meta',
+  'base',
+  'form',
+  'input',
+  'button',
+  'textarea',
+  'template',
+  'noscript',
 ];
 const urlAttributes = ['href', 'src', 'action', 'formaction', 'xlink:href', 'poster', 'srcset'];
 
@@ -36,7 +52,9 @@ export function unsafeFindings(html: string): string[] {
 /** Every element in document order as "tag[attribute names]", for comparing two renderings' structure. */
 export function tagOutline(html: string): string[] {
   return Array.from(parseHtml(html).querySelectorAll('*')).map((element) => {
-    const names = Array.from(element.attributes).map((attribute) => attribute.name).sort();
+    const names = Array.from(element.attributes)
+      .map((attribute) => attribute.name)
+      .sort();
     return `${element.tagName.toLowerCase()}[${names.join(',')}]`;
   });
 }

@@ -1,6 +1,6 @@
 // Demo fixes for cassette decks: belts, idlers, pinch rollers and speed.
 import type { DemoFix } from '../types';
-import { doc, figure, h, p, part, reading, rev, revise, steps } from './build';
+import { caution, doc, figure, h, p, part, reading, rev, revise, steps } from './build';
 
 const wowR1 = rev({
   title: 'Wow and flutter: sustained notes waver',
@@ -47,6 +47,7 @@ const speedDrift = rev({
     'The BT-4 motor holds its speed with a small electronic governor and a trimmer reached through a hole in the motor can. The trimmer track gets dirty and the governor\'s timing capacitor drifts with heat, so the speed wanders as the deck warms up.',
   body: doc(
     p('Let the deck run for fifteen minutes before adjusting, so the motor is at working temperature.'),
+    caution('mains', 'The BT-4 mains transformer and power switch sit beside the motor, and their terminals are exposed while you adjust with the cover off. Use an insulated trimming tool and keep your other hand clear.'),
     steps(
       'Remove the top cover. The speed trimmer is behind the small hole in the back of the motor can.',
       'Play a 3150 Hz test tape and read the output frequency on a counter.',
@@ -96,7 +97,7 @@ const creaseR1 = rev({
   body: doc(
     p('Unplug the deck and open the cassette door.'),
     steps(
-      'Press play with no cassette on a unit whose head block can be moved by hand, or push the head block forward with a finger, to see the pinch roller against the capstan.',
+      'Push the head block forward by hand to bring the pinch roller against the capstan and watch where they meet.',
       'Check the roller: it should be matt and slightly soft, and its shaft should not wobble.',
       'Remove the roller\'s retaining clip and fit a new roller of the same diameter and width.',
       'Clean the capstan and guides, then play a scrap tape and check its edge.',

@@ -1,0 +1,108 @@
+// Order list: parts rows from fixes or job sheets grouped by canonical spec, with quantities and spares.
+import { z } from 'zod';
+import { partKinds, partRowSchema, type PartKind } from '@/lib/schemas/revision';
+import { describePart } from '@/lib/values/describe-part';
+import type { PartSpec } from '@/lib/values/part-spec';
+import { canonicalMagnitude } from '@/lib/values/decimal';
+import { ok, type Result } from '@/lib/values/result';
+import { readInput } from './input';
+
+export const orderLineInputSchema = partRowSchema.extend({
+  /** Where the row came from: a fix's title or a job sheet's name. */
+  source: z.string().trim().min(1, 'Say where the part came from (a fix or a job sheet).').max(200),
+});
+export type OrderLineInput = z.input<typeof orderLineInputSchema>;
+
+export const sparesSchema = z.union([
+  z.object({ count: z.number().int('Spares must be a whole number.').min(0, 'Spares cannot be negative.').max(999) }),
+  z.object({ percent: z.number().min(0, 'Spares cannot be negative.').max(1000, 'Spares above 1000 % are not spares.') }),
+]);
+export type Spares = z.infer<typeof sparesSchema>;
+
+export const orderListInputSchema = z.object({
+  lines: z.array(orderLineInputSchema).max(2000, 'An order list holds at most 2000 rows.'),
+  spares: sparesSchema.optional(),
+});
+export type OrderListInput = z.input<typeof orderListInputSchema>;
+
+export interface OrderLine {
+  key: string;
+  label: string;
+  kind: PartKind;
+  /** Undefined when the row could not be decoded. */
+  spec?: PartSpec;
+  quantity: number;
+  spares: number;
+  /** quantity + spares: what to buy. */
+  total: number;
+  sources: string[];
+  refs: string[];
+  notes: string[];
+  /** True when the value could not be read; such a row stays on the list by itself. */
+  undecodable: boolean;
+  problem?: string;
+}
+
+/** Spares for one line: a fixed number, or a percentage of its quantity rounded up. */
+export function sparesFor(quantity: number, spares: Spares | undefined): number {
+  if (!spares) return 0;
+  if ('count' in spares) return spares.count;
+  return Math.ceil(canonicalMagnitude((quantity * spares.percent) / 100));
+}
+
+function addUnique(list: string[], item: string): void {
+  if (item !== '' && !list.includes(item)) list.push(item);
+}
+
+export function buildOrderList(input: OrderListInput): Result<OrderLine[]> {
+  const read = readInput(orderListInputSchema, input, '{ lines: [{ source: "Tray will not close", ref: "C512", kind: "capacitor", value: "470uF", rating: "16V 105C", quantity: 1 }] }');
+  if (!read.ok) return read;
+  const grouped = new Map<string, OrderLine>();
+  const undecodable: OrderLine[] = [];
+  read.value.lines.forEach((row, index) => {
+    const spec = describePart(row.value, row.rating, { kind: row.kind });
+    if (!spec.ok) {
+      undecodable.push({
+        key: `undecodable:${index}`,
+        label: `${row.value} ${row.rating}`.trim(),
+        kind: row.kind,
+        quantity: row.quantity,
+        spares: 0,
+        total: 0,
+        sources: [row.source],
+        refs: row.ref === '' ? [] : [row.ref],
+        notes: row.notes === '' ? [] : [row.notes],
+        undecodable: true,
+        problem: spec.error.message,
+      });
+      return;
+    }
+    const line = grouped.get(spec.value.key) ?? newLine(spec.value, row.kind);
+    line.quantity += row.quantity;
+    addUnique(line.sources, row.source);
+    addUnique(line.refs, row.ref);
+    addUnique(line.notes, row.notes);
+    grouped.set(spec.value.key, line);
+  });
+  const lines = [...[...grouped.values()].sort(compareLines), ...undecodable];
+  for (const line of lines) {
+    line.refs.sort((a, b) => a.localeCompare(b, 'en', { numeric: true }));
+    line.spares = sparesFor(line.quantity, read.value.spares);
+    line.total = line.quantity + line.spares;
+  }
+  return ok(lines);
+}
+
+function newLine(spec: PartSpec, kind: PartKind): OrderLine {
+  return { key: spec.key, label: spec.label, kind, spec, quantity: 0, spares: 0, total: 0, sources: [], refs: [], notes: [], undecodable: false };
+}
+
+/** By kind in the catalogue's order, then by value, so capacitors read smallest to largest. */
+function compareLines(a: OrderLine, b: OrderLine): number {
+  const byKind = partKinds.indexOf(a.kind) - partKinds.indexOf(b.kind);
+  if (byKind !== 0) return byKind;
+  const magnitudeA = a.spec?.kind === 'electrical' ? a.spec.magnitude : 0;
+  const magnitudeB = b.spec?.kind === 'electrical' ? b.spec.magnitude : 0;
+  if (magnitudeA !== magnitudeB) return magnitudeA - magnitudeB;
+  return a.label.localeCompare(b.label, 'en', { numeric: true });
+}
