@@ -6,7 +6,7 @@ import { z } from 'zod';
 import { verifyPassword } from './src/server/auth/passwords';
 import { db } from './src/server/db';
 
-const credentialsSchema = z.object({ email: z.string().trim().toLowerCase().email(), password: z.string().min(1).max(1024) });
+const credentialsSchema = z.object({ email: z.string().trim().toLowerCase().pipe(z.email()), password: z.string().min(1).max(1024) });
 
 export default defineConfig({
   // Read at run time: values through import.meta.env would be frozen into the build.

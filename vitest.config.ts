@@ -22,7 +22,8 @@ export default defineConfig({
           include: ['tests/integration/**/*.test.ts'],
           globalSetup: ['tests/integration/global-setup.ts'],
           env,
-          fileParallelism: false,
+          // One worker: these files share one database and one server.
+          poolOptions: { forks: { singleFork: true } },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },
@@ -34,7 +35,8 @@ export default defineConfig({
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/e2e/global-setup.ts'],
           env,
-          fileParallelism: false,
+          // One worker: these files share one database and one server.
+          poolOptions: { forks: { singleFork: true } },
           testTimeout: 60_000,
           hookTimeout: 120_000,
         },

@@ -166,6 +166,17 @@ interface SummaryFilter {
   offset?: number;
 }
 
+interface SummaryRow {
+  id: number;
+  slug: string;
+  title: string;
+  symptoms: string[];
+  cautions: Caution[];
+  number: number;
+  proofed_at: Date | null;
+  machine_labels: string[];
+}
+
 function liveFixes(knex: Knex, filter: SummaryFilter): Knex.QueryBuilder {
   const q = knex('fixes as f').join('revisions as r', 'r.id', 'f.current_revision_id').whereNull('f.deleted_at').whereNull('f.hidden_at');
   if (filter.machineId !== undefined) {
@@ -206,13 +217,13 @@ export async function listFixSummaries(filter: SummaryFilter = {}): Promise<FixS
     .orderBy([{ column: 'r.proofed_at', order: 'desc' }, { column: 'f.id', order: 'desc' }])
     .limit(filter.limit ?? 100)
     .offset(filter.offset ?? 0);
-  const rows = await q;
-  const scores = await benchScoresFor(rows.map((r) => r.id as number));
+  const rows: SummaryRow[] = await q;
+  const scores = await benchScoresFor(rows.map((r) => r.id));
   return rows.map((r) => ({
     slug: r.slug,
     title: r.title,
     symptoms: r.symptoms,
-    cautionKinds: [...new Set((r.cautions as Caution[]).map((c) => c.kind))],
+    cautionKinds: [...new Set(r.cautions.map((c) => c.kind))],
     revisionNumber: r.number,
     proofedAt: r.proofed_at,
     machines: r.machine_labels,

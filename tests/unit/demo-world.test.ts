@@ -17,8 +17,25 @@ const revisionsWithLabels = demoFixes.flatMap((fix) => fix.revisions.map((revisi
 
 // The node and mark vocabulary agreed for remedy bodies (Tiptap StarterKit names plus our own three nodes).
 const allowedNodes = new Set([
-  'doc', 'paragraph', 'text', 'heading', 'bulletList', 'orderedList', 'listItem', 'blockquote', 'codeBlock',
-  'hardBreak', 'horizontalRule', 'table', 'tableRow', 'tableHeader', 'tableCell', 'image', 'caution', 'reading', 'figure',
+  'doc',
+  'paragraph',
+  'text',
+  'heading',
+  'bulletList',
+  'orderedList',
+  'listItem',
+  'blockquote',
+  'codeBlock',
+  'hardBreak',
+  'horizontalRule',
+  'table',
+  'tableRow',
+  'tableHeader',
+  'tableCell',
+  'image',
+  'caution',
+  'reading',
+  'figure',
 ]);
 const allowedMarks = new Set(['bold', 'italic', 'strike', 'code', 'underline', 'link']);
 const cautionKinds = new Set(['mains', 'stored_charge', 'laser', 'heat', 'sharp_edges', 'spring']);
@@ -81,7 +98,8 @@ describe('demo catalogue', () => {
 
   it('offers the same model number in two regions at least once', () => {
     const byModel = new Map<string, Set<string>>();
-    for (const m of demoMachines) byModel.set(`${m.makerSlug}/${m.modelNumber}`, (byModel.get(`${m.makerSlug}/${m.modelNumber}`) ?? new Set()).add(m.region));
+    for (const m of demoMachines)
+      byModel.set(`${m.makerSlug}/${m.modelNumber}`, (byModel.get(`${m.makerSlug}/${m.modelNumber}`) ?? new Set()).add(m.region));
     expect([...byModel.values()].some((regions) => regions.size >= 2)).toBe(true);
   });
 
@@ -205,7 +223,10 @@ describe('demo fixes', () => {
     for (const { label, revision } of revisionsWithLabels) {
       expect(revision.body.type, label).toBe('doc');
       expect(vocabularyProblems(revision.body), label).toEqual([]);
-      expect(revision.body.content.some((n) => n.type === 'orderedList'), label).toBe(true);
+      expect(
+        revision.body.content.some((n) => n.type === 'orderedList'),
+        label,
+      ).toBe(true);
     }
   });
 
@@ -241,6 +262,9 @@ describe('demo fixes', () => {
   it('attaches illustrations to about a quarter of revisions, each with a known drawing and its own alt text', () => {
     const illustrated = allRevisions.filter((r) => (r.illustrations ?? []).length > 0);
     expect(illustrated.length / allRevisions.length).toBeGreaterThanOrEqual(0.2);
+    expect(illustrated.length / allRevisions.length).toBeLessThanOrEqual(0.35);
+    const used = new Set(illustrated.flatMap((r) => (r.illustrations ?? []).map((ill) => ill.drawing)));
+    for (const key of illustrationKeys) expect(used, `drawing ${key} is never attached`).toContain(key);
     for (const { label, revision } of revisionsWithLabels) {
       for (const ill of revision.illustrations ?? []) {
         expect(illustrationKeys, label).toContain(ill.drawing);

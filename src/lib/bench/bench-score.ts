@@ -28,7 +28,11 @@ export function wilsonLowerBound(k: number, n: number, z: number = Z_95): Result
 }
 
 const count = (what: string) =>
-  z.number({ error: `${what} must be a number.` }).int(`${what} must be a whole number.`).nonnegative(`${what} cannot be negative.`).default(0);
+  z
+    .number({ error: `${what} must be a number.` })
+    .int(`${what} must be a whole number.`)
+    .nonnegative(`${what} cannot be negative.`)
+    .default(0);
 
 export const outcomeCountsSchema = z.object({
   fixed: count('Fixed'),

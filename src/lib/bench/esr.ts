@@ -81,7 +81,10 @@ function assumptionsFor(meterFrequencyHz: number): string[] {
       `At ${meterFrequencyHz} Hz a healthy part reads lower than its 120 Hz ESR, so the reference is a lenient ceiling there: above it the part is surely worn, below it the part may still be tired.`,
     ];
   }
-  return [...common, 'The table is at 120 Hz; at 100 Hz the same tan δ gives an ESR about 20 % higher, so read readings near the edge with care.'];
+  return [
+    ...common,
+    'The table is at 120 Hz; at 100 Hz the same tan δ gives an ESR about 20 % higher, so read readings near the edge with care.',
+  ];
 }
 
 export function judgeEsr(input: EsrJudgeInput): Result<EsrJudgement> {
@@ -91,8 +94,7 @@ export function judgeEsr(input: EsrJudgeInput): Result<EsrJudgement> {
   const reference = referenceEsr({ capacitanceF, ratedVoltageV });
   if (!reference.ok) return reference;
   const ratio = canonicalMagnitude(measuredOhm / reference.value.esrOhm);
-  const verdict: EsrVerdict =
-    ratio <= esrThresholds.goodUpTo ? 'good' : ratio <= esrThresholds.marginalUpTo ? 'marginal' : 'replace';
+  const verdict: EsrVerdict = ratio <= esrThresholds.goodUpTo ? 'good' : ratio <= esrThresholds.marginalUpTo ? 'marginal' : 'replace';
   const referenceText = `${Number(reference.value.esrOhm.toPrecision(3))} Ω`;
   const reasons: Record<EsrVerdict, string> = {
     good: `${measuredOhm} Ω is within the ${referenceText} a new part may have.`,

@@ -55,7 +55,11 @@ function addUnique(list: string[], item: string): void {
 }
 
 export function buildOrderList(input: OrderListInput): Result<OrderLine[]> {
-  const read = readInput(orderListInputSchema, input, '{ lines: [{ source: "Tray will not close", ref: "C512", kind: "capacitor", value: "470uF", rating: "16V 105C", quantity: 1 }] }');
+  const read = readInput(
+    orderListInputSchema,
+    input,
+    '{ lines: [{ source: "Tray will not close", ref: "C512", kind: "capacitor", value: "470uF", rating: "16V 105C", quantity: 1 }] }',
+  );
   if (!read.ok) return read;
   const grouped = new Map<string, OrderLine>();
   const undecodable: OrderLine[] = [];
@@ -94,7 +98,19 @@ export function buildOrderList(input: OrderListInput): Result<OrderLine[]> {
 }
 
 function newLine(spec: PartSpec, kind: PartKind): OrderLine {
-  return { key: spec.key, label: spec.label, kind, spec, quantity: 0, spares: 0, total: 0, sources: [], refs: [], notes: [], undecodable: false };
+  return {
+    key: spec.key,
+    label: spec.label,
+    kind,
+    spec,
+    quantity: 0,
+    spares: 0,
+    total: 0,
+    sources: [],
+    refs: [],
+    notes: [],
+    undecodable: false,
+  };
 }
 
 /** By kind in the catalogue's order, then by value, so capacitors read smallest to largest. */

@@ -74,7 +74,11 @@ export function headroomCheck(candidate: CapacitorSpec, workingVoltageV: number)
 export function temperatureCheck(original: CapacitorSpec, candidate: CapacitorSpec): SubstituteCheck | undefined {
   if (original.temperatureC === undefined) return undefined;
   if (candidate.temperatureC === undefined) {
-    return { check: 'temperature', status: 'warn', reason: `The original is a ${original.temperatureC} °C part; the candidate's class is not known.` };
+    return {
+      check: 'temperature',
+      status: 'warn',
+      reason: `The original is a ${original.temperatureC} °C part; the candidate's class is not known.`,
+    };
   }
   if (candidate.temperatureC < original.temperatureC) {
     return {
@@ -83,7 +87,11 @@ export function temperatureCheck(original: CapacitorSpec, candidate: CapacitorSp
       reason: `${candidate.temperatureC} °C class is lower than the original's ${original.temperatureC} °C; it will age faster where the original was chosen for heat.`,
     };
   }
-  return { check: 'temperature', status: 'pass', reason: `${candidate.temperatureC} °C class, not lower than the original's ${original.temperatureC} °C.` };
+  return {
+    check: 'temperature',
+    status: 'pass',
+    reason: `${candidate.temperatureC} °C class, not lower than the original's ${original.temperatureC} °C.`,
+  };
 }
 
 export function lowEsrCheck(original: CapacitorSpec, candidate: CapacitorSpec): SubstituteCheck | undefined {
@@ -108,11 +116,19 @@ export function rippleCheck(original: CapacitorSpec, candidate: CapacitorSpec): 
   if (original.rippleCurrentA === undefined) return undefined;
   const originalA = formatMagnitude({ quantity: 'current', magnitude: original.rippleCurrentA, unit: 'A' });
   if (candidate.rippleCurrentA === undefined) {
-    return { check: 'ripple', status: 'warn', reason: `The original is rated for ${originalA} ripple; the candidate's rating is not known.` };
+    return {
+      check: 'ripple',
+      status: 'warn',
+      reason: `The original is rated for ${originalA} ripple; the candidate's rating is not known.`,
+    };
   }
   const candidateA = formatMagnitude({ quantity: 'current', magnitude: candidate.rippleCurrentA, unit: 'A' });
   if (candidate.rippleCurrentA < original.rippleCurrentA) {
-    return { check: 'ripple', status: 'fail', reason: `Ripple rating ${candidateA} is lower than the original's ${originalA}; it would run hotter.` };
+    return {
+      check: 'ripple',
+      status: 'fail',
+      reason: `Ripple rating ${candidateA} is lower than the original's ${originalA}; it would run hotter.`,
+    };
   }
   return { check: 'ripple', status: 'pass', reason: `Ripple rating ${candidateA}, not lower than the original's ${originalA}.` };
 }
@@ -130,5 +146,9 @@ export function polarityCheck(original: CapacitorSpec, candidate: CapacitorSpec)
   if (originalPolarity === 'polarised' && candidatePolarity === 'bipolar') {
     return { check: 'polarity', status: 'pass', reason: 'A bipolar part may replace a polarised one; it works either way round.' };
   }
-  return { check: 'polarity', status: 'pass', reason: `Both ${originalPolarity}${original.polarity ? '' : ' (polarised unless marked bipolar)'}.` };
+  return {
+    check: 'polarity',
+    status: 'pass',
+    reason: `Both ${originalPolarity}${original.polarity ? '' : ' (polarised unless marked bipolar)'}.`,
+  };
 }

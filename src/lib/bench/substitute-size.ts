@@ -26,7 +26,11 @@ function sizeCheck(
   // Larger than a measured room does not fit; larger than the original may still fit, so look first.
   return roomMm !== undefined
     ? { check, status: 'fail', reason: `${what[0]?.toUpperCase()}${what.slice(1)} ${mm(candidateMm)} is more than ${against}.` }
-    : { check, status: 'warn', reason: `${what[0]?.toUpperCase()}${what.slice(1)} ${mm(candidateMm)} is more than ${against}; check the room around it.` };
+    : {
+        check,
+        status: 'warn',
+        reason: `${what[0]?.toUpperCase()}${what.slice(1)} ${mm(candidateMm)} is more than ${against}; check the room around it.`,
+      };
 }
 
 export function diameterCheck(original: CapacitorSpec, candidate: CapacitorSpec, roomMm?: number): SubstituteCheck | undefined {
@@ -40,7 +44,11 @@ export function heightCheck(original: CapacitorSpec, candidate: CapacitorSpec, r
 export function leadPitchCheck(original: CapacitorSpec, candidate: CapacitorSpec): SubstituteCheck | undefined {
   if (original.leadPitchMm === undefined) return undefined;
   if (candidate.leadPitchMm === undefined) {
-    return { check: 'leadPitch', status: 'warn', reason: `The original's leads are ${mm(original.leadPitchMm)} apart; the candidate's pitch is not known.` };
+    return {
+      check: 'leadPitch',
+      status: 'warn',
+      reason: `The original's leads are ${mm(original.leadPitchMm)} apart; the candidate's pitch is not known.`,
+    };
   }
   if (Math.abs(candidate.leadPitchMm - original.leadPitchMm) <= PITCH_SAME_MM) {
     return { check: 'leadPitch', status: 'pass', reason: `Lead pitch ${mm(candidate.leadPitchMm)} matches the board.` };

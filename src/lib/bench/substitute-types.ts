@@ -6,16 +6,7 @@ export const checkStatuses = ['pass', 'warn', 'fail'] as const;
 export type CheckStatus = (typeof checkStatuses)[number];
 
 export type CheckName =
-  | 'capacitance'
-  | 'ratedVoltage'
-  | 'headroom'
-  | 'temperature'
-  | 'lowEsr'
-  | 'ripple'
-  | 'diameter'
-  | 'height'
-  | 'leadPitch'
-  | 'polarity';
+  'capacitance' | 'ratedVoltage' | 'headroom' | 'temperature' | 'lowEsr' | 'ripple' | 'diameter' | 'height' | 'leadPitch' | 'polarity';
 
 export interface SubstituteCheck {
   check: CheckName;

@@ -19,8 +19,19 @@ const quantityOfKind: Partial<Record<PartKind, Quantity>> = { capacitor: 'capaci
 
 /** Kinds identified by a size or a part number, not a value: they get a normalised text key. */
 const textKinds: ReadonlySet<PartKind> = new Set<PartKind>([
-  'belt', 'idler_tyre', 'pinch_roller', 'mechanical', 'diode', 'transistor', 'ic', 'fuse', 'switch', 'motor',
-  'optical_pickup', 'lamp', 'connector',
+  'belt',
+  'idler_tyre',
+  'pinch_roller',
+  'mechanical',
+  'diode',
+  'transistor',
+  'ic',
+  'fuse',
+  'switch',
+  'motor',
+  'optical_pickup',
+  'lamp',
+  'connector',
 ]);
 
 export function describePart(value: string, rating: string, options: DescribeOptions = {}): Result<PartSpec> {

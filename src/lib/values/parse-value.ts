@@ -11,7 +11,17 @@ export interface ParseOptions {
 }
 
 const prefixChars: Record<string, PrefixSymbol> = {
-  p: 'p', P: 'p', n: 'n', N: 'n', u: 'µ', U: 'µ', m: 'm', k: 'k', K: 'k', M: 'M', G: 'G',
+  p: 'p',
+  P: 'p',
+  n: 'n',
+  N: 'n',
+  u: 'µ',
+  U: 'µ',
+  m: 'm',
+  k: 'k',
+  K: 'k',
+  M: 'M',
+  G: 'G',
 };
 
 /** Unit words as people type them; "WV" and "VDC" are voltage notations on electrolytic capacitors. */

@@ -96,7 +96,10 @@ function readTolerance(text: string, fields: RatingFields): Result<true> {
 
 export function parseRating(text: string): Result<RatingFields> {
   const fields: RatingFields = { words: [] };
-  let rest = text.normalize('NFKC').replace(/[µμ]/g, 'u').replace(/[\u2212\u2013]/g, '-');
+  let rest = text
+    .normalize('NFKC')
+    .replace(/[µμ]/g, 'u')
+    .replace(/[\u2212\u2013]/g, '-');
   for (const extractor of extractors) {
     for (const match of rest.matchAll(extractor.pattern)) {
       const applied = extractor.apply(match as RegExpExecArray, fields);
@@ -105,9 +108,7 @@ export function parseRating(text: string): Result<RatingFields> {
     rest = rest.replace(extractor.pattern, ' ');
   }
   // "16 V DC" and "16 V" become "16V" so each value is one token.
-  rest = rest
-    .replace(/(\d)\s*(v|wv|w\.v\.)\s*\.?\s*dc\b/gi, '$1V')
-    .replace(/(\d)\s+(?=[pnumkKMG]?(?:F|Ω|ohms?|V|WV|W|A|H)\b)/g, '$1');
+  rest = rest.replace(/(\d)\s*(v|wv|w\.v\.)\s*\.?\s*dc\b/gi, '$1V').replace(/(\d)\s+(?=[pnumkKMG]?(?:F|Ω|ohms?|V|WV|W|A|H)\b)/g, '$1');
   for (const token of rest.split(/[\s,;/|@()]+/).filter((t) => t !== '')) {
     const read = readToken(token, fields);
     if (!read.ok) return read;

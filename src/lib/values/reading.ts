@@ -52,9 +52,7 @@ export function finishReading(reading: RawReading, original: string, expect?: Qu
   if (!allowedPrefixes[quantity].includes(reading.prefix)) {
     return fail(`The prefix "${reading.prefix}" is not used with ${unitOf[quantity]} on parts.`, exampleOf[quantity]);
   }
-  const magnitude = canonicalMagnitude(
-    Number(`${reading.digits}e${reading.exponent + prefixExponents[reading.prefix]}`) / reading.divisor,
-  );
+  const magnitude = canonicalMagnitude(Number(`${reading.digits}e${reading.exponent + prefixExponents[reading.prefix]}`) / reading.divisor);
   const writtenZero = !/[1-9]/.test(reading.digits);
   const checked = checkMagnitude(magnitude, writtenZero, quantity, original);
   if (!checked.ok) return checked;

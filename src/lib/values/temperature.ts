@@ -8,7 +8,10 @@ const temperaturePattern =
 
 /** Reads a temperature class; the lowest class in use is 40 °C and none exceeds 200 °C. */
 export function parseTemperature(text: string): Result<number> {
-  const compact = text.normalize('NFKC').replace(/\u2212/g, '-').trim();
+  const compact = text
+    .normalize('NFKC')
+    .replace(/\u2212/g, '-')
+    .trim();
   if (compact === '') return fail('No temperature given.', TEMPERATURE_EXAMPLE);
   const match = temperaturePattern.exec(compact);
   if (!match) return fail(`Could not read "${compact}" as a temperature class.`, TEMPERATURE_EXAMPLE);
@@ -25,5 +28,10 @@ export function formatTemperature(celsius: number): string {
 
 /** True when the text looks like a temperature, so a rating reader can route it here. */
 export function looksLikeTemperature(text: string): boolean {
-  return temperaturePattern.test(text.normalize('NFKC').replace(/\u2212/g, '-').trim());
+  return temperaturePattern.test(
+    text
+      .normalize('NFKC')
+      .replace(/\u2212/g, '-')
+      .trim(),
+  );
 }

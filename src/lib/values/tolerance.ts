@@ -27,7 +27,10 @@ export function toleranceFromLetter(letter: string): Tolerance | undefined {
 }
 
 export function parseTolerance(text: string): Result<Tolerance> {
-  const compact = text.normalize('NFKC').replace(/\u2212/g, '-').trim();
+  const compact = text
+    .normalize('NFKC')
+    .replace(/\u2212/g, '-')
+    .trim();
   if (compact === '') return fail('No tolerance given.', TOLERANCE_EXAMPLE);
   if (/^[a-z]$/i.test(compact)) {
     const fromLetter = toleranceFromLetter(compact);

@@ -37,7 +37,7 @@ async function seedOneFix(trx: Knex.Transaction, ids: SeededIds, fix: DemoFix, i
   let parentId: number | null = null;
   for (const [n, rev] of fix.revisions.entries()) {
     const when = new Date(EPOCH + index * 5 * DAY + n * 40 * DAY);
-    const [{ id: revisionId }] = await trx('revisions')
+    const inserted: { id: number }[] = await trx('revisions')
       .insert({
         fix_id: fixId,
         number: n + 1,
@@ -62,6 +62,8 @@ async function seedOneFix(trx: Knex.Transaction, ids: SeededIds, fix: DemoFix, i
         proofed_at: when,
       })
       .returning('id');
+    const revisionId = inserted[0]?.id;
+    if (revisionId === undefined) throw new Error(`Demo fix ${fix.slug}: revision ${n + 1} was not inserted`);
     if (machineIds.length) await trx('revision_machines').insert(machineIds.map((machine_id) => ({ revision_id: revisionId, machine_id })));
     if (chassisIds.length) await trx('revision_chassis').insert(chassisIds.map((chassis_family_id) => ({ revision_id: revisionId, chassis_family_id })));
     for (const [position, illustration] of (rev.illustrations ?? []).entries()) {

@@ -20,8 +20,12 @@ function capacitorCan(x: number, y: number, w: number, h: number, domed: boolean
 }
 
 export function drawBulgingCapacitor(): string {
-  const fins = Array.from({ length: 7 }, (_, i) => rect(200 + i * 60, 300, 30, 560, `fill="none" stroke="${INK}" stroke-width="6"`)).join('');
-  const waves = [0, 1, 2].map((i) => path(`M ${310 + i * 80} 270 q 20 -30 0 -60 q -20 -30 0 -60`, `fill="none" stroke="${AMBER}" stroke-width="6"`)).join('');
+  const fins = Array.from({ length: 7 }, (_, i) => rect(200 + i * 60, 300, 30, 560, `fill="none" stroke="${INK}" stroke-width="6"`)).join(
+    '',
+  );
+  const waves = [0, 1, 2]
+    .map((i) => path(`M ${310 + i * 80} 270 q 20 -30 0 -60 q -20 -30 0 -60`, `fill="none" stroke="${AMBER}" stroke-width="6"`))
+    .join('');
   return [
     fins,
     rect(180, 860, 460, 40, `fill="none" stroke="${INK}" stroke-width="8"`),

@@ -52,7 +52,9 @@ export function drawIdlerTyre(): string {
 }
 
 export function drawTrayGear(): string {
-  const teeth = Array.from({ length: 14 }, (_, i) => rect(240 + i * 80, 930, 40, 34, `fill="none" stroke="${INK}" stroke-width="6"`)).join('');
+  const teeth = Array.from({ length: 14 }, (_, i) => rect(240 + i * 80, 930, 40, 34, `fill="none" stroke="${INK}" stroke-width="6"`)).join(
+    '',
+  );
   return [
     gear(420, 560, 170, 18),
     gear(720, 700, 110, 12),

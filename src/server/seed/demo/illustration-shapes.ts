@@ -14,7 +14,14 @@ export function circle(cx: number, cy: number, r: number, style = `fill="none" s
   return `<circle cx="${r1(cx)}" cy="${r1(cy)}" r="${r1(r)}" ${style}/>`;
 }
 
-export function rect(x: number, y: number, w: number, h: number, style = `fill="none" stroke="${INK}" stroke-width="8"`, radius = 0): string {
+export function rect(
+  x: number,
+  y: number,
+  w: number,
+  h: number,
+  style = `fill="none" stroke="${INK}" stroke-width="8"`,
+  radius = 0,
+): string {
   return `<rect x="${r1(x)}" y="${r1(y)}" width="${r1(w)}" height="${r1(h)}" rx="${radius}" ${style}/>`;
 }
 

@@ -5,8 +5,7 @@ import type { DemoIllustration, DemoRevision, TiptapDoc, TiptapNode } from '../t
 /** The deference every caution carries: the fix says what to watch, the reader's codes decide how. */
 const DEFERENCE: Record<CautionKind, string> = {
   mains: 'Follow your local electrical codes and licensed practice for work on mains equipment.',
-  stored_charge:
-    'Measure the voltage, do not assume the capacitor is empty; follow your local electrical codes and licensed practice.',
+  stored_charge: 'Measure the voltage, do not assume the capacitor is empty; follow your local electrical codes and licensed practice.',
   laser: 'Never look into the lens while the unit is powered; follow your local electrical codes and licensed practice.',
   heat: 'Let parts cool before you touch them; follow your local electrical codes and licensed practice.',
   sharp_edges: 'Wear cut-resistant gloves; follow your local electrical codes and licensed practice.',

@@ -8,7 +8,10 @@ const doorR1 = rev({
   cause:
     'The HM-2 cassette compartment is lifted by a pair of torsion springs and latched down by a small hook on the mechanism. When the mechanism has stopped part-way through an eject, for example on a flat battery, the hook is left in the wrong place and the compartment cannot lock down.',
   body: doc(
-    caution('spring', 'The compartment lift springs on the HM-2 are strong for their size; a released spring can fly into an eye. Keep the compartment held down with a thumb while its screws are out.'),
+    caution(
+      'spring',
+      'The compartment lift springs on the HM-2 are strong for their size; a released spring can fly into an eye. Keep the compartment held down with a thumb while its screws are out.',
+    ),
     caution('sharp_edges', 'The compartment side plates are thin stamped steel with sharp edges.'),
     steps(
       'Remove the battery and any power lead. Never force the door: the plastic hinge breaks.',
@@ -44,14 +47,21 @@ const dew = rev({
   cause:
     'A resistive dew sensor on the drum base locks the mechanism out when moisture could make the tape stick to the drum. Its resistance rises with humidity; corrosion on its pads or a sensor aged by damp storage reads wet all the time.',
   body: doc(
-    p('First rule out real condensation: leave the camcorder with its compartment open in a warm, dry room for two hours. If DEW clears, there is nothing to repair.'),
+    p(
+      'First rule out real condensation: leave the camcorder with its compartment open in a warm, dry room for two hours. If DEW clears, there is nothing to repair.',
+    ),
     steps(
       'Remove the battery. Open the side cover and find the dew sensor: a small rectangle on a strip of flexible board beside the drum.',
       'Measure it (reading below) with the camcorder off.',
       'Clean green or white corrosion off its pads and the flex connector with isopropyl alcohol and a fibre pen.',
       'If the sensor still reads high, replace it; do not bridge it, as that removes the protection for the customer.',
     ),
-    reading({ testPoint: 'Dew sensor, dry room, camcorder off', expected: 'a few kΩ', measured: 'over 100 kΩ', note: 'Breathe on it: a good sensor rises sharply and falls back within a minute.' }),
+    reading({
+      testPoint: 'Dew sensor, dry room, camcorder off',
+      expected: 'a few kΩ',
+      measured: 'over 100 kΩ',
+      note: 'Breathe on it: a good sensor rises sharply and falls back within a minute.',
+    }),
   ),
   parts: [part('other', 'HM-2 dew sensor on flex', { notes: 'only if it still reads high after cleaning' })],
   difficulty: 'careful',
@@ -88,9 +98,12 @@ const viewfinder = rev({
   title: 'Viewfinder blank, recordings fine',
   symptoms: ['viewfinder blank', 'no picture in eyepiece', 'recording works'],
   cause:
-    'The HC-8A\'s monochrome tube viewfinder has its own small deflection and high-voltage board. Its tiny electrolytics leak with age, the sweep stops, and the tube is protected by blanking, so the eyepiece stays dark.',
+    "The HC-8A's monochrome tube viewfinder has its own small deflection and high-voltage board. Its tiny electrolytics leak with age, the sweep stops, and the tube is protected by blanking, so the eyepiece stays dark.",
   body: doc(
-    caution('stored_charge', 'The viewfinder tube keeps a few kilovolts on its anode for a while after the battery comes off. Discharge the anode cap to the tube\'s earth band through a 1 M resistor on an insulated lead before touching the board.'),
+    caution(
+      'stored_charge',
+      "The viewfinder tube keeps a few kilovolts on its anode for a while after the battery comes off. Discharge the anode cap to the tube's earth band through a 1 M resistor on an insulated lead before touching the board.",
+    ),
     steps(
       'Remove the battery and unscrew the viewfinder from its arm (two screws).',
       'Open the viewfinder housing and discharge the tube as described above.',
@@ -116,7 +129,10 @@ const smdR1 = rev({
   cause:
     'The HC-85H power board uses small surface-mount electrolytic capacitors that leak after fifteen years or so. The electrolyte eats the copper tracks beside them, and the DC-to-DC converter loses its feedback or its input filter.',
   body: doc(
-    caution('heat', 'Removing surface-mount electrolytics takes a hot-air station or two irons at once; the board is small and nearby plastic parts melt. Shield them with heat-resistant tape.'),
+    caution(
+      'heat',
+      'Removing surface-mount electrolytics takes a hot-air station or two irons at once; the board is small and nearby plastic parts melt. Shield them with heat-resistant tape.',
+    ),
     steps(
       'Remove the battery and adaptor, then open the left side panel to reach the power board.',
       'Look for a grey or brown film around the capacitors and a fishy smell: both mark leaking electrolyte.',
@@ -146,14 +162,33 @@ const smdR2 = revise(smdR1, {
   author: 'moderator2',
   proofer: 'moderator',
   illustrations: [
-    figure('bulging-capacitor', 'Drawing of a capacitor with a domed top and a stain at its base.', 'A leaking electrolytic leaves a stain and corrodes the tracks.'),
+    figure(
+      'bulging-capacitor',
+      'Drawing of a capacitor with a domed top and a stain at its base.',
+      'A leaking electrolytic leaves a stain and corrodes the tracks.',
+    ),
   ],
 });
 
 export const camcorderFixes: DemoFix[] = [
-  { slug: 'hm2-cassette-door-will-not-close', machines: ['halvorin/HC-8A/PAL', 'halvorin/HC-8A/NTSC', 'halvorin/HC-85H/PAL'], chassis: ['halvorin-hm2-mechanism'], revisions: [doorR1, doorR2] },
-  { slug: 'hm2-dew-lockout-h04', machines: ['halvorin/HC-85H/PAL', 'halvorin/HC-8A/PAL'], chassis: ['halvorin-hm2-mechanism'], revisions: [dew] },
+  {
+    slug: 'hm2-cassette-door-will-not-close',
+    machines: ['halvorin/HC-8A/PAL', 'halvorin/HC-8A/NTSC', 'halvorin/HC-85H/PAL'],
+    chassis: ['halvorin-hm2-mechanism'],
+    revisions: [doorR1, doorR2],
+  },
+  {
+    slug: 'hm2-dew-lockout-h04',
+    machines: ['halvorin/HC-85H/PAL', 'halvorin/HC-8A/PAL'],
+    chassis: ['halvorin-hm2-mechanism'],
+    revisions: [dew],
+  },
   { slug: 'kc22d-blocky-playback-f21', machines: ['kestrune/KC-22D/PAL', 'kestrune/KC-22D/NTSC'], chassis: [], revisions: [blocky] },
   { slug: 'hc8a-viewfinder-blank', machines: ['halvorin/HC-8A/PAL', 'halvorin/HC-8A/NTSC'], chassis: [], revisions: [viewfinder] },
-  { slug: 'hc85h-no-power-leaking-capacitors', machines: ['halvorin/HC-85H/PAL'], chassis: ['halvorin-hm2-mechanism'], revisions: [smdR1, smdR2] },
+  {
+    slug: 'hc85h-no-power-leaking-capacitors',
+    machines: ['halvorin/HC-85H/PAL'],
+    chassis: ['halvorin-hm2-mechanism'],
+    revisions: [smdR1, smdR2],
+  },
 ];

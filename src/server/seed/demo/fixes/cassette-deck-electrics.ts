@@ -11,12 +11,17 @@ const demag = rev({
     p('Clean the heads first: dirt gives the same symptom. Unplug the deck and take out any cassette.'),
     steps(
       'Remove the cassette door so the heads are exposed.',
-      'Switch the handheld head demagnetiser on at arm\'s length from the deck, never near the heads.',
-      'Bring its tip slowly to the record/play head, move it gently up and down across the head face without touching, then draw it slowly away to arm\'s length before switching it off.',
+      "Switch the handheld head demagnetiser on at arm's length from the deck, never near the heads.",
+      "Bring its tip slowly to the record/play head, move it gently up and down across the head face without touching, then draw it slowly away to arm's length before switching it off.",
       'Repeat for the erase head, the capstan and each steel tape guide.',
       'Play a known-good recording and listen for the treble.',
     ),
-    reading({ testPoint: 'Head face, pocket magnetometer', expected: 'no reading above the meter\'s zero', measured: 'a small deflection', note: 'Check after demagnetising, not only before.' }),
+    reading({
+      testPoint: 'Head face, pocket magnetometer',
+      expected: "no reading above the meter's zero",
+      measured: 'a small deflection',
+      note: 'Check after demagnetising, not only before.',
+    }),
   ),
   parts: [part('other', 'handheld head demagnetiser', { notes: 'tool, not fitted' })],
   difficulty: 'routine',
@@ -33,7 +38,10 @@ const reverseR1 = rev({
     'The TD-570R knows the tape has reached its end when the take-up spool stops sending pulses from its reel sensor. A slipping take-up clutch or a dirty sensor makes the pulses falter in mid-tape, and the deck takes that for the end and reverses.',
   body: doc(
     p('Unplug the deck and remove the top cover and the transport.'),
-    caution('spring', 'The rotating head on the TD-570R is turned by a spring-loaded cam; keep fingers clear of it when you move the mechanism by hand.'),
+    caution(
+      'spring',
+      'The rotating head on the TD-570R is turned by a spring-loaded cam; keep fingers clear of it when you move the mechanism by hand.',
+    ),
     steps(
       'Find the reel sensor under the take-up hub: a small slotted disc turning in an optical gate.',
       'Blow dust out of the gate and wipe the slotted disc clean.',
@@ -65,8 +73,14 @@ const humR1 = rev({
   cause:
     'The TD-550 has a linear supply: a transformer, a bridge rectifier and one large reservoir capacitor. After thirty years that capacitor has lost much of its capacitance and the ripple rides through the regulators into the audio.',
   body: doc(
-    caution('mains', 'The TD-550 power switch and transformer primary are wired at mains voltage beside the reservoir capacitor; the switch terminals are uncovered.'),
-    caution('stored_charge', 'The reservoir capacitor C101 holds its charge after switch-off. It is low voltage, but the current from a shorted tool can weld it; discharge it through a 100 ohm 2 W resistor.'),
+    caution(
+      'mains',
+      'The TD-550 power switch and transformer primary are wired at mains voltage beside the reservoir capacitor; the switch terminals are uncovered.',
+    ),
+    caution(
+      'stored_charge',
+      'The reservoir capacitor C101 holds its charge after switch-off. It is low voltage, but the current from a shorted tool can weld it; discharge it through a 100 ohm 2 W resistor.',
+    ),
     steps(
       'Unplug the deck and remove the top cover.',
       'Discharge C101 as above and check with a meter that it reads under 1 V.',
@@ -97,12 +111,26 @@ const humR2 = revise(humR1, {
   author: 'moderator',
   proofer: 'moderator2',
   illustrations: [
-    figure('bleed-resistor', 'Drawing of a resistor in insulated clips across a capacitor\'s leads, with a meter.', 'Discharging the reservoir capacitor and confirming it with a meter.'),
+    figure(
+      'bleed-resistor',
+      "Drawing of a resistor in insulated clips across a capacitor's leads, with a meter.",
+      'Discharging the reservoir capacitor and confirming it with a meter.',
+    ),
   ],
 });
 
 export const cassetteDeckElectricsFixes: DemoFix[] = [
-  { slug: 'deck-dull-treble-magnetised-heads', machines: ['brindlecote/TD-550/multi', 'brindlecote/TD-590/multi', 'kestrune/KT-44/multi'], chassis: [], revisions: [demag] },
-  { slug: 'td570r-auto-reverse-flips-mid-tape', machines: ['brindlecote/TD-570R/multi'], chassis: ['brindlecote-bt4-transport'], revisions: [reverseR1, reverseR2] },
+  {
+    slug: 'deck-dull-treble-magnetised-heads',
+    machines: ['brindlecote/TD-550/multi', 'brindlecote/TD-590/multi', 'kestrune/KT-44/multi'],
+    chassis: [],
+    revisions: [demag],
+  },
+  {
+    slug: 'td570r-auto-reverse-flips-mid-tape',
+    machines: ['brindlecote/TD-570R/multi'],
+    chassis: ['brindlecote-bt4-transport'],
+    revisions: [reverseR1, reverseR2],
+  },
   { slug: 'td550-hum-reservoir-capacitor', machines: ['brindlecote/TD-550/multi'], chassis: [], revisions: [humR1, humR2] },
 ];

@@ -8,7 +8,9 @@ const wowR1 = rev({
   cause:
     'The BT-4 drives its capstan flywheel from the motor through a flat belt. As the belt ages it stretches unevenly and its surface glazes, so it slips a little on every turn and the tape speed wavers.',
   body: doc(
-    p('Unplug the deck. Listen to a piano recording first: a slow waver (wow) points to the belt; a fast rough warble (flutter) points to the pinch roller or a dirty capstan.'),
+    p(
+      'Unplug the deck. Listen to a piano recording first: a slow waver (wow) points to the belt; a fast rough warble (flutter) points to the pinch roller or a dirty capstan.',
+    ),
     steps(
       'Remove the top cover (four screws) and the transport (three screws under the front).',
       'Remove the flywheel retaining plate at the back of the transport and lift off the old belt.',
@@ -23,17 +25,19 @@ const wowR1 = rev({
   editSummary: 'First write-up.',
   author: 'tech-nils',
   proofer: 'moderator',
-  illustrations: [
-    figure('belt-path', 'Drawing of a flat belt from a small motor pulley round a large flywheel.', 'BT-4 capstan belt: motor pulley to flywheel.'),
-  ],
 });
 
 const wowR2 = revise(wowR1, {
   body: doc(
     ...wowR1.body.content,
     h(3, 'Measure it'),
-    p('Play a 3150 Hz test tape into a wow and flutter meter, weighted as the meter\'s standard setting prescribes.'),
-    reading({ testPoint: 'Line out, 3150 Hz test tape', expected: 'under 0.10 % weighted', measured: '0.3 % or more with a slow swing', note: 'A deck that reads well at the start of a tape but worse at the end has a weak take-up, not a bad belt.' }),
+    p("Play a 3150 Hz test tape into a wow and flutter meter, weighted as the meter's standard setting prescribes."),
+    reading({
+      testPoint: 'Line out, 3150 Hz test tape',
+      expected: 'under 0.10 % weighted',
+      measured: '0.3 % or more with a slow swing',
+      note: 'A deck that reads well at the start of a tape but worse at the end has a weak take-up, not a bad belt.',
+    }),
   ),
   editSummary: 'Added a wow and flutter reading with a test tape.',
   author: 'tech-farid',
@@ -44,10 +48,13 @@ const speedDrift = rev({
   title: 'Speed drifts: tapes play fast or slow, worse over time',
   symptoms: ['plays too fast', 'plays too slow', 'speed drift', 'pitch changes as the deck warms'],
   cause:
-    'The BT-4 motor holds its speed with a small electronic governor and a trimmer reached through a hole in the motor can. The trimmer track gets dirty and the governor\'s timing capacitor drifts with heat, so the speed wanders as the deck warms up.',
+    "The BT-4 motor holds its speed with a small electronic governor and a trimmer reached through a hole in the motor can. The trimmer track gets dirty and the governor's timing capacitor drifts with heat, so the speed wanders as the deck warms up.",
   body: doc(
     p('Let the deck run for fifteen minutes before adjusting, so the motor is at working temperature.'),
-    caution('mains', 'The BT-4 mains transformer and power switch sit beside the motor, and their terminals are exposed while you adjust with the cover off. Use an insulated trimming tool and keep your other hand clear.'),
+    caution(
+      'mains',
+      'The BT-4 mains transformer and power switch sit beside the motor, and their terminals are exposed while you adjust with the cover off. Use an insulated trimming tool and keep your other hand clear.',
+    ),
     steps(
       'Remove the top cover. The speed trimmer is behind the small hole in the back of the motor can.',
       'Play a 3150 Hz test tape and read the output frequency on a counter.',
@@ -84,9 +91,6 @@ const idlerDeck = rev({
   editSummary: 'First write-up.',
   author: 'tech-katya',
   proofer: 'moderator',
-  illustrations: [
-    figure('idler-tyre', 'Drawing of an idler wheel with a glazed rubber tyre between two spool hubs.', 'KT-44 idler between the spool hubs.'),
-  ],
 });
 
 const creaseR1 = rev({
@@ -99,7 +103,7 @@ const creaseR1 = rev({
     steps(
       'Push the head block forward by hand to bring the pinch roller against the capstan and watch where they meet.',
       'Check the roller: it should be matt and slightly soft, and its shaft should not wobble.',
-      'Remove the roller\'s retaining clip and fit a new roller of the same diameter and width.',
+      "Remove the roller's retaining clip and fit a new roller of the same diameter and width.",
       'Clean the capstan and guides, then play a scrap tape and check its edge.',
     ),
   ),
@@ -114,19 +118,40 @@ const creaseR1 = rev({
 const creaseR2 = revise(creaseR1, {
   body: doc(
     ...creaseR1.body.content,
-    p('On the TD-590 the three-head block also has tape guides of its own: check that both guide forks are straight, or the new roller will crease tape as well.'),
+    p(
+      'On the TD-590 the three-head block also has tape guides of its own: check that both guide forks are straight, or the new roller will crease tape as well.',
+    ),
   ),
   editSummary: 'Added the guide fork check on the three-head model.',
   author: 'editor',
   proofer: 'moderator',
   illustrations: [
-    figure('pinch-roller', 'Drawing of a pinch roller pressing tape against a capstan shaft.', 'The pinch roller must meet the capstan square along its whole width.'),
+    figure(
+      'pinch-roller',
+      'Drawing of a pinch roller pressing tape against a capstan shaft.',
+      'The pinch roller must meet the capstan square along its whole width.',
+    ),
   ],
 });
 
 export const cassetteDeckTransportFixes: DemoFix[] = [
-  { slug: 'bt4-wow-and-flutter-capstan-belt', machines: ['brindlecote/TD-550/multi', 'brindlecote/TD-570R/multi', 'brindlecote/TD-590/multi'], chassis: ['brindlecote-bt4-transport'], revisions: [wowR1, wowR2] },
-  { slug: 'bt4-speed-drift-motor-trimmer', machines: ['brindlecote/TD-550/multi', 'brindlecote/TD-590/multi'], chassis: ['brindlecote-bt4-transport'], revisions: [speedDrift] },
+  {
+    slug: 'bt4-wow-and-flutter-capstan-belt',
+    machines: ['brindlecote/TD-550/multi', 'brindlecote/TD-570R/multi', 'brindlecote/TD-590/multi'],
+    chassis: ['brindlecote-bt4-transport'],
+    revisions: [wowR1, wowR2],
+  },
+  {
+    slug: 'bt4-speed-drift-motor-trimmer',
+    machines: ['brindlecote/TD-550/multi', 'brindlecote/TD-590/multi'],
+    chassis: ['brindlecote-bt4-transport'],
+    revisions: [speedDrift],
+  },
   { slug: 'kt44-play-stops-idler-tyre', machines: ['kestrune/KT-44/multi'], chassis: [], revisions: [idlerDeck] },
-  { slug: 'bt4-creases-tape-pinch-roller', machines: ['brindlecote/TD-590/multi', 'brindlecote/TD-550/multi'], chassis: ['brindlecote-bt4-transport'], revisions: [creaseR1, creaseR2] },
+  {
+    slug: 'bt4-creases-tape-pinch-roller',
+    machines: ['brindlecote/TD-590/multi', 'brindlecote/TD-550/multi'],
+    chassis: ['brindlecote-bt4-transport'],
+    revisions: [creaseR1, creaseR2],
+  },
 ];

@@ -1,6 +1,6 @@
 // Demo fixes for CD players: the laser pickup, the sled and the spindle.
 import type { DemoFix } from '../types';
-import { caution, doc, figure, h, p, part, reading, rev, revise, steps, table } from './build';
+import { caution, doc, h, p, part, reading, rev, revise, steps, table } from './build';
 
 const skipsR1 = rev({
   title: 'Skips and mistracks on discs that play fine elsewhere',
@@ -8,7 +8,10 @@ const skipsR1 = rev({
   cause:
     'The KL-9 pickup lens sits in the open under the tray and gathers a film of dust and smoke. The error-correction copes at first, then the tracking servo starts to lose its place on discs with any blemish.',
   body: doc(
-    caution('laser', 'The KL-9 pickup emits an invisible infrared laser beam while the player is on, with the tray closed or open. Clean the lens only with the player unplugged.'),
+    caution(
+      'laser',
+      'The KL-9 pickup emits an invisible infrared laser beam while the player is on, with the tray closed or open. Clean the lens only with the player unplugged.',
+    ),
     steps(
       'Unplug the player and remove the top cover (three screws at the back).',
       'With the tray open by hand (white pulley under the loader), blow loose dust off the lens.',
@@ -21,16 +24,15 @@ const skipsR1 = rev({
   editSummary: 'First write-up.',
   author: 'member',
   proofer: 'moderator',
-  illustrations: [
-    figure('laser-lens', 'Drawing of a CD pickup with its round objective lens on a sled.', 'KL-9 pickup lens seen from above.'),
-  ],
 });
 
 const skipsR2 = revise(skipsR1, {
   body: doc(
     ...skipsR1.body.content,
     h(3, 'If it still skips'),
-    p('Check that the lens moves freely: with the player unplugged, press it down very gently with a cotton swab stick; it should spring back level. A lens that sticks or sits tilted means a worn pickup.'),
+    p(
+      'Check that the lens moves freely: with the player unplugged, press it down very gently with a cotton swab stick; it should spring back level. A lens that sticks or sits tilted means a worn pickup.',
+    ),
   ),
   editSummary: 'Added the lens movement check for players that still skip after cleaning.',
   author: 'tech-celia',
@@ -44,16 +46,28 @@ const weakLaserR1 = rev({
   cause:
     'F-07 on the KL-9 means the focus servo found no disc surface. With a clean lens, the usual reason is a laser diode that has aged and no longer gives enough light to focus on.',
   body: doc(
-    caution('laser', 'Measuring the laser current means running the KL-9 with the pickup exposed and its invisible infrared beam on. Keep the pickup pointing away from you and never look at the lens.'),
+    caution(
+      'laser',
+      'Measuring the laser current means running the KL-9 with the pickup exposed and its invisible infrared beam on. Keep the pickup pointing away from you and never look at the lens.',
+    ),
     p('Measure the laser current before deciding on a new pickup:'),
-    reading({ testPoint: 'Across the 10 Ω sense resistor R108 beside the pickup connector', expected: '0.40-0.55 V (40-55 mA)', measured: 'over 0.65 V', note: 'A current well above the label on the pickup means the diode is worn.' }),
+    reading({
+      testPoint: 'Across the 10 Ω sense resistor R108 beside the pickup connector',
+      expected: '0.40-0.55 V (40-55 mA)',
+      measured: 'over 0.65 V',
+      note: 'A current well above the label on the pickup means the diode is worn.',
+    }),
     steps(
       'Unplug the player, wear an earthed wrist strap and remove the loader.',
       'Undo the sled rod clamp and lift the pickup out with its rod.',
       'Fit the new pickup, plug in its flex, then remove the solder short on the flex.',
       'Refit and test with a pressed disc and a recordable one.',
     ),
-    table(['Current across R108', 'What it means'], ['40-55 mA', 'Laser healthy; look at focus or the disc motor'], ['over 65 mA', 'Laser worn; replace the pickup']),
+    table(
+      ['Current across R108', 'What it means'],
+      ['40-55 mA', 'Laser healthy; look at focus or the disc motor'],
+      ['over 65 mA', 'Laser worn; replace the pickup'],
+    ),
   ),
   parts: [part('optical_pickup', 'KL-9 three-beam CD pickup', { notes: 'comes with a solder short on the flex' })],
   difficulty: 'specialist',
@@ -66,7 +80,9 @@ const weakLaserR1 = rev({
 const weakLaserR2 = revise(weakLaserR1, {
   body: doc(
     ...weakLaserR1.body.content.slice(0, 3),
-    p('Do not turn up the laser power trimmer to compensate: it shortens the life of an already tired diode and rarely brings back a reliable read.'),
+    p(
+      'Do not turn up the laser power trimmer to compensate: it shortens the life of an already tired diode and rarely brings back a reliable read.',
+    ),
     ...weakLaserR1.body.content.slice(3),
   ),
   editSummary: 'Added the warning against turning up the laser power trimmer.',
@@ -101,7 +117,7 @@ const spindle = rev({
   symptoms: ['disc not spinning', 'F-12 on display', 'disc spins slowly then stops'],
   errorCodes: ['F-12'],
   cause:
-    'F-12 is Kestrune\'s code for a spindle that never reached a steady speed. The CP-720 spindle motor wears its carbon brushes and commutator until it develops dead spots and will not start from some positions.',
+    "F-12 is Kestrune's code for a spindle that never reached a steady speed. The CP-720 spindle motor wears its carbon brushes and commutator until it develops dead spots and will not start from some positions.",
   body: doc(
     caution('laser', 'The pickup lights while the spindle is tried; keep the pickup covered while the player is powered on the bench.'),
     steps(
@@ -110,7 +126,11 @@ const spindle = rev({
       'If it shows dead spots, replace the motor complete with its turntable, which is set to the right height at the factory.',
       'Refit and play a full disc.',
     ),
-    reading({ testPoint: 'Spindle motor terminals, disconnected', expected: '8-15 Ω, steady as it turns', measured: 'open at some positions' }),
+    reading({
+      testPoint: 'Spindle motor terminals, disconnected',
+      expected: '8-15 Ω, steady as it turns',
+      measured: 'open at some positions',
+    }),
   ),
   parts: [part('motor', 'KL-9 spindle motor with turntable')],
   difficulty: 'skilled',
@@ -121,8 +141,23 @@ const spindle = rev({
 });
 
 export const cdPlayerOpticsFixes: DemoFix[] = [
-  { slug: 'kl9-skips-dirty-lens', machines: ['kestrune/CP-720/multi', 'kestrune/CP-740/multi', 'kestrune/CP-760/multi'], chassis: ['kestrune-kl9-transport'], revisions: [skipsR1, skipsR2] },
-  { slug: 'kl9-no-disc-f07-worn-laser', machines: ['kestrune/CP-720/multi', 'kestrune/CP-740/multi'], chassis: ['kestrune-kl9-transport'], revisions: [weakLaserR1, weakLaserR2] },
+  {
+    slug: 'kl9-skips-dirty-lens',
+    machines: ['kestrune/CP-720/multi', 'kestrune/CP-740/multi', 'kestrune/CP-760/multi'],
+    chassis: ['kestrune-kl9-transport'],
+    revisions: [skipsR1, skipsR2],
+  },
+  {
+    slug: 'kl9-no-disc-f07-worn-laser',
+    machines: ['kestrune/CP-720/multi', 'kestrune/CP-740/multi'],
+    chassis: ['kestrune-kl9-transport'],
+    revisions: [weakLaserR1, weakLaserR2],
+  },
   { slug: 'bcd15-stops-later-tracks-sled', machines: ['brindlecote/BCD-15/multi'], chassis: [], revisions: [sled] },
-  { slug: 'cp720-spindle-will-not-spin-f12', machines: ['kestrune/CP-720/multi'], chassis: ['kestrune-kl9-transport'], revisions: [spindle] },
+  {
+    slug: 'cp720-spindle-will-not-spin-f12',
+    machines: ['kestrune/CP-720/multi'],
+    chassis: ['kestrune-kl9-transport'],
+    revisions: [spindle],
+  },
 ];

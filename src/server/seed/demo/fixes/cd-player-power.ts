@@ -31,7 +31,10 @@ const fuse = rev({
     'The CP-760 has a linear supply with a large reservoir capacitor after a bridge rectifier. A surge on the supply can short one diode of the bridge; the fuse then blows again the moment it is replaced.',
   body: doc(
     caution('mains', 'The CP-760 fuse holder and transformer primary are at mains voltage; the fuse holder has no cover.'),
-    caution('stored_charge', 'The reservoir capacitor C501 (10000uF 25V) can hold its charge for a long time when the fuse has blown; the energy can burn a tool or a track. Discharge it through a 100 ohm 5 W resistor and measure before working.'),
+    caution(
+      'stored_charge',
+      'The reservoir capacitor C501 (10000uF 25V) can hold its charge for a long time when the fuse has blown; the energy can burn a tool or a track. Discharge it through a 100 ohm 5 W resistor and measure before working.',
+    ),
     steps(
       'Unplug the player, remove the top cover and discharge C501 as above.',
       'Test each diode of the bridge rectifier D501 in diode-test mode.',
@@ -39,7 +42,11 @@ const fuse = rev({
       'Fit a new fuse of the rating printed beside the holder, never a larger one.',
       'Power up through a series lamp the first time.',
     ),
-    reading({ testPoint: 'Each diode of D501, diode-test mode', expected: '0.5-0.7 V one way, open the other', measured: 'near 0 V both ways on one diode' }),
+    reading({
+      testPoint: 'Each diode of D501, diode-test mode',
+      expected: '0.5-0.7 V one way, open the other',
+      measured: 'near 0 V both ways on one diode',
+    }),
   ),
   parts: [
     part('diode', 'bridge rectifier 4 A 200 V', { ref: 'D501' }),
@@ -52,11 +59,20 @@ const fuse = rev({
   author: 'tech-jonah',
   proofer: 'moderator2',
   illustrations: [
-    figure('bleed-resistor', 'Drawing of a resistor bridging the leads of a large capacitor, with a meter reading across it.', 'Discharging C501 through a bleed resistor before testing the bridge.'),
+    figure(
+      'bleed-resistor',
+      'Drawing of a resistor bridging the leads of a large capacitor, with a meter reading across it.',
+      'Discharging C501 through a bleed resistor before testing the bridge.',
+    ),
   ],
 });
 
 export const cdPlayerPowerFixes: DemoFix[] = [
-  { slug: 'kl9-drawer-opens-then-closes', machines: ['kestrune/CP-720/multi', 'kestrune/CP-740/multi', 'kestrune/CP-760/multi'], chassis: ['kestrune-kl9-transport'], revisions: [tray] },
+  {
+    slug: 'kl9-drawer-opens-then-closes',
+    machines: ['kestrune/CP-720/multi', 'kestrune/CP-740/multi', 'kestrune/CP-760/multi'],
+    chassis: ['kestrune-kl9-transport'],
+    revisions: [tray],
+  },
   { slug: 'cp760-dead-fuse-blown-bridge', machines: ['kestrune/CP-760/multi'], chassis: [], revisions: [fuse] },
 ];

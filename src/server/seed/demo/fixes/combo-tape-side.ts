@@ -1,6 +1,6 @@
 // Demo fixes for VHS/DVD combination recorders: faults on the tape side.
 import type { DemoFix } from '../types';
-import { caution, doc, figure, p, part, reading, rev, revise, steps } from './build';
+import { caution, doc, p, part, reading, rev, revise, steps } from './build';
 
 const clutchR1 = rev({
   title: 'VHS side eats tapes, DVD side fine',
@@ -8,8 +8,14 @@ const clutchR1 = rev({
   cause:
     'The slimmed deck in the QC-3 drives its take-up reel through a felt slip clutch. The felt glazes and the clutch spring weakens, so the take-up torque falls, the reel stops pulling, and the capstan feeds tape into the machine instead of the cassette.',
   body: doc(
-    caution('spring', 'The take-up clutch on the QC-3 holds a compressed coil spring under its retaining washer; it flies off when the washer is released.'),
-    caution('sharp_edges', 'The DVD loader\'s steel shield sits right above the tape deck with a raw edge facing it; cover it with tape while you work.'),
+    caution(
+      'spring',
+      'The take-up clutch on the QC-3 holds a compressed coil spring under its retaining washer; it flies off when the washer is released.',
+    ),
+    caution(
+      'sharp_edges',
+      "The DVD loader's steel shield sits right above the tape deck with a raw edge facing it; cover it with tape while you work.",
+    ),
     steps(
       'Unplug the unit, remove the cover and unplug the DVD loader cables; lift the loader off its bracket.',
       'Remove the tape carriage, then ease the washer off the take-up reel table while pressing it down with a finger.',
@@ -18,7 +24,10 @@ const clutchR1 = rev({
     ),
     reading({ testPoint: 'Take-up reel table in play, cassette torque gauge', expected: '60-100 g·cm', measured: 'under 30 g·cm' }),
   ),
-  parts: [part('mechanical', 'QC-3 take-up clutch felt, 11 mm OD'), part('pinch_roller', 'QC-3 pinch roller', { notes: 'replace at the same time if hard' })],
+  parts: [
+    part('mechanical', 'QC-3 take-up clutch felt, 11 mm OD'),
+    part('pinch_roller', 'QC-3 pinch roller', { notes: 'replace at the same time if hard' }),
+  ],
   difficulty: 'skilled',
   timeMinutes: 80,
   editSummary: 'First write-up.',
@@ -29,7 +38,9 @@ const clutchR1 = rev({
 const clutchR2 = revise(clutchR1, {
   body: doc(
     ...clutchR1.body.content.slice(0, 2),
-    p('Before opening, take the tape out of a chewed cassette and check whether the loop is on the take-up side. If it is on the supply side the fault is back-tension, not this clutch.'),
+    p(
+      'Before opening, take the tape out of a chewed cassette and check whether the loop is on the take-up side. If it is on the supply side the fault is back-tension, not this clutch.',
+    ),
     ...clutchR1.body.content.slice(2),
   ),
   editSummary: 'Added a check of which side the loop is on before dismantling.',
@@ -59,9 +70,6 @@ const erSeven = rev({
   editSummary: 'First write-up.',
   author: 'tech-greta',
   proofer: 'moderator2',
-  illustrations: [
-    figure('mode-switch', 'Drawing of a rotary mode switch with contact tracks and a wiper.', 'QC-3 mode switch with its alignment marks.'),
-  ],
 });
 
 const slowRewind = rev({
@@ -90,7 +98,22 @@ const slowRewind = rev({
 });
 
 export const comboTapeSideFixes: DemoFix[] = [
-  { slug: 'qc3-vhs-side-eats-tape', machines: ['quillmere/VDC-900/PAL', 'quillmere/VDC-900/NTSC', 'quillmere/VDC-950T/PAL'], chassis: ['quillmere-qc3-combo'], revisions: [clutchR1, clutchR2] },
-  { slug: 'qc3-er-07-mode-switch', machines: ['quillmere/VDC-900/PAL', 'quillmere/VDC-950T/PAL'], chassis: ['quillmere-qc3-combo'], revisions: [erSeven] },
-  { slug: 'qc3-slow-rewind-reel-belt', machines: ['quillmere/VDC-900/PAL', 'quillmere/VDC-900/NTSC'], chassis: ['quillmere-qc3-combo'], revisions: [slowRewind] },
+  {
+    slug: 'qc3-vhs-side-eats-tape',
+    machines: ['quillmere/VDC-900/PAL', 'quillmere/VDC-900/NTSC', 'quillmere/VDC-950T/PAL'],
+    chassis: ['quillmere-qc3-combo'],
+    revisions: [clutchR1, clutchR2],
+  },
+  {
+    slug: 'qc3-er-07-mode-switch',
+    machines: ['quillmere/VDC-900/PAL', 'quillmere/VDC-950T/PAL'],
+    chassis: ['quillmere-qc3-combo'],
+    revisions: [erSeven],
+  },
+  {
+    slug: 'qc3-slow-rewind-reel-belt',
+    machines: ['quillmere/VDC-900/PAL', 'quillmere/VDC-900/NTSC'],
+    chassis: ['quillmere-qc3-combo'],
+    revisions: [slowRewind],
+  },
 ];

@@ -7,11 +7,19 @@ const ldErr = rev({
   symptoms: ['LD ERR 3 on display', 'no disc with any disc', 'disc spins briefly then stops'],
   errorCodes: ['LD ERR 3'],
   cause:
-    'LD ERR 3 is the ORX-5 code for a laser drive current above its limit. As the pickup\'s laser diode ages it needs more current for the same light, until the drive hits its ceiling during the start-up check. Cleaning will not clear it; the pickup needs replacing.',
+    "LD ERR 3 is the ORX-5 code for a laser drive current above its limit. As the pickup's laser diode ages it needs more current for the same light, until the drive hits its ceiling during the start-up check. Cleaning will not clear it; the pickup needs replacing.",
   body: doc(
-    caution('laser', 'The ORX-5 pickup is a recording unit with an invisible infrared beam besides the red one. Keep the pickup covered whenever the drive is powered outside the case.'),
+    caution(
+      'laser',
+      'The ORX-5 pickup is a recording unit with an invisible infrared beam besides the red one. Keep the pickup covered whenever the drive is powered outside the case.',
+    ),
     p('Measure the laser current before you order a pickup: a low reading points elsewhere.'),
-    reading({ testPoint: 'Across the 10 Ω sense resistor R612 on the drive board', expected: '0.35-0.50 V (35-50 mA) while focusing', measured: 'over 0.60 V, then LD ERR 3', note: 'The reading lasts only a few seconds before the drive gives up; use a meter with hold.' }),
+    reading({
+      testPoint: 'Across the 10 Ω sense resistor R612 on the drive board',
+      expected: '0.35-0.50 V (35-50 mA) while focusing',
+      measured: 'over 0.60 V, then LD ERR 3',
+      note: 'The reading lasts only a few seconds before the drive gives up; use a meter with hold.',
+    }),
     steps(
       'Unplug the recorder, wear an earthed wrist strap and remove the drive (four screws, two cables).',
       'Release the sled guide rod and lift the pickup off its worm gear.',
@@ -53,7 +61,12 @@ const cartridgeR1 = rev({
 const cartridgeR2 = revise(cartridgeR1, {
   body: doc(
     ...cartridgeR1.body.content,
-    reading({ testPoint: 'Cartridge-present switch, cartridge pushed home', expected: 'under 1 Ω', measured: 'open, or hundreds of ohms that flicker', note: 'Measure with the tray out and the recorder unplugged.' }),
+    reading({
+      testPoint: 'Cartridge-present switch, cartridge pushed home',
+      expected: 'under 1 Ω',
+      measured: 'open, or hundreds of ohms that flicker',
+      note: 'Measure with the tray out and the recorder unplugged.',
+    }),
   ),
   editSummary: 'Added a continuity reading for the cartridge switch.',
   author: 'tech-ilse',
@@ -108,7 +121,7 @@ const skips = rev({
   title: 'DVD-RAM recordings freeze and skip on playback',
   symptoms: ['skips on playback', 'picture freezes', 'RAM discs worse than DVD-R'],
   cause:
-    'The ORX-5 draws its cooling air past the drive, and over the years dust settles on the pickup lens. DVD-RAM\'s fine sector headers are the first thing a dirty lens misreads, so RAM playback stutters before anything else fails.',
+    "The ORX-5 draws its cooling air past the drive, and over the years dust settles on the pickup lens. DVD-RAM's fine sector headers are the first thing a dirty lens misreads, so RAM playback stutters before anything else fails.",
   body: doc(
     caution('laser', 'Clean the ORX-5 lens only with the recorder unplugged; its pickup has an infrared beam you cannot see.'),
     steps(
@@ -123,14 +136,26 @@ const skips = rev({
   editSummary: 'First write-up.',
   author: 'tech-farid',
   proofer: 'moderator2',
-  illustrations: [
-    figure('laser-lens', 'Drawing of an optical pickup with its objective lens and a speck of dust on it.', 'The ORX-5 pickup lens under the drive lid.'),
-  ],
 });
 
 export const dvdRamDiscFixes: DemoFix[] = [
-  { slug: 'orx5-ld-err-3-laser-current', machines: ['orvalle/RX-710/PAL', 'orvalle/RX-710/NTSC', 'orvalle/RX-760H/PAL'], chassis: ['orvalle-orx5-platform'], revisions: [ldErr] },
-  { slug: 'orx5-cartridge-rejected', machines: ['orvalle/RX-710/PAL', 'orvalle/RX-710/NTSC'], chassis: ['orvalle-orx5-platform'], revisions: [cartridgeR1, cartridgeR2] },
-  { slug: 'orx5-tray-will-not-close-ld-err-1', machines: ['orvalle/RX-760H/PAL'], chassis: ['orvalle-orx5-platform'], revisions: [trayCloseR1, trayCloseR2] },
+  {
+    slug: 'orx5-ld-err-3-laser-current',
+    machines: ['orvalle/RX-710/PAL', 'orvalle/RX-710/NTSC', 'orvalle/RX-760H/PAL'],
+    chassis: ['orvalle-orx5-platform'],
+    revisions: [ldErr],
+  },
+  {
+    slug: 'orx5-cartridge-rejected',
+    machines: ['orvalle/RX-710/PAL', 'orvalle/RX-710/NTSC'],
+    chassis: ['orvalle-orx5-platform'],
+    revisions: [cartridgeR1, cartridgeR2],
+  },
+  {
+    slug: 'orx5-tray-will-not-close-ld-err-1',
+    machines: ['orvalle/RX-760H/PAL'],
+    chassis: ['orvalle-orx5-platform'],
+    revisions: [trayCloseR1, trayCloseR2],
+  },
   { slug: 'orx5-ram-playback-skips', machines: ['orvalle/RX-710/PAL', 'orvalle/RX-760H/PAL'], chassis: [], revisions: [skips] },
 ];

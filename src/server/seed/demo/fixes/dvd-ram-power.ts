@@ -6,14 +6,20 @@ const standbyR1 = rev({
   title: 'No power at all, standby light off',
   symptoms: ['no power', 'standby light off', 'dead', 'relay does not click'],
   cause:
-    'The ORX-5 keeps a small separate standby supply running whenever it is plugged in. Its output capacitor stands under the main heatsink\'s fan outlet, dries out from years of warm air, and the standby supply collapses, so the recorder never hears the power button.',
+    "The ORX-5 keeps a small separate standby supply running whenever it is plugged in. Its output capacitor stands under the main heatsink's fan outlet, dries out from years of warm air, and the standby supply collapses, so the recorder never hears the power button.",
   body: doc(
-    caution('mains', 'The standby supply is live whenever the ORX-5 is plugged in, even with the display dark. Its primary side shares the board edge with the mains inlet.'),
-    caution('stored_charge', 'The standby supply has its own small reservoir capacitor (10uF 400V) besides the main one; measure both before you touch the board.'),
+    caution(
+      'mains',
+      'The standby supply is live whenever the ORX-5 is plugged in, even with the display dark. Its primary side shares the board edge with the mains inlet.',
+    ),
+    caution(
+      'stored_charge',
+      'The standby supply has its own small reservoir capacitor (10uF 400V) besides the main one; measure both before you touch the board.',
+    ),
     steps(
       'Unplug the recorder and wait two minutes, then remove the top cover.',
       'Measure both reservoir capacitors; discharge any reading over 10 V through a 2k2 5 W resistor.',
-      'Replace C1503 (the standby output capacitor) and C1501 on the standby chip\'s supply pin.',
+      "Replace C1503 (the standby output capacitor) and C1501 on the standby chip's supply pin.",
       'Plug in and check the standby rail (reading below) before pressing the power button.',
     ),
     reading({ testPoint: 'Standby 5 V at C1503', expected: '5.1 V ± 0.2 V', measured: '0 V, or a 1-3 V sawtooth' }),
@@ -27,7 +33,10 @@ const standbyR1 = rev({
 });
 
 const standbyR2 = revise(standbyR1, {
-  parts: [...standbyR1.parts, part('fuse', 'T500mA', { ref: 'F1502', rating: '250V, 5 x 20 mm', notes: 'standby fuse; check, often open after the capacitor fails' })],
+  parts: [
+    ...standbyR1.parts,
+    part('fuse', 'T500mA', { ref: 'F1502', rating: '250V, 5 x 20 mm', notes: 'standby fuse; check, often open after the capacitor fails' }),
+  ],
   body: doc(
     ...standbyR1.body.content,
     p('If the standby rail stays at 0 V, check the standby fuse F1502; it often opens when C1501 fails.'),
@@ -43,8 +52,14 @@ const warmShutdownR1 = rev({
   cause:
     'The main supply on the ORX-5 protects itself when its outputs sag under load. The 12 V and 5 V output capacitors beside the rectifier heatsink lose capacitance with heat; once warm their ripple trips the protection, and it holds off until the board cools.',
   body: doc(
-    caution('mains', 'Confirming this fault means running the ORX-5 warm with the cover off; the primary side of the main supply is exposed beside the fan.'),
-    caution('stored_charge', 'The main reservoir capacitor (100uF 400V) can stay charged for several minutes after the recorder trips out.'),
+    caution(
+      'mains',
+      'Confirming this fault means running the ORX-5 warm with the cover off; the primary side of the main supply is exposed beside the fan.',
+    ),
+    caution(
+      'stored_charge',
+      'The main reservoir capacitor (100uF 400V) can stay charged for several minutes after the recorder trips out.',
+    ),
     caution('heat', 'The rectifier heatsink and the capacitors beside it are too hot to touch by the time the fault shows.'),
     steps(
       'Check the cooling fan first: a stalled fan gives the same shut-down. It should spin as soon as the recorder starts.',
@@ -52,7 +67,11 @@ const warmShutdownR1 = rev({
       'Replace C1411, C1412 and C1415 with 105 °C low-ESR parts; check the ESR of the old ones to confirm.',
       'Run the recorder for two hours with a recording in progress.',
     ),
-    reading({ testPoint: '12 V output at C1411, after an hour', expected: '12 V, ripple under 100 mV', measured: '11.2 V with 600 mV ripple, then shutdown' }),
+    reading({
+      testPoint: '12 V output at C1411, after an hour',
+      expected: '12 V, ripple under 100 mV',
+      measured: '11.2 V with 600 mV ripple, then shutdown',
+    }),
   ),
   parts: [
     cap('C1411', '1000uF', '16V 105C low-ESR', '12 V output'),
@@ -79,6 +98,16 @@ const warmShutdownR2 = revise(warmShutdownR1, {
 });
 
 export const dvdRamPowerFixes: DemoFix[] = [
-  { slug: 'orx5-no-power-standby-supply', machines: ['orvalle/RX-710/PAL', 'orvalle/RX-710/NTSC', 'orvalle/RX-760H/PAL'], chassis: ['orvalle-orx5-platform'], revisions: [standbyR1, standbyR2] },
-  { slug: 'orx5-switches-off-when-warm', machines: ['orvalle/RX-710/PAL', 'orvalle/RX-760H/PAL'], chassis: ['orvalle-orx5-platform'], revisions: [warmShutdownR1, warmShutdownR2] },
+  {
+    slug: 'orx5-no-power-standby-supply',
+    machines: ['orvalle/RX-710/PAL', 'orvalle/RX-710/NTSC', 'orvalle/RX-760H/PAL'],
+    chassis: ['orvalle-orx5-platform'],
+    revisions: [standbyR1, standbyR2],
+  },
+  {
+    slug: 'orx5-switches-off-when-warm',
+    machines: ['orvalle/RX-710/PAL', 'orvalle/RX-760H/PAL'],
+    chassis: ['orvalle-orx5-platform'],
+    revisions: [warmShutdownR1, warmShutdownR2],
+  },
 ];

@@ -27,12 +27,20 @@ const trayBounceR1 = rev({
 });
 
 const trayBounceR2 = revise(trayBounceR1, {
-  parts: [part('belt', 'square belt 1.2 mm section, 28 mm inside diameter', { notes: 'TL-2 loading belt; a 30 mm belt slips again within months' })],
+  parts: [
+    part('belt', 'square belt 1.2 mm section, 28 mm inside diameter', {
+      notes: 'TL-2 loading belt; a 30 mm belt slips again within months',
+    }),
+  ],
   editSummary: 'Corrected the belt size to 28 mm: the 30 mm belt slips again within months.',
   author: 'tech-ansel',
   proofer: 'moderator2',
   illustrations: [
-    figure('belt-path', 'Drawing of a small motor pulley and a larger pulley joined by a belt.', 'TL-2 loading belt from the motor pulley to the worm pulley.'),
+    figure(
+      'belt-path',
+      'Drawing of a small motor pulley and a larger pulley joined by a belt.',
+      'TL-2 loading belt from the motor pulley to the worm pulley.',
+    ),
   ],
 });
 
@@ -43,7 +51,9 @@ const trayStuck = rev({
   cause:
     'E-21 is the TL-2 code for a tray that did not reach its end switch in time. If the belt is good, the loading cam gear is the usual reason: it jumped out of step with the tray rack when the tray was forced, or its hub has cracked and slips on the shaft.',
   body: doc(
-    p('Fit a new loading belt first if the old one is shiny or loose; a slipping belt also gives E-21. Unplug the recorder before you open it.'),
+    p(
+      'Fit a new loading belt first if the old one is shiny or loose; a slipping belt also gives E-21. Unplug the recorder before you open it.',
+    ),
     steps(
       'Remove the top cover and lift out the loader (three screws, two flat cables).',
       'Turn the white cam gear under the loader by hand towards open until the tray comes out far enough to grip, then slide it out.',
@@ -59,9 +69,6 @@ const trayStuck = rev({
   editSummary: 'First write-up.',
   author: 'tech-celia',
   proofer: 'moderator',
-  illustrations: [
-    figure('tray-gear', 'Drawing of a loading gear train with an arrow on the cam gear pointing at a hole in the frame.', 'TL-2 cam gear in its timing position.'),
-  ],
 });
 
 const spindle = rev({
@@ -71,7 +78,10 @@ const spindle = rev({
   cause:
     'F-12 on Kestrune machines means the spindle did not reach a steady speed. On the KD-560 the spindle motor bearing dries out and its commutator wears, so the motor runs unevenly and the servo gives up.',
   body: doc(
-    caution('laser', 'The spindle motor sits beside the recording pickup, which lights as soon as a disc is detected. Keep the pickup pointing away from your eyes when you test with the loader out.'),
+    caution(
+      'laser',
+      'The spindle motor sits beside the recording pickup, which lights as soon as a disc is detected. Keep the pickup pointing away from your eyes when you test with the loader out.',
+    ),
     steps(
       'Unplug the recorder, remove the top cover and the loader.',
       'Unplug the spindle motor from the drive board and measure its winding (reading below) while turning the turntable slowly by hand.',
@@ -79,7 +89,11 @@ const spindle = rev({
       'Replace the motor with its turntable fitted; do not press the turntable off the old motor, as its height is set at the factory.',
       'Refit and test with a pressed disc and a blank one.',
     ),
-    reading({ testPoint: 'Spindle motor terminals, motor disconnected', expected: '10-20 Ω, steady as the shaft turns', measured: 'jumps to open or near zero at some positions' }),
+    reading({
+      testPoint: 'Spindle motor terminals, motor disconnected',
+      expected: '10-20 Ω, steady as the shaft turns',
+      measured: 'jumps to open or near zero at some positions',
+    }),
   ),
   parts: [part('motor', 'KD-560 spindle motor with turntable', { notes: 'comes with the turntable at factory height' })],
   difficulty: 'specialist',
@@ -90,7 +104,17 @@ const spindle = rev({
 });
 
 export const dvdRecorderMechanismFixes: DemoFix[] = [
-  { slug: 'tl2-tray-opens-then-closes', machines: ['tamberlyn/DR-4120/PAL', 'tamberlyn/DR-4120/NTSC', 'tamberlyn/DR-4120K/PAL'], chassis: ['tamberlyn-tl2-loader'], revisions: [trayBounceR1, trayBounceR2] },
-  { slug: 'tl2-tray-will-not-open-e21', machines: ['tamberlyn/DR-4120K/PAL', 'tamberlyn/DR-4120/PAL'], chassis: ['tamberlyn-tl2-loader'], revisions: [trayStuck] },
+  {
+    slug: 'tl2-tray-opens-then-closes',
+    machines: ['tamberlyn/DR-4120/PAL', 'tamberlyn/DR-4120/NTSC', 'tamberlyn/DR-4120K/PAL'],
+    chassis: ['tamberlyn-tl2-loader'],
+    revisions: [trayBounceR1, trayBounceR2],
+  },
+  {
+    slug: 'tl2-tray-will-not-open-e21',
+    machines: ['tamberlyn/DR-4120K/PAL', 'tamberlyn/DR-4120/PAL'],
+    chassis: ['tamberlyn-tl2-loader'],
+    revisions: [trayStuck],
+  },
   { slug: 'kd560-spindle-noisy-f12', machines: ['kestrune/KD-560/PAL'], chassis: [], revisions: [spindle] },
 ];

@@ -7,9 +7,12 @@ const lensR1 = rev({
   symptoms: ['no disc', 'disc error', "won't read discs", 'reads some discs only'],
   errorCodes: ['NO DISC'],
   cause:
-    'The recording pickup\'s lens collects a film of dust and smoke from the cooling air drawn over it. The focus servo can still find the surface of a pressed disc but not the fainter groove of a blank one, so blanks fail first and then everything.',
+    "The recording pickup's lens collects a film of dust and smoke from the cooling air drawn over it. The focus servo can still find the surface of a pressed disc but not the fainter groove of a blank one, so blanks fail first and then everything.",
   body: doc(
-    caution('laser', 'The TL-2 pickup holds a red laser diode that runs at many times playback power when recording. Clean the lens only with the recorder unplugged, and never look into it with power applied.'),
+    caution(
+      'laser',
+      'The TL-2 pickup holds a red laser diode that runs at many times playback power when recording. Clean the lens only with the recorder unplugged, and never look into it with power applied.',
+    ),
     steps(
       'Unplug the recorder and remove the top cover; the lens is visible through the loader opening with the tray out.',
       'Blow off loose dust with a rubber bulb blower. Do not use canned air: its propellant can frost and crack the lens.',
@@ -24,7 +27,11 @@ const lensR1 = rev({
   author: 'tech-esme',
   proofer: 'moderator',
   illustrations: [
-    figure('laser-lens', 'Drawing of an optical pickup on its sled with the round objective lens in the middle.', 'The pickup lens seen from above through the loader opening.'),
+    figure(
+      'laser-lens',
+      'Drawing of an optical pickup on its sled with the round objective lens in the middle.',
+      'The pickup lens seen from above through the loader opening.',
+    ),
   ],
 });
 
@@ -50,10 +57,13 @@ const finalise = rev({
   symptoms: ['fails to finalise', 'disc error at end of recording', 'recorded discs unreadable in other players'],
   errorCodes: ['E-47'],
   cause:
-    'As the recording laser diode ages its output at full write power falls. The recorder\'s power calibration then fails near the outer edge of the disc, where finalising writes the lead-out, and E-47 appears. Cleaning helps only when the lens is also dirty.',
+    "As the recording laser diode ages its output at full write power falls. The recorder's power calibration then fails near the outer edge of the disc, where finalising writes the lead-out, and E-47 appears. Cleaning helps only when the lens is also dirty.",
   body: doc(
     p('Clean the lens first (see the NO DISC fix for the TL-2); if finalising still fails, replace the pickup.'),
-    caution('laser', 'A new pickup is shipped with a solder blob shorting the laser diode to protect it from static. Remove the blob only after the flex cable is plugged in, and never power the pickup outside the loader.'),
+    caution(
+      'laser',
+      'A new pickup is shipped with a solder blob shorting the laser diode to protect it from static. Remove the blob only after the flex cable is plugged in, and never power the pickup outside the loader.',
+    ),
     steps(
       'Unplug the recorder, wear an earthed wrist strap and remove the loader.',
       'Undo the sled guide rod screw and lift the rod with the pickup off the worm gear; note which way the rack spring sits.',
@@ -71,6 +81,11 @@ const finalise = rev({
 });
 
 export const dvdRecorderOpticsFixes: DemoFix[] = [
-  { slug: 'tl2-no-disc-dirty-lens', machines: ['tamberlyn/DR-4120/PAL', 'tamberlyn/DR-4120K/PAL'], chassis: ['tamberlyn-tl2-loader'], revisions: [lensR1, lensR2] },
+  {
+    slug: 'tl2-no-disc-dirty-lens',
+    machines: ['tamberlyn/DR-4120/PAL', 'tamberlyn/DR-4120K/PAL'],
+    chassis: ['tamberlyn-tl2-loader'],
+    revisions: [lensR1, lensR2],
+  },
   { slug: 'dr4120k-fails-to-finalise-e47', machines: ['tamberlyn/DR-4120K/PAL'], chassis: ['tamberlyn-tl2-loader'], revisions: [finalise] },
 ];

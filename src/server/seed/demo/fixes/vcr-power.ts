@@ -8,8 +8,14 @@ const deadR1 = rev({
   cause:
     'The TV-5 power supply is a small switch-mode supply. Its controller is started through a high-value resistor and kept running by a small electrolytic on its supply pin. That capacitor sits against the hot primary heatsink, dries out, and the supply can no longer start, so nothing on the secondary side comes up.',
   body: doc(
-    caution('mains', 'The primary side of the TV-5 supply, left of the isolation slot on the board, is at mains potential whenever the lead is in, even in standby.'),
-    caution('stored_charge', 'The reservoir capacitor C801 (47uF 400V) can hold over 300 V for minutes after unplugging. Discharge it through a 2k2 5 W resistor held in insulated clips before you touch the board.'),
+    caution(
+      'mains',
+      'The primary side of the TV-5 supply, left of the isolation slot on the board, is at mains potential whenever the lead is in, even in standby.',
+    ),
+    caution(
+      'stored_charge',
+      'The reservoir capacitor C801 (47uF 400V) can hold over 300 V for minutes after unplugging. Discharge it through a 2k2 5 W resistor held in insulated clips before you touch the board.',
+    ),
     caution('heat', 'The chopper heatsink runs hot; after a bench test give it ten minutes before you handle the board.'),
     steps(
       'Unplug the unit, remove the top cover and discharge C801 as described above; confirm with a meter that it reads under 10 V.',
@@ -19,7 +25,12 @@ const deadR1 = rev({
       'While the board is out, replace C812 and C813 on the 5 V and 12 V outputs: they live in the same heat.',
       'Power up through a series lamp the first time and check the standby rail.',
     ),
-    reading({ testPoint: '5 V standby rail at C812', expected: '5.0 V ± 0.25 V', measured: '0 V, or 1-2 V pulsing', note: 'Measure to the secondary ground, not to the heatsink.' }),
+    reading({
+      testPoint: '5 V standby rail at C812',
+      expected: '5.0 V ± 0.25 V',
+      measured: '0 V, or 1-2 V pulsing',
+      note: 'Measure to the secondary ground, not to the heatsink.',
+    }),
   ),
   parts: [
     cap('C806', '22uF', '50V 105C low-ESR', 'start-up supply, beside the chopper heatsink'),
@@ -32,7 +43,11 @@ const deadR1 = rev({
   author: 'tech-jonah',
   proofer: 'moderator',
   illustrations: [
-    figure('bulging-capacitor', 'Drawing of an electrolytic capacitor with a domed top standing next to a finned heatsink.', 'C806 beside the chopper heatsink: a domed top means it has failed.'),
+    figure(
+      'bulging-capacitor',
+      'Drawing of an electrolytic capacitor with a domed top standing next to a finned heatsink.',
+      'C806 beside the chopper heatsink: a domed top means it has failed.',
+    ),
   ],
 });
 
@@ -40,8 +55,15 @@ const deadR2 = revise(deadR1, {
   body: doc(
     ...deadR1.body.content,
     h(3, 'If it still will not start'),
-    p('Check the start-up resistor R803 with the unit unplugged and C801 discharged. It runs warm for years and drifts open, which gives exactly the same dead unit.'),
-    reading({ testPoint: 'Across R803, unit unplugged', expected: '470 kΩ ± 5 %', measured: 'open, or several MΩ', note: 'Lift one leg to measure; the circuit around it reads low otherwise.' }),
+    p(
+      'Check the start-up resistor R803 with the unit unplugged and C801 discharged. It runs warm for years and drifts open, which gives exactly the same dead unit.',
+    ),
+    reading({
+      testPoint: 'Across R803, unit unplugged',
+      expected: '470 kΩ ± 5 %',
+      measured: 'open, or several MΩ',
+      note: 'Lift one leg to measure; the circuit around it reads low otherwise.',
+    }),
   ),
   parts: [...deadR1.parts, part('resistor', '470k', { ref: 'R803', rating: '0.5W', notes: 'start-up resistor; replace if high' })],
   editSummary: 'Added the start-up resistor check for units that stay dead after the capacitor.',
@@ -55,7 +77,11 @@ const deadR3 = revise(deadR2, {
   proofer: 'moderator2',
   illustrations: [
     ...(deadR2.illustrations ?? []),
-    figure('bleed-resistor', 'Drawing of a resistor in insulated clips bridging the two leads of a large capacitor, with a meter across it.', 'Discharging C801 through a 2k2 resistor, then measuring it.'),
+    figure(
+      'bleed-resistor',
+      'Drawing of a resistor in insulated clips bridging the two leads of a large capacitor, with a meter across it.',
+      'Discharging C801 through a 2k2 resistor, then measuring it.',
+    ),
   ],
 });
 
@@ -65,15 +91,25 @@ const dimDisplay = rev({
   cause:
     'The fluorescent display takes a low filament voltage and a negative grid supply from the power supply. The smoothing capacitor on the negative supply sits beside the 5 V regulator heatsink and loses capacitance, so ripple shows as flicker and the grid voltage sags.',
   body: doc(
-    caution('mains', 'The QM-7 power supply board is live on its primary side; measuring the display supply means working with the lid off and mains connected.'),
-    caution('stored_charge', 'The primary reservoir capacitor keeps a high voltage after unplugging; measure across it before you unsolder anything on the power board.'),
+    caution(
+      'mains',
+      'The QM-7 power supply board is live on its primary side; measuring the display supply means working with the lid off and mains connected.',
+    ),
+    caution(
+      'stored_charge',
+      'The primary reservoir capacitor keeps a high voltage after unplugging; measure across it before you unsolder anything on the power board.',
+    ),
     steps(
       'With the unit running, measure the negative display supply at C831 (reading below).',
       'Unplug, discharge the primary reservoir and confirm it reads under 10 V.',
       'Replace C831 and its neighbour C833 with 105 °C parts, watching polarity: the positive lead of C831 goes to ground on this supply.',
       'Power up and measure again; the display should be even and bright across all digits.',
     ),
-    reading({ testPoint: 'Negative display supply at C831', expected: '-27 V ± 2 V, ripple under 0.5 V', measured: '-18 V with 3-4 V of ripple' }),
+    reading({
+      testPoint: 'Negative display supply at C831',
+      expected: '-27 V ± 2 V, ripple under 0.5 V',
+      measured: '-18 V with 3-4 V of ripple',
+    }),
   ),
   parts: [
     cap('C831', '100uF', '50V 105C', 'negative display supply, reversed polarity on the board'),
@@ -90,9 +126,12 @@ const warmBarsR1 = rev({
   title: 'Noise bars roll through the picture after half an hour of play',
   symptoms: ['noise bars after warm-up', 'tracking drifts when warm', 'picture fine when cold'],
   cause:
-    'The capstan servo supply is smoothed by a capacitor close to the power supply\'s 12 V regulator heatsink. As it dries out its ripple rises with temperature and the capstan speed wanders, so the tracking drifts away and noise bars roll through the picture.',
+    "The capstan servo supply is smoothed by a capacitor close to the power supply's 12 V regulator heatsink. As it dries out its ripple rises with temperature and the capstan speed wanders, so the tracking drifts away and noise bars roll through the picture.",
   body: doc(
-    caution('mains', 'This fault only shows when warm, so you measure with the unit open and mains connected. Keep one hand away from the board and use insulated probes.'),
+    caution(
+      'mains',
+      'This fault only shows when warm, so you measure with the unit open and mains connected. Keep one hand away from the board and use insulated probes.',
+    ),
     caution('heat', 'The 12 V regulator heatsink beside C1204 is too hot to touch after half an hour.'),
     steps(
       'Play a tape with the lid off until the bars appear, then measure the ripple at C1204 (reading below).',
@@ -100,9 +139,16 @@ const warmBarsR1 = rev({
       'Bend the new C1204 a few millimetres away from the heatsink before soldering, so it no longer touches the fins.',
       'Play for an hour and check that the tracking holds.',
     ),
-    reading({ testPoint: 'Capstan motor supply at C1204', expected: '12 V DC, ripple under 50 mV', measured: '12 V with about 400 mV ripple once warm' }),
+    reading({
+      testPoint: 'Capstan motor supply at C1204',
+      expected: '12 V DC, ripple under 50 mV',
+      measured: '12 V with about 400 mV ripple once warm',
+    }),
   ),
-  parts: [cap('C1204', '220uF', '16V 105C low-ESR', 'capstan supply, next to the 12 V regulator'), cap('C1207', '10uF', '50V 105C', 'servo reference')],
+  parts: [
+    cap('C1204', '220uF', '16V 105C low-ESR', 'capstan supply, next to the 12 V regulator'),
+    cap('C1207', '10uF', '50V 105C', 'servo reference'),
+  ],
   difficulty: 'skilled',
   timeMinutes: 50,
   editSummary: 'First write-up.',
@@ -113,7 +159,9 @@ const warmBarsR1 = rev({
 const warmBarsR2 = revise(warmBarsR1, {
   body: doc(
     ...warmBarsR1.body.content.slice(0, 2),
-    p('To confirm before soldering, warm C1204 alone with a hair dryer on low while the tape plays cold: if the bars appear within a minute, it is the culprit.'),
+    p(
+      'To confirm before soldering, warm C1204 alone with a hair dryer on low while the tape plays cold: if the bars appear within a minute, it is the culprit.',
+    ),
     ...warmBarsR1.body.content.slice(2),
   ),
   editSummary: 'Added a quick hair-dryer check to confirm the capacitor before replacing it.',
@@ -122,7 +170,17 @@ const warmBarsR2 = revise(warmBarsR1, {
 });
 
 export const vcrPowerFixes: DemoFix[] = [
-  { slug: 'tv5-dead-no-clock-startup-capacitor', machines: ['tamberlyn/TV-820/PAL', 'tamberlyn/TV-825K/PAL', 'tamberlyn/TV-825K/NTSC'], chassis: ['tamberlyn-tv5-deck'], revisions: [deadR1, deadR2, deadR3] },
-  { slug: 'qm7-display-dim-flickering', machines: ['quillmere/VR-3150S/PAL', 'quillmere/VR-3100/PAL'], chassis: ['quillmere-qm7-deck'], revisions: [dimDisplay] },
+  {
+    slug: 'tv5-dead-no-clock-startup-capacitor',
+    machines: ['tamberlyn/TV-820/PAL', 'tamberlyn/TV-825K/PAL', 'tamberlyn/TV-825K/NTSC'],
+    chassis: ['tamberlyn-tv5-deck'],
+    revisions: [deadR1, deadR2, deadR3],
+  },
+  {
+    slug: 'qm7-display-dim-flickering',
+    machines: ['quillmere/VR-3150S/PAL', 'quillmere/VR-3100/PAL'],
+    chassis: ['quillmere-qm7-deck'],
+    revisions: [dimDisplay],
+  },
   { slug: 'qm7-noise-bars-after-warm-up', machines: ['quillmere/VR-3150S/PAL'], chassis: [], revisions: [warmBarsR1, warmBarsR2] },
 ];

@@ -8,7 +8,9 @@ const headsR1 = rev({
   cause:
     'A clogged video head stops reading the tape: oxide shed by an old or mouldy tape builds up in the head gap. When one head of a pair clogs, every other field is noise; when both clog there is only snow. Worn heads look the same, so clean first and judge afterwards.',
   body: doc(
-    p('Check the tuner picture first, with no tape playing. If that picture is clean, the fault is in the playback path and dirty heads are the usual reason.'),
+    p(
+      'Check the tuner picture first, with no tape playing. If that picture is clean, the fault is in the playback path and dirty heads are the usual reason.',
+    ),
     steps(
       'Unplug the unit and remove the top cover.',
       'Moisten a chamois cleaning stick (not a cotton bud: its fibres snag the head tips) with isopropyl alcohol of 99 % or better.',
@@ -36,7 +38,9 @@ const headsR2 = revise(headsR1, {
   body: doc(
     ...headsR1.body.content,
     h(3, 'Before the customer tape goes back in'),
-    p('Look at the edge of the tape pack through the cassette window. White or grey fuzz is mould, and it will clog freshly cleaned heads within seconds. Such a tape needs cleaning on a tape cleaner first, or it should not be played at all.'),
+    p(
+      'Look at the edge of the tape pack through the cassette window. White or grey fuzz is mould, and it will clog freshly cleaned heads within seconds. Such a tape needs cleaning on a tape cleaner first, or it should not be played at all.',
+    ),
   ),
   editSummary: 'Added the check for mouldy tapes, which re-clog the heads at once.',
   author: 'moderator2',
@@ -49,7 +53,10 @@ const threadingR1 = rev({
   cause:
     'The Betamax threading ring carries the tape round the drum and is turned by a thin round belt from the loading motor. The belt perishes into a sticky mess or stretches, so the ring stalls part-way and the motor strains until the controller shuts it down.',
   body: doc(
-    caution('spring', 'The threading ring brake on the HB-200 is held on by a hooked tension spring. Unhook it with a spring hook, not fingers, and keep it in view: it is easily lost.'),
+    caution(
+      'spring',
+      'The threading ring brake on the HB-200 is held on by a hooked tension spring. Unhook it with a spring hook, not fingers, and keep it in view: it is easily lost.',
+    ),
     caution('sharp_edges', 'The top-loading cassette basket has sharp pressed edges under its lid.'),
     steps(
       'Unplug the unit and remove the top and bottom covers.',
@@ -68,10 +75,7 @@ const threadingR1 = rev({
 });
 
 const threadingR2 = revise(threadingR1, {
-  parts: [
-    ...threadingR1.parts,
-    part('belt', 'flat belt 78 mm x 4 mm x 0.5 mm', { notes: 'reel drive belt; perishes at the same time' }),
-  ],
+  parts: [...threadingR1.parts, part('belt', 'flat belt 78 mm x 4 mm x 0.5 mm', { notes: 'reel drive belt; perishes at the same time' })],
   editSummary: 'Added the reel drive belt: it is always perished by the time the threading belt goes.',
   author: 'tech-mina',
   proofer: 'moderator',
@@ -83,7 +87,9 @@ const audioHead = rev({
   cause:
     'Linear audio is read by the audio/control head after the drum. Oxide on its face, or a head knocked out of height, lets the tape ride off the audio track. Dull treble points to dirt; a level that wavers points to height or azimuth.',
   body: doc(
-    p('Hi-fi sound comes from the drum, so a TV-825K playing a hi-fi tape may sound fine while mono tapes are muffled: switch the audio output to mono to hear this fault.'),
+    p(
+      'Hi-fi sound comes from the drum, so a TV-825K playing a hi-fi tape may sound fine while mono tapes are muffled: switch the audio output to mono to hear this fault.',
+    ),
     steps(
       'Unplug the unit, remove the top cover and clean the audio/control head face with isopropyl alcohol on a chamois stick.',
       'Play a mono recording made on a known-good machine and listen on the mono output.',
@@ -105,7 +111,17 @@ const audioHead = rev({
 });
 
 export const vcrTapePathFixes: DemoFix[] = [
-  { slug: 'vhs-snowy-playback-clogged-heads', machines: ['quillmere/VR-3100/PAL', 'quillmere/VR-3100/NTSC', 'tamberlyn/TV-820/PAL'], chassis: [], revisions: [headsR1, headsR2] },
+  {
+    slug: 'vhs-snowy-playback-clogged-heads',
+    machines: ['quillmere/VR-3100/PAL', 'quillmere/VR-3100/NTSC', 'tamberlyn/TV-820/PAL'],
+    chassis: [],
+    revisions: [headsR1, headsR2],
+  },
   { slug: 'hb200-threading-ring-stalls', machines: ['halvorin/HB-200/NTSC'], chassis: [], revisions: [threadingR1, threadingR2] },
-  { slug: 'tv5-muffled-linear-audio', machines: ['tamberlyn/TV-825K/PAL', 'tamberlyn/TV-820/PAL'], chassis: ['tamberlyn-tv5-deck'], revisions: [audioHead] },
+  {
+    slug: 'tv5-muffled-linear-audio',
+    machines: ['tamberlyn/TV-825K/PAL', 'tamberlyn/TV-820/PAL'],
+    chassis: ['tamberlyn-tv5-deck'],
+    revisions: [audioHead],
+  },
 ];

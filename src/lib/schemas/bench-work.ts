@@ -1,0 +1,130 @@
+// Bench work inputs: bench reports, hand-over notes and job sheets. One schema for form, API and island.
+import { z } from 'zod';
+import { readingSchema } from './revision';
+import { slugSchema } from './slug';
+import { orderLineInputSchema } from '@/lib/bench/order-list';
+
+export const benchOutcomes = ['fixed', 'partly', 'not_fixed', 'came_back'] as const;
+export const benchOutcomeSchema = z.enum(benchOutcomes, { error: 'Choose an outcome: fixed, partly, not fixed or fault came back.' });
+export type BenchOutcome = z.infer<typeof benchOutcomeSchema>;
+
+export const benchOutcomeLabels: Record<BenchOutcome, string> = {
+  fixed: 'Fixed',
+  partly: 'Partly fixed',
+  not_fixed: 'Not fixed',
+  came_back: 'Fault came back',
+};
+
+const fixSlug = z.string({ error: 'Name the fix by its address.' }).pipe(slugSchema);
+const machineSlug = z.string({ error: 'Choose the machine you repaired.' }).pipe(slugSchema);
+
+export const benchReportInputSchema = z
+  .object({
+    fix: fixSlug,
+    machine: machineSlug,
+    outcome: benchOutcomeSchema,
+    /** Only for "came back": how many days the repair held before the fault returned. */
+    heldDays: z
+      .number({ error: 'Give the number of days the repair held.' })
+      .int('Give whole days.')
+      .min(0, 'Days cannot be negative.')
+      .max(36_500, 'That is more than a hundred years.')
+      .nullable()
+      .default(null),
+    note: z.string().trim().max(2000, 'Keep the note under 2000 characters.').default(''),
+    readings: z.array(readingSchema).max(20, 'Record at most 20 readings.').default([]),
+  })
+  .superRefine((report, ctx) => {
+    if (report.outcome === 'came_back' && report.heldDays === null) {
+      ctx.addIssue({ code: 'custom', path: ['heldDays'], message: 'Say how many days the repair held before the fault came back.' });
+    }
+    if (report.outcome !== 'came_back' && report.heldDays !== null) {
+      ctx.addIssue({ code: 'custom', path: ['heldDays'], message: 'Days held only apply when the fault came back.' });
+    }
+  });
+export type BenchReportInput = z.input<typeof benchReportInputSchema>;
+export type BenchReportData = z.output<typeof benchReportInputSchema>;
+
+const partLine = z.string().trim().min(1, 'A part line cannot be empty.').max(200, 'Keep each part under 200 characters.');
+
+export const handoverNoteInputSchema = z.object({
+  fix: fixSlug,
+  /** The proofed revision the repair followed; the fix's live revision when absent. */
+  revision: z.number().int('The revision is a whole number.').min(1, 'Revisions start at r1.').optional(),
+  jobSheetId: z.number().int().positive().nullable().default(null),
+  /** Shown to the customer only when the member ticks it. */
+  includeJobDetails: z.boolean().default(false),
+  /** Defaults to the member's shop name from their account. */
+  shopName: z.string().trim().max(120, 'Keep the shop name under 120 characters.').nullable().default(null),
+  message: z.string().trim().max(2000, 'Keep the message under 2000 characters.').default(''),
+  partsReplaced: z.array(partLine).max(40, 'List at most 40 parts.').default([]),
+  warranty: z.string().trim().max(300, 'Keep the warranty line under 300 characters.').default(''),
+});
+export type HandoverNoteInput = z.input<typeof handoverNoteInputSchema>;
+export type HandoverNoteData = z.output<typeof handoverNoteInputSchema>;
+
+export const jobStatuses = ['booked_in', 'diagnosing', 'waiting_for_parts', 'repaired', 'collected', 'returned_unrepaired'] as const;
+export const jobStatusSchema = z.enum(jobStatuses, { error: 'Choose a status from the list.' });
+export type JobStatus = z.infer<typeof jobStatusSchema>;
+
+export const jobStatusLabels: Record<JobStatus, string> = {
+  booked_in: 'Booked in',
+  diagnosing: 'Diagnosing',
+  waiting_for_parts: 'Waiting for parts',
+  repaired: 'Repaired',
+  collected: 'Collected',
+  returned_unrepaired: 'Returned unrepaired',
+};
+
+/** A part used on a job: the order list's line shape; the source is filled in from the job sheet. */
+export const jobPartSchema = orderLineInputSchema.extend({
+  source: z.string().trim().max(200).default(''),
+});
+export type JobPart = z.output<typeof jobPartSchema>;
+
+const jobSheetFields = {
+  customerRef: z
+    .string({ error: 'Give a customer reference, e.g. an invoice or ticket number.' })
+    .trim()
+    .min(1, 'Give a customer reference, e.g. an invoice or ticket number.')
+    .max(120, 'Keep the customer reference under 120 characters.'),
+  /** A machine from the catalogue by its slug, or null when it is not in the catalogue. */
+  machine: slugSchema.nullable(),
+  serialNumber: z.string().trim().max(80, 'Keep the serial number under 80 characters.'),
+  reportedSymptom: z.string().trim().max(2000, 'Keep the reported symptom under 2000 characters.'),
+  findings: z.string().trim().max(4000, 'Keep the findings under 4000 characters.'),
+  partsUsed: z.array(jobPartSchema).max(200, 'A job sheet holds at most 200 part lines.'),
+  labourMinutes: z.number({ error: 'Give labour in whole minutes.' }).int('Give labour in whole minutes.').min(0, 'Labour cannot be negative.').max(100_000, 'Labour above 100000 minutes is not one job.'),
+  status: jobStatusSchema,
+  outcome: z.string().trim().max(2000, 'Keep the outcome under 2000 characters.'),
+};
+
+export const jobSheetCreateSchema = z.object({
+  customerRef: jobSheetFields.customerRef,
+  machine: jobSheetFields.machine.default(null),
+  serialNumber: jobSheetFields.serialNumber.default(''),
+  reportedSymptom: jobSheetFields.reportedSymptom.default(''),
+  findings: jobSheetFields.findings.default(''),
+  partsUsed: jobSheetFields.partsUsed.default([]),
+  labourMinutes: jobSheetFields.labourMinutes.default(0),
+  status: jobSheetFields.status.default('booked_in'),
+  outcome: jobSheetFields.outcome.default(''),
+});
+export type JobSheetCreate = z.output<typeof jobSheetCreateSchema>;
+
+export const jobSheetPatchSchema = z.object(jobSheetFields).partial();
+export type JobSheetPatch = z.output<typeof jobSheetPatchSchema>;
+
+/** Applying a fix to a job pins the fix's live revision (or the one named). */
+export const applyFixSchema = z.object({
+  fix: fixSlug,
+  revision: z.number().int().min(1).optional(),
+});
+
+export const jobSheetSorts = ['updated', 'booked', 'customer', 'status'] as const;
+export const jobSheetListQuerySchema = z.object({
+  status: jobStatusSchema.optional(),
+  q: z.string().trim().max(120).optional(),
+  sort: z.enum(jobSheetSorts).default('updated'),
+});
+export type JobSheetListQuery = z.output<typeof jobSheetListQuerySchema>;
