@@ -74,3 +74,36 @@ interface Counts {
   cameBack: number;
 }
 const zero = (): Counts => ({ fixed: 0, partly: 0, notFixed: 0, cameBack: 0 });
+
+export interface RevisionBenchCounts {
+  revisionNumber: number;
+  isCurrent: boolean;
+  fixed: number;
+  partly: number;
+  notFixed: number;
+  cameBack: number;
+  /** Reports by the fix's author on this revision: shown, not counted. */
+  ownReports: number;
+}
+
+/** Counts per proofed revision a report was made on, newest revision first; the public breakdown of a score. */
+export async function benchCountsByRevision(fixId: number): Promise<RevisionBenchCounts[]> {
+  const rows: (CountRow & { number: number })[] = await db()('bench_reports as b')
+    .join('fixes as f', 'f.id', 'b.fix_id')
+    .join('revisions as r', 'r.id', 'b.revision_id')
+    .where('b.fix_id', fixId)
+    .groupBy('r.number', 'b.outcome', 'on_current', 'own')
+    .select('r.number', 'b.outcome', db().raw('(b.revision_id = f.current_revision_id) AS on_current'), db().raw('(b.member_id = f.created_by) AS own'), db().raw('count(*) AS n'))
+    .orderBy('r.number', 'desc');
+  const byNumber = new Map<number, RevisionBenchCounts>();
+  for (const row of rows) {
+    let counts = byNumber.get(row.number);
+    if (!counts) byNumber.set(row.number, (counts = { revisionNumber: row.number, isCurrent: row.on_current, fixed: 0, partly: 0, notFixed: 0, cameBack: 0, ownReports: 0 }));
+    const n = Number(row.n);
+    if (row.own) counts.ownReports += n;
+    else counts[outcomeKey[row.outcome]] += n;
+  }
+  return [...byNumber.values()];
+}
+
+const outcomeKey = { fixed: 'fixed', partly: 'partly', not_fixed: 'notFixed', came_back: 'cameBack' } as const;

@@ -17,6 +17,10 @@ const schema = z.object({
   SMTP_URL: z.string().optional(),
   SMTP_SINK_PORT: port.default(2526),
   MAIL_FROM: z.string().default('Benchlore <no-reply@benchlore.invalid>'),
+  /** Where the local SMTP sink keeps received messages; defaults to <data>/mail. */
+  BENCHLORE_MAIL_DIR: z.string().optional(),
+  /** How many reverse proxies in front of the app append to X-Forwarded-For; 0 = use the socket address. */
+  TRUST_PROXY: z.coerce.number().int().min(0).max(10).default(0),
   MEILI_URL: z.url().optional(),
   MEILI_KEY: z.string().optional(),
   S3_ENDPOINT: z.url().optional(),

@@ -22,6 +22,8 @@ export const benchReportInputSchema = z
   .object({
     fix: fixSlug,
     machine: machineSlug,
+    /** The proofed revision followed on the bench (a job sheet pins one); the live revision when absent. */
+    revision: z.number().int('The revision is a whole number.').min(1, 'Revisions start at r1.').optional(),
     outcome: benchOutcomeSchema,
     /** Only for "came back": how many days the repair held before the fault returned. */
     heldDays: z
@@ -128,3 +130,36 @@ export const jobSheetListQuerySchema = z.object({
   sort: z.enum(jobSheetSorts).default('updated'),
 });
 export type JobSheetListQuery = z.output<typeof jobSheetListQuerySchema>;
+
+/** Plain HTML forms send text: a trimmed value, or undefined when the field is missing or blank. */
+export function formText(form: FormData, name: string): string | undefined {
+  const value = form.get(name);
+  if (typeof value !== 'string') return undefined;
+  const trimmed = value.trim();
+  return trimmed === '' ? undefined : trimmed;
+}
+
+/** A number typed into a form: undefined when blank, NaN (which the schema names) when not a number. */
+export function formNumber(form: FormData, name: string): number | undefined {
+  const text = formText(form, name);
+  return text === undefined ? undefined : Number(text);
+}
+
+/**
+ * Repeated rows of a form, named `prefix.0.field`, `prefix.1.field`, ...; rows left entirely blank are
+ * dropped, so a form can offer a few empty rows for new entries without JavaScript.
+ */
+export function formRows(form: FormData, prefix: string, fields: readonly string[]): Record<string, string>[] {
+  const indexes = new Set<number>();
+  for (const key of form.keys()) {
+    const match = new RegExp(`^${prefix}\\.(\\d{1,3})\\.`).exec(key);
+    if (match) indexes.add(Number(match[1]));
+  }
+  const rows: Record<string, string>[] = [];
+  for (const index of [...indexes].sort((a, b) => a - b)) {
+    const row: Record<string, string> = {};
+    for (const field of fields) row[field] = formText(form, `${prefix}.${index}.${field}`) ?? '';
+    if (Object.values(row).some((v) => v !== '')) rows.push(row);
+  }
+  return rows;
+}

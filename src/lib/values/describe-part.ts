@@ -1,6 +1,6 @@
 // Decodes a parts row (value + rating text) into a canonical spec and a key that groups equal parts.
 import type { PartKind } from '@/lib/schemas/revision';
-import { parseValue } from './parse-value';
+import { MAX_TEXT_LENGTH, parseValue } from './parse-value';
 import { electricalLabel, type ElectricalSpec, type PartSpec, type TextSpec } from './part-spec';
 import type { Quantity } from './quantities';
 import { parseRating, type RatingFields } from './rating';
@@ -51,6 +51,9 @@ const mechanicalKinds: ReadonlySet<PartKind> = new Set<PartKind>(['belt', 'idler
  * mechanical parts; for part numbers the text as written (one space), since their case is meaningful to read.
  */
 export function textSpec(value: string, rating: string, partKind: PartKind): Result<TextSpec> {
+  if (value.length + rating.length > 2 * MAX_TEXT_LENGTH) {
+    return fail(`The part's text is longer than ${2 * MAX_TEXT_LENGTH} characters.`, 'flat belt 92 mm x 4 mm');
+  }
   const normalised = [normaliseText(value), normaliseText(rating)].filter((t) => t !== '').join(' ');
   if (normalised === '') return fail('The part has neither a value nor a description.', 'flat belt 92 mm x 4 mm');
   const asWritten = `${value} ${rating}`.normalize('NFKC').replace(/\s+/g, ' ').trim();

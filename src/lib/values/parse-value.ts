@@ -36,9 +36,13 @@ const unitWords: ReadonlyArray<[RegExp, UnitSymbol]> = [
 
 const numberPattern = /^(?:(\d+)\/(\d+)|(\d+(?:\.\d*)?|\.\d+)(?:e([+-]?\d+))?)/i;
 
+/** Longer than any value or rating on a parts row; also keeps the readers' regular expressions fast. */
+export const MAX_TEXT_LENGTH = 200;
+
 export function parseValue(text: string, options: ParseOptions = {}): Result<ParsedValue> {
-  const input = normaliseValueText(text);
   const expect = options.expect;
+  if (text.length > MAX_TEXT_LENGTH) return fail(`The value is longer than ${MAX_TEXT_LENGTH} characters.`, exampleFor(expect));
+  const input = normaliseValueText(text);
   if (input === '') return fail('Nothing to read: the value is empty.', exampleFor(expect));
   if (/^-/.test(input)) return fail(`"${input}" is negative; component values are above zero.`, exampleFor(expect));
   if (input.includes(',')) {

@@ -1,5 +1,5 @@
 // Reads the rating text of a parts row ("16V 105C low-ESR", "0.25W 1%", "Ø10x16mm P5") into fields.
-import { parseValue } from './parse-value';
+import { MAX_TEXT_LENGTH, parseValue } from './parse-value';
 import { formatMagnitude } from './format-value';
 import { withArticle } from './quantities';
 import { fail, ok, type Result } from './result';
@@ -95,6 +95,8 @@ function readTolerance(text: string, fields: RatingFields): Result<true> {
 }
 
 export function parseRating(text: string): Result<RatingFields> {
+  // Twice a value's limit: the reader also gets the words that followed the value in its own cell.
+  if (text.length > 2 * MAX_TEXT_LENGTH) return fail(`The rating is longer than ${2 * MAX_TEXT_LENGTH} characters.`, RATING_EXAMPLE);
   const fields: RatingFields = { words: [] };
   let rest = text
     .normalize('NFKC')

@@ -15,8 +15,3 @@ export function ok<T>(value: T): Result<T> {
 export function fail<T = never>(message: string, example: string): Result<T> {
   return { ok: false, error: { message, example } };
 }
-
-/** True for a finite number; NaN and ±Infinity never leave the bench tools. */
-export function isFiniteNumber(x: unknown): x is number {
-  return typeof x === 'number' && Number.isFinite(x);
-}

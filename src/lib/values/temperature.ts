@@ -25,13 +25,3 @@ export function parseTemperature(text: string): Result<number> {
 export function formatTemperature(celsius: number): string {
   return `${celsius} °C`;
 }
-
-/** True when the text looks like a temperature, so a rating reader can route it here. */
-export function looksLikeTemperature(text: string): boolean {
-  return temperaturePattern.test(
-    text
-      .normalize('NFKC')
-      .replace(/\u2212/g, '-')
-      .trim(),
-  );
-}

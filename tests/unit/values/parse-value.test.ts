@@ -1,6 +1,6 @@
 // Unit tests of the component value reader: SI forms, RKM codes, three-digit codes and refusals.
 import { describe, expect, it } from 'vitest';
-import { parseValue } from '@/lib/values/parse-value';
+import { normaliseValueText, parseValue } from '@/lib/values/parse-value';
 import type { ParseOptions } from '@/lib/values/parse-value';
 
 function magnitudeOf(text: string, options: ParseOptions = {}): number {
@@ -178,5 +178,21 @@ describe('parseValue', () => {
       if (result.ok) expect(Number.isFinite(result.value.magnitude)).toBe(true);
       else expect(result.error.message.length).toBeGreaterThan(0);
     }
+  });
+});
+
+describe('parseValue limits', () => {
+  it('refuses text longer than any value on a parts row', () => {
+    const result = parseValue(`${'1'.repeat(250)}uF`);
+    expect(result.ok || result.error.message).toMatch(/longer than 200 characters/);
+  });
+});
+
+describe('normaliseValueText', () => {
+  it('folds micro signs, the ohm sign and minus signs and collapses spaces', () => {
+    expect(normaliseValueText('  4.7\u00a0\u00b5F ')).toBe('4.7 uF');
+    expect(normaliseValueText('4.7\u03bcF')).toBe('4.7uF');
+    expect(normaliseValueText('10\u2126')).toBe('10Ω');
+    expect(normaliseValueText('\u221247')).toBe('-47');
   });
 });

@@ -66,3 +66,12 @@ describe('parseRating', () => {
     expect(fieldsOf('16V 16 WV').voltage).toBe(16);
   });
 });
+
+describe('parseRating limits', () => {
+  it('refuses a rating longer than 400 characters quickly', () => {
+    const started = Date.now();
+    const result = parseRating('1'.repeat(5000));
+    expect(result.ok || result.error.message).toMatch(/longer than 400 characters/);
+    expect(Date.now() - started).toBeLessThan(50);
+  });
+});

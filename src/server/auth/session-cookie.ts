@@ -1,0 +1,45 @@
+// The Auth.js session cookie: its name, reading the signed-in user id from it, and clearing it.
+import { getToken } from '@auth/core/jwt';
+import type { AstroCookies } from 'astro';
+import { config } from '../config';
+
+/** Secure cookies (and their __Secure- prefix) whenever the public address is https. */
+export function useSecureCookies(): boolean {
+  return config().PUBLIC_ORIGIN.startsWith('https:');
+}
+
+export function sessionCookieName(secure: boolean = useSecureCookies()): string {
+  return `${secure ? '__Secure-' : ''}authjs.session-token`;
+}
+
+export interface SessionClaims {
+  userId: number;
+  /** Seconds since the epoch, as in the token's iat claim. */
+  issuedAt: number | undefined;
+}
+
+/** The user id from a valid, unexpired session token in the Cookie header; null otherwise. */
+export async function readSessionClaims(cookieHeader: string | null): Promise<SessionClaims | null> {
+  const secret = config().AUTH_SECRET;
+  if (!cookieHeader || !secret) return null;
+  const name = sessionCookieName();
+  if (!cookieHeader.includes(name)) return null;
+  // Only the cookie: a bearer header is not a way in.
+  const req = new Request('http://session.invalid/', { headers: { cookie: cookieHeader } });
+  const token = await getToken({ req, secret, secureCookie: useSecureCookies(), cookieName: name, salt: name, logger: { error: () => {}, warn: () => {}, debug: () => {} } as never });
+  const userId = Number(token?.sub);
+  if (!token || !Number.isInteger(userId) || userId <= 0) return null;
+  return { userId, issuedAt: typeof token.iat === 'number' ? token.iat : undefined };
+}
+
+/** Removes the session cookie and any chunks of it, so a signed-out browser stops sending it. */
+export function clearSessionCookies(cookies: AstroCookies, cookieHeader: string | null): void {
+  const name = sessionCookieName();
+  const present = (cookieHeader ?? '')
+    .split(';')
+    .map((part) => part.trim().split('=')[0] ?? '')
+    .filter((cookie) => cookie === name || cookie.startsWith(`${name}.`));
+  for (const cookie of new Set([name, ...present])) {
+    cookies.delete(cookie, { path: '/', httpOnly: true, sameSite: 'lax', secure: useSecureCookies() });
+  }
+}

@@ -1,0 +1,104 @@
+// Every route and method with what it needs: 'public', an action for can(), or 'closed'. The middleware guard reads it.
+/*
+  Add a route here when you add a file under src/pages (tests/integration/authorization.test.ts fails
+  and names the file otherwise). Keys are Astro's route patterns: the file path under src/pages without
+  its extension, "index" dropped, e.g. src/pages/fixes/[slug]/index.astro → '/fixes/[slug]'.
+  Methods not listed answer 405. HEAD follows GET. '*' covers every method.
+  The guard checks the role level only; a rule that depends on the resource (nobody proofs their own
+  revision, job sheets are private) is checked again by the endpoint with can(user, action, resource).
+*/
+import type { Action } from '@/lib/permissions';
+
+export type Access = 'public' | 'closed' | Action;
+export const routeMethods = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
+export type RouteMethod = (typeof routeMethods)[number];
+
+export interface RouteRule {
+  methods: Partial<Record<RouteMethod | '*', Access>>;
+  /** Added by an integration or by Astro itself, not by a file under src/pages. */
+  injected?: true;
+  /** The same bytes for everyone (photos, image renditions): shared caches may keep them even for signed-in readers. */
+  sharedCache?: true;
+}
+
+const read: RouteRule = { methods: { GET: 'public' } };
+
+export const routeAccess: Record<string, RouteRule> = {
+  // Reading: open to everyone.
+  '/': read,
+  '/404': { methods: { '*': 'public' } },
+  '/machines': read,
+  '/machines/[slug]': read,
+  '/makers': read,
+  '/makers/[slug]': read,
+  '/chassis/[slug]': read,
+  '/fixes/[slug]': read,
+  '/fixes/[slug]/history': read,
+  '/fixes/[slug]/r/[number]': read,
+  '/help': read,
+  '/help/content-licence': read,
+  '/help/house-rules': read,
+  '/help/privacy': read,
+  '/help/working-safely': read,
+  '/help/writing-a-good-fix': read,
+  '/media/[...key]': { methods: { GET: 'public' }, sharedCache: true },
+  '/api/v1/machines': read,
+  '/api/v1/machines/[slug]': read,
+  '/api/v1/chassis/[slug]': read,
+  '/api/v1/fixes': read,
+  '/api/v1/fixes/[slug]': read,
+
+  // Signing up and in: public forms, rate-limited by their handlers.
+  '/sign-in': { methods: { GET: 'public', POST: 'public' } },
+  '/sign-in/link': read,
+  '/sign-in/link-sent': read,
+  '/sign-in/problem': read,
+  '/sign-up': { methods: { GET: 'public', POST: 'public' } },
+  '/sign-up/check-email': read,
+  '/verify': { methods: { GET: 'public', POST: 'manage_account' } },
+  '/reset': { methods: { GET: 'public', POST: 'public' } },
+  '/reset/password': { methods: { GET: 'public', POST: 'public' } },
+
+  // The account.
+  '/account': { methods: { GET: 'manage_account', POST: 'manage_account' } },
+  '/account/sign-out': { methods: { POST: 'public' } },
+  '/account/deleted': read,
+  '/api/v1/account': { methods: { GET: 'manage_account', PATCH: 'manage_account' } },
+
+  // Members and roles: moderators suspend; only admins change roles (checked again per form).
+  '/admin/users': { methods: { GET: 'suspend_user', POST: 'suspend_user' } },
+
+  // The local mail sink's pages (they answer 404 in production).
+  '/dev/mail': { methods: { GET: 'view_dev_mail' } },
+  '/dev/mail/[id]': { methods: { GET: 'view_dev_mail' } },
+
+  // Auth.js (auth-astro's injected route). Our own pages call it in-process; from outside only its GET
+  // endpoints are open (the e-mailed link's callback, csrf, session), so nothing skips our rate limits.
+  '/api/auth/[...auth]': { methods: { GET: 'public', POST: 'closed' }, injected: true },
+  // Astro's own routes, present depending on the build.
+  '/_image': { methods: { GET: 'public' }, injected: true, sharedCache: true },
+  '/_server-islands/[name]': { methods: { GET: 'public', POST: 'public' }, injected: true },
+  '/_actions/[...path]': { methods: { POST: 'public' }, injected: true },
+};
+
+export type RouteDecision =
+  | { kind: 'unlisted' }
+  | { kind: 'method_not_allowed'; allow: string[] }
+  | { kind: 'access'; access: Access; rule: RouteRule };
+
+function methodKey(method: string): RouteMethod | null {
+  const upper = method.toUpperCase();
+  if (upper === 'HEAD') return 'GET';
+  return (routeMethods as readonly string[]).includes(upper) ? (upper as RouteMethod) : null;
+}
+
+/** What the table says for one request; OPTIONS and other methods we do not serve count as not allowed. */
+export function decideRoute(pattern: string, method: string): RouteDecision {
+  const rule = routeAccess[pattern];
+  if (!rule) return { kind: 'unlisted' };
+  const key = methodKey(method);
+  const access = (key && rule.methods[key]) ?? rule.methods['*'];
+  if (access) return { kind: 'access', access, rule };
+  const allow = Object.keys(rule.methods).flatMap((m) => (m === 'GET' ? ['GET', 'HEAD'] : [m]));
+  return { kind: 'method_not_allowed', allow };
+}
