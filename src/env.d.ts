@@ -1,1 +1,9 @@
 /// <reference path="../.astro/types.d.ts" />
+
+// What the middleware puts on Astro.locals for every request.
+declare namespace App {
+  interface Locals {
+    /** The signed-in, active account (read from the database on this request), or null. */
+    user: import('./lib/permissions').SessionUser | null;
+  }
+}

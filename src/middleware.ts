@@ -1,10 +1,23 @@
-// Request pipeline: security headers on every response, and no 500 page leaking a stack trace.
+// Request pipeline: security headers on every response, no 500 page leaking a stack trace, who is asking, and the route guard.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/security-headers';
 import { logger } from '@/server/logger';
+import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
+import { guardRequest } from '@/server/auth/route-guard';
+import { routeAccess } from '@/server/route-access';
+
+/** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
+function editable(response: Response): Response {
+  try {
+    response.headers.set('X-Content-Type-Options', 'nosniff');
+    return response;
+  } catch {
+    return new Response(response.body, { status: response.status, statusText: response.statusText, headers: new Headers(response.headers) });
+  }
+}
 
 const securityHeaders = defineMiddleware(async (_context, next) => {
-  const response = await next();
+  const response = editable(await next());
   applySecurityHeaders(response.headers);
   return response;
 });
@@ -22,4 +35,25 @@ const errorBoundary = defineMiddleware(async (context, next) => {
   }
 });
 
-export const onRequest = sequence(securityHeaders, errorBoundary);
+/** Loads the signed-in user on every request (role and suspension are never taken from the token). */
+const identify = defineMiddleware(async (context, next) => {
+  // Auth.js's own endpoints read the cookie themselves.
+  context.locals.user = context.url.pathname.startsWith('/api/auth/') ? null : await resolveUser(context.request, context.cookies);
+  return next();
+});
+
+/** An answer that depends on who asked (or clears a cookie) is never kept by a shared cache. */
+const privateWhenSignedIn = defineMiddleware(async (context, next) => {
+  const response = editable(await next());
+  const personal = context.locals.user !== null || sessionWasCleared(context.request);
+  if (personal && !routeAccess[context.routePattern]?.sharedCache) {
+    response.headers.set('Cache-Control', 'private, no-store');
+  }
+  // Signed-in and signed-out readers see different headers on the same address.
+  if (!routeAccess[context.routePattern]?.sharedCache) response.headers.append('Vary', 'Cookie');
+  return response;
+});
+
+const guard = defineMiddleware((context, next) => guardRequest(context, context.locals.user) ?? next());
+
+export const onRequest = sequence(securityHeaders, errorBoundary, identify, privateWhenSignedIn, guard);

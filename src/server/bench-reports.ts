@@ -5,7 +5,7 @@ import { db } from './db';
 import { benchScoresFor, emptyBenchScore, type BenchScoreView } from './bench-scores';
 import { refreshBenchScoreColumns } from './search/bench-score-columns';
 import type { Reading } from '@/lib/schemas/revision';
-import { formNumber, formRows, formText, type BenchOutcome, type BenchReportData } from '@/lib/schemas/bench-work';
+import { formNumber, formRows, formText, type BenchOutcome, type BenchReportData, type FormFields } from '@/lib/schemas/bench-work';
 
 export interface LiveFixRef {
   id: number;
@@ -148,7 +148,7 @@ export async function listOwnBenchReports(memberId: number, fixSlug?: string): P
 }
 
 /** Reads the bench report form of a fix page or job sheet into the shape the schema checks. */
-export function benchReportFromForm(form: FormData): Record<string, unknown> {
+export function benchReportFromForm(form: FormFields): Record<string, unknown> {
   const readings = formRows(form, 'readings', ['testPoint', 'expected', 'measured', 'note']);
   return {
     fix: formText(form, 'fix'),
@@ -202,4 +202,44 @@ export async function consumeLimit(name: BenchWorkLimit, key: string): Promise<L
 export async function checkLimit(name: BenchWorkLimit, key: string): Promise<LimitCheck> {
   const res = await limiterFor(name).get(key);
   return res && res.consumedPoints >= benchWorkLimits[name].points ? blockedFor(res) : { ok: true };
+}
+
+/** Bodies of the bench work endpoints: JSON from the API and islands, or a plain HTML form. */
+export type BenchBody = { kind: 'json'; data: unknown } | { kind: 'form'; form: URLSearchParams } | { kind: 'error'; response: 'too_large' | 'unreadable' };
+
+/** Big enough for a job sheet with its parts lines; the adapter itself sets no body limit. */
+export const MAX_BODY_BYTES = 256 * 1024;
+
+export async function readBenchBody(request: Request): Promise<BenchBody> {
+  const type = (request.headers.get('content-type') ?? '').toLowerCase();
+  if (Number(request.headers.get('content-length') ?? '0') > MAX_BODY_BYTES) return { kind: 'error', response: 'too_large' };
+  const text = await readCapped(request, MAX_BODY_BYTES);
+  if (text === null) return { kind: 'error', response: 'too_large' };
+  if (type.startsWith('application/x-www-form-urlencoded')) return { kind: 'form', form: new URLSearchParams(text) };
+  if (type.startsWith('application/json')) {
+    try {
+      return { kind: 'json', data: text.trim() === '' ? {} : JSON.parse(text) };
+    } catch {
+      return { kind: 'error', response: 'unreadable' };
+    }
+  }
+  return { kind: 'error', response: 'unreadable' };
+}
+
+async function readCapped(request: Request, cap: number): Promise<string | null> {
+  if (!request.body) return '';
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > cap) {
+      await reader.cancel();
+      return null;
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString('utf8');
 }

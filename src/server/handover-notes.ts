@@ -5,7 +5,7 @@ import { config } from './config';
 import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { generateHandoverCode, normaliseHandoverCode } from '@/lib/handover-code';
 import type { Caution, CautionKind } from '@/lib/schemas/revision';
-import type { HandoverNoteData, JobStatus } from '@/lib/schemas/bench-work';
+import { fixRefFromText, formNumber, formText, type FormFields, type HandoverNoteData, type JobStatus } from '@/lib/schemas/bench-work';
 
 export interface NoteAuthor {
   id: number;
@@ -229,4 +229,25 @@ export async function revokeNote(memberId: number, input: string): Promise<Revok
   const updated = await knex('handover_notes').where({ code, member_id: memberId }).whereNull('revoked_at').update({ revoked_at: knex.fn.now() });
   if (updated > 0) return 'revoked';
   return (await knex('handover_notes').where({ code, member_id: memberId }).first('id')) ? 'already_revoked' : 'not_found';
+}
+
+/** Reads the note form: one part per line, the job details box ticked or not, a blank shop name kept blank. */
+export function handoverNoteFromForm(form: FormFields): Record<string, unknown> {
+  const jobSheetId = formNumber(form, 'jobSheetId');
+  // The fix may be pasted as a link; a revision number typed in the form wins over one in the link.
+  const ref = fixRefFromText(formText(form, 'fix'));
+  return {
+    fix: ref?.slug ?? formText(form, 'fix'),
+    revision: formNumber(form, 'revision') ?? ref?.revision,
+    jobSheetId: jobSheetId ?? null,
+    includeJobDetails: formText(form, 'includeJobDetails') !== undefined,
+    // The form shows the account's shop name already: an emptied field means "no shop name".
+    shopName: form.get('shopName') === null ? null : (formText(form, 'shopName') ?? ''),
+    message: formText(form, 'message') ?? '',
+    partsReplaced: (formText(form, 'partsReplaced') ?? '')
+      .split(/\r?\n/)
+      .map((line) => line.trim())
+      .filter((line) => line !== ''),
+    warranty: formText(form, 'warranty') ?? '',
+  };
 }

@@ -1,6 +1,9 @@
 // Job sheets: a technician's private record of one repair. Every read and write is scoped to its owner.
 import type { Knex } from 'knex';
+import { z } from 'zod';
 import { db } from './db';
+import { apiError } from './http';
+import { can, type SessionUser } from '@/lib/permissions';
 import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { config } from './config';
 import { listOwnNotes } from './handover-notes';
@@ -10,6 +13,7 @@ export interface JobMachine {
   id: number;
   slug: string;
   label: string;
+  makerName: string;
   chassisFamilyId: number | null;
 }
 
@@ -57,8 +61,8 @@ export async function machineOptions(): Promise<JobMachine[]> {
     .join('makers as mk', 'mk.id', 'm.maker_id')
     .whereNull('m.deleted_at')
     .orderBy(['mk.name', 'm.model_number', 'm.region'])
-    .select('m.id', 'm.slug', 'm.chassis_family_id', db().raw(`${machineLabel} AS label`));
-  return rows.map((r) => ({ id: r.id, slug: r.slug, label: r.label, chassisFamilyId: r.chassis_family_id }));
+    .select('m.id', 'm.slug', 'm.chassis_family_id', 'mk.name as maker_name', db().raw(`${machineLabel} AS label`));
+  return rows.map((r) => ({ id: r.id, slug: r.slug, label: r.label, makerName: r.maker_name, chassisFamilyId: r.chassis_family_id }));
 }
 
 const sortColumns: Record<JobSheetListQuery['sort'], { column: string; order: 'asc' | 'desc' }[]> = {
@@ -93,7 +97,7 @@ export async function getJobSheet(ownerId: number, id: number): Promise<JobSheet
     .leftJoin('machines as m', 'm.id', 'j.machine_id')
     .leftJoin('makers as mk', 'mk.id', 'm.maker_id')
     .where({ 'j.id': id, 'j.owner_id': ownerId })
-    .first('j.*', 'm.slug as machine_slug', 'm.chassis_family_id', knex.raw(`${machineLabel} AS machine_label`));
+    .first('j.*', 'm.slug as machine_slug', 'm.chassis_family_id', 'mk.name as maker_name', knex.raw(`${machineLabel} AS machine_label`));
   if (!row) return null;
   const fixes = await knex('job_sheet_fixes as jf')
     .join('fixes as f', 'f.id', 'jf.fix_id')
@@ -105,7 +109,7 @@ export async function getJobSheet(ownerId: number, id: number): Promise<JobSheet
   return {
     id: row.id,
     customerRef: row.customer_ref,
-    machine: row.machine_id ? { id: row.machine_id, slug: row.machine_slug, label: row.machine_label, chassisFamilyId: row.chassis_family_id } : null,
+    machine: row.machine_id ? { id: row.machine_id, slug: row.machine_slug, label: row.machine_label, makerName: row.maker_name, chassisFamilyId: row.chassis_family_id } : null,
     serialNumber: row.serial_number,
     reportedSymptom: row.reported_symptom,
     findings: row.findings,
@@ -239,4 +243,22 @@ export async function invoiceLinesFor(ownerId: number, id: number): Promise<{ jo
     lines.push({ kind: 'fix', description: `Repair followed: ${fix.title} (r${fix.revisionNumber})`, quantity: 1, unit: '', link: new URL(fix.permalink, config().PUBLIC_ORIGIN).href });
   }
   return { jobSheetId: job.id, customerRef: job.customerRef, lines };
+}
+
+export const jobSheetIdSchema = z.coerce.number().int().positive().max(2_147_483_647);
+
+export function jobSheetNotFound(): Response {
+  return apiError('not_found', 'You have no job sheet with that number.');
+}
+
+export type JobSheetRequest = { ok: true; ownerId: number; id: number } | { ok: false; response: Response };
+
+/** The signed-in owner and the sheet number of a job sheet endpoint, or the answer to give instead. */
+export function jobSheetRequest(user: SessionUser | null | undefined, rawId: string | undefined): JobSheetRequest {
+  if (!user) return { ok: false, response: apiError('unauthorised', 'Sign in to use your job sheets.') };
+  if (!can(user, 'own_job_sheets')) return { ok: false, response: apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.') };
+  const id = jobSheetIdSchema.safeParse(rawId);
+  // A malformed number is as unknown as someone else's sheet.
+  if (!id.success) return { ok: false, response: jobSheetNotFound() };
+  return { ok: true, ownerId: user.id, id: id.data };
 }

@@ -55,7 +55,7 @@ export const routeAccess: Record<string, RouteRule> = {
   '/sign-in/problem': read,
   '/sign-up': { methods: { GET: 'public', POST: 'public' } },
   '/sign-up/check-email': read,
-  '/verify': { methods: { GET: 'public', POST: 'manage_account' } },
+  '/verify': read,
   '/reset': { methods: { GET: 'public', POST: 'public' } },
   '/reset/password': { methods: { GET: 'public', POST: 'public' } },
 
@@ -67,6 +67,48 @@ export const routeAccess: Record<string, RouteRule> = {
 
   // Members and roles: moderators suspend; only admins change roles (checked again per form).
   '/admin/users': { methods: { GET: 'suspend_user', POST: 'suspend_user' } },
+
+  // Writing and proofing: verified members write and report; moderators proof (never their own, checked per revision).
+  '/write': { methods: { GET: 'write_fix' } },
+  '/write/mine': { methods: { GET: 'write_fix' } },
+  '/fixes/[slug]/edit': { methods: { GET: 'write_fix' } },
+  '/fixes/[slug]/compare': read,
+  '/proofing': { methods: { GET: 'proof' } },
+  '/proofing/[id]': { methods: { GET: 'proof' } },
+  '/api/v1/catalogue-lookup': read,
+  '/api/v1/drafts': { methods: { POST: 'write_fix' } },
+  '/api/v1/drafts/[id]': { methods: { GET: 'write_fix', PUT: 'write_fix', DELETE: 'write_fix' } },
+  '/api/v1/drafts/[id]/submit': { methods: { POST: 'write_fix' } },
+  '/api/v1/revisions/[id]/amend': { methods: { POST: 'write_fix' } },
+  '/api/v1/revisions/[id]/withdraw': { methods: { POST: 'write_fix' } },
+  '/api/v1/photos': { methods: { POST: 'upload_photo' } },
+  '/api/v1/photos/[id]': { methods: { GET: 'upload_photo', PATCH: 'upload_photo' } },
+  '/api/v1/proofing/[id]/proof': { methods: { POST: 'proof' } },
+  '/api/v1/proofing/[id]/return': { methods: { POST: 'proof' } },
+  '/api/v1/proofing/reports/[id]': { methods: { POST: 'moderate' } },
+  '/api/v1/proofing/fixes/[slug]': { methods: { POST: 'lock_fix' } },
+  '/api/v1/fixes/[slug]/reports': { methods: { POST: 'report_fix' } },
+
+  // Bench work. Job sheets and a member's notes are private: the handlers check the owner again and
+  // answer 404 for anyone else's. The customer's note page and its JSON are public (misses rate-limited).
+  '/n/[code]': read,
+  '/notes': { methods: { GET: 'write_handover_note' } },
+  '/notes/new': { methods: { GET: 'write_handover_note', POST: 'write_handover_note' } },
+  '/notes/[code]': { methods: { GET: 'write_handover_note' } },
+  '/jobs': { methods: { GET: 'own_job_sheets' } },
+  '/jobs/new': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
+  '/jobs/[id]': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
+  '/api/v1/bench-reports': { methods: { GET: 'bench_report', POST: 'bench_report' } },
+  '/api/v1/fixes/[slug]/bench-reports': read,
+  '/api/v1/handover-notes': { methods: { GET: 'write_handover_note', POST: 'write_handover_note' } },
+  '/api/v1/handover-notes/[code]': { methods: { GET: 'public', DELETE: 'write_handover_note', POST: 'write_handover_note' } },
+  '/api/v1/handover-notes/[code]/qr.svg': { methods: { GET: 'write_handover_note' } },
+  '/api/v1/handover-notes/[code]/qr.png': { methods: { GET: 'write_handover_note' } },
+  '/api/v1/job-sheets': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
+  '/api/v1/job-sheets/[id]': { methods: { GET: 'own_job_sheets', PATCH: 'own_job_sheets', DELETE: 'own_job_sheets' } },
+  '/api/v1/job-sheets/[id]/fixes': { methods: { POST: 'own_job_sheets', DELETE: 'own_job_sheets' } },
+  '/api/v1/job-sheets/[id]/invoice-lines.csv': { methods: { GET: 'own_job_sheets' } },
+  '/api/v1/job-sheets/[id]/invoice-lines.json': { methods: { GET: 'own_job_sheets' } },
 
   // The local mail sink's pages (they answer 404 in production).
   '/dev/mail': { methods: { GET: 'view_dev_mail' } },

@@ -3,3 +3,4 @@ export { diffWordsOf, diffLinesOf, hasChanges, type DiffSpan, type LineDiff, typ
 export { diffList, listChanged, type ListDiff } from './lists';
 export { diffRows, matchRows, type RowDiff, type CellDiff, type RowStatus } from './rows';
 export { diffRevisions, emptyComparable, partColumns, readingColumns, type ComparableRevision, type RevisionDiff } from './revision';
+export { comparableFrom, type LabelledRevision } from './comparable';

@@ -131,8 +131,14 @@ export const jobSheetListQuerySchema = z.object({
 });
 export type JobSheetListQuery = z.output<typeof jobSheetListQuerySchema>;
 
+/** What the form readers need of a submitted form: FormData and URLSearchParams both have it. */
+export interface FormFields {
+  get(name: string): FormDataEntryValue | null;
+  keys(): IterableIterator<string> | Iterable<string>;
+}
+
 /** Plain HTML forms send text: a trimmed value, or undefined when the field is missing or blank. */
-export function formText(form: FormData, name: string): string | undefined {
+export function formText(form: FormFields, name: string): string | undefined {
   const value = form.get(name);
   if (typeof value !== 'string') return undefined;
   const trimmed = value.trim();
@@ -140,7 +146,7 @@ export function formText(form: FormData, name: string): string | undefined {
 }
 
 /** A number typed into a form: undefined when blank, NaN (which the schema names) when not a number. */
-export function formNumber(form: FormData, name: string): number | undefined {
+export function formNumber(form: FormFields, name: string): number | undefined {
   const text = formText(form, name);
   return text === undefined ? undefined : Number(text);
 }
@@ -149,7 +155,7 @@ export function formNumber(form: FormData, name: string): number | undefined {
  * Repeated rows of a form, named `prefix.0.field`, `prefix.1.field`, ...; rows left entirely blank are
  * dropped, so a form can offer a few empty rows for new entries without JavaScript.
  */
-export function formRows(form: FormData, prefix: string, fields: readonly string[]): Record<string, string>[] {
+export function formRows(form: FormFields, prefix: string, fields: readonly string[]): Record<string, string>[] {
   const indexes = new Set<number>();
   for (const key of form.keys()) {
     const match = new RegExp(`^${prefix}\\.(\\d{1,3})\\.`).exec(key);
@@ -163,3 +169,45 @@ export function formRows(form: FormData, prefix: string, fields: readonly string
   }
   return rows;
 }
+
+/** A path on this site to send a form back to: anything else (another host, "//evil") gives the fallback. */
+export function safeBackPath(value: string | null | undefined, fallback: string): string {
+  if (!value || !value.startsWith('/') || value.startsWith('//') || value.startsWith('/\\') || /[\r\n]/.test(value)) return fallback;
+  return value;
+}
+
+/** Adds a message code to a path for the page to show after a form post, keeping any #fragment last. */
+export function withNotice(path: string, key: string, code: string): string {
+  const [base = '/', fragment] = path.split('#', 2);
+  const joiner = base.includes('?') ? '&' : '?';
+  return `${base}${joiner}${encodeURIComponent(key)}=${encodeURIComponent(code)}${fragment !== undefined ? `#${fragment}` : ''}`;
+}
+
+/** The answer to a form post: 303 so the browser follows with GET, never cached. */
+export function seeOther(location: string): Response {
+  return new Response(null, { status: 303, headers: { Location: location, 'Cache-Control': 'private, no-store' } });
+}
+
+/**
+ * A fix named the way a member has it to hand: its address ("tl2-tray-will-not-open-e21"), a link to it,
+ * or a link to one revision ("https://.../fixes/<slug>/r/3"). Null when it names no fix.
+ */
+export function fixRefFromText(text: string | undefined): { slug: string; revision?: number } | null {
+  if (!text) return null;
+  const trimmed = text.trim();
+  const linked = /\/fixes\/([a-z0-9]+(?:-[a-z0-9]+)*)(?:\/r\/(\d{1,6}))?\/?(?:[?#].*)?$/.exec(trimmed);
+  if (linked?.[1]) return linked[2] ? { slug: linked[1], revision: Number(linked[2]) } : { slug: linked[1] };
+  return slugSchema.safeParse(trimmed).success ? { slug: trimmed } : null;
+}
+
+/** What the page says after a bench report form post, by the code in `?bench=`; problems are marked. */
+export const benchNotices: Record<string, { text: string; problem: boolean }> = {
+  saved: { text: 'Your bench report is saved. Thank you: it counts towards the bench score.', problem: false },
+  saved_own: { text: 'Your bench report is saved. As the author of this fix, your report is shown but not counted in its score.', problem: false },
+  need_days: { text: 'The report was not saved: when the fault came back, say how many days the repair held.', problem: true },
+  bad_machine: { text: 'The report was not saved: choose a machine this fix applies to, or one of its chassis family.', problem: true },
+  bad_revision: { text: 'The report was not saved: that revision of the fix cannot take reports.', problem: true },
+  not_found: { text: 'The report was not saved: the fix is no longer available.', problem: true },
+  rate_limited: { text: 'The report was not saved: you have saved many bench reports in a short time. Please try again later.', problem: true },
+  invalid: { text: 'The report was not saved: some fields were not valid. Check the outcome, days held and note.', problem: true },
+};

@@ -5,7 +5,7 @@ export const MAX_FORM_BYTES = 32 * 1024;
 
 export type FormRead = { ok: true; fields: Record<string, string> } | { ok: false; reason: 'too_large' | 'not_a_form' };
 
-async function readCapped(body: ReadableStream<Uint8Array>, cap: number): Promise<string | null> {
+export async function readCapped(body: ReadableStream<Uint8Array>, cap: number): Promise<string | null> {
   const reader = body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -41,4 +41,20 @@ export function withoutEmpty(fields: Record<string, string>, keys: string[]): Re
   const copy = { ...fields };
   for (const key of keys) if (copy[key]?.trim() === '') delete copy[key];
   return copy;
+}
+
+export type JsonRead = { ok: true; body: unknown } | { ok: false; reason: 'too_large' | 'not_json' };
+
+/** A small JSON body, parsed; never throws on bad input. */
+export async function readJson(request: Request): Promise<JsonRead> {
+  const type = request.headers.get('content-type') ?? '';
+  if (!type.toLowerCase().startsWith('application/json')) return { ok: false, reason: 'not_json' };
+  if (Number(request.headers.get('content-length') ?? '0') > MAX_FORM_BYTES) return { ok: false, reason: 'too_large' };
+  const raw = request.body ? await readCapped(request.body, MAX_FORM_BYTES) : '';
+  if (raw === null) return { ok: false, reason: 'too_large' };
+  try {
+    return { ok: true, body: JSON.parse(raw) };
+  } catch {
+    return { ok: false, reason: 'not_json' };
+  }
 }

@@ -87,8 +87,11 @@ export async function createMember(member: NewMember, knex: Knex = db()): Promis
   return rows[0]?.id ?? null;
 }
 
-export async function updateProfile(id: number, profile: { name: string; shopName: string | null }, knex: Knex = db()): Promise<void> {
-  await knex('users').where({ id }).whereNull('deleted_at').update({ name: profile.name, shop_name: profile.shopName });
+/** Changes the fields given; a missing field stays as it is. */
+export async function updateProfile(id: number, profile: { name?: string; shopName?: string | null }, knex: Knex = db()): Promise<void> {
+  const changes = { ...(profile.name !== undefined ? { name: profile.name } : {}), ...(profile.shopName !== undefined ? { shop_name: profile.shopName } : {}) };
+  if (Object.keys(changes).length === 0) return;
+  await knex('users').where({ id }).whereNull('deleted_at').update(changes);
 }
 
 /** Whole seconds, like a token's issue time: a session started in the same second as the change still counts. */

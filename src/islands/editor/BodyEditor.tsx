@@ -1,0 +1,82 @@
+// The remedy: a Tiptap editor on the one body extension list, with its toolbar, insert forms and image paste.
+import { useEffect, useId, useRef, useState } from 'react';
+import { EditorContent, useEditor, type Editor } from '@tiptap/react';
+import { bodyExtensions } from '@/lib/tiptap/extensions';
+import type { BodyDoc } from '@/lib/tiptap/allowlist';
+import { BodyToolbar } from './BodyToolbar';
+import { CautionPanel, FigurePanel, LinkPanel, ReadingPanel, type PanelName } from './body-panels';
+import { imageFilesOf } from './paste';
+import type { PhotoRefData } from './types';
+
+interface BodyEditorProps {
+  initial: unknown;
+  onChange: (doc: BodyDoc) => void;
+  photos: PhotoRefData[];
+  /** Image files pasted or dropped into the remedy: they go to the uploader, which asks for alt text. */
+  onImageFiles: (files: File[]) => void;
+  onReady: (editor: Editor) => void;
+  error?: string | undefined;
+}
+
+export function BodyEditor({ initial, onChange, photos, onImageFiles, onReady, error }: BodyEditorProps) {
+  const editorId = useId();
+  const errorId = `${editorId}-error`;
+  const [panel, setPanel] = useState<PanelName>(null);
+  // The editor is made once; its handlers read the newest callbacks through refs.
+  const onChangeRef = useRef(onChange);
+  const onImageFilesRef = useRef(onImageFiles);
+  onChangeRef.current = onChange;
+  onImageFilesRef.current = onImageFiles;
+  const editor = useEditor({
+    extensions: bodyExtensions(),
+    content: initial as BodyDoc,
+    immediatelyRender: true,
+    editorProps: {
+      attributes: {
+        id: editorId,
+        role: 'textbox',
+        'aria-multiline': 'true',
+        'aria-label': 'Remedy: the steps that fix the fault',
+        'aria-describedby': errorId,
+        class: 'prose-fix min-h-[14rem] max-w-none p-3 focus:outline-none',
+      },
+      handlePaste: (_view, event) => {
+        const files = imageFilesOf(event.clipboardData);
+        if (files.length === 0) return false;
+        onImageFilesRef.current(files);
+        return true;
+      },
+      handleDrop: (_view, event) => {
+        const files = imageFilesOf((event as DragEvent).dataTransfer);
+        if (files.length === 0) return false;
+        event.preventDefault();
+        onImageFilesRef.current(files);
+        return true;
+      },
+    },
+    onUpdate: ({ editor: e }) => onChangeRef.current(e.getJSON() as BodyDoc),
+  });
+
+  useEffect(() => {
+    if (editor) onReady(editor);
+  }, [editor, onReady]);
+
+  const close = () => {
+    setPanel(null);
+    editor?.commands.focus();
+  };
+
+  return (
+    <div className={`rounded border ${error ? 'border-brick' : 'border-rule-strong'} bg-paper`}>
+      {editor && <BodyToolbar editor={editor} editorId={editorId} onOpenPanel={setPanel} />}
+      {editor && panel === 'link' && <LinkPanel editor={editor} onClose={close} />}
+      {editor && panel === 'reading' && <ReadingPanel editor={editor} onClose={close} />}
+      {editor && panel === 'caution' && <CautionPanel editor={editor} onClose={close} />}
+      {editor && panel === 'figure' && <FigurePanel editor={editor} onClose={close} photos={photos} />}
+      <EditorContent editor={editor} />
+      <p id={errorId} className="px-3 pb-2 font-sans text-sm text-brick empty:hidden">
+        {error}
+      </p>
+    </div>
+  );
+}

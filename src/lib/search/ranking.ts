@@ -1,0 +1,89 @@
+// The order of search results: text relevance, then closeness to the machine named, then bench score, then fix id.
+
+/** How well one clause of the query matched a fix. */
+export const clauseLevel = {
+  none: 0,
+  /** Found in the cause, remedy, parts or machine names. */
+  body: 1,
+  /** Found in the title or symptoms through another term of its word family, or a code variant. */
+  summaryAlternative: 2,
+  /** Found in the title or symptoms as typed, or the exact code. */
+  summary: 3,
+} as const;
+export type ClauseLevel = (typeof clauseLevel)[keyof typeof clauseLevel];
+
+/** Text relevance kept coarse on purpose, so that closeness to the named machine can decide between equals. */
+export interface Relevance {
+  /** Weighted count of the required clauses found anywhere in the fix. */
+  matched: number;
+  /** Sum of the clause levels, soft clauses and neighbouring-word bonuses included. */
+  quality: number;
+}
+
+/** A code names one fault or one machine: finding it says more than finding a common word. */
+export const CODE_WEIGHT = 2;
+export const WORD_WEIGHT = 1;
+
+/**
+ * Relevance from the levels of the required clauses (with their weights, 1 when not given) and of the
+ * clauses that only rank (stop-word groups, and the bonus for typed words found side by side).
+ */
+export function relevanceOf(levels: readonly number[], extraLevels: readonly number[] = [], weights: readonly number[] = []): Relevance {
+  return {
+    matched: levels.reduce((sum, level, i) => sum + (level > clauseLevel.none ? (weights[i] ?? WORD_WEIGHT) : 0), 0),
+    quality: [...levels, ...extraLevels].reduce((sum, l) => sum + l, 0),
+  };
+}
+
+/** Relevance from an engine's own score in [0, 1], in twenty steps (used for the Meilisearch adapter). */
+export function relevanceFromScore(score: number): Relevance {
+  const clamped = Number.isFinite(score) ? Math.min(1, Math.max(0, score)) : 0;
+  return { matched: 0, quality: Math.floor(clamped * 20) };
+}
+
+/** Same machine 3, same chassis family 2, same maker 1, other 0. */
+export type Proximity = 0 | 1 | 2 | 3;
+
+export interface MachinePlace<Id> {
+  machineIds: readonly Id[];
+  chassisIds: readonly Id[];
+  makerIds: readonly Id[];
+}
+
+/** The machine the reader named: itself, its chassis family (if any) and its maker. */
+export interface ProximityTarget<Id> {
+  machineId: Id;
+  chassisId: Id | null;
+  makerId: Id;
+}
+
+export function proximityOf<Id>(fix: MachinePlace<Id>, target: ProximityTarget<Id> | null | undefined): Proximity {
+  if (!target) return 0;
+  if (fix.machineIds.includes(target.machineId)) return 3;
+  if (target.chassisId !== null && fix.chassisIds.includes(target.chassisId)) return 2;
+  if (fix.makerIds.includes(target.makerId)) return 1;
+  return 0;
+}
+
+export interface Rankable {
+  fixId: number;
+  relevance: Relevance;
+  proximity: Proximity;
+  /** Wilson lower bound; null when no bench report counts yet (ranks below any score, even 0). */
+  benchScore: number | null;
+}
+
+/** Negative when `a` ranks first. Total and deterministic: equal keys fall back to the fix id. */
+export function compareRanked(a: Rankable, b: Rankable): number {
+  return (
+    b.relevance.matched - a.relevance.matched ||
+    b.relevance.quality - a.relevance.quality ||
+    b.proximity - a.proximity ||
+    (b.benchScore ?? -1) - (a.benchScore ?? -1) ||
+    a.fixId - b.fixId
+  );
+}
+
+export function rank<T extends Rankable>(items: readonly T[]): T[] {
+  return [...items].sort(compareRanked);
+}

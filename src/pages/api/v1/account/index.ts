@@ -1,0 +1,29 @@
+// The signed-in account as JSON: who you are and what you may do; PATCH changes the name and shop name.
+import type { APIRoute } from 'astro';
+import { allowedActions } from '@/lib/permissions';
+import { profileSchema } from '@/lib/schemas/account';
+import { apiError, fieldErrors, json } from '@/server/http';
+import { readJson } from '@/server/auth/form-data';
+import { updateProfile } from '@/server/auth/users';
+
+export const GET: APIRoute = ({ locals }) => {
+  const user = locals.user;
+  if (!user) return apiError('unauthorised', 'Sign in to do this.');
+  return json({ user, can: allowedActions(user) }, { cache: 'private' });
+};
+
+export const PATCH: APIRoute = async ({ locals, request }) => {
+  const user = locals.user;
+  if (!user) return apiError('unauthorised', 'Sign in to do this.');
+  const read = await readJson(request);
+  if (!read.ok) {
+    return read.reason === 'too_large' ? apiError('payload_too_large', 'The body is larger than an account change needs.') : apiError('bad_request', 'Send a JSON object.');
+  }
+  // Only the fields sent are changed; "shopName": "" or null removes the shop name.
+  const parsed = profileSchema.partial().strict().safeParse(read.body);
+  if (!parsed.success) return apiError('bad_request', 'Some fields are not valid.', fieldErrors(parsed.error));
+  const changes = { ...(parsed.data.name !== undefined ? { name: parsed.data.name } : {}), ...('shopName' in parsed.data ? { shopName: parsed.data.shopName ?? null } : {}) };
+  await updateProfile(user.id, changes);
+  const updated = { ...user, ...changes };
+  return json({ user: updated, can: allowedActions(updated) }, { cache: 'private' });
+};

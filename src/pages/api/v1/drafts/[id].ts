@@ -1,0 +1,43 @@
+// GET, PUT and DELETE /api/v1/drafts/:id: read, save (autosave) and discard the writer's own draft.
+import type { APIRoute } from 'astro';
+import { z } from 'zod';
+import { can } from '@/lib/permissions';
+import { apiError, fieldErrors, json } from '@/server/http';
+import { db } from '@/server/db';
+import { discardDraft, saveDraft } from '@/server/drafts';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { failureResponse } from '@/server/proofing-types';
+import { loadRevision } from '@/server/revisions';
+
+const bodySchema = z.object({ values: z.unknown(), baseRevisionId: z.number().int().positive().nullable().optional() });
+
+export const GET: APIRoute = async ({ params, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  const id = idParam(params.id);
+  const revision = id ? await loadRevision(db(), id) : null;
+  if (!revision || revision.authorId !== user.id) return apiError('not_found', 'There is no such draft among yours.');
+  return json({ revision, baseIsStale: revision.baseRevisionId !== revision.liveRevisionId }, { cache: 'private' });
+};
+
+export const PUT: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
+  const id = idParam(params.id);
+  if (!id) return apiError('not_found', 'There is no such draft among yours.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const body = bodySchema.safeParse(input.data);
+  if (!body.success) return apiError('bad_request', 'The request is not valid.', fieldErrors(body.error));
+  const saveInput = body.data.baseRevisionId === undefined ? { values: body.data.values } : { values: body.data.values, baseRevisionId: body.data.baseRevisionId };
+  return answer(await saveDraft(user, id, saveInput), { form: false }, { back: '/write' });
+};
+
+export const DELETE: APIRoute = async ({ params, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  const id = idParam(params.id);
+  if (!id) return apiError('not_found', 'There is no such draft among yours.');
+  return answer(await discardDraft(user, id), { form: false }, { back: '/write' });
+};

@@ -1,0 +1,24 @@
+// POST /api/v1/drafts/:id/submit: sends the draft to the proofing desk (409 with both versions on a stale base).
+import type { APIRoute } from 'astro';
+import { z } from 'zod';
+import { can } from '@/lib/permissions';
+import { apiError, fieldErrors } from '@/server/http';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { submitDraft } from '@/server/proofing-submit';
+import { failureResponse } from '@/server/proofing-types';
+
+const bodySchema = z.object({ values: z.unknown().optional() });
+
+export const POST: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
+  const id = idParam(params.id);
+  if (!id) return apiError('not_found', 'There is no such draft among yours.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const body = bodySchema.safeParse(input.data);
+  if (!body.success) return apiError('bad_request', 'The request is not valid.', fieldErrors(body.error));
+  const outcome = await submitDraft(user, id, body.data.values === undefined ? {} : { values: body.data.values });
+  return answer(outcome, input, { back: '/write/mine', done: '/write/mine?submitted=1' });
+};

@@ -1,0 +1,29 @@
+// POST /api/v1/drafts: starts the writer's draft of a new fix, or of a live fix (`fixSlug`) on top of its live revision.
+import type { APIRoute } from 'astro';
+import { z } from 'zod';
+import { can } from '@/lib/permissions';
+import { slugSchema } from '@/lib/schemas/slug';
+import { apiError, fieldErrors } from '@/server/http';
+import { db } from '@/server/db';
+import { createDraft } from '@/server/drafts';
+import { answer, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { failureResponse } from '@/server/proofing-types';
+
+const bodySchema = z.object({ fixSlug: slugSchema.nullish(), values: z.unknown() });
+
+export const POST: APIRoute = async ({ request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const body = bodySchema.safeParse(input.data);
+  if (!body.success) return apiError('bad_request', 'The request is not valid.', fieldErrors(body.error));
+  let fixId: number | null = null;
+  if (body.data.fixSlug) {
+    const fix = await db()('fixes').where({ slug: body.data.fixSlug }).whereNull('deleted_at').first('id');
+    if (!fix) return apiError('not_found', 'There is no such fix to edit.');
+    fixId = fix.id;
+  }
+  return answer(await createDraft(user, { fixId, values: body.data.values }), { form: false }, { status: 201, back: '/write' });
+};

@@ -1,0 +1,22 @@
+// POST /api/v1/fixes/:slug/reports: a verified member reports a fix (wrong, dangerous, spam, duplicate) with a reason.
+import type { APIRoute } from 'astro';
+import { can } from '@/lib/permissions';
+import { slugSchema } from '@/lib/schemas/slug';
+import { apiError, fieldErrors } from '@/server/http';
+import { answer, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { createReport, reportInputSchema } from '@/server/reports';
+import { failureResponse, refuse } from '@/server/proofing-types';
+
+export const POST: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'report_fix')) return apiError('forbidden', 'Confirm your e-mail address to report a fix.');
+  const slug = slugSchema.safeParse(params.slug);
+  if (!slug.success) return apiError('not_found', 'There is no such fix.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const back = `/fixes/${slug.data}#report`;
+  const body = reportInputSchema.safeParse(input.data);
+  if (!body.success) return answer(refuse('bad_request', 'The report is not complete.', fieldErrors(body.error)), input, { back });
+  return answer(await createReport(user, slug.data, body.data), input, { status: 201, back, done: `/fixes/${slug.data}?report=sent#report` });
+};

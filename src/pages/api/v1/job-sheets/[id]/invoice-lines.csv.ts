@@ -1,0 +1,23 @@
+// GET /api/v1/job-sheets/:id/invoice-lines.csv: the same lines as CSV to import or paste into an invoice.
+import type { APIRoute } from 'astro';
+import { stringify } from 'csv-stringify/sync';
+import { invoiceLinesFor, jobSheetNotFound, jobSheetRequest } from '@/server/job-sheets';
+import { safeCell } from '@/lib/bench/order-list-csv';
+
+const invoiceCsvHeader = ['kind', 'description', 'quantity', 'unit', 'link'];
+
+export const GET: APIRoute = async ({ locals, params }) => {
+  const job = jobSheetRequest(locals.user, params.id);
+  if (!job.ok) return job.response;
+  const invoice = await invoiceLinesFor(job.ownerId, job.id);
+  if (!invoice) return jobSheetNotFound();
+  // Text typed by a member may start with = + - @: safeCell keeps spreadsheets from running it as a formula.
+  const rows = invoice.lines.map((l) => [l.kind, l.description, String(l.quantity), l.unit, l.link].map(safeCell));
+  return new Response(stringify([invoiceCsvHeader, ...rows]), {
+    headers: {
+      'Content-Type': 'text/csv; charset=utf-8',
+      'Content-Disposition': `attachment; filename="job-${invoice.jobSheetId}-invoice-lines.csv"`,
+      'Cache-Control': 'private, no-store',
+    },
+  });
+};

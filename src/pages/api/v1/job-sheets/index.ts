@@ -1,0 +1,30 @@
+// GET /api/v1/job-sheets: your job sheets (status, q, sort). POST: open a new job sheet.
+import type { APIRoute } from 'astro';
+import { can } from '@/lib/permissions';
+import { apiError, fieldErrors, json, parseSearchParams } from '@/server/http';
+import { readBenchBody } from '@/server/bench-reports';
+import { createJobSheet, getJobSheet, listJobSheets } from '@/server/job-sheets';
+import { jobSheetCreateSchema, jobSheetListQuerySchema } from '@/lib/schemas/bench-work';
+
+export const GET: APIRoute = async ({ locals, url }) => {
+  const user = locals.user;
+  if (!user) return apiError('unauthorised', 'Sign in to see your job sheets.');
+  if (!can(user, 'own_job_sheets')) return apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.');
+  const query = parseSearchParams(jobSheetListQuerySchema, url);
+  if (!query.ok) return query.response;
+  return json({ jobSheets: await listJobSheets(user.id, query.data) }, { cache: 'private' });
+};
+
+export const POST: APIRoute = async ({ locals, request }) => {
+  const user = locals.user;
+  if (!user) return apiError('unauthorised', 'Sign in to open a job sheet.');
+  if (!can(user, 'own_job_sheets')) return apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.');
+  const body = await readBenchBody(request);
+  if (body.kind === 'error') return body.response === 'too_large' ? apiError('payload_too_large', 'That job sheet is too large.') : apiError('unsupported_media_type', 'Send the job sheet as JSON.');
+  if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send the job sheet as JSON; the form on /jobs/new posts to its own page.');
+  const parsed = jobSheetCreateSchema.safeParse(body.data);
+  if (!parsed.success) return apiError('bad_request', 'Some fields of the job sheet are not valid.', fieldErrors(parsed.error));
+  const created = await createJobSheet(user.id, parsed.data);
+  if (!created.ok) return apiError(created.code, created.message, created.fields);
+  return json({ jobSheet: await getJobSheet(user.id, created.value) }, { status: 201, cache: 'private', headers: { Location: `/api/v1/job-sheets/${created.value}` } });
+};

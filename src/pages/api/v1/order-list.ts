@@ -1,0 +1,44 @@
+// GET/PUT /api/v1/order-list: the signed-in member's saved order list (GET ?format=csv answers the CSV).
+import type { APIRoute } from 'astro';
+import { z } from 'zod';
+import { storedListCsv, storedListSchema } from '@/islands/tools/model/order-list';
+import { apiError, json, parseSearchParams } from '@/server/http';
+import { getOrderList, saveOrderList } from '@/server/order-lists';
+import { schemaError } from '@/server/tools/api-errors';
+import { csvResponse } from '@/server/tools/csv-response';
+import { orderListOwner, sessionUser } from '@/server/tools/member';
+import { readJsonBody } from '@/server/tools/request-body';
+
+const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
+
+const EXAMPLE = '{ "lines": [{ "key": "capacitance:470 µF 16 V", "label": "470 µF 16 V", "kind": "capacitor", "quantity": 2, "spares": 1 }] }';
+
+/** 401 when signed out, 403 when the account may not keep one yet (e-mail not confirmed). */
+function refusal(locals: App.Locals): Response {
+  return sessionUser(locals)
+    ? apiError('forbidden', 'Confirm your e-mail address to keep an order list on your account; until then it stays in this browser.')
+    : apiError('unauthorised', 'Sign in to keep an order list on your account; without an account it stays in this browser.');
+}
+
+export const GET: APIRoute = async ({ locals, url }) => {
+  const owner = orderListOwner(locals);
+  if (!owner) return refusal(locals);
+  const query = parseSearchParams(querySchema, url);
+  if (!query.ok) return query.response;
+  const list = await getOrderList(owner.id);
+  if (query.data.format === 'csv') return csvResponse(storedListCsv(list.lines), 'order-list.csv');
+  return json({ name: list.name, lines: list.lines, updatedAt: list.updatedAt }, { cache: 'private' });
+};
+
+export const PUT: APIRoute = async ({ locals, request }) => {
+  const owner = orderListOwner(locals);
+  if (!owner) return refusal(locals);
+  const body = await readJsonBody(request);
+  if (!body.ok) return body.response;
+  const parsed = storedListSchema.safeParse(body.value);
+  if (!parsed.success) return schemaError(parsed.error, EXAMPLE);
+  const keys = new Set(parsed.data.lines.map((l) => l.key));
+  if (keys.size !== parsed.data.lines.length) return apiError('bad_request', 'Two lines have the same key; merge them first.', { lines: ['Each key once.'] });
+  const saved = await saveOrderList(owner.id, parsed.data.lines);
+  return json({ name: saved.name, lines: saved.lines, updatedAt: saved.updatedAt }, { cache: 'private' });
+};

@@ -1,0 +1,19 @@
+// POST /api/v1/proofing/:id/proof: a moderator proofs a waiting revision; it goes live. Never the moderator's own.
+import type { APIRoute } from 'astro';
+import { can } from '@/lib/permissions';
+import { apiError } from '@/server/http';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { proofRevision } from '@/server/proofing';
+import { failureResponse } from '@/server/proofing-types';
+
+export const POST: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'proof')) return apiError('forbidden', 'Only moderators proof revisions.');
+  const id = idParam(params.id);
+  if (!id) return apiError('not_found', 'There is no such revision.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const note = (input.data as Record<string, unknown> | null)?.note ?? '';
+  return answer(await proofRevision(user, id, note), input, { back: `/proofing/${id}`, done: '/proofing?proofed=1' });
+};

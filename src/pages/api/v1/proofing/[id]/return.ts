@@ -1,0 +1,19 @@
+// POST /api/v1/proofing/:id/return: a moderator returns a waiting revision to its author with a note (required).
+import type { APIRoute } from 'astro';
+import { can } from '@/lib/permissions';
+import { apiError } from '@/server/http';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { returnRevision } from '@/server/proofing';
+import { failureResponse } from '@/server/proofing-types';
+
+export const POST: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'proof')) return apiError('forbidden', 'Only moderators return revisions.');
+  const id = idParam(params.id);
+  if (!id) return apiError('not_found', 'There is no such revision.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const note = (input.data as Record<string, unknown> | null)?.note;
+  return answer(await returnRevision(user, id, note), input, { back: `/proofing/${id}`, done: '/proofing?returned=1' });
+};

@@ -1,0 +1,22 @@
+// POST /api/v1/proofing/fixes/:slug: a moderator locks or unlocks a fix against edits, or hides or shows it.
+import type { APIRoute } from 'astro';
+import { can } from '@/lib/permissions';
+import { slugSchema } from '@/lib/schemas/slug';
+import { apiError, fieldErrors } from '@/server/http';
+import { fixFlagSchema, setFixFlag } from '@/server/locks';
+import { answer, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { failureResponse, refuse } from '@/server/proofing-types';
+
+export const POST: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'lock_fix')) return apiError('forbidden', 'Only moderators lock or hide fixes.');
+  const slug = slugSchema.safeParse(params.slug);
+  if (!slug.success) return apiError('not_found', 'There is no such fix.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const body = fixFlagSchema.safeParse(input.data);
+  const back = '/proofing#fixes';
+  if (!body.success) return answer(refuse('bad_request', 'Choose what to do with the fix.', fieldErrors(body.error)), input, { back });
+  return answer(await setFixFlag(user, slug.data, body.data), input, { back, done: `/proofing?fix=${body.data.action}#fixes` });
+};

@@ -1,0 +1,22 @@
+// POST /api/v1/revisions/:id/amend: a new draft continuing a returned (or waiting) revision; the original stays as it is.
+import type { APIRoute } from 'astro';
+import { can } from '@/lib/permissions';
+import { apiError } from '@/server/http';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { amendRevision } from '@/server/proofing-submit';
+import { failureResponse, succeed } from '@/server/proofing-types';
+import { editorPath, safeBack } from '@/server/proofing-paths';
+
+export const POST: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
+  const id = idParam(params.id);
+  if (!id) return apiError('not_found', 'There is no such revision.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  const outcome = await amendRevision(user, id);
+  if (!outcome.ok) return answer(outcome, input, { back: safeBack((input.data as Record<string, unknown>).back, '/write/mine') });
+  const path = editorPath(outcome.value.revision);
+  return answer(succeed({ ...outcome.value, editorPath: path }), input, { status: 201, back: '/write/mine', done: path });
+};

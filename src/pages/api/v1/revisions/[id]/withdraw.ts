@@ -1,0 +1,16 @@
+// POST /api/v1/revisions/:id/withdraw: the author takes back a revision that waits for proofing.
+import type { APIRoute } from 'astro';
+import { apiError } from '@/server/http';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
+import { withdrawRevision } from '@/server/proofing-submit';
+import { failureResponse } from '@/server/proofing-types';
+
+export const POST: APIRoute = async ({ params, request, locals }) => {
+  const user = requireUser(locals);
+  if (user instanceof Response) return user;
+  const id = idParam(params.id);
+  if (!id) return apiError('not_found', 'There is no such revision among yours.');
+  const input = await readInput(request);
+  if (isFailure(input)) return failureResponse(input);
+  return answer(await withdrawRevision(user, id), input, { back: '/write/mine', done: '/write/mine?withdrawn=1' });
+};

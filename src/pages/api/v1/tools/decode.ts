@@ -1,0 +1,25 @@
+// GET/POST /api/v1/tools/decode: a parts row's value (and rating, kind) read into its canonical spec.
+import type { APIRoute } from 'astro';
+import { decodePart, decodeQuerySchema } from '@/islands/tools/model/value-decoder';
+import { json } from '@/server/http';
+import { schemaError, toolInputError } from '@/server/tools/api-errors';
+import { readJsonBody } from '@/server/tools/request-body';
+
+const EXAMPLE = '{ "value": "470uF", "rating": "16V 105C low-ESR", "kind": "capacitor" }';
+
+function decode(input: unknown, cache: 'public' | 'private'): Response {
+  const parsed = decodeQuerySchema.safeParse(input);
+  if (!parsed.success) return schemaError(parsed.error, EXAMPLE);
+  const { value, rating, kind } = parsed.data;
+  const decoded = decodePart(value, rating, kind);
+  if (!decoded.ok) return toolInputError(decoded.field, decoded.error);
+  return json({ value, rating, kind: kind ?? null, canonical: decoded.spec.label, key: decoded.spec.key, spec: decoded.spec }, { cache });
+}
+
+export const GET: APIRoute = ({ url }) => decode(Object.fromEntries(url.searchParams), 'public');
+
+export const POST: APIRoute = async ({ request }) => {
+  const body = await readJsonBody(request);
+  if (!body.ok) return body.response;
+  return decode(body.value, 'private');
+};

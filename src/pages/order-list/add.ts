@@ -1,0 +1,47 @@
+// POST /order-list/add: the fix page's plain HTML "add to order list" forms (one part or all parts of a revision).
+/*
+  Signed-in members: the rows are merged into their saved list, then 303 to /order-list?added=n.
+  Everyone else: 303 to /order-list?add=<rows as base64url JSON>; the order-list page merges them into the
+  list kept in the browser and cleans the address. Problems answer 303 to /order-list?problem=<code>.
+*/
+import type { APIRoute } from 'astro';
+import { z } from 'zod';
+import { slugSchema } from '@/lib/schemas/slug';
+import { encodeAddRows, MAX_ADD_PAYLOAD } from '@/islands/tools/model/order-list';
+import { addToOrderList, fixPartsForOrder } from '@/server/order-lists';
+import { orderListOwner } from '@/server/tools/member';
+import { readFormBody } from '@/server/tools/request-body';
+
+const emptyToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v);
+
+const addFormSchema = z.object({
+  fix: slugSchema,
+  r: z.preprocess(emptyToUndefined, z.coerce.number().int().min(1).max(100_000).optional()),
+  row: z.union([z.literal('all'), z.coerce.number().int().min(0).max(999)]),
+});
+
+function back(problem: string): Response {
+  return new Response(null, { status: 303, headers: { Location: `/order-list?problem=${problem}`, 'Cache-Control': 'no-store' } });
+}
+
+function to(location: string): Response {
+  return new Response(null, { status: 303, headers: { Location: location, 'Cache-Control': 'no-store' } });
+}
+
+export const POST: APIRoute = async ({ request, locals }) => {
+  const body = await readFormBody(request);
+  if (!body.ok) return back('bad-form');
+  const form = addFormSchema.safeParse(Object.fromEntries(body.value));
+  if (!form.success) return back('bad-form');
+  const parts = await fixPartsForOrder(form.data.fix, form.data.r, form.data.row);
+  if (!parts) return back('not-found');
+  const from = `from=${encodeURIComponent(parts.slug)}`;
+  const owner = orderListOwner(locals);
+  if (owner) {
+    const saved = await addToOrderList(owner.id, parts.rows);
+    return saved.ok ? to(`/order-list?added=${parts.rows.length}&${from}`) : back('not-decoded');
+  }
+  const payload = encodeAddRows(parts.rows);
+  if (payload.length > MAX_ADD_PAYLOAD) return back('too-many');
+  return to(`/order-list?add=${payload}&${from}`);
+};

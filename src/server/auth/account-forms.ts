@@ -1,0 +1,73 @@
+// The account page's forms: profile, password, confirmation mail, signing out everywhere, deleting the account.
+import { deleteAccountSchema, passwordChangeSchema, profileSchema } from '@/lib/schemas/account';
+import type { SessionUser } from '@/lib/permissions';
+import { fieldErrors } from '../http';
+import { check, consume } from '../rate-limit';
+import { resendConfirmation } from './email-verification';
+import { withoutEmpty } from './form-data';
+import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';
+import { anonymiseAccount } from './delete-account';
+import { passwordWeaknesses } from './password-strength';
+import { hashPassword, verifyPassword } from './passwords';
+import { endAllSessions, findUserById, setPassword, updateProfile } from './users';
+
+export const accountIntents = ['profile', 'password', 'resend-confirmation', 'sign-out-everywhere', 'delete'] as const;
+export type AccountIntent = (typeof accountIntents)[number];
+
+/** A form that asks for the current password counts a wrong one like a failed sign-in. */
+async function currentPasswordMatches(userId: number, email: string, password: string | undefined, clientKey: string): Promise<FormOutcome | null> {
+  const row = await findUserById(userId);
+  if (!row?.password_hash) return null;
+  const limit = await check('sign_in_failure', clientKey, email);
+  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  if (password && (await verifyPassword(row.password_hash, password))) return null;
+  await consume('sign_in_failure', clientKey, email);
+  return invalid({ currentPassword: ['That is not your current password.'] });
+}
+
+async function changeProfile(user: SessionUser, fields: Record<string, string>): Promise<FormOutcome> {
+  const parsed = profileSchema.safeParse(withoutEmpty(fields, ['shopName']));
+  if (!parsed.success) return invalid(fieldErrors(parsed.error));
+  await updateProfile(user.id, parsed.data);
+  return redirectTo('/account?notice=profile-saved');
+}
+
+async function changePassword(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
+  const parsed = passwordChangeSchema.safeParse(withoutEmpty(fields, ['currentPassword']));
+  if (!parsed.success) return invalid(fieldErrors(parsed.error));
+  const wrong = await currentPasswordMatches(user.id, user.email, parsed.data.currentPassword, clientKey);
+  if (wrong) return wrong;
+  const weaknesses = passwordWeaknesses(parsed.data.newPassword, [user.name, user.email, user.shopName ?? '']);
+  if (weaknesses.length > 0) return invalid({ newPassword: weaknesses });
+  // Every session ends, this one included: sign in again with the new password.
+  await setPassword(user.id, await hashPassword(parsed.data.newPassword));
+  return redirectTo('/sign-in?notice=password-changed');
+}
+
+async function deleteAccount(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
+  const parsed = deleteAccountSchema.safeParse(withoutEmpty(fields, ['password']));
+  if (!parsed.success) return invalid(fieldErrors(parsed.error));
+  const wrong = await currentPasswordMatches(user.id, user.email, parsed.data.password, clientKey);
+  if (wrong) return wrong.kind === 'form' && wrong.fields.currentPassword ? invalid({ password: wrong.fields.currentPassword }) : wrong;
+  const deleted = await anonymiseAccount(user.id, user.id);
+  if (!deleted) return refused(409, 'This account has already been deleted.');
+  return redirectTo('/account/deleted');
+}
+
+export async function handleAccountForm(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
+  switch (fields.intent) {
+    case 'profile':
+      return changeProfile(user, fields);
+    case 'password':
+      return changePassword(user, fields, clientKey);
+    case 'resend-confirmation':
+      return resendConfirmation(user, clientKey);
+    case 'sign-out-everywhere':
+      await endAllSessions(user.id);
+      return redirectTo('/sign-in?notice=signed-out-everywhere');
+    case 'delete':
+      return deleteAccount(user, fields, clientKey);
+    default:
+      return invalid({ intent: ['Choose one of the forms on this page.'] }, 'This form was not recognised.');
+  }
+}

@@ -1,0 +1,65 @@
+// The middleware's guard: looks the route up in route-access.ts and answers 401/redirect, 403 or 405 before any page runs.
+import { can, type SessionUser } from '@/lib/permissions';
+import { json } from '../http';
+import { logger } from '../logger';
+import { decideRoute, type Access } from '../route-access';
+import { forbiddenPage, notServedPage, unlistedPage } from './guard-pages';
+
+interface GuardContext {
+  routePattern: string;
+  request: Request;
+  url: URL;
+}
+
+function isApi(pattern: string): boolean {
+  return pattern.startsWith('/api/');
+}
+
+function errorJson(status: number, code: string, message: string, headers: Record<string, string> = {}): Response {
+  return json({ error: { code, message } }, { status, cache: 'private', headers });
+}
+
+function html(status: number, body: string, headers: Record<string, string> = {}): Response {
+  return new Response(body, { status, headers: { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'private, no-store', ...headers } });
+}
+
+/** Pages send the reader to sign in and back; a form post comes back to its page, not to a POST. */
+function signInRedirect(context: GuardContext): Response {
+  const safeMethod = context.request.method === 'GET' || context.request.method === 'HEAD';
+  const next = safeMethod ? `${context.url.pathname}${context.url.search}` : context.url.pathname;
+  const location = `/sign-in?${new URLSearchParams({ next })}`;
+  return new Response(null, { status: safeMethod ? 302 : 303, headers: { Location: location, 'Cache-Control': 'private, no-store' } });
+}
+
+function denied(context: GuardContext, user: SessionUser | null): Response {
+  const api = isApi(context.routePattern);
+  if (!user) return api ? errorJson(401, 'unauthorised', 'Sign in to do this.') : signInRedirect(context);
+  if (api) {
+    const message = user.verified ? 'Your account may not do this.' : 'Confirm your e-mail address first: your account page can send the mail again.';
+    return errorJson(403, 'forbidden', message);
+  }
+  return html(403, forbiddenPage(user));
+}
+
+function allowed(access: Access, user: SessionUser | null): boolean {
+  if (access === 'public') return true;
+  if (access === 'closed') return false;
+  return can(user, access);
+}
+
+/** A response when the request may not go on; null when it may. */
+export function guardRequest(context: GuardContext, user: SessionUser | null): Response | null {
+  const decision = decideRoute(context.routePattern, context.request.method);
+  const api = isApi(context.routePattern);
+  if (decision.kind === 'unlisted') {
+    logger().error({ route: context.routePattern }, 'route missing from src/server/route-access.ts: refused');
+    const message = `The route ${context.routePattern} has no entry in src/server/route-access.ts.`;
+    return api ? errorJson(403, 'forbidden', message) : html(403, unlistedPage());
+  }
+  if (decision.kind === 'method_not_allowed' || decision.access === 'closed') {
+    const allow = decision.kind === 'method_not_allowed' ? decision.allow : ['GET', 'HEAD'];
+    const headers = { Allow: allow.join(', ') };
+    return api ? errorJson(405, 'method_not_allowed', 'This address does not take that method.', headers) : html(405, notServedPage(), headers);
+  }
+  return allowed(decision.access, user) ? null : denied(context, user);
+}

@@ -1,0 +1,33 @@
+// The e-mailed sign-in link (Auth.js's Nodemailer provider): what to send, and where the link lands.
+import { config } from '../config';
+import { sendInBackground } from '../mail/send';
+import { noAccountMail, signInLinkMail } from '../mail/templates';
+import { findUserByEmail } from './users';
+
+/** A sign-in link works once and for 15 minutes. */
+export const SIGN_IN_LINK_SECONDS = 15 * 60;
+
+/**
+ * The mail points at our own page, which shows a button: a mail scanner that follows every link then
+ * cannot use the one-time link up (or sign itself in) before its owner does.
+ */
+export function landingUrl(authUrl: string, origin: string = config().PUBLIC_ORIGIN): string {
+  const source = new URL(authUrl);
+  const landing = new URL('/sign-in/link', origin);
+  for (const key of ['token', 'email', 'callbackUrl']) {
+    const value = source.searchParams.get(key);
+    if (value !== null) landing.searchParams.set(key, value);
+  }
+  return landing.href;
+}
+
+/** Sends a link to an active account, a short note to an address with no account, nothing to a suspended one. */
+export async function sendSignInLink(params: { identifier: string; url: string }): Promise<void> {
+  const user = await findUserByEmail(params.identifier);
+  if (!user) {
+    sendInBackground(noAccountMail(params.identifier, 'a sign-in link', new URL('/sign-up', config().PUBLIC_ORIGIN).href));
+    return;
+  }
+  if (user.suspended_at) return;
+  sendInBackground(signInLinkMail(user.email, landingUrl(params.url)));
+}

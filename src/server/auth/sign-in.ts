@@ -1,0 +1,42 @@
+// The sign-in page's two forms: password (Credentials) and "e-mail me a link" (Nodemailer), rate-limited.
+import { emailRequestSchema, signInSchema } from '@/lib/schemas/account';
+import { fieldErrors } from '../http';
+import { check, consume, forgive } from '../rate-limit';
+import { signInWithPassword, requestSignInLink } from './auth-js';
+import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';
+
+interface Asker {
+  origin: string;
+  clientKey: string;
+}
+
+export async function passwordSignIn(fields: Record<string, string>, asker: Asker): Promise<FormOutcome> {
+  const parsed = signInSchema.safeParse(fields);
+  if (!parsed.success) return invalid(fieldErrors(parsed.error));
+  const { email, password, next = '/' } = parsed.data;
+  // Failures only are counted; once either count is used up, even the right password waits.
+  const limit = await check('sign_in_failure', asker.clientKey, email);
+  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const outcome = await signInWithPassword(asker.origin, email, password, next);
+  if (outcome.ok) {
+    await forgive('sign_in_failure', email);
+    return redirectTo(outcome.location, outcome.setCookies);
+  }
+  if (outcome.code === 'suspended') {
+    return refused(403, 'This account is suspended and cannot sign in. If you think this is a mistake, the house rules say how to ask the moderators to look again.');
+  }
+  await consume('sign_in_failure', asker.clientKey, email);
+  // One message for an unknown address and a wrong password alike.
+  return refused(401, 'That e-mail address and password do not match an account. Check both, or use a sign-in link instead.');
+}
+
+export async function linkRequest(fields: Record<string, string>, asker: Asker): Promise<FormOutcome> {
+  const parsed = emailRequestSchema.safeParse(fields);
+  if (!parsed.success) return invalid(fieldErrors(parsed.error));
+  const { email, next = '/' } = parsed.data;
+  const limit = await consume('email_request', asker.clientKey, email);
+  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const outcome = await requestSignInLink(asker.origin, email, next);
+  if (!outcome.ok) return refused(500, 'The sign-in link could not be prepared. Please try again in a moment.');
+  return redirectTo('/sign-in/link-sent');
+}

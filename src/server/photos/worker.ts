@@ -1,0 +1,47 @@
+// Runs photo work inside the app process: renditions soon after each upload, abandoned uploads once an hour.
+import { db } from '../db';
+import { logger } from '../logger';
+import { cleanupAbandonedPhotos } from './cleanup';
+import { processPendingPhotos } from './processing';
+
+const SWEEP_MS = 15_000;
+const CLEANUP_MS = 60 * 60_000;
+
+let started = false;
+let running: Promise<void> | null = null;
+let kickedMeanwhile = false;
+
+async function drain(): Promise<void> {
+  do {
+    kickedMeanwhile = false;
+    try {
+      await processPendingPhotos(db());
+    } catch (error) {
+      logger().error({ err: error }, 'photo processing failed');
+    }
+  } while (kickedMeanwhile);
+}
+
+/** Processes pending photos now; a kick during a run makes it look once more, so no upload waits for the sweep. */
+export function kickPhotoWork(): Promise<void> {
+  if (running) {
+    kickedMeanwhile = true;
+    return running;
+  }
+  running = drain().finally(() => {
+    running = null;
+  });
+  return running;
+}
+
+/** Starts the periodic sweep and cleanup once per process; timers never keep the process alive. */
+export function ensurePhotoWorker(): void {
+  if (started) return;
+  started = true;
+  setInterval(() => void kickPhotoWork(), SWEEP_MS).unref();
+  setInterval(() => {
+    cleanupAbandonedPhotos(db())
+      .then(({ removed }) => removed.length && logger().info({ count: removed.length }, 'abandoned photos removed'))
+      .catch((error: unknown) => logger().error({ err: error }, 'photo cleanup failed'));
+  }, CLEANUP_MS).unref();
+}

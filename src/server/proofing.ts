@@ -1,0 +1,139 @@
+// The proofing desk: revisions waiting for a moderator, and proofing (it goes live) or returning (with a note).
+import type { Knex } from 'knex';
+import { z } from 'zod';
+import { can } from '@/lib/permissions';
+import { submissionIssues } from '@/lib/schemas/fix-draft';
+import { db } from './db';
+import { writeAudit } from './proofing-audit';
+import { notifyAuthor } from './proofing-mail';
+import { publishRevision } from './proofing-publish';
+import { issuesToFields, refuse, succeed, type Outcome, type Writer } from './proofing-types';
+import { loadRevision, type RevisionRecord } from './revisions';
+
+export interface DeskEntry {
+  revisionId: number;
+  number: number;
+  title: string;
+  /** True for the first revision of a fix that has never been live. */
+  isNewFix: boolean;
+  fixSlug: string | null;
+  machines: string[];
+  authorId: number;
+  authorName: string;
+  submittedAt: Date;
+  /** The fix went live with another revision after this one was written: it cannot be proofed as it is. */
+  staleBase: boolean;
+  /** The waiting revision this one amends, when a moderator amended it. */
+  amendsNumber: number | null;
+}
+
+/** Every revision waiting for proofing, oldest first. */
+export async function listWaitingRevisions(): Promise<DeskEntry[]> {
+  const knex = db();
+  const rows = await knex('revisions as r')
+    .join('fixes as f', 'f.id', 'r.fix_id')
+    .join('users as a', 'a.id', 'r.author_id')
+    .leftJoin('revisions as am', 'am.id', 'r.amends_revision_id')
+    .where('r.state', 'submitted')
+    .whereNull('f.deleted_at')
+    .orderBy('r.submitted_at', 'asc')
+    .limit(500)
+    .select(
+      'r.id',
+      'r.number',
+      'r.title',
+      'r.author_id',
+      'r.submitted_at',
+      'r.parent_revision_id',
+      'f.slug',
+      'f.current_revision_id',
+      'a.name as author_name',
+      'am.number as amends_number',
+      knex.raw(
+        `ARRAY(SELECT mk.name || ' ' || m.model_number || ' (' || m.region || ')' FROM revision_machines rm JOIN machines m ON m.id = rm.machine_id
+           JOIN makers mk ON mk.id = m.maker_id WHERE rm.revision_id = r.id ORDER BY 1) AS machines`,
+      ),
+    );
+  return rows.map((r) => ({
+    revisionId: r.id,
+    number: r.number,
+    title: r.title,
+    isNewFix: r.current_revision_id === null,
+    fixSlug: r.current_revision_id ? r.slug : null,
+    machines: r.machines,
+    authorId: r.author_id,
+    authorName: r.author_name ?? 'a former member',
+    submittedAt: r.submitted_at,
+    staleBase: r.parent_revision_id !== r.current_revision_id,
+    amendsNumber: r.amends_number ?? null,
+  }));
+}
+
+export const proofNoteSchema = z.string().trim().max(2000, 'The note is at most 2000 characters.');
+export const returnNoteSchema = proofNoteSchema.pipe(z.string().min(1, 'Say what the author should change: a returned revision always carries a note.'));
+
+type Decision = 'proof' | 'return';
+
+/** Locks the revision and its fix and checks the moderator may decide on it now. */
+async function decidable(trx: Knex.Transaction, moderator: Writer, revisionId: number, decision: Decision): Promise<Outcome<RevisionRecord>> {
+  const locked = await trx('revisions').where({ id: revisionId }).forUpdate().first('id', 'fix_id');
+  if (!locked) return refuse('not_found', 'There is no such revision.');
+  await trx('fixes').where({ id: locked.fix_id }).forUpdate().first('id');
+  const revision = await loadRevision(trx, revisionId);
+  if (!revision) return refuse('not_found', 'There is no such revision.');
+  if (revision.state !== 'submitted') return refuse('conflict', `This revision is already ${revision.state}; another moderator may have decided on it.`);
+  if (!can(moderator, 'proof', { authorId: revision.authorId })) {
+    return refuse('forbidden', revision.authorId === moderator.id ? 'Nobody proofs their own revision: another moderator decides on this one.' : 'Only moderators proof revisions.');
+  }
+  if (decision === 'proof' && revision.baseRevisionId !== revision.liveRevisionId) {
+    return refuse('conflict', 'The fix went live with another revision after this one was written. Return it so the author can carry their text over onto the live one.');
+  }
+  return succeed(revision);
+}
+
+/** Proofs a waiting revision: it becomes the live text of its fix, the author is told. */
+export async function proofRevision(moderator: Writer, revisionId: number, rawNote: unknown = ''): Promise<Outcome<{ slug: string }>> {
+  const note = proofNoteSchema.safeParse(rawNote ?? '');
+  if (!note.success) return refuse('bad_request', 'The note is not valid.', { note: note.error.issues.map((i) => i.message) });
+  const knex = db();
+  let record: RevisionRecord | null = null;
+  const outcome = await knex.transaction(async (trx): Promise<Outcome<{ slug: string }>> => {
+    const checked = await decidable(trx, moderator, revisionId, 'proof');
+    if (!checked.ok) return checked;
+    record = checked.value;
+    const issues = submissionIssues(record.values);
+    if (issues.length) return refuse('bad_request', 'This revision does not meet the rules for going live; return it with a note.', issuesToFields(issues));
+    await trx('revisions')
+      .where({ id: revisionId })
+      .update({ state: 'proofed', proofer_id: moderator.id, proofed_at: trx.fn.now(), proof_note: note.data || null });
+    const published = await publishRevision(trx, record.fixId, revisionId);
+    await writeAudit(trx, { actorId: moderator.id, action: 'revision.proof', subjectType: 'revision', subjectId: revisionId, detail: { fixId: record.fixId, number: record.number } });
+    return succeed(published);
+  });
+  if (outcome.ok && record) {
+    const proofed: RevisionRecord = record;
+    notifyAuthor({ to: proofed.authorEmail, authorName: proofed.authorName, outcome: 'proofed', fixTitle: proofed.values.title, revisionNumber: proofed.number, note: note.data || null, path: `/fixes/${outcome.value.slug}` });
+  }
+  return outcome;
+}
+
+/** Returns a waiting revision to its author with a note; it stays unchanged and visible to them. */
+export async function returnRevision(moderator: Writer, revisionId: number, rawNote: unknown): Promise<Outcome<null>> {
+  const note = returnNoteSchema.safeParse(rawNote ?? '');
+  if (!note.success) return refuse('bad_request', 'A returned revision needs a note for its author.', { note: note.error.issues.map((i) => i.message) });
+  const knex = db();
+  let record: RevisionRecord | null = null;
+  const outcome = await knex.transaction(async (trx): Promise<Outcome<null>> => {
+    const checked = await decidable(trx, moderator, revisionId, 'return');
+    if (!checked.ok) return checked;
+    record = checked.value;
+    await trx('revisions').where({ id: revisionId }).update({ state: 'returned', proofer_id: moderator.id, returned_at: trx.fn.now(), proof_note: note.data });
+    await writeAudit(trx, { actorId: moderator.id, action: 'revision.return', subjectType: 'revision', subjectId: revisionId, detail: { note: note.data } });
+    return succeed(null);
+  });
+  if (outcome.ok && record) {
+    const returned: RevisionRecord = record;
+    notifyAuthor({ to: returned.authorEmail, authorName: returned.authorName, outcome: 'returned', fixTitle: returned.values.title, revisionNumber: returned.number, note: note.data, path: '/write/mine' });
+  }
+  return outcome;
+}

@@ -1,0 +1,97 @@
+// WHERE clauses of the PostgreSQL provider over fix_search (alias s): scope, filters and the query's clauses.
+import type { SearchQuery } from '@/lib/search/query-schema';
+import type { CodeClause } from '@/lib/search/plan';
+import { allOf, anyOf, frag, pgArray, type Fragment } from './sql-fragment';
+import { andQuery, orQuery, type AnalysedQuery, type CompiledTextClause } from './analyse';
+import type { SearchContext } from './context';
+
+/** The named machine's scope: its own fixes and family-wide ones, its whole family, or everything. */
+function scopeCondition(query: SearchQuery, context: SearchContext): Fragment[] {
+  if (context.machineMissing) return [frag('FALSE')];
+  const machine = context.machine;
+  if (!machine || query.scope === 'all') return [];
+  if (query.scope === 'family' && machine.chassisId !== null) return [frag('s.chassis_ids @> ARRAY[?]::int[]', machine.chassisId)];
+  const own = frag('s.machine_ids @> ARRAY[?]::int[]', machine.id);
+  if (machine.chassisId === null) return [own];
+  return [anyOf([own, frag('s.direct_chassis_ids @> ARRAY[?]::int[]', machine.chassisId)])];
+}
+
+export function filterCondition(query: SearchQuery, context: SearchContext, analysed: AnalysedQuery | null): Fragment {
+  const parts: Fragment[] = scopeCondition(query, context);
+  const f = query.filters;
+  if (context.makerId === null || context.chassisId === null) parts.push(frag('FALSE'));
+  if (context.makerId) parts.push(frag('s.maker_ids @> ARRAY[?]::int[]', context.makerId));
+  if (context.chassisId) parts.push(frag('s.chassis_ids @> ARRAY[?]::int[]', context.chassisId));
+  if (f.deviceType) parts.push(frag('s.device_types @> ARRAY[?]::text[]', f.deviceType));
+  if (f.format) parts.push(frag('s.formats @> ARRAY[?]::text[]', f.format));
+  if (f.hasPhotos) parts.push(frag('s.has_photos'));
+  if (f.caution) parts.push(frag('s.caution_kinds @> ARRAY[?]::text[]', f.caution));
+  if (analysed?.excluded) parts.push(frag('NOT (s.document @@ ?::tsquery)', analysed.excluded));
+  return allOf(parts);
+}
+
+export function codeCondition(code: CodeClause): Fragment {
+  return frag('s.code_list && ?::text[]', pgArray([...code.exact, ...code.variants]));
+}
+
+/** Every hard clause, each searched in `column` (the whole document, or doc_a: title and symptoms). */
+export function allClauses(analysed: AnalysedQuery, column: 'document' | 'doc_a', text: CompiledTextClause[] = analysed.hardText, codes: CodeClause[] = analysed.codes): Fragment {
+  const parts: Fragment[] = [];
+  const textQuery = andQuery(text.map((c) => c.any));
+  if (textQuery) parts.push(frag(`s.${column} @@ ?::tsquery`, textQuery));
+  parts.push(...codes.map(codeCondition));
+  return allOf(parts);
+}
+
+/** At least one clause (soft ones included): the widest net, for partial matches. */
+export function anyClause(analysed: AnalysedQuery): Fragment {
+  const parts: Fragment[] = [];
+  const textQuery = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
+  if (textQuery) parts.push(frag('s.document @@ ?::tsquery', textQuery));
+  const codes = analysed.codes.flatMap((c) => [...c.exact, ...c.variants]);
+  if (codes.length) parts.push(frag('s.code_list && ?::text[]', pgArray(codes)));
+  return anyOf(parts);
+}
+
+/**
+ * For each pair of neighbouring text clauses, a query finding them side by side (one stop word may sit
+ * between, as in "won't open", where the dropped "t" keeps its place): "won't open" then outranks
+ * "won't stay open" for the query "tray won't open".
+ */
+export function neighbourQueries(analysed: AnalysedQuery): string[] {
+  const ordered = [...analysed.hardText, ...analysed.softText]
+    .filter((c) => !c.clause.exact)
+    .sort((a, b) => a.clause.position - b.clause.position);
+  const queries: string[] = [];
+  for (let i = 1; i < ordered.length; i++) {
+    const left = ordered[i - 1]?.any;
+    const right = ordered[i]?.any;
+    if (left && right) queries.push(`((${left}) <-> (${right})) | ((${left}) <2> (${right}))`);
+  }
+  return queries;
+}
+
+/**
+ * The clause levels of a row, as an int[]: hard text, codes, soft text, then the neighbour bonuses.
+ * `known` is a boolean SQL expression saying the row already matched every hard clause.
+ */
+export function levelsExpression(analysed: AnalysedQuery, known: string): Fragment {
+  const textLevel = (c: CompiledTextClause, isHard: boolean): Fragment => {
+    const whens: Fragment[] = [];
+    if (c.typed) whens.push(frag('WHEN s.doc_a @@ ?::tsquery THEN 3', c.typed));
+    if (c.alternatives) whens.push(frag('WHEN s.doc_a @@ ?::tsquery THEN 2', c.alternatives));
+    if (isHard) whens.push(frag(`WHEN ${known} THEN 1`));
+    whens.push(frag('WHEN s.document @@ ?::tsquery THEN 1', c.any));
+    return frag(`CASE ${whens.map((w) => w.sql).join(' ')} ELSE 0 END`, ...whens.flatMap((w) => w.bindings));
+  };
+  const codeLevel = (c: CodeClause): Fragment =>
+    frag('CASE WHEN s.code_list && ?::text[] THEN 3 WHEN s.code_list && ?::text[] THEN 2 ELSE 0 END', pgArray(c.exact), pgArray(c.variants));
+  const levels = [
+    ...analysed.hardText.map((c) => textLevel(c, true)),
+    ...analysed.codes.map(codeLevel),
+    ...analysed.softText.map((c) => textLevel(c, false)),
+    ...neighbourQueries(analysed).map((q) => frag('CASE WHEN s.doc_a @@ ?::tsquery THEN 1 ELSE 0 END', q)),
+  ];
+  if (levels.length === 0) return frag(`'{}'::int[]`);
+  return frag(`ARRAY[${levels.map((l) => l.sql).join(', ')}]::int[]`, ...levels.flatMap((l) => l.bindings));
+}

@@ -1,0 +1,106 @@
+// The PostgreSQL search provider: full-text clauses over fix_search, ranked by our own rules.
+import type { Knex } from 'knex';
+import { MAX_PAGE, type SearchQuery } from '@/lib/search/query-schema';
+import { emptyFacets, type SearchResult } from '@/lib/search/result-types';
+import { CODE_WEIGHT, WORD_WEIGHT, proximityOf, rank, relevanceOf, type Rankable } from '@/lib/search/ranking';
+import { analyseQuery, orQuery, type AnalysedQuery } from './analyse';
+import { proximityTarget, resolveContext, type SearchContext } from './context';
+import { COUNT_CAP, fullMatches, partialMatches, type CandidateRow } from './pg-candidates';
+import { allClauses, filterCondition } from './pg-conditions';
+import { facetCounts } from './pg-facets';
+import { hydrateHits } from './hydrate';
+import { frag, pgArray, type Fragment } from './sql-fragment';
+import { refreshFixSearchRow } from './fix-search-row';
+import type { SearchProvider } from './provider-types';
+
+interface Ranked extends Rankable {
+  matchedAll: boolean;
+}
+
+/** Weights of the required clauses in level order: text clauses, then codes. */
+function clauseWeights(analysed: AnalysedQuery): number[] {
+  return [...analysed.hardText.map(() => WORD_WEIGHT), ...analysed.codes.map(() => CODE_WEIGHT)];
+}
+
+function toRanked(rows: CandidateRow[], analysed: AnalysedQuery, context: SearchContext): Ranked[] {
+  const target = proximityTarget(context.machine);
+  const weights = clauseWeights(analysed);
+  const hardCount = weights.length;
+  const fullWeight = weights.reduce((a, b) => a + b, 0);
+  return rows.map((row) => {
+    // Levels past the required clauses are the soft clauses and the side-by-side bonuses.
+    const relevance = relevanceOf(row.levels.slice(0, hardCount), row.levels.slice(hardCount), weights);
+    return {
+      fixId: row.fix_id,
+      relevance,
+      proximity: proximityOf({ machineIds: row.machine_ids, chassisIds: row.chassis_ids, makerIds: row.maker_ids }, target),
+      benchScore: row.bench_score,
+      matchedAll: relevance.matched === fullWeight,
+    };
+  });
+}
+
+export function emptyResult(query: SearchQuery, context: SearchContext | null, analysed: AnalysedQuery | null): SearchResult {
+  return {
+    provider: 'postgres',
+    hits: [],
+    total: 0,
+    totalIsLowerBound: false,
+    page: query.page,
+    perPage: query.perPage,
+    pageCount: 1,
+    facets: emptyFacets(),
+    facetsFromSample: false,
+    corrections: analysed?.plan.corrections ?? [],
+    ignored: analysed?.plan.ignored ?? [],
+    machine: context?.machine?.named ?? null,
+  };
+}
+
+export class PostgresSearchProvider implements SearchProvider {
+  readonly name = 'postgres' as const;
+  constructor(private readonly knex: Knex) {}
+
+  async search(query: SearchQuery): Promise<SearchResult> {
+    const [analysed, context] = await Promise.all([analyseQuery(this.knex, query.text), resolveContext(this.knex, query)]);
+    const browsing = query.text.trim() === '' && (query.machine !== undefined || Object.keys(query.filters).length > 0);
+    if (!analysed.searchable && !browsing) return emptyResult(query, context, analysed);
+
+    const filter = filterCondition(query, context, analysed);
+    const window = query.page * query.perPage;
+    const limit = Math.max(100, window + 20);
+    const hardCount = analysed.hardText.length + analysed.codes.length;
+    const full = await fullMatches(this.knex, analysed, filter, context.machine, limit);
+    let rows = full.rows;
+    let facetMatch: Fragment = frag(`(${filter.sql}) AND (${allClauses(analysed, 'document').sql})`, ...filter.bindings, ...allClauses(analysed, 'document').bindings);
+    let total = full.total;
+    if (full.total < window && hardCount > 0) {
+      const partial = (await partialMatches(this.knex, analysed, filter, limit)).filter((r) => !rows.some((f) => f.fix_id === r.fix_id));
+      rows = [...rows, ...partial];
+      total = Math.min(COUNT_CAP + 1, full.total + partial.length);
+      facetMatch = frag('s.fix_id = ANY(?::int[])', pgArray(rows.map((r) => r.fix_id)));
+    }
+    const ranked = rank(toRanked(rows, analysed, context));
+    const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
+    const headline = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
+    const [hits, facets] = await Promise.all([hydrateHits(this.knex, pageRows, headline), total > 0 ? facetCounts(this.knex, facetMatch) : Promise.resolve(null)]);
+    const shownTotal = Math.min(total, COUNT_CAP);
+    return {
+      ...emptyResult(query, context, analysed),
+      hits,
+      total: shownTotal,
+      totalIsLowerBound: total > COUNT_CAP,
+      pageCount: Math.max(1, Math.min(MAX_PAGE, Math.ceil(shownTotal / query.perPage))),
+      facets: facets?.facets ?? emptyFacets(),
+      facetsFromSample: facets?.capped ?? false,
+    };
+  }
+
+  async index(fixId: number): Promise<void> {
+    await refreshFixSearchRow(this.knex, fixId);
+  }
+
+  async remove(fixId: number): Promise<void> {
+    await this.knex('fix_search').where({ fix_id: fixId }).delete();
+  }
+}
