@@ -45,12 +45,13 @@ const identify = defineMiddleware(async (context, next) => {
 /** An answer that depends on who asked (or clears a cookie) is never kept by a shared cache. */
 const privateWhenSignedIn = defineMiddleware(async (context, next) => {
   const response = editable(await next());
+  const rule = routeAccess[context.routePattern];
   const personal = context.locals.user !== null || sessionWasCleared(context.request);
-  if (personal && !routeAccess[context.routePattern]?.sharedCache) {
+  if ((personal && !rule?.sharedCache) || rule?.noStore) {
     response.headers.set('Cache-Control', 'private, no-store');
   }
   // Signed-in and signed-out readers see different headers on the same address.
-  if (!routeAccess[context.routePattern]?.sharedCache) response.headers.append('Vary', 'Cookie');
+  if (!rule?.sharedCache) response.headers.append('Vary', 'Cookie');
   return response;
 });
 

@@ -2,6 +2,7 @@
 import type { Knex } from 'knex';
 import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
 import { db } from './db';
+import { apiError } from './http';
 import { benchScoresFor, emptyBenchScore, type BenchScoreView } from './bench-scores';
 import { refreshBenchScoreColumns } from './search/bench-score-columns';
 import type { Reading } from '@/lib/schemas/revision';
@@ -205,25 +206,25 @@ export async function checkLimit(name: BenchWorkLimit, key: string): Promise<Lim
 }
 
 /** Bodies of the bench work endpoints: JSON from the API and islands, or a plain HTML form. */
-export type BenchBody = { kind: 'json'; data: unknown } | { kind: 'form'; form: URLSearchParams } | { kind: 'error'; response: 'too_large' | 'unreadable' };
+export type BenchBody = { kind: 'json'; data: unknown } | { kind: 'form'; form: URLSearchParams } | { kind: 'error'; response: Response };
 
 /** Big enough for a job sheet with its parts lines; the adapter itself sets no body limit. */
 export const MAX_BODY_BYTES = 256 * 1024;
 
 export async function readBenchBody(request: Request): Promise<BenchBody> {
   const type = (request.headers.get('content-type') ?? '').toLowerCase();
-  if (Number(request.headers.get('content-length') ?? '0') > MAX_BODY_BYTES) return { kind: 'error', response: 'too_large' };
+  const tooLarge = { kind: 'error', response: apiError('payload_too_large', `The body is larger than ${MAX_BODY_BYTES / 1024} KiB.`) } as const;
+  if (Number(request.headers.get('content-length') ?? '0') > MAX_BODY_BYTES) return tooLarge;
+  const isForm = type.startsWith('application/x-www-form-urlencoded');
+  if (!isForm && !type.startsWith('application/json')) return { kind: 'error', response: apiError('unsupported_media_type', 'Send JSON (application/json) or a plain form.') };
   const text = await readCapped(request, MAX_BODY_BYTES);
-  if (text === null) return { kind: 'error', response: 'too_large' };
-  if (type.startsWith('application/x-www-form-urlencoded')) return { kind: 'form', form: new URLSearchParams(text) };
-  if (type.startsWith('application/json')) {
-    try {
-      return { kind: 'json', data: text.trim() === '' ? {} : JSON.parse(text) };
-    } catch {
-      return { kind: 'error', response: 'unreadable' };
-    }
+  if (text === null) return tooLarge;
+  if (isForm) return { kind: 'form', form: new URLSearchParams(text) };
+  try {
+    return { kind: 'json', data: text.trim() === '' ? {} : JSON.parse(text) };
+  } catch {
+    return { kind: 'error', response: apiError('bad_request', 'The body is not valid JSON.') };
   }
-  return { kind: 'error', response: 'unreadable' };
 }
 
 async function readCapped(request: Request, cap: number): Promise<string | null> {

@@ -69,10 +69,10 @@ export function idParam(value: string | undefined): number | null {
  * Answers a JSON caller with the outcome (or the error shape), and a form post with a 303 back to a page, carrying
  * the message in the query so the page can show it without JavaScript.
  */
-export function answer<T>(outcome: Outcome<T>, input: { form: boolean }, options: { status?: number; back: string; done?: string }): Response {
+export function answer<T>(outcome: Outcome<T>, input: { form: boolean }, options: { status?: number; back: string; done?: string; errorParam?: string }): Response {
   if (input.form) {
     const target = new URL(outcome.ok ? (options.done ?? options.back) : options.back, 'http://local');
-    if (!outcome.ok) target.searchParams.set('error', fieldSummary(outcome));
+    if (!outcome.ok) target.searchParams.set(options.errorParam ?? 'error', fieldSummary(outcome));
     return new Response(null, { status: 303, headers: { Location: `${target.pathname}${target.search}${target.hash}`, 'Cache-Control': 'private, no-store' } });
   }
   if (!outcome.ok) return failureResponse(outcome);

@@ -2,6 +2,8 @@
 import { config } from './config';
 import { escapeHtml } from './render/escape';
 import { sendInBackground, type OutgoingMail } from './mail/send';
+import { db } from './db';
+import { authorEmailOf } from './revisions';
 
 export type ProofingOutcome = 'proofed' | 'returned' | 'amended';
 
@@ -56,4 +58,10 @@ export function authorNoticeMail(n: AuthorNotice): OutgoingMail {
 /** Sends the notice without holding up the moderator's answer; a failure is logged, the proofing stands. */
 export function notifyAuthor(notice: AuthorNotice): void {
   sendInBackground(authorNoticeMail(notice));
+}
+
+/** Looks up the author's address and sends; an author without one (deleted account) is simply not told. */
+export async function notifyAuthorOf(authorId: number, notice: Omit<AuthorNotice, 'to'>): Promise<void> {
+  const to = await authorEmailOf(db(), authorId);
+  if (to) notifyAuthor({ ...notice, to });
 }

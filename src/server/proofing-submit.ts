@@ -5,7 +5,7 @@ import { submissionIssues } from '@/lib/schemas/fix-draft';
 import { db } from './db';
 import { insertDraftRow, ownDraft, saveDraft, writeRevisionContent, type DraftSaved } from './drafts';
 import { writeAudit } from './proofing-audit';
-import { notifyAuthor } from './proofing-mail';
+import { notifyAuthorOf } from './proofing-mail';
 import { issuesToFields, refuse, succeed, type Outcome, type Writer } from './proofing-types';
 import { loadRevision, type RevisionRecord } from './revisions';
 
@@ -72,8 +72,7 @@ export async function submitDraft(writer: Writer, revisionId: number, input: { v
   });
   if (outcome.ok && amendedOriginal) {
     const original: RevisionRecord = amendedOriginal;
-    notifyAuthor({
-      to: original.authorEmail,
+    await notifyAuthorOf(original.authorId, {
       authorName: original.authorName,
       outcome: 'amended',
       fixTitle: original.values.title,

@@ -5,7 +5,7 @@ import { can } from '@/lib/permissions';
 import { submissionIssues } from '@/lib/schemas/fix-draft';
 import { db } from './db';
 import { writeAudit } from './proofing-audit';
-import { notifyAuthor } from './proofing-mail';
+import { notifyAuthorOf } from './proofing-mail';
 import { publishRevision } from './proofing-publish';
 import { issuesToFields, refuse, succeed, type Outcome, type Writer } from './proofing-types';
 import { loadRevision, type RevisionRecord } from './revisions';
@@ -112,7 +112,7 @@ export async function proofRevision(moderator: Writer, revisionId: number, rawNo
   });
   if (outcome.ok && record) {
     const proofed: RevisionRecord = record;
-    notifyAuthor({ to: proofed.authorEmail, authorName: proofed.authorName, outcome: 'proofed', fixTitle: proofed.values.title, revisionNumber: proofed.number, note: note.data || null, path: `/fixes/${outcome.value.slug}` });
+    await notifyAuthorOf(proofed.authorId, { authorName: proofed.authorName, outcome: 'proofed', fixTitle: proofed.values.title, revisionNumber: proofed.number, note: note.data || null, path: `/fixes/${outcome.value.slug}` });
   }
   return outcome;
 }
@@ -133,7 +133,7 @@ export async function returnRevision(moderator: Writer, revisionId: number, rawN
   });
   if (outcome.ok && record) {
     const returned: RevisionRecord = record;
-    notifyAuthor({ to: returned.authorEmail, authorName: returned.authorName, outcome: 'returned', fixTitle: returned.values.title, revisionNumber: returned.number, note: note.data, path: '/write/mine' });
+    await notifyAuthorOf(returned.authorId, { authorName: returned.authorName, outcome: 'returned', fixTitle: returned.values.title, revisionNumber: returned.number, note: note.data, path: '/write/mine' });
   }
   return outcome;
 }

@@ -26,7 +26,6 @@ export interface RevisionRecord {
   amendsRevisionId: number | null;
   authorId: number;
   authorName: string;
-  authorEmail: string;
   prooferName: string | null;
   note: string | null;
   createdAt: string;
@@ -62,6 +61,7 @@ export async function revisionTargets(knex: Knex, revisionIds: number[]): Promis
   return out;
 }
 
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- a raw revisions row from Knex
 function valuesOf(row: Record<string, any>, machineIds: number[], chassisIds: number[], photoIds: number[]): FixDraft {
   return {
     title: row.title,
@@ -97,7 +97,6 @@ export async function loadRevision(knex: Knex, revisionId: number): Promise<Revi
       'f.locked_at',
       'f.hidden_at',
       'a.name as author_name',
-      'a.email as author_email',
       'p.name as proofer_name',
       'base.number as base_number',
     );
@@ -118,7 +117,6 @@ export async function loadRevision(knex: Knex, revisionId: number): Promise<Revi
     amendsRevisionId: row.amends_revision_id,
     authorId: row.author_id,
     authorName: row.author_name ?? 'a former member',
-    authorEmail: row.author_email,
     prooferName: row.proofer_name,
     note: row.proof_note,
     createdAt: iso(row.created_at)!,
@@ -130,6 +128,12 @@ export async function loadRevision(knex: Knex, revisionId: number): Promise<Revi
     chassis,
     photos,
   };
+}
+
+/** Where to tell an author about their revision; kept out of RevisionRecord, which writers and moderators are sent. */
+export async function authorEmailOf(knex: Knex, authorId: number): Promise<string | null> {
+  const row = await knex('users').where({ id: authorId }).whereNull('deleted_at').first('email');
+  return row?.email ?? null;
 }
 
 /** The revision number of a fix by id, or null. */

@@ -19,9 +19,14 @@ export interface RouteRule {
   injected?: true;
   /** The same bytes for everyone (photos, image renditions): shared caches may keep them even for signed-in readers. */
   sharedCache?: true;
+  /** Account pages: never stored by any cache, signed in or not. */
+  noStore?: true;
 }
 
 const read: RouteRule = { methods: { GET: 'public' } };
+/** A public account form and its answer, never cached. */
+const accountForm: RouteRule = { methods: { GET: 'public', POST: 'public' }, noStore: true };
+const accountRead: RouteRule = { methods: { GET: 'public' }, noStore: true };
 
 export const routeAccess: Record<string, RouteRule> = {
   // Reading: open to everyone.
@@ -48,25 +53,48 @@ export const routeAccess: Record<string, RouteRule> = {
   '/api/v1/fixes': read,
   '/api/v1/fixes/[slug]': read,
 
+  // Search: open to everyone; the wanted-fixes list and word families are for editors and above.
+  '/search': read,
+  '/api/v1/search': read,
+  '/api/v1/search/similar': read,
+  '/admin/word-families': { methods: { GET: 'manage_word_families', POST: 'manage_word_families' } },
+  '/admin/wanted-fixes': { methods: { GET: 'curate_catalogue' } },
+
+  // Bench tools and their API: open to everyone. The order list is kept in the browser for readers and on
+  // the server for members; /order-list/add decides which per request, /api/v1/order-list is members' only.
+  '/tools': read,
+  '/tools/value-decoder': read,
+  '/tools/preferred-values': read,
+  '/tools/substitute-check': read,
+  '/tools/esr': read,
+  '/tools/life-estimate': read,
+  '/tools/bleed-down': read,
+  '/order-list': read,
+  '/order-list/add': { methods: { POST: 'public' } },
+  '/api/v1/tools/decode': { methods: { GET: 'public', POST: 'public' } },
+  '/api/v1/tools/substitute': { methods: { POST: 'public' } },
+  '/api/v1/tools/order-list': { methods: { POST: 'public' } },
+  '/api/v1/order-list': { methods: { GET: 'own_order_lists', PUT: 'own_order_lists' } },
+
   // Signing up and in: public forms, rate-limited by their handlers.
-  '/sign-in': { methods: { GET: 'public', POST: 'public' } },
-  '/sign-in/link': read,
-  '/sign-in/link-sent': read,
-  '/sign-in/problem': read,
-  '/sign-up': { methods: { GET: 'public', POST: 'public' } },
-  '/sign-up/check-email': read,
-  '/verify': read,
-  '/reset': { methods: { GET: 'public', POST: 'public' } },
-  '/reset/password': { methods: { GET: 'public', POST: 'public' } },
+  '/sign-in': accountForm,
+  '/sign-in/link': accountRead,
+  '/sign-in/link-sent': accountRead,
+  '/sign-in/problem': accountRead,
+  '/sign-up': accountForm,
+  '/sign-up/check-email': accountRead,
+  '/verify': accountRead,
+  '/reset': accountForm,
+  '/reset/password': accountForm,
 
   // The account.
-  '/account': { methods: { GET: 'manage_account', POST: 'manage_account' } },
-  '/account/sign-out': { methods: { POST: 'public' } },
-  '/account/deleted': read,
-  '/api/v1/account': { methods: { GET: 'manage_account', PATCH: 'manage_account' } },
+  '/account': { methods: { GET: 'manage_account', POST: 'manage_account' }, noStore: true },
+  '/account/sign-out': { methods: { POST: 'public' }, noStore: true },
+  '/account/deleted': accountRead,
+  '/api/v1/account': { methods: { GET: 'manage_account', PATCH: 'manage_account' }, noStore: true },
 
   // Members and roles: moderators suspend; only admins change roles (checked again per form).
-  '/admin/users': { methods: { GET: 'suspend_user', POST: 'suspend_user' } },
+  '/admin/users': { methods: { GET: 'suspend_user', POST: 'suspend_user' }, noStore: true },
 
   // Writing and proofing: verified members write and report; moderators proof (never their own, checked per revision).
   '/write': { methods: { GET: 'write_fix' } },
@@ -111,8 +139,8 @@ export const routeAccess: Record<string, RouteRule> = {
   '/api/v1/job-sheets/[id]/invoice-lines.json': { methods: { GET: 'own_job_sheets' } },
 
   // The local mail sink's pages (they answer 404 in production).
-  '/dev/mail': { methods: { GET: 'view_dev_mail' } },
-  '/dev/mail/[id]': { methods: { GET: 'view_dev_mail' } },
+  '/dev/mail': { methods: { GET: 'view_dev_mail' }, noStore: true },
+  '/dev/mail/[id]': { methods: { GET: 'view_dev_mail' }, noStore: true },
 
   // Auth.js (auth-astro's injected route). Our own pages call it in-process; from outside only its GET
   // endpoints are open (the e-mailed link's callback, csrf, session), so nothing skips our rate limits.

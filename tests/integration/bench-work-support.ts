@@ -131,19 +131,6 @@ export async function proofNewRevision(knex: Knex, fix: TestFix, authorId: numbe
   return rev.id;
 }
 
-/** A signed-in session on the built server: the cookie header to send, from the plain sign-in form. */
-export async function signIn(base: string, email: string, password: string = PASSWORD): Promise<string> {
-  const res = await fetch(`${base}/sign-in`, {
-    method: 'POST',
-    redirect: 'manual',
-    headers: { 'Content-Type': 'application/x-www-form-urlencoded', Origin: base },
-    body: new URLSearchParams({ intent: 'password', email, password, next: '/' }),
-  });
-  const cookies = res.headers.getSetCookie().map((c) => c.split(';')[0] ?? '').filter((c) => c.includes('=') && !c.endsWith('='));
-  if (res.status !== 303 || cookies.length === 0) throw new Error(`Sign-in failed for ${email}: ${res.status} ${await res.text()}`);
-  return cookies.join('; ');
-}
-
 /** Requests as a signed-in member (or signed out with an empty cookie), with the Origin a browser sends. */
 export function as(base: string, cookie: string) {
   const send = (method: string, path: string, body?: unknown, headers: Record<string, string> = {}) =>
@@ -159,5 +146,8 @@ export function as(base: string, cookie: string) {
     patch: (path: string, body: unknown) => send('PATCH', path, body),
     delete: (path: string) => send('DELETE', path),
     form: (path: string, fields: Record<string, string> | [string, string][]) => send('POST', path, new URLSearchParams(fields)),
+    /** A POST with a body and content type exactly as given (for malformed input). */
+    raw: (path: string, body: string, type: string) =>
+      fetch(`${base}${path}`, { method: 'POST', redirect: 'manual', headers: { Origin: base, 'Content-Type': type, ...(cookie ? { Cookie: cookie } : {}) }, body }),
   };
 }

@@ -53,13 +53,23 @@ export function postForm(base: string, path: string, fields: Record<string, stri
   return fetch(`${base}${path}`, { method: 'POST', headers, body: new URLSearchParams(fields), redirect: 'manual' });
 }
 
+function isDeletion(setCookie: string): boolean {
+  return /Expires=Thu, 01 Jan 1970/i.test(setCookie) || /Max-Age=0\b/i.test(setCookie);
+}
+
 /** The cookies a response sets, as a Cookie header value (deleted cookies left out). */
 export function cookiesFrom(response: Response): string {
   return response.headers
     .getSetCookie()
+    .filter((cookie) => !isDeletion(cookie))
     .map((cookie) => cookie.split(';')[0] ?? '')
     .filter((pair) => pair !== '' && !pair.endsWith('='))
     .join('; ');
+}
+
+/** Whether a response tells the browser to forget its session cookie. */
+export function clearsSession(response: Response): boolean {
+  return response.headers.getSetCookie().some((cookie) => cookie.startsWith('authjs.session-token=') && isDeletion(cookie));
 }
 
 /** Signs in with the password form; returns the Cookie header that carries the session. */

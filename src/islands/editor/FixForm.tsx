@@ -12,6 +12,7 @@ import { BodyEditor } from './BodyEditor';
 import { insertFigure } from './body-panels';
 import { CautionsEditor } from './CautionsEditor';
 import { ErrorSummary, type SummaryItem } from './ErrorSummary';
+import { sectionFields, serverFieldItems } from './form-helpers';
 import { Field } from './Field';
 import { ListField } from './ListField';
 import { PartsEditor } from './PartsEditor';
@@ -36,16 +37,22 @@ export function FixForm(props: FixEditorProps) {
   const [baseNote, setBaseNote] = useState<string | null>(props.draft && props.draft.baseRevisionId !== props.draft.liveRevisionId ? 'The live fix changed since this draft was started; submitting will show both versions.' : null);
   const editorRef = useRef<Editor | null>(null);
   const pendingInserts = useRef<PhotoRefData[]>([]);
+  const refsRef = useRef({ machines, chassis, photos });
+  refsRef.current = { machines, chassis, photos };
 
   const autosave = useAutosave({
     initialDraftId: props.draft?.id ?? null,
     fixSlug: props.fixSlug,
     getValues,
+    getRefs: () => refsRef.current,
     onSaved: (saved) => {
       if (!props.fixSlug && !new URLSearchParams(window.location.search).has('draft')) window.history.replaceState(null, '', `/write?draft=${saved.revision.id}`);
       setBaseNote(saved.baseIsStale ? 'The live fix changed since this draft was started; submitting will show both versions.' : null);
     },
-    onRefused: (failure) => setSummary({ title: `Not saved: ${failure.message}`, items: Object.entries(failure.fields).flatMap(([path, messages]) => messages.map((message) => ({ fieldId: `field-${path.split('.')[0]}`, message }))) }),
+    onRefused: (failure) => {
+      for (const [path, messages] of Object.entries(failure.fields)) form.setError(path as never, { type: 'server', message: messages[0] });
+      setSummary({ title: `Not saved: ${failure.message}`, items: serverFieldItems(failure.fields) });
+    },
   });
   const { markEdited } = autosave;
 
@@ -115,7 +122,7 @@ export function FixForm(props: FixEditorProps) {
         <StaleBasePanel
           live={submission.conflict}
           yours={{ values: getValues() as FixDraft, machines, chassis, photos }}
-          onTakeLive={(section) => takeLive(submission.conflict!, submission.fieldsOf(section))}
+          onTakeLive={(section) => takeLive(submission.conflict!, sectionFields[section])}
           onRebase={() => void submission.rebase()}
           busy={submission.busy}
         />

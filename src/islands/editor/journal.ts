@@ -1,5 +1,6 @@
 // The browser's own copy of unsaved edits (localStorage, one entry per fix), so a lost connection or tab loses nothing.
 import type { FixDraftInput } from '@/lib/schemas/fix-draft';
+import type { LabelledRefData, PhotoRefData } from './types';
 
 export interface JournalEntry {
   version: 1;
@@ -7,6 +8,8 @@ export interface JournalEntry {
   editedAt: string;
   draftId: number | null;
   values: FixDraftInput;
+  /** Labels of the machines, chassis families and photos the values name by id. */
+  refs?: { machines: LabelledRefData[]; chassis: LabelledRefData[]; photos: PhotoRefData[] };
 }
 
 export type JournalStore = Pick<Storage, 'getItem' | 'setItem' | 'removeItem'>;

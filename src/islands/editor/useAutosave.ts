@@ -2,7 +2,7 @@
 import { useCallback, useEffect, useReducer, useRef, useState } from 'react';
 import type { FixDraftInput } from '@/lib/schemas/fix-draft';
 import { createDraftRequest, isTransient, saveDraftRequest, type ApiFailure, type SavedDraft } from './api';
-import { clearJournal, journalScope, writeJournal } from './journal';
+import { clearJournal, journalScope, writeJournal, type JournalEntry } from './journal';
 import { initialSaveState, retryDelay, saveReducer, type SaveState } from './save-state';
 
 const DEBOUNCE_MS = 1500;
@@ -11,6 +11,7 @@ interface AutosaveOptions {
   initialDraftId: number | null;
   fixSlug: string | null;
   getValues: () => FixDraftInput;
+  getRefs: () => NonNullable<JournalEntry['refs']>;
   onSaved: (saved: SavedDraft) => void;
   onRefused: (failure: ApiFailure) => void;
 }
@@ -18,6 +19,8 @@ interface AutosaveOptions {
 export interface Autosave {
   state: SaveState;
   draftId: number | null;
+  /** The draft's id right now (state may lag a render behind). */
+  draftIdNow: () => number | null;
   journalFailed: boolean;
   markEdited: () => void;
   /** Saves now; true when the server holds the newest edit afterwards. */
@@ -50,7 +53,7 @@ export function useAutosave(options: AutosaveOptions): Autosave {
 
   const writeLocal = useCallback(() => {
     const store = storage();
-    const ok = store !== null && writeJournal(store, scope(), { version: 1, editedAt: new Date().toISOString(), draftId: draftRef.current, values: opts.current.getValues() });
+    const ok = store !== null && writeJournal(store, scope(), { version: 1, editedAt: new Date().toISOString(), draftId: draftRef.current, values: opts.current.getValues(), refs: opts.current.getRefs() });
     setJournalFailed(!ok);
   }, []);
 
@@ -145,5 +148,6 @@ export function useAutosave(options: AutosaveOptions): Autosave {
     };
   }, [save, writeLocal]);
 
-  return { state, draftId, journalFailed, markEdited, flush, dropJournal };
+  const draftIdNow = useCallback(() => draftRef.current, []);
+  return { state, draftId, draftIdNow, journalFailed, markEdited, flush, dropJournal };
 }

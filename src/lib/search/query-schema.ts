@@ -65,22 +65,27 @@ export function toSearchQuery(params: SearchParams): SearchQuery {
   return query;
 }
 
+/** A search as address parameters (defaults left out), e.g. { q: 'no rewind', machine: '…', maker: '…' }. */
+export function searchParamsOf(query: SearchQuery): Record<string, string> {
+  const params: Record<string, string> = {};
+  if (query.text) params.q = query.text;
+  if (query.machine) params.machine = query.machine;
+  if (query.machine && query.scope !== 'machine') params.scope = query.scope;
+  const f = query.filters;
+  if (f.maker) params.maker = f.maker;
+  if (f.chassis) params.chassis = f.chassis;
+  if (f.deviceType) params.deviceType = f.deviceType;
+  if (f.format) params.format = f.format;
+  if (f.hasPhotos) params.photos = '1';
+  if (f.caution) params.caution = f.caution;
+  if (query.page > 1) params.page = String(query.page);
+  if (query.perPage !== DEFAULT_PER_PAGE) params.perPage = String(query.perPage);
+  return params;
+}
+
 /** The address of a search, for links that change one thing (a facet, the scope, the page). */
-export function searchHref(query: SearchQuery, change: Partial<SearchQuery> & { filters?: SearchFilters } = {}, base = '/search'): string {
+export function searchHref(query: SearchQuery, change: Partial<SearchQuery> = {}, base = '/search'): string {
   const next: SearchQuery = { ...query, ...change, filters: change.filters ?? query.filters };
-  const params = new URLSearchParams();
-  if (next.text) params.set('q', next.text);
-  if (next.machine) params.set('machine', next.machine);
-  if (next.machine && next.scope !== 'machine') params.set('scope', next.scope);
-  const f = next.filters;
-  if (f.maker) params.set('maker', f.maker);
-  if (f.chassis) params.set('chassis', f.chassis);
-  if (f.deviceType) params.set('deviceType', f.deviceType);
-  if (f.format) params.set('format', f.format);
-  if (f.hasPhotos) params.set('photos', '1');
-  if (f.caution) params.set('caution', f.caution);
-  if (next.page > 1) params.set('page', String(next.page));
-  if (next.perPage !== DEFAULT_PER_PAGE) params.set('perPage', String(next.perPage));
-  const search = params.toString();
+  const search = new URLSearchParams(searchParamsOf(next)).toString();
   return search ? `${base}?${search}` : base;
 }

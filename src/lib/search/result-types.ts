@@ -61,6 +61,8 @@ export interface SearchResult {
   /** Fixes found; a lower bound when `totalIsLowerBound` (very broad queries are counted only so far). */
   total: number;
   totalIsLowerBound: boolean;
+  /** How many of `total` match the whole query; the rest match part of it and are listed after. */
+  totalMatchingAll: number;
   page: number;
   perPage: number;
   pageCount: number;

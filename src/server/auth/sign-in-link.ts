@@ -14,10 +14,13 @@ export const SIGN_IN_LINK_SECONDS = 15 * 60;
 export function landingUrl(authUrl: string, origin: string = config().PUBLIC_ORIGIN): string {
   const source = new URL(authUrl);
   const landing = new URL('/sign-in/link', origin);
-  for (const key of ['token', 'email', 'callbackUrl']) {
+  for (const key of ['token', 'email']) {
     const value = source.searchParams.get(key);
     if (value !== null) landing.searchParams.set(key, value);
   }
+  // Auth.js has made the return address absolute; only a path on this site goes into the mail.
+  const callback = new URL(source.searchParams.get('callbackUrl') ?? '/', origin);
+  landing.searchParams.set('callbackUrl', callback.origin === new URL(origin).origin ? `${callback.pathname}${callback.search}` : '/');
   return landing.href;
 }
 

@@ -6,14 +6,17 @@ export const MAX_BODY_BYTES = 256 * 1024;
 
 export type BodyRead<T> = { ok: true; value: T } | { ok: false; response: Response };
 
-function tooLarge(): BodyRead<never> {
-  return { ok: false, response: apiError('payload_too_large', `The body is larger than ${MAX_BODY_BYTES / 1024} kB; send fewer lines at a time.`) };
+/** The unread rest of the body may still be arriving: close the connection rather than let a client reuse it. */
+function tooLarge(limit: number): BodyRead<never> {
+  const response = apiError('payload_too_large', `The body is larger than ${Math.floor(limit / 1024)} kB; send fewer lines at a time.`);
+  response.headers.set('Connection', 'close');
+  return { ok: false, response };
 }
 
 /** Reads the body as text, refusing it as soon as it passes the limit, whatever Content-Length claims. */
 export async function readCappedText(request: Request, limit = MAX_BODY_BYTES): Promise<BodyRead<string>> {
   const declared = Number(request.headers.get('content-length') ?? '0');
-  if (Number.isFinite(declared) && declared > limit) return tooLarge();
+  if (Number.isFinite(declared) && declared > limit) return tooLarge(limit);
   if (!request.body) return { ok: true, value: '' };
   const reader = request.body.getReader();
   const chunks: Uint8Array[] = [];
@@ -24,7 +27,7 @@ export async function readCappedText(request: Request, limit = MAX_BODY_BYTES): 
     size += value.byteLength;
     if (size > limit) {
       await reader.cancel().catch(() => undefined);
-      return tooLarge();
+      return tooLarge(limit);
     }
     chunks.push(value);
   }

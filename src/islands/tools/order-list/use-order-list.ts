@@ -66,8 +66,7 @@ export function useOrderList(mode: ListMode, initialLines: StoredLine[], incomin
     }
     cleanAddress();
     setLoaded(true);
-    // Runs once on load: the props are the server's snapshot.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // Runs once on load: the props are the server's snapshot and never change.
   }, []);
 
   const update = useCallback(

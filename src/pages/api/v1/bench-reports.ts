@@ -30,9 +30,7 @@ export const POST: APIRoute = async ({ locals, request }) => {
   if (!user) return apiError('unauthorised', 'Sign in to record a bench report.');
   if (!can(user, 'bench_report')) return apiError('forbidden', 'Confirm your e-mail address before you record bench reports.');
   const body = await readBenchBody(request);
-  if (body.kind === 'error') {
-    return body.response === 'too_large' ? apiError('payload_too_large', 'That report is too large.') : apiError('unsupported_media_type', 'Send JSON or a form.');
-  }
+  if (body.kind === 'error') return body.response;
   const fromForm = body.kind === 'form';
   const back = fromForm ? safeBackPath(body.form.get('back'), '/') : '/';
   // A form goes back to its page with a message code; the API answers in the one error shape.

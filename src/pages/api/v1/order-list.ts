@@ -6,7 +6,7 @@ import { apiError, json, parseSearchParams } from '@/server/http';
 import { getOrderList, saveOrderList } from '@/server/order-lists';
 import { schemaError } from '@/server/tools/api-errors';
 import { csvResponse } from '@/server/tools/csv-response';
-import { orderListOwner, sessionUser } from '@/server/tools/member';
+import { orderListOwner } from '@/server/tools/member';
 import { readJsonBody } from '@/server/tools/request-body';
 
 const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
@@ -15,7 +15,7 @@ const EXAMPLE = '{ "lines": [{ "key": "capacitance:470 µF 16 V", "label": "470 
 
 /** 401 when signed out, 403 when the account may not keep one yet (e-mail not confirmed). */
 function refusal(locals: App.Locals): Response {
-  return sessionUser(locals)
+  return locals.user
     ? apiError('forbidden', 'Confirm your e-mail address to keep an order list on your account; until then it stays in this browser.')
     : apiError('unauthorised', 'Sign in to keep an order list on your account; without an account it stays in this browser.');
 }

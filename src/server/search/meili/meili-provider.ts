@@ -81,6 +81,7 @@ export class MeiliSearchProvider implements SearchProvider {
       hits,
       total: Math.min(total, MAX_HITS),
       totalIsLowerBound: total > MAX_HITS,
+      totalMatchingAll: Math.min(total, MAX_HITS),
       pageCount: Math.max(1, Math.min(MAX_PAGE, Math.ceil(Math.min(total, MAX_HITS) / query.perPage))),
       facets,
     };

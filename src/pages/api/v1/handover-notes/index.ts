@@ -24,6 +24,7 @@ export const POST: APIRoute = async ({ locals, request }) => {
     return response;
   }
   const body = await readBenchBody(request);
+  if (body.kind === 'error') return body.response;
   if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send the note as JSON; the form on /notes/new posts to its own page.');
   const parsed = handoverNoteInputSchema.safeParse(body.data);
   if (!parsed.success) return apiError('bad_request', 'Some fields of the note are not valid.', fieldErrors(parsed.error));

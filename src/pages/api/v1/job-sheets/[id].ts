@@ -16,7 +16,7 @@ export const PATCH: APIRoute = async ({ locals, params, request }) => {
   const job = jobSheetRequest(locals.user, params.id);
   if (!job.ok) return job.response;
   const body = await readBenchBody(request);
-  if (body.kind === 'error' && body.response === 'too_large') return apiError('payload_too_large', 'That job sheet is too large.');
+  if (body.kind === 'error') return body.response;
   if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send the changes as JSON.');
   const parsed = jobSheetPatchSchema.safeParse(body.data);
   if (!parsed.success) return apiError('bad_request', 'Some fields of the job sheet are not valid.', fieldErrors(parsed.error));

@@ -20,7 +20,7 @@ export const POST: APIRoute = async ({ locals, request }) => {
   if (!user) return apiError('unauthorised', 'Sign in to open a job sheet.');
   if (!can(user, 'own_job_sheets')) return apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.');
   const body = await readBenchBody(request);
-  if (body.kind === 'error') return body.response === 'too_large' ? apiError('payload_too_large', 'That job sheet is too large.') : apiError('unsupported_media_type', 'Send the job sheet as JSON.');
+  if (body.kind === 'error') return body.response;
   if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send the job sheet as JSON; the form on /jobs/new posts to its own page.');
   const parsed = jobSheetCreateSchema.safeParse(body.data);
   if (!parsed.success) return apiError('bad_request', 'Some fields of the job sheet are not valid.', fieldErrors(parsed.error));

@@ -11,6 +11,7 @@ export const POST: APIRoute = async ({ locals, params, request }) => {
   const job = jobSheetRequest(locals.user, params.id);
   if (!job.ok) return job.response;
   const body = await readBenchBody(request);
+  if (body.kind === 'error') return body.response;
   if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send { "fix": "<slug>" } as JSON.');
   const parsed = applyFixSchema.safeParse(body.data);
   if (!parsed.success) return apiError('bad_request', 'Name the fix to apply.', fieldErrors(parsed.error));

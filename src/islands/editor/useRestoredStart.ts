@@ -1,0 +1,48 @@
+// Where the form starts: the server's draft (or the live text), unless this browser holds newer unsaved edits.
+import { useState } from 'react';
+import type { FixDraftInput } from '@/lib/schemas/fix-draft';
+import { journalScope, readJournal, shouldRestore } from './journal';
+import type { FixEditorProps, LabelledRefData, PhotoRefData } from './types';
+
+export interface FormStart {
+  values: FixDraftInput;
+  machines: LabelledRefData[];
+  chassis: LabelledRefData[];
+  photos: PhotoRefData[];
+  /** When the restored journal entry was edited; null when the server's copy is used. */
+  restored: string | null;
+}
+
+export function useRestoredStart(props: FixEditorProps): FormStart {
+  const [start] = useState<FormStart>(() => {
+    const server = props.draft ?? { ...props.start, updatedAt: null };
+    const base: FormStart = { values: server.values, machines: server.machines, chassis: server.chassis, photos: server.photos, restored: null };
+    let store: Storage | null = null;
+    try {
+      store = window.localStorage;
+    } catch {
+      return base;
+    }
+    const entry = readJournal(store, journalScope({ draftId: props.draft?.id ?? null, fixSlug: props.fixSlug }));
+    if (!shouldRestore(entry, { updatedAt: props.draft?.updatedAt ?? null, values: server.values })) return base;
+    // Ids come back with their labels; an id whose label was not journalled is dropped rather than shown blank.
+    const known = {
+      machines: [...(entry.refs?.machines ?? []), ...server.machines],
+      chassis: [...(entry.refs?.chassis ?? []), ...server.chassis],
+      photos: [...(entry.refs?.photos ?? []), ...server.photos],
+    };
+    const pick = <T extends { id: number }>(list: T[], ids: number[] | undefined): T[] =>
+      (ids ?? []).map((id) => list.find((item) => item.id === id)).filter((item): item is T => item !== undefined);
+    const machines = pick(known.machines, entry.values.machineIds);
+    const chassis = pick(known.chassis, entry.values.chassisIds);
+    const photos = pick(known.photos, entry.values.photoIds);
+    return {
+      values: { ...entry.values, machineIds: machines.map((m) => m.id), chassisIds: chassis.map((c) => c.id), photoIds: photos.map((p) => p.id) },
+      machines,
+      chassis,
+      photos,
+      restored: entry.editedAt,
+    };
+  });
+  return start;
+}

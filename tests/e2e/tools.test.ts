@@ -1,0 +1,117 @@
+// Bench tools in Chromium: the bleed-down tool answers as you type and draws its chart; a reader adds a fix's parts to the order list and downloads the CSV.
+import { readFile } from 'node:fs/promises';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { launchBrowser } from '../support/browser';
+import { E2E_PORT } from '../support/test-env';
+import { testDb } from '../support/db';
+
+const base = `http://127.0.0.1:${E2E_PORT}`;
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** Astro drops the ssr attribute once an island has hydrated. */
+async function hydrated(page: Page): Promise<void> {
+  await page.waitForSelector('astro-island:not([ssr])', { state: 'attached' });
+}
+
+/** How many pixels of the canvas are drawn on (not transparent). */
+function drawnPixels(page: Page): Promise<number> {
+  return page.$eval('.tool-chart canvas', (canvas) => {
+    const c = canvas as HTMLCanvasElement;
+    const data = c.getContext('2d')?.getImageData(0, 0, c.width, c.height).data ?? new Uint8ClampedArray();
+    let drawn = 0;
+    for (let i = 3; i < data.length; i += 4) if ((data[i] ?? 0) > 0) drawn += 1;
+    return drawn;
+  });
+}
+
+describe('bleed-down tool', () => {
+  it('computes the worked example as you type and draws the decay', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${base}/tools/bleed-down`);
+    await hydrated(page);
+    await page.getByLabel('Capacitance').pressSequentially('150uF');
+    await page.getByLabel('Bleed resistor').pressSequentially('470k');
+    await page.getByLabel('Starting voltage').pressSequentially('340V');
+    // RC discharge: t = RC·ln(V0/Vsafe) = 70.5 s × ln(340/60) = 122 s to the 60 V ES1 limit of IEC 62368-1.
+    await page.getByText('122 s (2 min 2 s)').first().waitFor();
+    await expect(page.locator('.tool-result').textContent()).resolves.toContain('0.246 W');
+    await page.waitForSelector('[data-chart-ready="true"] canvas');
+    await page.waitForFunction(() => {
+      const c = document.querySelector('.tool-chart canvas') as HTMLCanvasElement | null;
+      return c !== null && c.width > 0 && c.height > 0;
+    });
+    expect(await drawnPixels(page)).toBeGreaterThan(500);
+    // The address follows the fields, so the page can be shared or printed with its result.
+    expect(new URL(page.url()).searchParams.get('capacitance')).toBe('150uF');
+    // The figures stay readable as a table beside the chart.
+    await expect(page.locator('table.tool-table').textContent()).resolves.toContain('reaches 60 V');
+    await page.close();
+  });
+
+  it('shows the error and an example, never a figure, for a voltage where a capacitance is asked', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${base}/tools/bleed-down`);
+    await hydrated(page);
+    await page.getByLabel('Capacitance').fill('16V');
+    await page.getByLabel('Bleed resistor').fill('470k');
+    await page.getByLabel('Starting voltage').fill('340V');
+    await page.getByText('is a voltage, but a capacitance is expected here').waitFor();
+    const result = (await page.locator('.tool-result').textContent()) ?? '';
+    expect(result).not.toMatch(/NaN|Infinity|undefined|Time to/);
+    await page.close();
+  });
+});
+
+describe('order list', () => {
+  it('adds all parts of a fix as an anonymous reader, keeps them in the browser and downloads the CSV', async () => {
+    const knex = testDb();
+    // A demo fix with at least three capacitor rows, so the list has something to merge and total.
+    const fix = await knex('fixes as f')
+      .join('revisions as r', 'r.id', 'f.current_revision_id')
+      .whereNull('f.deleted_at')
+      .whereNull('f.hidden_at')
+      .whereRaw(`(select count(*) from jsonb_array_elements(r.parts) p where p->>'kind' = 'capacitor') >= 3`)
+      .first('f.slug', 'r.parts');
+    await knex.destroy();
+    const partCount = (fix.parts as Array<{ quantity: number }>).reduce((sum, p) => sum + p.quantity, 0);
+
+    const context = await browser.newContext({ acceptDownloads: true });
+    const page = await context.newPage();
+    await page.goto(`${base}/fixes/${fix.slug}`);
+    expect(await page.locator('script').count()).toBe(0);
+    await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
+    await page.waitForURL(`${base}/order-list`);
+    await page.getByText(`Added ${partCount} ${partCount === 1 ? 'part' : 'parts'} to the list kept in this browser.`).waitFor();
+    const rows = await page.locator('table.order-table tbody tr').count();
+    expect(rows).toBeGreaterThan(0);
+
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download CSV' }).click()]);
+    expect(download.suggestedFilename()).toBe('order-list.csv');
+    const csv = (await readFile((await download.path()) ?? '', 'utf8')).replace(/^\uFEFF/, '');
+    const lines = csv.trim().split('\n');
+    expect(lines[0]).toBe('kind,part,quantity,spares,to order,refs,sources,notes,flag');
+    expect(lines).toHaveLength(rows + 1);
+    expect(csv).toContain('capacitor,');
+
+    // Kept in this browser: the list is still there after a reload, and the same fix again doubles it.
+    await page.reload();
+    await hydrated(page);
+    await expect(page.locator('table.order-table tbody tr').count()).resolves.toBe(rows);
+    await page.goto(`${base}/fixes/${fix.slug}`);
+    await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
+    await page.waitForURL(`${base}/order-list`);
+    await hydrated(page);
+    await expect(page.locator('table.order-table tbody tr').count()).resolves.toBe(rows);
+    const totals = await page.locator('table.order-table tbody tr td:nth-child(6)').allTextContents();
+    expect(totals.reduce((sum, t) => sum + Number(t), 0)).toBe(2 * partCount);
+    await context.close();
+  });
+});

@@ -1,0 +1,206 @@
+// Every route under src/pages has an access rule, and the built server enforces each guarded one for every kind of user.
+import { readdirSync } from 'node:fs';
+import { join, relative, sep } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { can, type Actor } from '@/lib/permissions';
+import { routeAccess, type Access, type RouteMethod } from '@/server/route-access';
+import { INTEGRATION_PORT } from '../support/test-env';
+import { testDb } from '../support/db';
+import { createUser, signIn } from '../support/sign-in';
+
+const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
+const pagesDir = join(process.cwd(), 'src', 'pages');
+const routeExtensions = /\.(astro|ts|js|mjs|mdx|md|html)$/;
+
+/** Every file Astro turns into a route: anything under src/pages except names starting with "_" (and .d.ts). */
+function routeFiles(dir: string = pagesDir): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
+    if (entry.name.startsWith('_')) return [];
+    const path = join(dir, entry.name);
+    if (entry.isDirectory()) return routeFiles(path);
+    return routeExtensions.test(entry.name) && !entry.name.endsWith('.d.ts') ? [path] : [];
+  });
+}
+
+/** Astro's route pattern for a file: src/pages/fixes/[slug]/index.astro → /fixes/[slug]. */
+function routePatternOf(file: string): string {
+  const path = relative(pagesDir, file).split(sep).join('/').replace(routeExtensions, '');
+  const withoutIndex = path === 'index' ? '' : path.replace(/\/index$/, '');
+  return `/${withoutIndex}`;
+}
+
+/** A concrete address for a pattern: parameters get a made-up value (the guard runs before any lookup). */
+function samplePath(pattern: string): string {
+  return pattern.replace(/\[\.\.\.[^\]]+\]/g, 'sample/path').replace(/\[[^\]]+\]/g, 'sample-1');
+}
+
+type Persona = 'anonymous' | 'unverified' | 'member' | 'editor' | 'moderator' | 'admin' | 'suspended';
+const personas: Persona[] = ['anonymous', 'unverified', 'member', 'editor', 'moderator', 'admin', 'suspended'];
+const actors: Record<Persona, Actor> = {} as Record<Persona, Actor>;
+const cookies: Record<Persona, string | undefined> = {} as Record<Persona, string | undefined>;
+const knex = testDb();
+
+beforeAll(async () => {
+  for (const persona of personas) {
+    if (persona === 'anonymous') {
+      actors[persona] = null;
+      cookies[persona] = undefined;
+      continue;
+    }
+    const role = persona === 'unverified' || persona === 'suspended' ? 'member' : persona;
+    const user = await createUser(knex, { role, verified: persona !== 'unverified', tag: `authz-${persona}` });
+    cookies[persona] = await signIn(base, user.email, user.password);
+    actors[persona] = { id: user.id, role, verified: persona !== 'unverified', suspended: persona === 'suspended' };
+    // Suspended after signing in: the browser still holds a valid session cookie.
+    if (persona === 'suspended') await knex('users').where({ id: user.id }).update({ suspended_at: new Date(), suspended_reason: 'authorization test' });
+  }
+});
+afterAll(() => knex.destroy());
+
+describe('route table', () => {
+  it('has an entry for every file under src/pages', () => {
+    const missing = routeFiles()
+      .filter((file) => !routeAccess[routePatternOf(file)])
+      .map((file) => `${relative(process.cwd(), file)} has no entry: add '${routePatternOf(file)}' to routeAccess in src/server/route-access.ts`);
+    expect(missing, `\n${missing.join('\n')}\n`).toEqual([]);
+  });
+
+  it('lists no route that no longer has a file (injected routes aside)', () => {
+    const patterns = new Set(routeFiles().map(routePatternOf));
+    const stale = Object.entries(routeAccess)
+      .filter(([pattern, rule]) => !rule.injected && !patterns.has(pattern))
+      .map(([pattern]) => `${pattern} is in src/server/route-access.ts but no file under src/pages makes it`);
+    expect(stale, `\n${stale.join('\n')}\n`).toEqual([]);
+  });
+
+  it('maps file names to Astro route patterns', () => {
+    expect(routePatternOf(join(pagesDir, 'index.astro'))).toBe('/');
+    expect(routePatternOf(join(pagesDir, 'fixes', '[slug]', 'index.astro'))).toBe('/fixes/[slug]');
+    expect(routePatternOf(join(pagesDir, 'media', '[...key].ts'))).toBe('/media/[...key]');
+    expect(routePatternOf(join(pagesDir, 'help', 'privacy.mdx'))).toBe('/help/privacy');
+  });
+});
+
+interface Probe {
+  pattern: string;
+  method: RouteMethod;
+  access: Access;
+}
+
+function guardedProbes(): Probe[] {
+  return Object.entries(routeAccess).flatMap(([pattern, rule]) =>
+    Object.entries(rule.methods)
+      .filter((entry): entry is [RouteMethod, Access] => entry[0] !== '*' && entry[1] !== 'public' && entry[1] !== 'closed')
+      .map(([method, access]) => ({ pattern, method, access })),
+  );
+}
+
+async function ask(probe: Probe, persona: Persona): Promise<Response> {
+  const headers: Record<string, string> = { origin: base };
+  const cookie = cookies[persona];
+  if (cookie) headers.cookie = cookie;
+  let body: string | undefined;
+  if (probe.method !== 'GET') {
+    // An empty body of the kind the route takes: allowed callers get a 400, never a change.
+    const jsonApi = probe.pattern.startsWith('/api/');
+    headers['content-type'] = jsonApi ? 'application/json' : 'application/x-www-form-urlencoded';
+    body = jsonApi ? '{}' : '';
+  }
+  return fetch(`${base}${samplePath(probe.pattern)}`, { method: probe.method, headers, body, redirect: 'manual' });
+}
+
+describe('route guard', () => {
+  const probes = guardedProbes();
+
+  it('has guarded routes to check', () => {
+    expect(probes.map((p) => `${p.method} ${p.pattern}`)).toEqual(expect.arrayContaining(['GET /account', 'GET /admin/users', 'GET /api/v1/account']));
+  });
+
+  for (const probe of probes) {
+    it(`answers ${probe.method} ${probe.pattern} (needs ${probe.access}) for each kind of user`, async () => {
+      const api = probe.pattern.startsWith('/api/');
+      for (const persona of personas) {
+        const res = await ask(probe, persona);
+        const context = `${probe.method} ${probe.pattern} as ${persona}: ${res.status}`;
+        if (can(actors[persona], probe.access as Exclude<Access, 'public' | 'closed'>)) {
+          expect([401, 403, 405], context).not.toContain(res.status);
+          expect(res.status, context).toBeLessThan(500);
+          expect(res.headers.get('location') ?? '', context).not.toMatch(/^\/sign-in/);
+        } else if (persona === 'anonymous' || persona === 'suspended') {
+          if (api) {
+            expect(res.status, context).toBe(401);
+            expect((await res.json()).error.code, context).toBe('unauthorised');
+          } else {
+            expect([302, 303], context).toContain(res.status);
+            expect(res.headers.get('location'), context).toMatch(/^\/sign-in\?next=/);
+          }
+        } else {
+          expect(res.status, context).toBe(403);
+          if (api) expect((await res.json()).error.code, context).toBe('forbidden');
+        }
+        if (!res.bodyUsed) await res.arrayBuffer();
+      }
+    });
+  }
+
+  it('treats a suspended member’s still-valid cookie as signed out and clears it', async () => {
+    const res = await fetch(`${base}/account`, { headers: { cookie: cookies.suspended! }, redirect: 'manual' });
+    expect(res.status).toBe(302);
+    expect(res.headers.get('location')).toBe('/sign-in?next=%2Faccount');
+    expect(res.headers.getSetCookie().some((c) => c.startsWith('authjs.session-token=') && /Expires=Thu, 01 Jan 1970/.test(c))).toBe(true);
+  });
+
+  it('spells out the answers for the members page', async () => {
+    const expected: Record<Persona, number> = { anonymous: 302, unverified: 403, member: 403, editor: 403, moderator: 200, admin: 200, suspended: 302 };
+    for (const persona of personas) {
+      const res = await ask({ pattern: '/admin/users', method: 'GET', access: 'suspend_user' }, persona);
+      expect(res.status, persona).toBe(expected[persona]);
+      await res.arrayBuffer();
+    }
+  });
+
+  it('tells an unconfirmed member why a page is closed', async () => {
+    const res = await fetch(`${base}/admin/users`, { headers: { cookie: cookies.unverified! } });
+    expect(res.status).toBe(403);
+    expect(await res.text()).toContain('Confirm your e-mail address first');
+  });
+
+  it('keeps the security headers and no-store on guard answers', async () => {
+    for (const res of [await fetch(`${base}/api/v1/account`), await fetch(`${base}/admin/users`, { headers: { cookie: cookies.member! } })]) {
+      expect(res.headers.get('content-security-policy')).toContain("frame-ancestors 'none'");
+      expect(res.headers.get('x-content-type-options')).toBe('nosniff');
+      expect(res.headers.get('cache-control')).toBe('private, no-store');
+    }
+  });
+
+  it('answers 405 for a method a route does not take', async () => {
+    const res = await fetch(`${base}/machines`, { method: 'POST', headers: { origin: base, 'content-type': 'application/x-www-form-urlencoded' }, body: '' });
+    expect(res.status).toBe(405);
+    expect(res.headers.get('allow')).toBe('GET, HEAD');
+  });
+});
+
+describe('navigation by role', () => {
+  it('shows each kind of user what they may do, with no script on the page', async () => {
+    const expectations: Record<Persona, { shows: string[]; hides: string[] }> = {
+      anonymous: { shows: ['>Sign in<', '>Join<'], hides: ['Write a fix', 'Proofing desk', 'Sign out'] },
+      unverified: { shows: ['Sign out'], hides: ['Write a fix', 'Proofing desk', '>Admin<'] },
+      member: { shows: ['Write a fix', 'Sign out'], hides: ['Proofing desk', '>Admin<', '>Sign in<'] },
+      editor: { shows: ['Write a fix'], hides: ['Proofing desk', '>Admin<'] },
+      moderator: { shows: ['Write a fix', 'Proofing desk', '>Members<'], hides: ['>Admin<'] },
+      admin: { shows: ['Write a fix', 'Proofing desk', '>Admin<'], hides: ['>Sign in<'] },
+      suspended: { shows: ['>Sign in<'], hides: ['Sign out', 'Write a fix'] },
+    };
+    for (const persona of personas) {
+      const cookie = cookies[persona];
+      const res = await fetch(`${base}/machines`, { headers: cookie ? { cookie } : {} });
+      const html = await res.text();
+      for (const text of expectations[persona].shows) expect(html, `${persona} sees ${text}`).toContain(text);
+      for (const text of expectations[persona].hides) expect(html, `${persona} does not see ${text}`).not.toContain(text);
+      expect(html, persona).not.toMatch(/<script/i);
+      const signedIn = persona !== 'anonymous' && persona !== 'suspended';
+      if (signedIn) expect(res.headers.get('cache-control')).toBe('private, no-store');
+      else if (persona === 'anonymous') expect(res.headers.get('cache-control')).toContain('public');
+    }
+  });
+});

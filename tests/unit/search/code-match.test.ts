@@ -1,0 +1,66 @@
+// Codes typed loosely: separators and letter suffixes forgiven, digits never.
+import { describe, expect, it } from 'vitest';
+import { codeGroups, codeMatchQuality, codeWindows, digitsOf, resolveCodeGroup } from '@/lib/search/code-match';
+import { foldText, piecesOf } from '@/lib/search/tokens';
+
+describe('digitsOf', () => {
+  it('joins the runs of digits with dots', () => {
+    expect(['dr4120k', 'lderr3', 'c1204', 'a1b22', 'nodisc'].map(digitsOf)).toEqual(['4120', '3', '1204', '1.22', '']);
+  });
+});
+
+describe('codeMatchQuality', () => {
+  it('matches the same code exactly', () => {
+    expect(codeMatchQuality('kx44n', 'kx44n')).toBe('exact');
+  });
+  it('never matches a neighbour whose digits differ', () => {
+    expect(codeMatchQuality('kx45n', 'kx44n')).toBeNull();
+    expect(codeMatchQuality('dr412', 'dr4120')).toBeNull();
+    expect(codeMatchQuality('e21', 'e210')).toBeNull();
+  });
+  it('lets a region or feature suffix be left off', () => {
+    expect(codeMatchQuality('dr4120', 'dr4120k')).toBe('variant');
+    expect(codeMatchQuality('dr4120', 'dr4120kxyz')).toBeNull();
+  });
+  it('finds a code from its digits alone when at least two were typed', () => {
+    expect(codeMatchQuality('4120', 'dr4120k')).toBe('variant');
+    expect(codeMatchQuality('3', 'lderr3')).toBeNull();
+  });
+  it('forgives one slip in letters only when the letters run to three or more', () => {
+    expect(codeMatchQuality('ldeer3', 'lderr3')).toBe('variant');
+    // Two-letter prefixes name different things: E-21 and F-21 are different error codes.
+    expect(codeMatchQuality('e21', 'f21')).toBeNull();
+    expect(codeMatchQuality('dt4120', 'dr4120')).toBeNull();
+  });
+});
+
+describe('codeGroups and codeWindows', () => {
+  it('groups short pieces around digits, so "KX 44 N" and "DR-4120 K" spell codes', () => {
+    const groups = codeGroups(piecesOf('tray kx 44 n wont close'));
+    expect(groups).toEqual([{ start: 1, pieces: ['kx', '44', 'n'] }]);
+    expect(codeWindows(groups[0]!)).toEqual(expect.arrayContaining(['kx44n', 'kx44', '44n', '44']));
+  });
+  it('does not pull long words into a code', () => {
+    expect(codeGroups(piecesOf('rewind 4120'))).toEqual([{ start: 1, pieces: ['4120'] }]);
+  });
+});
+
+describe('resolveCodeGroup', () => {
+  const stored = ['kx44n', 'kx45n', 'dr4120', 'dr4120k', 'e21'];
+  it('takes the longest window that names a stored code', () => {
+    const [group] = codeGroups(piecesOf(foldText('KX 44 N')));
+    expect(resolveCodeGroup(group!, stored)).toEqual([{ from: 0, to: 3, typed: 'kx44n', exact: ['kx44n'], variants: [] }]);
+  });
+  it('offers suffix variants beside the exact code', () => {
+    const [group] = codeGroups(piecesOf('dr 4120'));
+    expect(resolveCodeGroup(group!, stored)).toEqual([{ from: 0, to: 2, typed: 'dr4120', exact: ['dr4120'], variants: ['dr4120k'] }]);
+  });
+  it('leaves an unknown code unresolved rather than guessing its neighbour', () => {
+    const [group] = codeGroups(piecesOf('kx-46n'));
+    expect(resolveCodeGroup(group!, stored)).toEqual([]);
+  });
+  it('leaves trailing words of the group alone', () => {
+    const [group] = codeGroups(piecesOf('e-21 on'));
+    expect(resolveCodeGroup(group!, stored)).toEqual([{ from: 0, to: 2, typed: 'e21', exact: ['e21'], variants: [] }]);
+  });
+});

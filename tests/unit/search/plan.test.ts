@@ -1,0 +1,78 @@
+// Planning a query from its pieces and the vocabulary: corrections, dropped words, codes, families.
+import { describe, expect, it } from 'vitest';
+import { buildPlan, correctWord, planTerms, type Vocabulary, type TextClause } from '@/lib/search/plan';
+import { parseQuery } from '@/lib/search/tokens';
+import type { WordFamily } from '@/lib/search/word-families';
+
+const families: WordFamily[] = [
+  { id: 1, name: 'tray', terms: ['tray', 'drawer', 'loader'] },
+  { id: 2, name: 'negation', terms: ["won't", 'will not'] },
+];
+
+function vocabulary(extra: Partial<Vocabulary> = {}): Vocabulary {
+  return {
+    known: new Set(['tray', 'close', 'rewind', 'belt']),
+    stopwords: new Set(['will', 'not', 'the', 'on']),
+    candidates: new Map([['tary', [{ word: 'tray', ndoc: 9 }, { word: 'tape', ndoc: 30 }]]]),
+    codes: ['kx44n', 'kx45n', 'dr4120', 'dr4120k'],
+    ...extra,
+  };
+}
+
+const texts = (clauses: ReturnType<typeof buildPlan>['clauses']) => clauses.filter((c): c is TextClause => c.kind === 'text');
+
+describe('correctWord', () => {
+  it('picks the fewest slips, then the most used word', () => {
+    expect(correctWord('tary', [{ word: 'tape', ndoc: 30 }, { word: 'tray', ndoc: 9 }])).toBe('tray');
+    expect(correctWord('bolt', [{ word: 'belt', ndoc: 3 }, { word: 'boot', ndoc: 5 }])).toBe('boot');
+  });
+  it('does not correct short words or far-off ones', () => {
+    expect(correctWord('ff', [{ word: 'fan', ndoc: 3 }])).toBeNull();
+    expect(correctWord('zzzz', [{ word: 'tray', ndoc: 3 }])).toBeNull();
+  });
+});
+
+describe('buildPlan', () => {
+  it('corrects a misspelt word, then applies its word family', () => {
+    const plan = buildPlan(parseQuery('tary wont close'), vocabulary(), families);
+    expect(plan.corrections).toEqual([{ from: 'tary', to: 'tray' }]);
+    expect(texts(plan.clauses).map((c) => [c.label, c.terms, c.alternatives])).toEqual([
+      ['tray', ['tray'], ['drawer', 'loader']],
+      ['wont', ["won't"], ['"will not"']],
+      ['close', ['close'], []],
+    ]);
+  });
+
+  it('drops an unknown first word and keeps what the others find', () => {
+    const plan = buildPlan(parseQuery('xqzvw belt'), vocabulary(), families);
+    expect(plan.ignored).toEqual(['xqzvw']);
+    expect(texts(plan.clauses).map((c) => c.label)).toEqual(['belt']);
+  });
+
+  it('turns a loosely typed model number into a code clause with its variants', () => {
+    const plan = buildPlan(parseQuery('DR 4120 tray'), vocabulary(), families);
+    expect(plan.clauses.find((c) => c.kind === 'code')).toEqual({ kind: 'code', label: 'dr4120', exact: ['dr4120'], variants: ['dr4120k'] });
+  });
+
+  it('keeps an unknown code as a literal that must be found as written', () => {
+    const plan = buildPlan(parseQuery('KX-46N'), vocabulary(), families);
+    expect(plan.clauses).toEqual([{ kind: 'text', label: 'kx 46n', terms: ['kx46n', '"kx 46n"'], alternatives: [], soft: false, exact: true, position: -1 }]);
+  });
+
+  it('leaves a bare number out instead of guessing a code', () => {
+    const plan = buildPlan(parseQuery('stops after 1995'), vocabulary({ known: new Set(['stops', 'after']) }), families);
+    expect(plan.ignored).toEqual(['1995']);
+    expect(plan.clauses.every((c) => c.kind === 'text' && !c.exact)).toBe(true);
+  });
+
+  it('marks a family term of stop words only as soft', () => {
+    const plan = buildPlan(parseQuery('tray will not close'), vocabulary(), families);
+    const negation = texts(plan.clauses).find((c) => c.label === 'will not');
+    expect(negation).toMatchObject({ soft: true, terms: ['"will not"'], alternatives: ["won't"] });
+  });
+
+  it('lists every term once for compiling', () => {
+    const plan = buildPlan(parseQuery('tray tray -belt'), vocabulary(), families);
+    expect(planTerms(plan)).toEqual(['tray', 'drawer', 'loader', 'belt']);
+  });
+});
