@@ -22,12 +22,19 @@ function fail(lines: string[]): never {
 function readArgs(): z.infer<typeof argsSchema> {
   let values: Record<string, string | boolean | undefined>;
   try {
-    ({ values } = parseArgs({ options: { email: { type: 'string' }, name: { type: 'string' }, password: { type: 'string' } }, strict: true }));
+    ({ values } = parseArgs({
+      options: { email: { type: 'string' }, name: { type: 'string' }, password: { type: 'string' } },
+      strict: true,
+    }));
   } catch (error) {
-    fail([`admin:create: ${error instanceof Error ? error.message : String(error)}`, 'Usage: npm run admin:create -- --email you@example.org --name "Your Name" [--password "..."]']);
+    fail([
+      `admin:create: ${error instanceof Error ? error.message : String(error)}`,
+      'Usage: npm run admin:create -- --email you@example.org --name "Your Name" [--password "..."]',
+    ]);
   }
   const parsed = argsSchema.safeParse(values);
-  if (!parsed.success) fail(['admin:create: the arguments are not valid:', ...parsed.error.issues.map((i) => `  --${i.path.join('.')}: ${i.message}`)]);
+  if (!parsed.success)
+    fail(['admin:create: the arguments are not valid:', ...parsed.error.issues.map((i) => `  --${i.path.join('.')}: ${i.message}`)]);
   if (parsed.data.password) {
     const weaknesses = passwordWeaknesses(parsed.data.password, [parsed.data.name, parsed.data.email]);
     if (weaknesses.length > 0) fail(['admin:create: --password is refused:', ...weaknesses.map((w) => `  ${w}`)]);
@@ -40,13 +47,33 @@ async function makeAdmin(email: string, name: string): Promise<{ id: number; cre
   return db().transaction(async (trx) => {
     const existing = await findUserByEmail(email, trx);
     if (existing) {
-      await trx('users').where({ id: existing.id }).update({ role: 'admin', suspended_at: null, suspended_reason: null, emailVerified: existing.emailVerified ?? trx.fn.now() });
-      await writeAudit({ actorId: null, action: 'user.role_change', subjectType: 'user', subjectId: existing.id, detail: { before: { role: roleOf(existing) }, after: { role: 'admin' }, via: 'admin:create' } }, trx);
+      await trx('users')
+        .where({ id: existing.id })
+        .update({ role: 'admin', suspended_at: null, suspended_reason: null, emailVerified: existing.emailVerified ?? trx.fn.now() });
+      await writeAudit(
+        {
+          actorId: null,
+          action: 'user.role_change',
+          subjectType: 'user',
+          subjectId: existing.id,
+          detail: { before: { role: roleOf(existing) }, after: { role: 'admin' }, via: 'admin:create' },
+        },
+        trx,
+      );
       return { id: existing.id, created: false };
     }
     const [row] = await trx('users').insert({ email, name, role: 'admin', emailVerified: trx.fn.now() }).returning<{ id: number }[]>('id');
     if (!row) throw new Error('the new account was not created');
-    await writeAudit({ actorId: null, action: 'user.create_admin', subjectType: 'user', subjectId: row.id, detail: { after: { role: 'admin' }, via: 'admin:create' } }, trx);
+    await writeAudit(
+      {
+        actorId: null,
+        action: 'user.create_admin',
+        subjectType: 'user',
+        subjectId: row.id,
+        detail: { after: { role: 'admin' }, via: 'admin:create' },
+      },
+      trx,
+    );
     return { id: row.id, created: true };
   });
 }
@@ -56,9 +83,13 @@ const config = readConfig();
 await ensureDatabase(process.env);
 try {
   const { id, created } = await makeAdmin(args.email, args.name);
-  console.log(created ? `Created admin account ${args.email} (id ${id}).` : `${args.email} (id ${id}) is now an admin; its name was left as it was.`);
+  console.log(
+    created ? `Created admin account ${args.email} (id ${id}).` : `${args.email} (id ${id}) is now an admin; its name was left as it was.`,
+  );
   if (args.password) {
-    await db()('users').where({ id }).update({ password_hash: await hashPassword(args.password), sessions_valid_after: db().raw(`date_trunc('second', now())`) });
+    await db()('users')
+      .where({ id })
+      .update({ password_hash: await hashPassword(args.password), sessions_valid_after: new Date() });
     console.log('The password is set. Sign in at', new URL('/sign-in', config.PUBLIC_ORIGIN).href);
   } else {
     const token = await issueToken(id, 'reset_password');
@@ -66,7 +97,10 @@ try {
     console.log(`  ${new URL(`/reset/password?token=${token}`, config.PUBLIC_ORIGIN).href}`);
   }
 } catch (error) {
-  fail([`admin:create: ${error instanceof Error ? error.message : String(error)}`, 'Is the database migrated? `npm start` or `npm run db:migrate` prepares it.']);
+  fail([
+    `admin:create: ${error instanceof Error ? error.message : String(error)}`,
+    'Is the database migrated? `npm start` or `npm run db:migrate` prepares it.',
+  ]);
 } finally {
   await closeDb();
 }

@@ -15,7 +15,14 @@ migrateAndSeed(env);
 buildIfStale({ ...env, PUBLIC_ORIGIN: 'http://127.0.0.1' });
 
 const report = join(env.BENCHLORE_DATA_DIR ?? '.data', `vitest-report-${env.BENCHLORE_DB_NAME}.json`);
-const args = ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)];
+const args = [
+  'node_modules/vitest/vitest.mjs',
+  'run',
+  '--reporter=default',
+  '--reporter=json',
+  `--outputFile.json=${report}`,
+  ...process.argv.slice(2),
+];
 const res = spawnSync(process.execPath, args, { stdio: 'inherit', env });
 
 // One plain closing line, whatever reporter is in use.

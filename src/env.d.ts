@@ -1,3 +1,4 @@
+// eslint-disable-next-line @typescript-eslint/triple-slash-reference -- Astro's generated types are only reachable this way
 /// <reference path="../.astro/types.d.ts" />
 
 // What the middleware puts on Astro.locals for every request.

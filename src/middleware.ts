@@ -12,7 +12,11 @@ function editable(response: Response): Response {
     response.headers.set('X-Content-Type-Options', 'nosniff');
     return response;
   } catch {
-    return new Response(response.body, { status: response.status, statusText: response.statusText, headers: new Headers(response.headers) });
+    return new Response(response.body, {
+      status: response.status,
+      statusText: response.statusText,
+      headers: new Headers(response.headers),
+    });
   }
 }
 
@@ -29,9 +33,14 @@ const errorBoundary = defineMiddleware(async (context, next) => {
     logger().error({ err: error, path: context.url.pathname }, 'unhandled error');
     const isApi = context.url.pathname.startsWith('/api/');
     const body = isApi
-      ? JSON.stringify({ error: { code: 'internal', message: 'Something went wrong on our side. Nothing you sent was lost; please try again.' } })
+      ? JSON.stringify({
+          error: { code: 'internal', message: 'Something went wrong on our side. Nothing you sent was lost; please try again.' },
+        })
       : '<!doctype html><title>Something went wrong · Benchlore</title><p>Something went wrong on our side. Please try again in a moment.</p>';
-    return new Response(body, { status: 500, headers: { 'Content-Type': isApi ? 'application/json' : 'text/html; charset=utf-8', 'Cache-Control': 'no-store' } });
+    return new Response(body, {
+      status: 500,
+      headers: { 'Content-Type': isApi ? 'application/json' : 'text/html; charset=utf-8', 'Cache-Control': 'no-store' },
+    });
   }
 });
 

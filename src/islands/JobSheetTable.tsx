@@ -26,7 +26,8 @@ interface Props {
   rows: JobSheetRow[];
 }
 
-const shortDate = (iso: string): string => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+const shortDate = (iso: string): string =>
+  new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 
 const columns: ColumnDef<JobSheetRow>[] = [
   {
@@ -70,7 +71,13 @@ export default function JobSheetTable({ rows }: Props) {
           <label className="mr-2 font-semibold" htmlFor="job-quick-filter">
             Quick filter
           </label>
-          <input id="job-quick-filter" className="input inline-block w-64" value={globalFilter} onChange={(e) => setGlobalFilter(e.target.value)} placeholder="Customer, machine, status…" />
+          <input
+            id="job-quick-filter"
+            className="input inline-block w-64"
+            value={globalFilter}
+            onChange={(e) => setGlobalFilter(e.target.value)}
+            placeholder="Customer, machine, status…"
+          />
         </p>
       )}
       <table className="w-full">
@@ -82,7 +89,12 @@ export default function JobSheetTable({ rows }: Props) {
                 const label = flexRender(header.column.columnDef.header, header.getContext());
                 const sorted = header.column.getIsSorted();
                 return (
-                  <th key={header.id} scope="col" className="p-2" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                  <th
+                    key={header.id}
+                    scope="col"
+                    className="p-2"
+                    aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                  >
                     {hydrated ? (
                       <button type="button" className="font-semibold text-teal" onClick={header.column.getToggleSortingHandler()}>
                         {label}

@@ -5,6 +5,7 @@ import { applySpares, type StoredLine } from './tools/model/order-list';
 import { downloadCsv } from './tools/order-list/download';
 import { OrderTable } from './tools/order-list/OrderTable';
 import { useOrderList, type ListMode } from './tools/order-list/use-order-list';
+import type { SaveState } from './tools/order-list/account-store';
 
 export interface OrderListProps {
   mode: ListMode;
@@ -20,7 +21,10 @@ const sparesChoices: ReadonlyArray<{ value: string; label: string; spares: Spare
   { value: 'twenty', label: '20 %, rounded up', spares: { percent: 20 } },
 ];
 
-const saveText = { idle: '', saving: 'Saving…', saved: 'Saved.', failed: 'Could not save the last change; it is still on this page. Try again.' };
+const saveText: Record<ListMode, Record<SaveState, string>> = {
+  account: { idle: '', saving: 'Saving…', saved: 'Saved with your account.', failed: 'Could not save the last change; it is still on this page.' },
+  browser: { idle: '', saving: '', saved: 'Kept in this browser.', failed: 'This browser would not keep the list (private mode or storage full); download the CSV to keep it.' },
+};
 
 export default function OrderList({ mode, initialLines, incoming }: OrderListProps): ReactElement {
   const list = useOrderList(mode, initialLines, incoming);
@@ -29,7 +33,7 @@ export default function OrderList({ mode, initialLines, incoming }: OrderListPro
   return (
     <div className="order-list space-y-4">
       {list.message && (
-        <p className="panel" role="status">
+        <p className="panel no-print" role="status">
           {list.message}
         </p>
       )}
@@ -78,7 +82,15 @@ export default function OrderList({ mode, initialLines, incoming }: OrderListPro
         </>
       )}
       <p className="no-print text-sm text-ink-soft" role="status">
-        {saveText[list.saveState]}
+        {saveText[mode][list.saveState]}
+        {mode === 'account' && list.saveState === 'failed' && (
+          <>
+            {' '}
+            <button type="button" className="btn btn-quiet min-h-0 px-2 py-1 text-sm" onClick={() => list.update(list.lines)}>
+              Save again
+            </button>
+          </>
+        )}
       </p>
     </div>
   );

@@ -37,7 +37,10 @@ export function generateHandoverCode(randomBytes: RandomBytes = webCryptoBytes, 
  * (0, O, 1, I, L) make it invalid rather than being guessed at. Returns null when it cannot be a code.
  */
 export function normaliseHandoverCode(input: string): string | null {
-  const compact = input.trim().toUpperCase().replace(/[\s-]+/g, '');
+  const compact = input
+    .trim()
+    .toUpperCase()
+    .replace(/[\s-]+/g, '');
   return handoverCodePattern.test(compact) ? compact : null;
 }
 

@@ -26,7 +26,14 @@ export async function liveFixBySlug(slug: string, knex: Knex = db()): Promise<Li
     .whereNull('f.hidden_at')
     .first('f.id', 'f.slug', 'f.created_by', 'f.current_revision_id', 'r.number', 'r.title');
   if (!row) return null;
-  return { id: row.id, slug: row.slug, createdBy: row.created_by, currentRevisionId: row.current_revision_id, currentRevisionNumber: row.number, title: row.title };
+  return {
+    id: row.id,
+    slug: row.slug,
+    createdBy: row.created_by,
+    currentRevisionId: row.current_revision_id,
+    currentRevisionNumber: row.number,
+    title: row.title,
+  };
 }
 
 /** The id of a proofed revision of the fix by its number, or null. */
@@ -52,7 +59,11 @@ export async function eligibleMachines(fixId: number): Promise<MachineOption[]> 
         .orWhereIn('m.chassis_family_id', knex('fix_chassis').where('fix_id', fixId).select('chassis_family_id'))
         .orWhereIn(
           'm.chassis_family_id',
-          knex('fix_machines as fm').join('machines as fam', 'fam.id', 'fm.machine_id').where('fm.fix_id', fixId).whereNotNull('fam.chassis_family_id').select('fam.chassis_family_id'),
+          knex('fix_machines as fm')
+            .join('machines as fam', 'fam.id', 'fm.machine_id')
+            .where('fm.fix_id', fixId)
+            .whereNotNull('fam.chassis_family_id')
+            .select('fam.chassis_family_id'),
         );
     })
     .orderBy(['mk.name', 'm.model_number', 'm.region'])
@@ -69,7 +80,9 @@ export interface SavedBenchReport {
   benchScore: BenchScoreView;
 }
 
-export type SaveBenchReportResult = { ok: true; report: SavedBenchReport } | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
+export type SaveBenchReportResult =
+  | { ok: true; report: SavedBenchReport }
+  | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
 
 export async function saveBenchReport(memberId: number, data: BenchReportData): Promise<SaveBenchReportResult> {
   const knex = db();
@@ -78,11 +91,21 @@ export async function saveBenchReport(memberId: number, data: BenchReportData): 
   const revisionNumber = data.revision ?? fix.currentRevisionNumber;
   const revisionId = data.revision === undefined ? fix.currentRevisionId : await proofedRevisionId(fix.id, data.revision, knex);
   if (revisionId === null) {
-    return { ok: false, code: 'bad_request', message: 'That revision cannot take reports.', fields: { revision: [`The fix has no proofed revision r${revisionNumber}.`] } };
+    return {
+      ok: false,
+      code: 'bad_request',
+      message: 'That revision cannot take reports.',
+      fields: { revision: [`The fix has no proofed revision r${revisionNumber}.`] },
+    };
   }
   const machine = (await eligibleMachines(fix.id)).find((m) => m.slug === data.machine);
   if (!machine) {
-    return { ok: false, code: 'bad_request', message: 'That machine is not one this fix applies to.', fields: { machine: ['Choose a machine this fix applies to, or one of its chassis family.'] } };
+    return {
+      ok: false,
+      code: 'bad_request',
+      message: 'That machine is not one this fix applies to.',
+      fields: { machine: ['Choose a machine this fix applies to, or one of its chassis family.'] },
+    };
   }
   const values = {
     revision_id: revisionId,
@@ -101,7 +124,13 @@ export async function saveBenchReport(memberId: number, data: BenchReportData): 
   const scores = await benchScoresFor([fix.id]);
   return {
     ok: true,
-    report: { id: row.id, created: row.inserted === true, counted: fix.createdBy !== memberId, revisionNumber, benchScore: scores.get(fix.id) ?? emptyBenchScore() },
+    report: {
+      id: row.id,
+      created: row.inserted === true,
+      counted: fix.createdBy !== memberId,
+      revisionNumber,
+      benchScore: scores.get(fix.id) ?? emptyBenchScore(),
+    },
   };
 }
 
@@ -129,8 +158,22 @@ export async function listOwnBenchReports(memberId: number, fixSlug?: string): P
     .join('makers as mk', 'mk.id', 'm.maker_id')
     .where('b.member_id', memberId)
     .whereNull('f.deleted_at')
-    .orderBy([{ column: 'b.updated_at', order: 'desc' }, { column: 'b.id', order: 'desc' }])
-    .select('b.*', 'f.slug as fix_slug', 'f.created_by', 'f.current_revision_id', 'cur.title', 'r.number as revision_number', 'm.slug as machine_slug', 'm.model_number', 'm.region', 'mk.name as maker_name');
+    .orderBy([
+      { column: 'b.updated_at', order: 'desc' },
+      { column: 'b.id', order: 'desc' },
+    ])
+    .select(
+      'b.*',
+      'f.slug as fix_slug',
+      'f.created_by',
+      'f.current_revision_id',
+      'cur.title',
+      'r.number as revision_number',
+      'm.slug as machine_slug',
+      'm.model_number',
+      'm.region',
+      'mk.name as maker_name',
+    );
   if (fixSlug) q.where('f.slug', fixSlug);
   const rows = await q;
   return rows.map((r) => ({
@@ -179,7 +222,15 @@ function limiterFor(name: BenchWorkLimit): RateLimiterPostgres {
   let found = limiters.get(name);
   if (!found) {
     const spec = benchWorkLimits[name];
-    found = new RateLimiterPostgres({ storeClient: db(), storeType: 'knex', tableName: 'rate_limits', tableCreated: true, keyPrefix: `bench:${name}`, points: spec.points, duration: spec.windowSeconds });
+    found = new RateLimiterPostgres({
+      storeClient: db(),
+      storeType: 'knex',
+      tableName: 'rate_limits',
+      tableCreated: true,
+      keyPrefix: `bench:${name}`,
+      points: spec.points,
+      duration: spec.windowSeconds,
+    });
     limiters.set(name, found);
   }
   return found;
@@ -213,10 +264,14 @@ export const MAX_BODY_BYTES = 256 * 1024;
 
 export async function readBenchBody(request: Request): Promise<BenchBody> {
   const type = (request.headers.get('content-type') ?? '').toLowerCase();
-  const tooLarge = { kind: 'error', response: apiError('payload_too_large', `The body is larger than ${MAX_BODY_BYTES / 1024} KiB.`) } as const;
+  const tooLarge = {
+    kind: 'error',
+    response: apiError('payload_too_large', `The body is larger than ${MAX_BODY_BYTES / 1024} KiB.`),
+  } as const;
   if (Number(request.headers.get('content-length') ?? '0') > MAX_BODY_BYTES) return tooLarge;
   const isForm = type.startsWith('application/x-www-form-urlencoded');
-  if (!isForm && !type.startsWith('application/json')) return { kind: 'error', response: apiError('unsupported_media_type', 'Send JSON (application/json) or a plain form.') };
+  if (!isForm && !type.startsWith('application/json'))
+    return { kind: 'error', response: apiError('unsupported_media_type', 'Send JSON (application/json) or a plain form.') };
   const text = await readCapped(request, MAX_BODY_BYTES);
   if (text === null) return tooLarge;
   if (isForm) return { kind: 'form', form: new URLSearchParams(text) };

@@ -17,7 +17,17 @@ export interface BenchScoreView {
 }
 
 export function emptyBenchScore(): BenchScoreView {
-  return { score: null, counted: 0, fixed: 0, partly: 0, notFixed: 0, cameBack: 0, onCurrentRevision: 0, onOlderRevisions: 0, ownReports: 0 };
+  return {
+    score: null,
+    counted: 0,
+    fixed: 0,
+    partly: 0,
+    notFixed: 0,
+    cameBack: 0,
+    onCurrentRevision: 0,
+    onOlderRevisions: 0,
+    ownReports: 0,
+  };
 }
 
 interface CountRow {
@@ -93,12 +103,22 @@ export async function benchCountsByRevision(fixId: number): Promise<RevisionBenc
     .join('revisions as r', 'r.id', 'b.revision_id')
     .where('b.fix_id', fixId)
     .groupBy('r.number', 'b.outcome', 'on_current', 'own')
-    .select('r.number', 'b.outcome', db().raw('(b.revision_id = f.current_revision_id) AS on_current'), db().raw('(b.member_id = f.created_by) AS own'), db().raw('count(*) AS n'))
+    .select(
+      'r.number',
+      'b.outcome',
+      db().raw('(b.revision_id = f.current_revision_id) AS on_current'),
+      db().raw('(b.member_id = f.created_by) AS own'),
+      db().raw('count(*) AS n'),
+    )
     .orderBy('r.number', 'desc');
   const byNumber = new Map<number, RevisionBenchCounts>();
   for (const row of rows) {
     let counts = byNumber.get(row.number);
-    if (!counts) byNumber.set(row.number, (counts = { revisionNumber: row.number, isCurrent: row.on_current, fixed: 0, partly: 0, notFixed: 0, cameBack: 0, ownReports: 0 }));
+    if (!counts)
+      byNumber.set(
+        row.number,
+        (counts = { revisionNumber: row.number, isCurrent: row.on_current, fixed: 0, partly: 0, notFixed: 0, cameBack: 0, ownReports: 0 }),
+      );
     const n = Number(row.n);
     if (row.own) counts.ownReports += n;
     else counts[outcomeKey[row.outcome]] += n;

@@ -15,7 +15,8 @@ export interface DraftSaved {
 
 export function parseDraftValues(raw: unknown): Outcome<FixDraft> {
   const parsed = fixDraftSchema.safeParse(raw);
-  if (!parsed.success) return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', issuesToFields(parsed.error.issues));
+  if (!parsed.success)
+    return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', issuesToFields(parsed.error.issues));
   return succeed(parsed.data);
 }
 
@@ -24,11 +25,25 @@ async function checkReferences(knex: Knex, writer: Writer, values: FixDraft): Pr
   const fields: Record<string, string[]> = {};
   const count = async (q: Knex.QueryBuilder) => Number((await q.count<{ n: string }[]>('* as n').first())?.n ?? 0);
   const machines = new Set(values.machineIds);
-  if (machines.size && (await count(knex('machines').whereIn('id', [...machines]).whereNull('deleted_at'))) !== machines.size) {
+  if (
+    machines.size &&
+    (await count(
+      knex('machines')
+        .whereIn('id', [...machines])
+        .whereNull('deleted_at'),
+    )) !== machines.size
+  ) {
     fields.machineIds = ['One of the machines is not in the catalogue (any more); pick it again.'];
   }
   const chassis = new Set(values.chassisIds);
-  if (chassis.size && (await count(knex('chassis_families').whereIn('id', [...chassis]).whereNull('deleted_at'))) !== chassis.size) {
+  if (
+    chassis.size &&
+    (await count(
+      knex('chassis_families')
+        .whereIn('id', [...chassis])
+        .whereNull('deleted_at'),
+    )) !== chassis.size
+  ) {
     fields.chassisIds = ['One of the chassis families is not in the catalogue (any more); pick it again.'];
   }
   const photos = new Set(values.photoIds);
@@ -38,9 +53,14 @@ async function checkReferences(knex: Knex, writer: Writer, values: FixDraft): Pr
         .whereIn('p.id', [...photos])
         .whereNull('p.deleted_at')
         .where((q) =>
-          q.where('p.owner_id', writer.id).orWhereExists(
-            knex('revision_photos as rp').join('revisions as r', 'r.id', 'rp.revision_id').whereRaw('rp.photo_id = p.id').whereNot('r.state', 'draft'),
-          ),
+          q
+            .where('p.owner_id', writer.id)
+            .orWhereExists(
+              knex('revision_photos as rp')
+                .join('revisions as r', 'r.id', 'rp.revision_id')
+                .whereRaw('rp.photo_id = p.id')
+                .whereNot('r.state', 'draft'),
+            ),
         ),
     );
     if (usable !== photos.size) fields.photoIds = ['One of the photos is not yours or no longer exists; upload it again.'];
@@ -70,13 +90,23 @@ export async function writeRevisionContent(trx: Knex.Transaction, revisionId: nu
   await trx('revision_chassis').where({ revision_id: revisionId }).delete();
   await trx('revision_photos').where({ revision_id: revisionId }).delete();
   const unique = (ids: number[]) => [...new Set(ids)];
-  if (values.machineIds.length) await trx('revision_machines').insert(unique(values.machineIds).map((machine_id) => ({ revision_id: revisionId, machine_id })));
-  if (values.chassisIds.length) await trx('revision_chassis').insert(unique(values.chassisIds).map((chassis_family_id) => ({ revision_id: revisionId, chassis_family_id })));
-  if (values.photoIds.length) await trx('revision_photos').insert(unique(values.photoIds).map((photo_id, position) => ({ revision_id: revisionId, photo_id, position })));
+  if (values.machineIds.length)
+    await trx('revision_machines').insert(unique(values.machineIds).map((machine_id) => ({ revision_id: revisionId, machine_id })));
+  if (values.chassisIds.length)
+    await trx('revision_chassis').insert(
+      unique(values.chassisIds).map((chassis_family_id) => ({ revision_id: revisionId, chassis_family_id })),
+    );
+  if (values.photoIds.length)
+    await trx('revision_photos').insert(
+      unique(values.photoIds).map((photo_id, position) => ({ revision_id: revisionId, photo_id, position })),
+    );
 }
 
 /** Inserts an empty draft revision numbered after every revision of the fix (the fix row is locked meanwhile). */
-export async function insertDraftRow(trx: Knex.Transaction, fields: { fixId: number; authorId: number; baseRevisionId: number | null; amendsRevisionId: number | null }): Promise<number> {
+export async function insertDraftRow(
+  trx: Knex.Transaction,
+  fields: { fixId: number; authorId: number; baseRevisionId: number | null; amendsRevisionId: number | null },
+): Promise<number> {
   await trx('fixes').where({ id: fields.fixId }).forUpdate().first('id');
   const top = await trx('revisions').where({ fix_id: fields.fixId }).max<{ n: number | null }[]>('number as n').first();
   const [{ id }] = await trx('revisions')
@@ -120,10 +150,13 @@ export async function createDraft(writer: Writer, input: CreateDraftInput): Prom
       if (fixId !== null) {
         const fix = await trx('fixes').where({ id: fixId }).whereNull('deleted_at').first('id', 'current_revision_id', 'locked_at');
         if (!fix?.current_revision_id) return refuse('not_found', 'There is no such fix to edit.');
-        if (!can(writer, 'write_fix', { locked: fix.locked_at !== null })) return refuse('forbidden', 'This fix is locked by a moderator and takes no new revisions for now.');
+        if (!can(writer, 'write_fix', { locked: fix.locked_at !== null }))
+          return refuse('forbidden', 'This fix is locked by a moderator and takes no new revisions for now.');
         baseRevisionId = fix.current_revision_id;
       } else {
-        const [row] = await trx('fixes').insert({ slug: `draft-${randomBytes(6).toString('hex')}`, created_by: writer.id }).returning('id');
+        const [row] = await trx('fixes')
+          .insert({ slug: `draft-${randomBytes(6).toString('hex')}`, created_by: writer.id })
+          .returning('id');
         fixId = row.id as number;
       }
       const id = await insertDraftRow(trx, { fixId, authorId: writer.id, baseRevisionId, amendsRevisionId: null });
@@ -133,7 +166,8 @@ export async function createDraft(writer: Writer, input: CreateDraftInput): Prom
     if (!created.ok) return created;
     revisionId = created.value;
   } catch (error) {
-    if (isOneDraftViolation(error)) return refuse('conflict', 'You already have a draft of this fix; it was opened instead of starting another.');
+    if (isOneDraftViolation(error))
+      return refuse('conflict', 'You already have a draft of this fix; it was opened instead of starting another.');
     throw error;
   }
   return saved(knex, revisionId);
@@ -146,10 +180,18 @@ async function saved(knex: Knex, revisionId: number): Promise<Outcome<DraftSaved
 }
 
 /** The writer's own draft, or why it cannot be changed. */
-export async function ownDraft(knex: Knex, writer: Writer, revisionId: number): Promise<Outcome<{ id: number; fixId: number; parentId: number | null }>> {
+export async function ownDraft(
+  knex: Knex,
+  writer: Writer,
+  revisionId: number,
+): Promise<Outcome<{ id: number; fixId: number; parentId: number | null }>> {
   const row = await knex('revisions').where({ id: revisionId }).first('id', 'fix_id', 'author_id', 'state', 'parent_revision_id');
   if (!row || row.author_id !== writer.id) return refuse('not_found', 'There is no such draft among yours.');
-  if (row.state !== 'draft') return refuse('conflict', `This revision is ${row.state} and can no longer change. Your text is still in this browser; start a new revision to carry it on.`);
+  if (row.state !== 'draft')
+    return refuse(
+      'conflict',
+      `This revision is ${row.state} and can no longer change. Your text is still in this browser; start a new revision to carry it on.`,
+    );
   return succeed({ id: row.id, fixId: row.fix_id, parentId: row.parent_revision_id });
 }
 
@@ -157,7 +199,11 @@ export async function ownDraft(knex: Knex, writer: Writer, revisionId: number): 
  * Saves the writer's draft in place. `baseRevisionId` may move the base to the fix's live revision only: that is how
  * a writer carries their text over after the fix changed under them.
  */
-export async function saveDraft(writer: Writer, revisionId: number, input: { values: unknown; baseRevisionId?: number | null }): Promise<Outcome<DraftSaved>> {
+export async function saveDraft(
+  writer: Writer,
+  revisionId: number,
+  input: { values: unknown; baseRevisionId?: number | null },
+): Promise<Outcome<DraftSaved>> {
   const values = parseDraftValues(input.values);
   if (!values.ok) return values;
   const knex = db();
@@ -169,7 +215,8 @@ export async function saveDraft(writer: Writer, revisionId: number, input: { val
     if (!draft.ok) return draft;
     if (input.baseRevisionId !== undefined && input.baseRevisionId !== draft.value.parentId) {
       const fix = await trx('fixes').where({ id: draft.value.fixId }).first('current_revision_id');
-      if (input.baseRevisionId !== fix?.current_revision_id) return refuse('conflict', 'A draft can only be moved onto the live revision of its fix.');
+      if (input.baseRevisionId !== fix?.current_revision_id)
+        return refuse('conflict', 'A draft can only be moved onto the live revision of its fix.');
       await trx('revisions').where({ id: revisionId }).update({ parent_revision_id: input.baseRevisionId });
     }
     await writeRevisionContent(trx, revisionId, values.value);
@@ -184,7 +231,9 @@ export async function discardDraft(writer: Writer, revisionId: number): Promise<
   const knex = db();
   const draft = await ownDraft(knex, writer, revisionId);
   if (!draft.ok) return draft;
-  await knex('revisions').where({ id: revisionId }).update({ state: 'withdrawn', withdrawn_at: knex.fn.now(), proof_note: 'Discarded by its author.' });
+  await knex('revisions')
+    .where({ id: revisionId })
+    .update({ state: 'withdrawn', withdrawn_at: knex.fn.now(), proof_note: 'Discarded by its author.' });
   return succeed(null);
 }
 

@@ -21,7 +21,8 @@ export function invoiceLine(code: string): string {
   return `Repair notes: ${noteUrl(code)}`;
 }
 
-export type CreateNoteResult = { ok: true; code: string } | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
+export type CreateNoteResult =
+  { ok: true; code: string } | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
 
 const MAX_CODE_ATTEMPTS = 5;
 
@@ -31,10 +32,20 @@ export async function createHandoverNote(author: NoteAuthor, data: HandoverNoteD
   if (!fix) return { ok: false, code: 'not_found', message: `No fix "${data.fix}".` };
   const revisionId = data.revision === undefined ? fix.currentRevisionId : await proofedRevisionId(fix.id, data.revision, knex);
   if (revisionId === null) {
-    return { ok: false, code: 'bad_request', message: 'A note can only point at a proofed revision.', fields: { revision: [`The fix has no proofed revision r${data.revision}.`] } };
+    return {
+      ok: false,
+      code: 'bad_request',
+      message: 'A note can only point at a proofed revision.',
+      fields: { revision: [`The fix has no proofed revision r${data.revision}.`] },
+    };
   }
   if (data.jobSheetId !== null && !(await knex('job_sheets').where({ id: data.jobSheetId, owner_id: author.id }).first('id'))) {
-    return { ok: false, code: 'bad_request', message: 'That job sheet is not one of yours.', fields: { jobSheetId: ['Choose one of your own job sheets.'] } };
+    return {
+      ok: false,
+      code: 'bad_request',
+      message: 'That job sheet is not one of yours.',
+      fields: { jobSheetId: ['Choose one of your own job sheets.'] },
+    };
   }
   const row = {
     fix_id: fix.id,
@@ -98,7 +109,8 @@ export interface PublicNote {
   job: JobDetailsForCustomer | null;
 }
 
-export type PublicNoteLookup = { state: 'found'; note: PublicNote } | { state: 'revoked'; code: string; revokedAt: Date } | { state: 'not_found' };
+export type PublicNoteLookup =
+  { state: 'found'; note: PublicNote } | { state: 'revoked'; code: string; revokedAt: Date } | { state: 'not_found' };
 
 export async function findPublicNote(input: string): Promise<PublicNoteLookup> {
   const code = normaliseHandoverCode(input);
@@ -207,7 +219,12 @@ function toOwnNote(row: any): OwnNote {
 
 /** The member's notes, newest first; optionally only those made from one job sheet. */
 export async function listOwnNotes(memberId: number, jobSheetId?: number): Promise<OwnNote[]> {
-  const q = noteQuery(db()).where('n.member_id', memberId).orderBy([{ column: 'n.created_at', order: 'desc' }, { column: 'n.id', order: 'desc' }]);
+  const q = noteQuery(db())
+    .where('n.member_id', memberId)
+    .orderBy([
+      { column: 'n.created_at', order: 'desc' },
+      { column: 'n.id', order: 'desc' },
+    ]);
   if (jobSheetId !== undefined) q.where('n.job_sheet_id', jobSheetId);
   return (await q).map(toOwnNote);
 }
@@ -226,7 +243,10 @@ export async function revokeNote(memberId: number, input: string): Promise<Revok
   const code = normaliseHandoverCode(input);
   if (!code) return 'not_found';
   const knex = db();
-  const updated = await knex('handover_notes').where({ code, member_id: memberId }).whereNull('revoked_at').update({ revoked_at: knex.fn.now() });
+  const updated = await knex('handover_notes')
+    .where({ code, member_id: memberId })
+    .whereNull('revoked_at')
+    .update({ revoked_at: knex.fn.now() });
   if (updated > 0) return 'revoked';
   return (await knex('handover_notes').where({ code, member_id: memberId }).first('id')) ? 'already_revoked' : 'not_found';
 }

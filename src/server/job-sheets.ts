@@ -48,7 +48,8 @@ export interface JobSheetView extends Omit<JobSheetSummary, 'machine' | 'fixCoun
   fixes: AppliedFix[];
 }
 
-export type WriteResult<T> = { ok: true; value: T } | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
+export type WriteResult<T> =
+  { ok: true; value: T } | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
 
 const machineLabel = knexLabel('m', 'mk');
 function knexLabel(machine: string, maker: string): string {
@@ -69,7 +70,10 @@ const sortColumns: Record<JobSheetListQuery['sort'], { column: string; order: 'a
   updated: [{ column: 'j.updated_at', order: 'desc' }],
   booked: [{ column: 'j.booked_in_at', order: 'desc' }],
   customer: [{ column: 'j.customer_ref', order: 'asc' }],
-  status: [{ column: 'j.status', order: 'asc' }, { column: 'j.updated_at', order: 'desc' }],
+  status: [
+    { column: 'j.status', order: 'asc' },
+    { column: 'j.updated_at', order: 'desc' },
+  ],
 };
 
 export async function listJobSheets(ownerId: number, query: JobSheetListQuery): Promise<JobSheetSummary[]> {
@@ -78,16 +82,38 @@ export async function listJobSheets(ownerId: number, query: JobSheetListQuery): 
     .leftJoin('machines as m', 'm.id', 'j.machine_id')
     .leftJoin('makers as mk', 'mk.id', 'm.maker_id')
     .where('j.owner_id', ownerId)
-    .select('j.id', 'j.customer_ref', 'j.status', 'j.booked_in_at', 'j.updated_at', knex.raw(`${machineLabel} AS machine_label`), knex.raw('(SELECT count(*) FROM job_sheet_fixes jf WHERE jf.job_sheet_id = j.id) AS fix_count'))
+    .select(
+      'j.id',
+      'j.customer_ref',
+      'j.status',
+      'j.booked_in_at',
+      'j.updated_at',
+      knex.raw(`${machineLabel} AS machine_label`),
+      knex.raw('(SELECT count(*) FROM job_sheet_fixes jf WHERE jf.job_sheet_id = j.id) AS fix_count'),
+    )
     .orderBy([...sortColumns[query.sort], { column: 'j.id', order: 'desc' }])
     .limit(500);
   if (query.status) q.where('j.status', query.status);
   if (query.q) {
     const like = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    q.where((w) => w.whereILike('j.customer_ref', like).orWhereILike('j.serial_number', like).orWhereILike('m.model_number', like).orWhereILike('j.reported_symptom', like));
+    q.where((w) =>
+      w
+        .whereILike('j.customer_ref', like)
+        .orWhereILike('j.serial_number', like)
+        .orWhereILike('m.model_number', like)
+        .orWhereILike('j.reported_symptom', like),
+    );
   }
   const rows = await q;
-  return rows.map((r) => ({ id: r.id, customerRef: r.customer_ref, machine: r.machine_label, status: r.status, bookedInAt: r.booked_in_at, updatedAt: r.updated_at, fixCount: Number(r.fix_count) }));
+  return rows.map((r) => ({
+    id: r.id,
+    customerRef: r.customer_ref,
+    machine: r.machine_label,
+    status: r.status,
+    bookedInAt: r.booked_in_at,
+    updatedAt: r.updated_at,
+    fixCount: Number(r.fix_count),
+  }));
 }
 
 /** The owner's job sheet, or null: another member's sheet is indistinguishable from a missing one. */
@@ -109,7 +135,15 @@ export async function getJobSheet(ownerId: number, id: number): Promise<JobSheet
   return {
     id: row.id,
     customerRef: row.customer_ref,
-    machine: row.machine_id ? { id: row.machine_id, slug: row.machine_slug, label: row.machine_label, makerName: row.maker_name, chassisFamilyId: row.chassis_family_id } : null,
+    machine: row.machine_id
+      ? {
+          id: row.machine_id,
+          slug: row.machine_slug,
+          label: row.machine_label,
+          makerName: row.maker_name,
+          chassisFamilyId: row.chassis_family_id,
+        }
+      : null,
     serialNumber: row.serial_number,
     reportedSymptom: row.reported_symptom,
     findings: row.findings,
@@ -120,7 +154,13 @@ export async function getJobSheet(ownerId: number, id: number): Promise<JobSheet
     bookedInAt: row.booked_in_at,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
-    fixes: fixes.map((f) => ({ slug: f.slug, title: f.title, revisionNumber: f.number, permalink: `/fixes/${f.slug}/r/${f.number}`, liveRevisionNumber: f.live_number })),
+    fixes: fixes.map((f) => ({
+      slug: f.slug,
+      title: f.title,
+      revisionNumber: f.number,
+      permalink: `/fixes/${f.slug}/r/${f.number}`,
+      liveRevisionNumber: f.live_number,
+    })),
   };
 }
 
@@ -130,7 +170,12 @@ async function machineIdOf(knex: Knex, slug: string | null | undefined): Promise
   return row ? (row.id as number) : 'unknown';
 }
 
-const unknownMachine = { ok: false as const, code: 'bad_request' as const, message: 'That machine is not in the catalogue.', fields: { machine: ['Choose a machine from the catalogue, or leave it empty.'] } };
+const unknownMachine = {
+  ok: false as const,
+  code: 'bad_request' as const,
+  message: 'That machine is not in the catalogue.',
+  fields: { machine: ['Choose a machine from the catalogue, or leave it empty.'] },
+};
 
 /** Parts lines keep the order-list shape; a line without a source is marked as coming from this job. */
 function partsJson(parts: JobPart[], customerRef: string): string {
@@ -168,7 +213,15 @@ export async function updateJobSheet(ownerId: number, id: number, patch: JobShee
     if (machineId === 'unknown') return unknownMachine;
     changes.machine_id = machineId;
   }
-  const columns = { customerRef: 'customer_ref', serialNumber: 'serial_number', reportedSymptom: 'reported_symptom', findings: 'findings', labourMinutes: 'labour_minutes', status: 'status', outcome: 'outcome' } as const;
+  const columns = {
+    customerRef: 'customer_ref',
+    serialNumber: 'serial_number',
+    reportedSymptom: 'reported_symptom',
+    findings: 'findings',
+    labourMinutes: 'labour_minutes',
+    status: 'status',
+    outcome: 'outcome',
+  } as const;
   for (const [key, column] of Object.entries(columns) as [keyof typeof columns, string][]) {
     if (patch[key] !== undefined) changes[column] = patch[key];
   }
@@ -185,12 +238,22 @@ export async function deleteJobSheet(ownerId: number, id: number): Promise<boole
 /** Pins the fix's live revision (or the proofed one named) to the job; applying again re-pins. */
 export async function applyFixToJob(ownerId: number, id: number, fixSlug: string, revision?: number): Promise<WriteResult<number>> {
   const knex = db();
-  if (!(await knex('job_sheets').where({ id, owner_id: ownerId }).first('id'))) return { ok: false, code: 'not_found', message: 'No job sheet with that number.' };
+  if (!(await knex('job_sheets').where({ id, owner_id: ownerId }).first('id')))
+    return { ok: false, code: 'not_found', message: 'No job sheet with that number.' };
   const fix = await liveFixBySlug(fixSlug, knex);
   if (!fix) return { ok: false, code: 'bad_request', message: 'No such fix.', fields: { fix: [`No fix "${fixSlug}".`] } };
   const revisionId = revision === undefined ? fix.currentRevisionId : await proofedRevisionId(fix.id, revision, knex);
-  if (revisionId === null) return { ok: false, code: 'bad_request', message: 'No such revision.', fields: { revision: [`The fix has no proofed revision r${revision}.`] } };
-  await knex('job_sheet_fixes').insert({ job_sheet_id: id, fix_id: fix.id, revision_id: revisionId }).onConflict(['job_sheet_id', 'fix_id']).merge(['revision_id']);
+  if (revisionId === null)
+    return {
+      ok: false,
+      code: 'bad_request',
+      message: 'No such revision.',
+      fields: { revision: [`The fix has no proofed revision r${revision}.`] },
+    };
+  await knex('job_sheet_fixes')
+    .insert({ job_sheet_id: id, fix_id: fix.id, revision_id: revisionId })
+    .onConflict(['job_sheet_id', 'fix_id'])
+    .merge(['revision_id']);
   await knex('job_sheets').where({ id }).update({ updated_at: knex.fn.now() });
   return { ok: true, value: id };
 }
@@ -198,7 +261,10 @@ export async function applyFixToJob(ownerId: number, id: number, fixSlug: string
 export async function removeFixFromJob(ownerId: number, id: number, fixSlug: string): Promise<boolean> {
   const knex = db();
   if (!(await knex('job_sheets').where({ id, owner_id: ownerId }).first('id'))) return false;
-  const removed = await knex('job_sheet_fixes').where('job_sheet_id', id).whereIn('fix_id', knex('fixes').where('slug', fixSlug).select('id')).delete();
+  const removed = await knex('job_sheet_fixes')
+    .where('job_sheet_id', id)
+    .whereIn('fix_id', knex('fixes').where('slug', fixSlug).select('id'))
+    .delete();
   return removed > 0;
 }
 
@@ -212,7 +278,8 @@ export async function fixChoicesFor(machine: JobMachine | null): Promise<{ slug:
     .whereNull('f.hidden_at')
     .where((q) => {
       q.whereIn('f.id', knex('fix_machines').where('machine_id', machine.id).select('fix_id'));
-      if (machine.chassisFamilyId !== null) q.orWhereIn('f.id', knex('fix_chassis').where('chassis_family_id', machine.chassisFamilyId).select('fix_id'));
+      if (machine.chassisFamilyId !== null)
+        q.orWhereIn('f.id', knex('fix_chassis').where('chassis_family_id', machine.chassisFamilyId).select('fix_id'));
     })
     .orderBy('r.title')
     .select('f.slug', 'r.title', 'r.number');
@@ -228,19 +295,36 @@ export interface InvoiceLine {
 }
 
 /** Lines to paste or import into an invoicing program: labour, parts, and the customer's note links. */
-export async function invoiceLinesFor(ownerId: number, id: number): Promise<{ jobSheetId: number; customerRef: string; lines: InvoiceLine[] } | null> {
+export async function invoiceLinesFor(
+  ownerId: number,
+  id: number,
+): Promise<{ jobSheetId: number; customerRef: string; lines: InvoiceLine[] } | null> {
   const job = await getJobSheet(ownerId, id);
   if (!job) return null;
   const lines: InvoiceLine[] = [];
-  if (job.labourMinutes > 0) lines.push({ kind: 'labour', description: 'Labour', quantity: Math.round((job.labourMinutes / 60) * 100) / 100, unit: 'h', link: '' });
+  if (job.labourMinutes > 0)
+    lines.push({ kind: 'labour', description: 'Labour', quantity: Math.round((job.labourMinutes / 60) * 100) / 100, unit: 'h', link: '' });
   for (const part of job.partsUsed) {
     const what = [part.kind.replace(/_/g, ' '), part.value, part.rating].filter((t) => t !== '').join(' ');
     lines.push({ kind: 'part', description: part.ref ? `${what} (${part.ref})` : what, quantity: part.quantity, unit: 'pcs', link: '' });
   }
   const notes = (await listOwnNotes(ownerId, id)).filter((n) => n.revokedAt === null);
-  for (const note of notes) lines.push({ kind: 'repair_notes', description: `Repair notes: ${note.fixTitle} (r${note.revisionNumber})`, quantity: 1, unit: '', link: note.url });
+  for (const note of notes)
+    lines.push({
+      kind: 'repair_notes',
+      description: `Repair notes: ${note.fixTitle} (r${note.revisionNumber})`,
+      quantity: 1,
+      unit: '',
+      link: note.url,
+    });
   for (const fix of job.fixes.filter((f) => !notes.some((n) => n.fixSlug === f.slug))) {
-    lines.push({ kind: 'fix', description: `Repair followed: ${fix.title} (r${fix.revisionNumber})`, quantity: 1, unit: '', link: new URL(fix.permalink, config().PUBLIC_ORIGIN).href });
+    lines.push({
+      kind: 'fix',
+      description: `Repair followed: ${fix.title} (r${fix.revisionNumber})`,
+      quantity: 1,
+      unit: '',
+      link: new URL(fix.permalink, config().PUBLIC_ORIGIN).href,
+    });
   }
   return { jobSheetId: job.id, customerRef: job.customerRef, lines };
 }
@@ -256,7 +340,8 @@ export type JobSheetRequest = { ok: true; ownerId: number; id: number } | { ok: 
 /** The signed-in owner and the sheet number of a job sheet endpoint, or the answer to give instead. */
 export function jobSheetRequest(user: SessionUser | null | undefined, rawId: string | undefined): JobSheetRequest {
   if (!user) return { ok: false, response: apiError('unauthorised', 'Sign in to use your job sheets.') };
-  if (!can(user, 'own_job_sheets')) return { ok: false, response: apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.') };
+  if (!can(user, 'own_job_sheets'))
+    return { ok: false, response: apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.') };
   const id = jobSheetIdSchema.safeParse(rawId);
   // A malformed number is as unknown as someone else's sheet.
   if (!id.success) return { ok: false, response: jobSheetNotFound() };

@@ -20,18 +20,34 @@ const columns: Record<FixFlagAction, { at: string; by: string; set: boolean }> =
   unhide: { at: 'hidden_at', by: 'hidden_by', set: false },
 };
 
-export async function setFixFlag(moderator: Writer, fixSlug: string, input: z.infer<typeof fixFlagSchema>): Promise<Outcome<{ fixId: number }>> {
+export async function setFixFlag(
+  moderator: Writer,
+  fixSlug: string,
+  input: z.infer<typeof fixFlagSchema>,
+): Promise<Outcome<{ fixId: number }>> {
   const permission = input.action === 'lock' || input.action === 'unlock' ? 'lock_fix' : 'hide_fix';
   if (!can(moderator, permission)) return refuse('forbidden', 'Only moderators lock or hide fixes.');
   const column = columns[input.action];
   return db().transaction(async (trx) => {
     const fix = await trx('fixes').where({ slug: fixSlug }).whereNull('deleted_at').forUpdate().first('id', column.at);
     if (!fix) return refuse('not_found', 'There is no such fix.');
-    if ((fix[column.at] !== null) === column.set) return refuse('conflict', `This fix is already ${input.action === 'lock' ? 'locked' : input.action === 'unlock' ? 'unlocked' : input.action === 'hide' ? 'hidden' : 'shown'}.`);
-    await trx('fixes').where({ id: fix.id }).update({ [column.at]: column.set ? trx.fn.now() : null, [column.by]: column.set ? moderator.id : null });
+    if ((fix[column.at] !== null) === column.set)
+      return refuse(
+        'conflict',
+        `This fix is already ${input.action === 'lock' ? 'locked' : input.action === 'unlock' ? 'unlocked' : input.action === 'hide' ? 'hidden' : 'shown'}.`,
+      );
+    await trx('fixes')
+      .where({ id: fix.id })
+      .update({ [column.at]: column.set ? trx.fn.now() : null, [column.by]: column.set ? moderator.id : null });
     // A hidden fix leaves search at once; shown again, it comes back.
     if (input.action === 'hide' || input.action === 'unhide') await refreshFixSearchRow(trx, fix.id);
-    await writeAudit(trx, { actorId: moderator.id, action: `fix.${input.action}`, subjectType: 'fix', subjectId: fix.id, detail: { note: input.note } });
+    await writeAudit(trx, {
+      actorId: moderator.id,
+      action: `fix.${input.action}`,
+      subjectType: 'fix',
+      subjectId: fix.id,
+      detail: { note: input.note },
+    });
     return succeed({ fixId: fix.id as number });
   });
 }

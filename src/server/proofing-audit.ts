@@ -17,7 +17,13 @@ export type AuditAction =
 
 export async function writeAudit(
   knex: Knex,
-  entry: { actorId: number; action: AuditAction; subjectType: 'revision' | 'report' | 'fix'; subjectId: number; detail?: Record<string, unknown> },
+  entry: {
+    actorId: number;
+    action: AuditAction;
+    subjectType: 'revision' | 'report' | 'fix';
+    subjectId: number;
+    detail?: Record<string, unknown>;
+  },
 ): Promise<void> {
   await knex('audit_log').insert({
     actor_id: entry.actorId,

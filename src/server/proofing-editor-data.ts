@@ -43,33 +43,86 @@ export async function newFixEditor(user: SessionUser, url: URL): Promise<EditorP
     if (!record || record.authorId !== user.id) return { kind: 'not_found' };
     if (record.fixSlug) return { kind: 'redirect', to: `/fixes/${record.fixSlug}/edit` };
     if (record.state !== 'draft') {
-      return { kind: 'message', title: `r${record.number} is ${record.state}`, text: 'This revision is no longer a draft, so it cannot change. Your revisions page shows where it stands and lets you amend it.', link: yours };
+      return {
+        kind: 'message',
+        title: `r${record.number} is ${record.state}`,
+        text: 'This revision is no longer a draft, so it cannot change. Your revisions page shows where it stands and lets you amend it.',
+        link: yours,
+      };
     }
-    return { kind: 'editor', title: 'Write a fix', waiting: null, props: { fixSlug: null, draft: editorRevision(record), start: { values: record.values, machines: record.machines, chassis: record.chassis, photos: record.photos }, liveRevisionNumber: null, notice: null, doneHref: '/write/mine' } };
+    return {
+      kind: 'editor',
+      title: 'Write a fix',
+      waiting: null,
+      props: {
+        fixSlug: null,
+        draft: editorRevision(record),
+        start: { values: record.values, machines: record.machines, chassis: record.chassis, photos: record.photos },
+        liveRevisionNumber: null,
+        notice: null,
+        doneHref: '/write/mine',
+      },
+    };
   }
   const symptom = (url.searchParams.get('symptom') ?? '').trim().slice(0, 200);
   const machines = await machinesBySlug(url.searchParams.getAll('machine').filter((s) => /^[a-z0-9-]{1,120}$/.test(s)));
   const values = emptyDraft({ symptom, machineIds: machines.map((m) => m.id) });
-  const notice = symptom || machines.length ? 'Started from your search: check the symptom and the machine, then write what fixed it.' : null;
-  return { kind: 'editor', title: 'Write a fix', waiting: null, props: { fixSlug: null, draft: null, start: { values, machines, chassis: [], photos: [] }, liveRevisionNumber: null, notice, doneHref: '/write/mine' } };
+  const notice =
+    symptom || machines.length ? 'Started from your search: check the symptom and the machine, then write what fixed it.' : null;
+  return {
+    kind: 'editor',
+    title: 'Write a fix',
+    waiting: null,
+    props: {
+      fixSlug: null,
+      draft: null,
+      start: { values, machines, chassis: [], photos: [] },
+      liveRevisionNumber: null,
+      notice,
+      doneHref: '/write/mine',
+    },
+  };
 }
 
 /** `/fixes/:slug/edit`: the writer's open draft of the fix, or a new one from the live revision (or `?from=n`, restored). */
 export async function liveFixEditor(user: SessionUser, slug: string, url: URL): Promise<EditorPage> {
   const knex = db();
-  const fix = await knex('fixes').where({ slug }).whereNull('deleted_at').whereNotNull('current_revision_id').first('id', 'current_revision_id', 'locked_at', 'hidden_at');
+  const fix = await knex('fixes')
+    .where({ slug })
+    .whereNull('deleted_at')
+    .whereNotNull('current_revision_id')
+    .first('id', 'current_revision_id', 'locked_at', 'hidden_at');
   if (!fix || (fix.hidden_at && !can(user, 'hide_fix'))) return { kind: 'not_found' };
   if (!can(user, 'write_fix', { locked: fix.locked_at !== null })) {
-    return { kind: 'message', title: 'This fix is locked', text: 'A moderator has locked this fix against edits for now. You can still report a problem with it from the fix page.', link: { href: `/fixes/${slug}`, label: 'Back to the fix' } };
+    return {
+      kind: 'message',
+      title: 'This fix is locked',
+      text: 'A moderator has locked this fix against edits for now. You can still report a problem with it from the fix page.',
+      link: { href: `/fixes/${slug}`, label: 'Back to the fix' },
+    };
   }
   const live = await loadRevision(knex, fix.current_revision_id);
   if (!live) return { kind: 'not_found' };
-  const waitingRow = await knex('revisions').where({ fix_id: fix.id, author_id: user.id, state: 'submitted' }).orderBy('number', 'desc').first('number');
+  const waitingRow = await knex('revisions')
+    .where({ fix_id: fix.id, author_id: user.id, state: 'submitted' })
+    .orderBy('number', 'desc')
+    .first('number');
   const waiting = waitingRow ? { number: waitingRow.number as number } : null;
   const base = { fixSlug: slug, liveRevisionNumber: live.number, doneHref: '/write/mine' };
   const title = `Edit: ${live.values.title}`;
   const draft = await openDraftOf(user, fix.id);
-  if (draft) return { kind: 'editor', title, waiting, props: { ...base, draft: editorRevision(draft), start: { values: draft.values, machines: draft.machines, chassis: draft.chassis, photos: draft.photos }, notice: null } };
+  if (draft)
+    return {
+      kind: 'editor',
+      title,
+      waiting,
+      props: {
+        ...base,
+        draft: editorRevision(draft),
+        start: { values: draft.values, machines: draft.machines, chassis: draft.chassis, photos: draft.photos },
+        notice: null,
+      },
+    };
   const fromParam = Number(url.searchParams.get('from') ?? '');
   if (Number.isSafeInteger(fromParam) && fromParam >= 1 && fromParam !== live.number) {
     const oldId = await revisionIdByNumber(knex, fix.id, fromParam);
@@ -77,8 +130,23 @@ export async function liveFixEditor(user: SessionUser, slug: string, url: URL): 
     if (old?.state === 'proofed') {
       const values = { ...old.values, editSummary: `Restores r${old.number} as a new revision.` };
       const notice = `You are restoring r${old.number}. It becomes a new revision on top of the live r${live.number}, and a moderator proofs it like any other; r${live.number} stays in the history.`;
-      return { kind: 'editor', title, waiting, props: { ...base, draft: null, start: { values, machines: old.machines, chassis: old.chassis, photos: old.photos }, notice } };
+      return {
+        kind: 'editor',
+        title,
+        waiting,
+        props: { ...base, draft: null, start: { values, machines: old.machines, chassis: old.chassis, photos: old.photos }, notice },
+      };
     }
   }
-  return { kind: 'editor', title, waiting, props: { ...base, draft: null, start: { values: { ...live.values, editSummary: '' }, machines: live.machines, chassis: live.chassis, photos: live.photos }, notice: null } };
+  return {
+    kind: 'editor',
+    title,
+    waiting,
+    props: {
+      ...base,
+      draft: null,
+      start: { values: { ...live.values, editSummary: '' }, machines: live.machines, chassis: live.chassis, photos: live.photos },
+      notice: null,
+    },
+  };
 }

@@ -37,7 +37,8 @@ async function readCapped(request: Request, maxBytes: number): Promise<string | 
 export async function readInput(request: Request): Promise<ReadInput | Failure> {
   const type = (request.headers.get('content-type') ?? '').toLowerCase();
   const form = type.startsWith('application/x-www-form-urlencoded');
-  if (!form && !type.startsWith('application/json')) return refuse('unsupported_media_type', 'Send JSON (Content-Type: application/json) or a form.');
+  if (!form && !type.startsWith('application/json'))
+    return refuse('unsupported_media_type', 'Send JSON (Content-Type: application/json) or a form.');
   const text = await readCapped(request, form ? MAX_FORM_BYTES : MAX_JSON_BYTES);
   if (text === null) return refuse('payload_too_large', 'The request is too large. A fix this long should be split into two fixes.');
   if (form) return { form, data: Object.fromEntries(new URLSearchParams(text)) };
@@ -69,11 +70,18 @@ export function idParam(value: string | undefined): number | null {
  * Answers a JSON caller with the outcome (or the error shape), and a form post with a 303 back to a page, carrying
  * the message in the query so the page can show it without JavaScript.
  */
-export function answer<T>(outcome: Outcome<T>, input: { form: boolean }, options: { status?: number; back: string; done?: string; errorParam?: string }): Response {
+export function answer<T>(
+  outcome: Outcome<T>,
+  input: { form: boolean },
+  options: { status?: number; back: string; done?: string; errorParam?: string },
+): Response {
   if (input.form) {
     const target = new URL(outcome.ok ? (options.done ?? options.back) : options.back, 'http://local');
     if (!outcome.ok) target.searchParams.set(options.errorParam ?? 'error', fieldSummary(outcome));
-    return new Response(null, { status: 303, headers: { Location: `${target.pathname}${target.search}${target.hash}`, 'Cache-Control': 'private, no-store' } });
+    return new Response(null, {
+      status: 303,
+      headers: { Location: `${target.pathname}${target.search}${target.hash}`, 'Cache-Control': 'private, no-store' },
+    });
   }
   if (!outcome.ok) return failureResponse(outcome);
   return json(outcome.value ?? { ok: true }, { status: options.status ?? 200, cache: 'private' });

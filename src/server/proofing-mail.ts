@@ -29,10 +29,16 @@ const subjects: Record<ProofingOutcome, (n: AuthorNotice) => string> = {
 
 function paragraphs(n: AuthorNotice): string[] {
   const lines: string[] = [];
-  if (n.outcome === 'proofed') lines.push(`A moderator proofed r${n.revisionNumber}: readers now see it on the fix page. Thank you for writing it up.`);
-  if (n.outcome === 'returned') lines.push(`A moderator returned r${n.revisionNumber} to you. It is kept as you wrote it; amend it and submit again when you are ready.`);
+  if (n.outcome === 'proofed')
+    lines.push(`A moderator proofed r${n.revisionNumber}: readers now see it on the fix page. Thank you for writing it up.`);
+  if (n.outcome === 'returned')
+    lines.push(
+      `A moderator returned r${n.revisionNumber} to you. It is kept as you wrote it; amend it and submit again when you are ready.`,
+    );
   if (n.outcome === 'amended') {
-    lines.push(`A moderator made changes to r${n.revisionNumber} and submitted them as r${n.amendedInto ?? '?'}, which another moderator will proof. Your revision is kept unchanged in the history of your revisions.`);
+    lines.push(
+      `A moderator made changes to r${n.revisionNumber} and submitted them as r${n.amendedInto ?? '?'}, which another moderator will proof. Your revision is kept unchanged in the history of your revisions.`,
+    );
   }
   if (n.note) lines.push(`The moderator's note: ${n.note}`);
   return lines;

@@ -16,7 +16,10 @@ export function slugFromTitle(title: string): string {
 /** The first free slug of the form base, base-2, base-3 … (ignoring the fix's own row). */
 async function freeSlug(trx: Knex.Transaction, base: string, fixId: number): Promise<string> {
   const taken = new Set<string>(
-    (await trx('fixes').whereNot({ id: fixId }).where((q) => q.where('slug', base).orWhere('slug', 'like', `${base}-%`)).pluck('slug')) as string[],
+    (await trx('fixes')
+      .whereNot({ id: fixId })
+      .where((q) => q.where('slug', base).orWhere('slug', 'like', `${base}-%`))
+      .pluck('slug')) as string[],
   );
   if (!taken.has(base)) return base;
   for (let n = 2; ; n++) if (!taken.has(`${base}-${n}`)) return `${base}-${n}`;
@@ -34,8 +37,14 @@ export async function publishRevision(trx: Knex.Transaction, fixId: number, revi
   await trx('fixes').where({ id: fixId }).update({ current_revision_id: revisionId, slug });
   await trx('fix_machines').where({ fix_id: fixId }).delete();
   await trx('fix_chassis').where({ fix_id: fixId }).delete();
-  await trx.raw('INSERT INTO fix_machines (fix_id, machine_id) SELECT ?, machine_id FROM revision_machines WHERE revision_id = ?', [fixId, revisionId]);
-  await trx.raw('INSERT INTO fix_chassis (fix_id, chassis_family_id) SELECT ?, chassis_family_id FROM revision_chassis WHERE revision_id = ?', [fixId, revisionId]);
+  await trx.raw('INSERT INTO fix_machines (fix_id, machine_id) SELECT ?, machine_id FROM revision_machines WHERE revision_id = ?', [
+    fixId,
+    revisionId,
+  ]);
+  await trx.raw(
+    'INSERT INTO fix_chassis (fix_id, chassis_family_id) SELECT ?, chassis_family_id FROM revision_chassis WHERE revision_id = ?',
+    [fixId, revisionId],
+  );
   await refreshFixSearchRow(trx, fixId);
   return { slug };
 }

@@ -16,14 +16,25 @@ export interface Submitted {
 }
 
 /** Withdraws the waiting revision an amendment replaces, with a note saying into what. */
-async function replaceAmended(trx: Knex.Transaction, writer: Writer, amendedId: number, newNumber: number): Promise<Outcome<RevisionRecord | null>> {
+async function replaceAmended(
+  trx: Knex.Transaction,
+  writer: Writer,
+  amendedId: number,
+  newNumber: number,
+): Promise<Outcome<RevisionRecord | null>> {
   const amended = await loadRevision(trx, amendedId);
   if (!amended || amended.state !== 'submitted') return succeed(null);
   const byModerator = amended.authorId !== writer.id;
   if (byModerator && !can(writer, 'moderate')) return refuse('forbidden', 'Only a moderator may amend someone else’s revision.');
   const note = byModerator ? `Amended by a moderator into r${newNumber}.` : `Replaced by its author with r${newNumber}.`;
   await trx('revisions').where({ id: amendedId }).update({ state: 'withdrawn', withdrawn_at: trx.fn.now(), proof_note: note });
-  await writeAudit(trx, { actorId: writer.id, action: 'revision.amend', subjectType: 'revision', subjectId: amendedId, detail: { into: newNumber, byModerator } });
+  await writeAudit(trx, {
+    actorId: writer.id,
+    action: 'revision.amend',
+    subjectType: 'revision',
+    subjectId: amendedId,
+    detail: { into: newNumber, byModerator },
+  });
   return succeed(byModerator ? amended : null);
 }
 
@@ -44,11 +55,17 @@ export async function submitDraft(writer: Writer, revisionId: number, input: { v
     const draft = await ownDraft(trx, writer, revisionId);
     if (!draft.ok) return draft;
     const fix = await trx('fixes').where({ id: draft.value.fixId }).forUpdate().first('current_revision_id', 'locked_at');
-    if (!can(writer, 'write_fix', { locked: fix.locked_at !== null })) return refuse('forbidden', 'This fix is locked by a moderator and takes no new revisions for now. Your draft is kept.');
+    if (!can(writer, 'write_fix', { locked: fix.locked_at !== null }))
+      return refuse('forbidden', 'This fix is locked by a moderator and takes no new revisions for now. Your draft is kept.');
     const mine = await loadRevision(trx, revisionId);
     if (!mine) return refuse('not_found', 'There is no such draft among yours.');
     const issues = submissionIssues(mine.values);
-    if (issues.length) return refuse('bad_request', 'The revision is not ready to submit yet; see the marked fields. Your draft is saved.', issuesToFields(issues));
+    if (issues.length)
+      return refuse(
+        'bad_request',
+        'The revision is not ready to submit yet; see the marked fields. Your draft is saved.',
+        issuesToFields(issues),
+      );
     if (mine.baseRevisionId !== fix.current_revision_id) {
       const live = fix.current_revision_id ? await loadRevision(trx, fix.current_revision_id) : null;
       return refuse(
@@ -66,7 +83,13 @@ export async function submitDraft(writer: Writer, revisionId: number, input: { v
       replaced = result.value ? result.value.id : null;
     }
     await trx('revisions').where({ id: revisionId }).update({ state: 'submitted', submitted_at: trx.fn.now() });
-    await writeAudit(trx, { actorId: writer.id, action: 'revision.submit', subjectType: 'revision', subjectId: revisionId, detail: { fixId: mine.fixId, number: mine.number } });
+    await writeAudit(trx, {
+      actorId: writer.id,
+      action: 'revision.submit',
+      subjectType: 'revision',
+      subjectId: revisionId,
+      detail: { fixId: mine.fixId, number: mine.number },
+    });
     const revision = await loadRevision(trx, revisionId);
     return succeed({ revision: revision!, replaced });
   });
@@ -91,8 +114,11 @@ export async function withdrawRevision(writer: Writer, revisionId: number): Prom
   return knex.transaction(async (trx): Promise<Outcome<null>> => {
     const row = await trx('revisions').where({ id: revisionId }).forUpdate().first('author_id', 'state');
     if (!row || row.author_id !== writer.id) return refuse('not_found', 'There is no such revision among yours.');
-    if (row.state !== 'submitted') return refuse('conflict', `This revision is ${row.state}; only a revision waiting for proofing can be withdrawn.`);
-    await trx('revisions').where({ id: revisionId }).update({ state: 'withdrawn', withdrawn_at: trx.fn.now(), proof_note: 'Withdrawn by its author.' });
+    if (row.state !== 'submitted')
+      return refuse('conflict', `This revision is ${row.state}; only a revision waiting for proofing can be withdrawn.`);
+    await trx('revisions')
+      .where({ id: revisionId })
+      .update({ state: 'withdrawn', withdrawn_at: trx.fn.now(), proof_note: 'Withdrawn by its author.' });
     await writeAudit(trx, { actorId: writer.id, action: 'revision.withdraw', subjectType: 'revision', subjectId: revisionId });
     return succeed(null);
   });
@@ -107,16 +133,33 @@ export async function amendRevision(writer: Writer, revisionId: number): Promise
   const original = await loadRevision(knex, revisionId);
   if (!original) return refuse('not_found', 'There is no such revision.');
   const own = original.authorId === writer.id;
-  const allowed = own ? original.state === 'returned' || original.state === 'submitted' : original.state === 'submitted' && can(writer, 'moderate');
+  const allowed = own
+    ? original.state === 'returned' || original.state === 'submitted'
+    : original.state === 'submitted' && can(writer, 'moderate');
   if (!allowed) {
-    return refuse(own ? 'conflict' : 'forbidden', own ? `This revision is ${original.state}; only a returned or waiting revision can be amended.` : 'Only a moderator may amend someone else’s revision, and only while it waits for proofing.');
+    return refuse(
+      own ? 'conflict' : 'forbidden',
+      own
+        ? `This revision is ${original.state}; only a returned or waiting revision can be amended.`
+        : 'Only a moderator may amend someone else’s revision, and only while it waits for proofing.',
+    );
   }
-  if (!can(writer, 'write_fix', { locked: original.fixLocked })) return refuse('forbidden', 'This fix is locked by a moderator and takes no new revisions for now.');
+  if (!can(writer, 'write_fix', { locked: original.fixLocked }))
+    return refuse('forbidden', 'This fix is locked by a moderator and takes no new revisions for now.');
   const existing = await knex('revisions').where({ fix_id: original.fixId, author_id: writer.id, state: 'draft' }).first('id');
-  if (existing) return refuse('conflict', 'You already have a draft of this fix; finish or discard it first.', undefined, { draftId: existing.id });
+  if (existing)
+    return refuse('conflict', 'You already have a draft of this fix; finish or discard it first.', undefined, { draftId: existing.id });
   const id = await knex.transaction(async (trx) => {
-    const draftId = await insertDraftRow(trx, { fixId: original.fixId, authorId: writer.id, baseRevisionId: original.baseRevisionId, amendsRevisionId: original.id });
-    await writeRevisionContent(trx, draftId, { ...original.values, editSummary: own ? original.values.editSummary : `Moderator's amendment of r${original.number}.` });
+    const draftId = await insertDraftRow(trx, {
+      fixId: original.fixId,
+      authorId: writer.id,
+      baseRevisionId: original.baseRevisionId,
+      amendsRevisionId: original.id,
+    });
+    await writeRevisionContent(trx, draftId, {
+      ...original.values,
+      editSummary: own ? original.values.editSummary : `Moderator's amendment of r${original.number}.`,
+    });
     return draftId;
   });
   const revision = await loadRevision(knex, id);

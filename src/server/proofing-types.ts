@@ -28,10 +28,16 @@ export function refuse(code: ErrorCode, message: string, fields?: Record<string,
 export function failureResponse(failure: Failure): Response {
   const response = apiError(failure.code, failure.message, failure.fields);
   if (!failure.detail) return response;
-  return new Response(JSON.stringify({ error: { code: failure.code, message: failure.message, ...(failure.fields ? { fields: failure.fields } : {}) }, ...failure.detail }), {
-    status: response.status,
-    headers: response.headers,
-  });
+  return new Response(
+    JSON.stringify({
+      error: { code: failure.code, message: failure.message, ...(failure.fields ? { fields: failure.fields } : {}) },
+      ...failure.detail,
+    }),
+    {
+      status: response.status,
+      headers: response.headers,
+    },
+  );
 }
 
 /** Groups zod-style issues into field messages keyed by dotted path. */

@@ -70,23 +70,39 @@ export async function listWaitingRevisions(): Promise<DeskEntry[]> {
 }
 
 export const proofNoteSchema = z.string().trim().max(2000, 'The note is at most 2000 characters.');
-export const returnNoteSchema = proofNoteSchema.pipe(z.string().min(1, 'Say what the author should change: a returned revision always carries a note.'));
+export const returnNoteSchema = proofNoteSchema.pipe(
+  z.string().min(1, 'Say what the author should change: a returned revision always carries a note.'),
+);
 
 type Decision = 'proof' | 'return';
 
 /** Locks the revision and its fix and checks the moderator may decide on it now. */
-async function decidable(trx: Knex.Transaction, moderator: Writer, revisionId: number, decision: Decision): Promise<Outcome<RevisionRecord>> {
+async function decidable(
+  trx: Knex.Transaction,
+  moderator: Writer,
+  revisionId: number,
+  decision: Decision,
+): Promise<Outcome<RevisionRecord>> {
   const locked = await trx('revisions').where({ id: revisionId }).forUpdate().first('id', 'fix_id');
   if (!locked) return refuse('not_found', 'There is no such revision.');
   await trx('fixes').where({ id: locked.fix_id }).forUpdate().first('id');
   const revision = await loadRevision(trx, revisionId);
   if (!revision) return refuse('not_found', 'There is no such revision.');
-  if (revision.state !== 'submitted') return refuse('conflict', `This revision is already ${revision.state}; another moderator may have decided on it.`);
+  if (revision.state !== 'submitted')
+    return refuse('conflict', `This revision is already ${revision.state}; another moderator may have decided on it.`);
   if (!can(moderator, 'proof', { authorId: revision.authorId })) {
-    return refuse('forbidden', revision.authorId === moderator.id ? 'Nobody proofs their own revision: another moderator decides on this one.' : 'Only moderators proof revisions.');
+    return refuse(
+      'forbidden',
+      revision.authorId === moderator.id
+        ? 'Nobody proofs their own revision: another moderator decides on this one.'
+        : 'Only moderators proof revisions.',
+    );
   }
   if (decision === 'proof' && revision.baseRevisionId !== revision.liveRevisionId) {
-    return refuse('conflict', 'The fix went live with another revision after this one was written. Return it so the author can carry their text over onto the live one.');
+    return refuse(
+      'conflict',
+      'The fix went live with another revision after this one was written. Return it so the author can carry their text over onto the live one.',
+    );
   }
   return succeed(revision);
 }
@@ -102,17 +118,31 @@ export async function proofRevision(moderator: Writer, revisionId: number, rawNo
     if (!checked.ok) return checked;
     record = checked.value;
     const issues = submissionIssues(record.values);
-    if (issues.length) return refuse('bad_request', 'This revision does not meet the rules for going live; return it with a note.', issuesToFields(issues));
+    if (issues.length)
+      return refuse('bad_request', 'This revision does not meet the rules for going live; return it with a note.', issuesToFields(issues));
     await trx('revisions')
       .where({ id: revisionId })
       .update({ state: 'proofed', proofer_id: moderator.id, proofed_at: trx.fn.now(), proof_note: note.data || null });
     const published = await publishRevision(trx, record.fixId, revisionId);
-    await writeAudit(trx, { actorId: moderator.id, action: 'revision.proof', subjectType: 'revision', subjectId: revisionId, detail: { fixId: record.fixId, number: record.number } });
+    await writeAudit(trx, {
+      actorId: moderator.id,
+      action: 'revision.proof',
+      subjectType: 'revision',
+      subjectId: revisionId,
+      detail: { fixId: record.fixId, number: record.number },
+    });
     return succeed(published);
   });
   if (outcome.ok && record) {
     const proofed: RevisionRecord = record;
-    await notifyAuthorOf(proofed.authorId, { authorName: proofed.authorName, outcome: 'proofed', fixTitle: proofed.values.title, revisionNumber: proofed.number, note: note.data || null, path: `/fixes/${outcome.value.slug}` });
+    await notifyAuthorOf(proofed.authorId, {
+      authorName: proofed.authorName,
+      outcome: 'proofed',
+      fixTitle: proofed.values.title,
+      revisionNumber: proofed.number,
+      note: note.data || null,
+      path: `/fixes/${outcome.value.slug}`,
+    });
   }
   return outcome;
 }
@@ -120,20 +150,36 @@ export async function proofRevision(moderator: Writer, revisionId: number, rawNo
 /** Returns a waiting revision to its author with a note; it stays unchanged and visible to them. */
 export async function returnRevision(moderator: Writer, revisionId: number, rawNote: unknown): Promise<Outcome<null>> {
   const note = returnNoteSchema.safeParse(rawNote ?? '');
-  if (!note.success) return refuse('bad_request', 'A returned revision needs a note for its author.', { note: note.error.issues.map((i) => i.message) });
+  if (!note.success)
+    return refuse('bad_request', 'A returned revision needs a note for its author.', { note: note.error.issues.map((i) => i.message) });
   const knex = db();
   let record: RevisionRecord | null = null;
   const outcome = await knex.transaction(async (trx): Promise<Outcome<null>> => {
     const checked = await decidable(trx, moderator, revisionId, 'return');
     if (!checked.ok) return checked;
     record = checked.value;
-    await trx('revisions').where({ id: revisionId }).update({ state: 'returned', proofer_id: moderator.id, returned_at: trx.fn.now(), proof_note: note.data });
-    await writeAudit(trx, { actorId: moderator.id, action: 'revision.return', subjectType: 'revision', subjectId: revisionId, detail: { note: note.data } });
+    await trx('revisions')
+      .where({ id: revisionId })
+      .update({ state: 'returned', proofer_id: moderator.id, returned_at: trx.fn.now(), proof_note: note.data });
+    await writeAudit(trx, {
+      actorId: moderator.id,
+      action: 'revision.return',
+      subjectType: 'revision',
+      subjectId: revisionId,
+      detail: { note: note.data },
+    });
     return succeed(null);
   });
   if (outcome.ok && record) {
     const returned: RevisionRecord = record;
-    await notifyAuthorOf(returned.authorId, { authorName: returned.authorName, outcome: 'returned', fixTitle: returned.values.title, revisionNumber: returned.number, note: note.data, path: '/write/mine' });
+    await notifyAuthorOf(returned.authorId, {
+      authorName: returned.authorName,
+      outcome: 'returned',
+      fixTitle: returned.values.title,
+      revisionNumber: returned.number,
+      note: note.data,
+      path: '/write/mine',
+    });
   }
   return outcome;
 }

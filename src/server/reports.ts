@@ -18,19 +18,35 @@ export const reportInputSchema = z
     reason: z.enum(reportReasons, { error: 'Choose why you are reporting this fix.' }),
     detail: z.string().trim().max(2000, 'The detail is at most 2000 characters.').default(''),
   })
-  .refine((r) => r.reason === 'spam' || r.detail.length >= 10, { path: ['detail'], message: 'Say in a sentence what is wrong, so a moderator can check it.' });
+  .refine((r) => r.reason === 'spam' || r.detail.length >= 10, {
+    path: ['detail'],
+    message: 'Say in a sentence what is wrong, so a moderator can check it.',
+  });
 export type ReportInput = z.infer<typeof reportInputSchema>;
 
 /** Files a report on a live fix; a second open report for the same reason by the same member is refused. */
 export async function createReport(reporter: Writer, fixSlug: string, input: ReportInput): Promise<Outcome<{ id: number }>> {
   if (!can(reporter, 'report_fix')) return refuse('forbidden', 'Confirm your e-mail address to report a fix.');
   const knex = db();
-  const fix = await knex('fixes').where({ slug: fixSlug }).whereNull('deleted_at').whereNull('hidden_at').whereNotNull('current_revision_id').first('id');
+  const fix = await knex('fixes')
+    .where({ slug: fixSlug })
+    .whereNull('deleted_at')
+    .whereNull('hidden_at')
+    .whereNotNull('current_revision_id')
+    .first('id');
   if (!fix) return refuse('not_found', 'There is no such fix.');
   try {
     return await knex.transaction(async (trx) => {
-      const [row] = await trx('reports').insert({ fix_id: fix.id, reporter_id: reporter.id, reason: input.reason, detail: input.detail }).returning('id');
-      await writeAudit(trx, { actorId: reporter.id, action: 'report.create', subjectType: 'report', subjectId: row.id, detail: { fixId: fix.id, reason: input.reason } });
+      const [row] = await trx('reports')
+        .insert({ fix_id: fix.id, reporter_id: reporter.id, reason: input.reason, detail: input.detail })
+        .returning('id');
+      await writeAudit(trx, {
+        actorId: reporter.id,
+        action: 'report.create',
+        subjectType: 'report',
+        subjectId: row.id,
+        detail: { fixId: fix.id, reason: input.reason },
+      });
       return succeed({ id: row.id as number });
     });
   } catch (error) {
@@ -88,8 +104,16 @@ export async function closeReport(moderator: Writer, reportId: number, input: z.
     const report = await trx('reports').where({ id: reportId }).forUpdate().first('state');
     if (!report) return refuse('not_found', 'There is no such report.');
     if (report.state !== 'open') return refuse('conflict', `This report is already ${report.state}.`);
-    await trx('reports').where({ id: reportId }).update({ state: input.outcome, resolved_by: moderator.id, resolved_at: trx.fn.now(), resolution_note: input.note || null });
-    await writeAudit(trx, { actorId: moderator.id, action: input.outcome === 'resolved' ? 'report.resolve' : 'report.dismiss', subjectType: 'report', subjectId: reportId, detail: { note: input.note } });
+    await trx('reports')
+      .where({ id: reportId })
+      .update({ state: input.outcome, resolved_by: moderator.id, resolved_at: trx.fn.now(), resolution_note: input.note || null });
+    await writeAudit(trx, {
+      actorId: moderator.id,
+      action: input.outcome === 'resolved' ? 'report.resolve' : 'report.dismiss',
+      subjectType: 'report',
+      subjectId: reportId,
+      detail: { note: input.note },
+    });
     return succeed(null);
   });
 }

@@ -41,7 +41,10 @@ export interface RevisionRecord {
 const iso = (d: Date | null): string | null => (d ? new Date(d).toISOString() : null);
 
 /** Machine and chassis labels as writers read them: "Orvane DR-410 (PAL)", "Orvane deck mechanism DM-3". */
-export async function revisionTargets(knex: Knex, revisionIds: number[]): Promise<Map<number, { machines: LabelledRef[]; chassis: LabelledRef[] }>> {
+export async function revisionTargets(
+  knex: Knex,
+  revisionIds: number[],
+): Promise<Map<number, { machines: LabelledRef[]; chassis: LabelledRef[] }>> {
   const out = new Map<number, { machines: LabelledRef[]; chassis: LabelledRef[] }>();
   for (const id of revisionIds) out.set(id, { machines: [], chassis: [] });
   if (revisionIds.length === 0) return out;
@@ -123,7 +126,12 @@ export async function loadRevision(knex: Knex, revisionId: number): Promise<Revi
     updatedAt: iso(row.updated_at)!,
     submittedAt: iso(row.submitted_at),
     proofedAt: iso(row.proofed_at),
-    values: valuesOf(row, machines.map((m) => m.id), chassis.map((c) => c.id), photos.map((p) => p.id)),
+    values: valuesOf(
+      row,
+      machines.map((m) => m.id),
+      chassis.map((c) => c.id),
+      photos.map((p) => p.id),
+    ),
     machines,
     chassis,
     photos,

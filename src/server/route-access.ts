@@ -152,9 +152,7 @@ export const routeAccess: Record<string, RouteRule> = {
 };
 
 export type RouteDecision =
-  | { kind: 'unlisted' }
-  | { kind: 'method_not_allowed'; allow: string[] }
-  | { kind: 'access'; access: Access; rule: RouteRule };
+  { kind: 'unlisted' } | { kind: 'method_not_allowed'; allow: string[] } | { kind: 'access'; access: Access; rule: RouteRule };
 
 function methodKey(method: string): RouteMethod | null {
   const upper = method.toUpperCase();

@@ -26,14 +26,23 @@ function countedReports(knex: Knex): Knex.QueryBuilder {
 
 async function statisticsWhere(scope: (q: Knex.QueryBuilder) => void): Promise<FaultStatistics> {
   const knex = db();
-  const faultQuery = countedReports(knex).join('revisions as r', 'r.id', 'f.current_revision_id').groupBy('f.id', 'f.slug', 'r.title').select('f.slug', 'r.title', knex.raw('count(*) AS reports'));
+  const faultQuery = countedReports(knex)
+    .join('revisions as r', 'r.id', 'f.current_revision_id')
+    .groupBy('f.id', 'f.slug', 'r.title')
+    .select('f.slug', 'r.title', knex.raw('count(*) AS reports'));
   scope(faultQuery);
   const outcomeQuery = countedReports(knex).groupBy('b.outcome').select('b.outcome', knex.raw('count(*) AS count'));
   scope(outcomeQuery);
   const [faultRows, outcomeRows] = await Promise.all([faultQuery, outcomeQuery]);
   const outcomes = tallyOutcomes(outcomeRows);
   return {
-    topFaults: topFaults(faultRows.map((r: { slug: string; title: string; reports: string }) => ({ slug: r.slug, title: r.title, reports: Number(r.reports) }))),
+    topFaults: topFaults(
+      faultRows.map((r: { slug: string; title: string; reports: string }) => ({
+        slug: r.slug,
+        title: r.title,
+        reports: Number(r.reports),
+      })),
+    ),
     outcomes,
     reports: totalOf(outcomes),
   };

@@ -29,7 +29,10 @@ async function signInWithPassword(page: Page, email: string, password: string): 
   await page.goto(`${base}/sign-in`);
   await page.fill('#pw-email', email);
   await page.fill('#pw-password', password);
-  await Promise.all([page.waitForNavigation(), page.click('form:has(input[value="password"]) button[type="submit"]')]);
+  await Promise.all([
+    page.waitForURL((url) => url.pathname !== '/sign-in'),
+    page.click('form:has(input[value="password"]) button[type="submit"]'),
+  ]);
 }
 
 function nav(page: Page) {
@@ -47,7 +50,7 @@ describe('joining and signing in', () => {
     await page.fill('#email', email);
     await page.fill('#password', STRONG_PASSWORD);
     await page.fill('#shopName', 'Sandbank Repairs');
-    await Promise.all([page.waitForNavigation(), page.click('button:has-text("Join")')]);
+    await Promise.all([page.waitForURL((url) => url.pathname === '/sign-up/check-email'), page.click('button:has-text("Join")')]);
     expect(new URL(page.url()).pathname).toBe('/sign-up/check-email');
     await expect(page.locator('h1').textContent()).resolves.toContain('check your inbox');
 
@@ -73,7 +76,7 @@ describe('joining and signing in', () => {
   it('shows the proofing desk to the demo moderator and not to the demo member', async () => {
     const moderatorPage = await freshPage();
     await signInWithPassword(moderatorPage, 'moderator@example.test', DEMO_PASSWORD);
-    expect(await nav(moderatorPage).locator('a[href="/proofing"]').textContent()).toBe('Proofing desk');
+    expect((await nav(moderatorPage).locator('a[href="/proofing"]').textContent())?.trim()).toBe('Proofing desk');
     await moderatorPage.context().close();
 
     const memberPage = await freshPage();
@@ -95,7 +98,10 @@ describe('suspension', () => {
     await signInWithPassword(moderatorPage, 'moderator2@example.test', DEMO_PASSWORD);
     await moderatorPage.goto(`${base}/admin/users?q=${encodeURIComponent(member.email)}`);
     await moderatorPage.fill(`#reason-${member.id}`, 'Browser test suspension');
-    await Promise.all([moderatorPage.waitForNavigation(), moderatorPage.click(`form:has(input[name="userId"][value="${member.id}"]) button:has-text("Suspend")`)]);
+    await Promise.all([
+      moderatorPage.waitForURL((url) => url.searchParams.has('notice')),
+      moderatorPage.click(`form:has(input[name="userId"][value="${member.id}"]) button:has-text("Suspend")`),
+    ]);
     await expect(moderatorPage.locator('[role="status"]').textContent()).resolves.toContain('suspended');
 
     await memberPage.reload();

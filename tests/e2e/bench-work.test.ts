@@ -119,11 +119,35 @@ describe('bench work in the browser', () => {
     try {
       const world = await makeWorld(knex);
       const shop = await makeMember(knex, { shopName: 'Longfield Audio & Video Repair Workshop' });
-      const fix = await makeFix(knex, { authorId: (await makeMember(knex)).id, machineIds: [world.machines[0]!.id], revisions: 2, cautions: cautionKinds.map((kind) => ({ kind })) });
-      const job = await createJobSheet(shop.id, jobSheetCreateSchema.parse({ customerRef: 'Ticket 9', machine: world.machines[0]!.slug, serialNumber: 'SN-0099-2231', reportedSymptom: 'Plays for a few seconds, then stops and ejects the cassette. Sometimes the clock goes blank as well.', findings: 'Drive belt stretched and glazed; idler tyre hardened; a dry joint on the capstan motor plug. Cleaned the tape path and heads.', outcome: 'Plays, records and rewinds again; tested for two hours.' }));
+      const fix = await makeFix(knex, {
+        authorId: (await makeMember(knex)).id,
+        machineIds: [world.machines[0]!.id],
+        revisions: 2,
+        cautions: cautionKinds.map((kind) => ({ kind })),
+      });
+      const job = await createJobSheet(
+        shop.id,
+        jobSheetCreateSchema.parse({
+          customerRef: 'Ticket 9',
+          machine: world.machines[0]!.slug,
+          serialNumber: 'SN-0099-2231',
+          reportedSymptom: 'Plays for a few seconds, then stops and ejects the cassette. Sometimes the clock goes blank as well.',
+          findings:
+            'Drive belt stretched and glazed; idler tyre hardened; a dry joint on the capstan motor plug. Cleaned the tape path and heads.',
+          outcome: 'Plays, records and rewinds again; tested for two hours.',
+        }),
+      );
       const created = await createHandoverNote(
         { id: shop.id, shopName: 'Longfield Audio & Video Repair Workshop' },
-        handoverNoteInputSchema.parse({ fix: fix.slug, revision: 1, jobSheetId: job.ok ? job.value : null, includeJobDetails: true, message: 'Thank you for bringing your recorder in. '.repeat(8), partsReplaced: ['Drive belt', 'Idler tyre', 'Capstan motor plug (resoldered)', 'Pinch roller', 'Mode switch'], warranty: 'Six months on parts and labour from the date of collection.' }),
+        handoverNoteInputSchema.parse({
+          fix: fix.slug,
+          revision: 1,
+          jobSheetId: job.ok ? job.value : null,
+          includeJobDetails: true,
+          message: 'Thank you for bringing your recorder in. '.repeat(8),
+          partsReplaced: ['Drive belt', 'Idler tyre', 'Capstan motor plug (resoldered)', 'Pinch roller', 'Mode switch'],
+          warranty: 'Six months on parts and labour from the date of collection.',
+        }),
       );
       code = created.ok ? created.code : '';
     } finally {
@@ -135,5 +159,34 @@ describe('bench work in the browser', () => {
     expect(await page.locator('.handover-cautions li.caution').count()).toBe(6);
     expect(pdfPages(await page.pdf({ format: 'A4' }))).toBe(1);
     await customer.close();
+  });
+
+  it('sorts and filters the job sheet list in place once its script runs', async () => {
+    const knex = testDb();
+    let email = '';
+    try {
+      const member = await makeMember(knex);
+      email = member.email;
+      for (const customerRef of ['Beta bench 2', 'Alpha bench 1', 'Gamma bench 3'])
+        await createJobSheet(member.id, jobSheetCreateSchema.parse({ customerRef }));
+    } finally {
+      await knex.destroy();
+    }
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(`${base}/sign-in?next=/jobs`);
+    await page.fill('#pw-email', email);
+    await page.fill('#pw-password', PASSWORD);
+    await page.click('form[action="/sign-in"] button[type="submit"] >> nth=0');
+    await page.waitForURL(`${base}/jobs`);
+    const refs = () => page.locator('tbody tr td:first-child').allTextContents();
+    await page.waitForSelector('#job-quick-filter');
+    await page.click('th button:has-text("Customer reference")');
+    expect(await refs()).toEqual(['Alpha bench 1', 'Beta bench 2', 'Gamma bench 3']);
+    await page.click('th button:has-text("Customer reference")');
+    expect(await refs()).toEqual(['Gamma bench 3', 'Beta bench 2', 'Alpha bench 1']);
+    await page.fill('#job-quick-filter', 'beta');
+    expect(await refs()).toEqual(['Beta bench 2']);
+    await context.close();
   });
 });

@@ -5,6 +5,7 @@ import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
+import { createUser } from '../support/sign-in';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;
 let browser: Browser;
@@ -15,6 +16,30 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
 });
+
+/** A demo fix with at least three capacitor rows, so the list has something to merge and total. */
+async function fixWithCapacitors(): Promise<{ slug: string; partCount: number }> {
+  const knex = testDb();
+  try {
+    const fix = await knex('fixes as f')
+      .join('revisions as r', 'r.id', 'f.current_revision_id')
+      .whereNull('f.deleted_at')
+      .whereNull('f.hidden_at')
+      .whereRaw(`(select count(*) from jsonb_array_elements(r.parts) p where p->>'kind' = 'capacitor') >= 3`)
+      .orderBy('f.id')
+      .first('f.slug', 'r.parts');
+    return { slug: fix.slug, partCount: (fix.parts as Array<{ quantity: number }>).reduce((sum, p) => sum + p.quantity, 0) };
+  } finally {
+    await knex.destroy();
+  }
+}
+
+async function addAllParts(page: Page, slug: string): Promise<void> {
+  await page.goto(`${base}/fixes/${slug}`);
+  await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
+  await page.waitForURL((url) => url.pathname === '/order-list' && !url.searchParams.has('add') && !url.searchParams.has('added'));
+  await hydrated(page);
+}
 
 /** Astro drops the ssr attribute once an island has hydrated. */
 async function hydrated(page: Page): Promise<void> {
@@ -72,23 +97,12 @@ describe('bleed-down tool', () => {
 
 describe('order list', () => {
   it('adds all parts of a fix as an anonymous reader, keeps them in the browser and downloads the CSV', async () => {
-    const knex = testDb();
-    // A demo fix with at least three capacitor rows, so the list has something to merge and total.
-    const fix = await knex('fixes as f')
-      .join('revisions as r', 'r.id', 'f.current_revision_id')
-      .whereNull('f.deleted_at')
-      .whereNull('f.hidden_at')
-      .whereRaw(`(select count(*) from jsonb_array_elements(r.parts) p where p->>'kind' = 'capacitor') >= 3`)
-      .first('f.slug', 'r.parts');
-    await knex.destroy();
-    const partCount = (fix.parts as Array<{ quantity: number }>).reduce((sum, p) => sum + p.quantity, 0);
-
+    const { slug, partCount } = await fixWithCapacitors();
     const context = await browser.newContext({ acceptDownloads: true });
     const page = await context.newPage();
-    await page.goto(`${base}/fixes/${fix.slug}`);
+    await page.goto(`${base}/fixes/${slug}`);
     expect(await page.locator('script').count()).toBe(0);
-    await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
-    await page.waitForURL(`${base}/order-list`);
+    await addAllParts(page, slug);
     await page.getByText(`Added ${partCount} ${partCount === 1 ? 'part' : 'parts'} to the list kept in this browser.`).waitFor();
     const rows = await page.locator('table.order-table tbody tr').count();
     expect(rows).toBeGreaterThan(0);
@@ -105,13 +119,44 @@ describe('order list', () => {
     await page.reload();
     await hydrated(page);
     await expect(page.locator('table.order-table tbody tr').count()).resolves.toBe(rows);
-    await page.goto(`${base}/fixes/${fix.slug}`);
-    await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
-    await page.waitForURL(`${base}/order-list`);
-    await hydrated(page);
+    await addAllParts(page, slug);
     await expect(page.locator('table.order-table tbody tr').count()).resolves.toBe(rows);
     const totals = await page.locator('table.order-table tbody tr td:nth-child(6)').allTextContents();
     expect(totals.reduce((sum, t) => sum + Number(t), 0)).toBe(2 * partCount);
+    await context.close();
+  });
+
+  it('merges the browser copy into a member\'s saved list on the first visit signed in, and saves edits', async () => {
+    const { slug, partCount } = await fixWithCapacitors();
+    const knex = testDb();
+    const member = await createUser(knex, { tag: 'order-list' });
+    await knex.destroy();
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await addAllParts(page, slug);
+    const rows = await page.locator('table.order-table tbody tr').count();
+
+    await page.goto(`${base}/sign-in`);
+    await page.fill('#pw-email', member.email);
+    await page.fill('#pw-password', member.password);
+    await Promise.all([page.waitForURL((url) => url.pathname !== '/sign-in'), page.click('form:has(input[value="password"]) button[type="submit"]')]);
+    await page.goto(`${base}/order-list`);
+    await hydrated(page);
+    await page.getByText(`Merged ${rows} ${rows === 1 ? 'line' : 'lines'} kept in this browser into your saved list.`).waitFor();
+    await page.getByText('Saved with your account.', { exact: true }).waitFor();
+    expect(await page.evaluate(() => window.localStorage.getItem('benchlore.order-list.v1'))).toBeNull();
+    const saved = await (await page.request.get(`${base}/api/v1/order-list`)).json();
+    expect(saved.lines.reduce((sum: number, l: { quantity: number }) => sum + l.quantity, 0)).toBe(partCount);
+
+    // An edit is saved with the account: it is there after a reload, from the server.
+    const [put] = await Promise.all([
+      page.waitForResponse((r) => r.url() === `${base}/api/v1/order-list` && r.request().method() === 'PUT'),
+      page.getByLabel(/^Quantity of /).first().fill('7'),
+    ]);
+    expect(put.status()).toBe(200);
+    await page.reload();
+    await hydrated(page);
+    await expect(page.getByLabel(/^Quantity of /).first().inputValue()).resolves.toBe('7');
     await context.close();
   });
 });

@@ -51,14 +51,22 @@ describe('account page', () => {
   it('changes the password only with the current one, then ends every session', async () => {
     const user = await createUser(knex, { tag: 'password' });
     const cookie = await signIn(base, user.email, user.password);
-    const wrong = await accountForm(cookie, { intent: 'password', currentPassword: 'not-my-password-x', newPassword: 'harbour-spindle-quartz-meadow-6' });
+    const wrong = await accountForm(cookie, {
+      intent: 'password',
+      currentPassword: 'not-my-password-x',
+      newPassword: 'harbour-spindle-quartz-meadow-6',
+    });
     expect(wrong.status).toBe(400);
     expect(await wrong.text()).toContain('That is not your current password.');
     const weak = await accountForm(cookie, { intent: 'password', currentPassword: user.password, newPassword: 'abcdefghij' });
     expect(weak.status).toBe(400);
     expect(await weak.text()).toContain('This password would be easy to guess.');
 
-    const done = await accountForm(cookie, { intent: 'password', currentPassword: user.password, newPassword: 'harbour-spindle-quartz-meadow-6' });
+    const done = await accountForm(cookie, {
+      intent: 'password',
+      currentPassword: user.password,
+      newPassword: 'harbour-spindle-quartz-meadow-6',
+    });
     expect(done.status).toBe(303);
     expect(done.headers.get('location')).toBe('/sign-in?notice=password-changed');
     expect((await fetch(`${base}/api/v1/account`, { headers: { cookie } })).status).toBe(401);
@@ -89,7 +97,8 @@ describe('account API', () => {
   it('changes only the fields sent and answers bad JSON with field messages', async () => {
     const user = await createUser(knex, { tag: 'api' });
     const cookie = await signIn(base, user.email, user.password);
-    const patch = (body: string) => fetch(`${base}/api/v1/account`, { method: 'PATCH', headers: { cookie, 'content-type': 'application/json' }, body });
+    const patch = (body: string) =>
+      fetch(`${base}/api/v1/account`, { method: 'PATCH', headers: { cookie, 'content-type': 'application/json' }, body });
     const ok = await patch(JSON.stringify({ shopName: 'Api Bench' }));
     expect(ok.status).toBe(200);
     const body = await ok.json();
@@ -113,7 +122,13 @@ describe('deleting an account', () => {
     const slug = `acc-delete-check-${randomBytes(4).toString('hex')}`;
     // A fix of their own, kept out of every listing (deleted_at) so the demo world is untouched.
     const [fix] = await knex('fixes').insert({ slug, created_by: user.id, deleted_at: new Date() }).returning('id');
-    await knex('revisions').insert({ fix_id: fix.id, number: 1, author_id: user.id, title: 'A draft of theirs', body: { type: 'doc', content: [] } });
+    await knex('revisions').insert({
+      fix_id: fix.id,
+      number: 1,
+      author_id: user.id,
+      title: 'A draft of theirs',
+      body: { type: 'doc', content: [] },
+    });
     await knex('job_sheets').insert({ owner_id: user.id, customer_ref: 'Bench job 1' });
     await knex('order_lists').insert({ owner_id: user.id, name: 'Capacitors to buy' });
     const cookie = await signIn(base, user.email, user.password);
@@ -141,7 +156,9 @@ describe('deleting an account', () => {
     const revision = await knex('revisions').where({ fix_id: fix.id }).first();
     expect(revision.author_id).toBe(user.id);
     expect((await knex('fixes').where({ id: fix.id }).first()).created_by).toBe(user.id);
-    const audit = await knex('audit_log').where({ subject_type: 'user', subject_id: String(user.id), action: 'user.delete' }).first();
+    const audit = await knex('audit_log')
+      .where({ subject_type: 'user', subject_id: String(user.id), action: 'user.delete' })
+      .first();
     expect(audit.actor_id).toBe(user.id);
     expect(audit.detail).toEqual({ jobSheets: 1, orderLists: 1 });
 
@@ -149,6 +166,9 @@ describe('deleting an account', () => {
     const after = await fetch(`${base}/account`, { headers: { cookie }, redirect: 'manual' });
     expect(after.status).toBe(302);
     expect(clearsSession(after)).toBe(true);
-    expect((await postForm(base, '/sign-in', { intent: 'password', email: user.email, password: user.password }, { ip: uniqueClientIp() })).status).toBe(401);
+    expect(
+      (await postForm(base, '/sign-in', { intent: 'password', email: user.email, password: user.password }, { ip: uniqueClientIp() }))
+        .status,
+    ).toBe(401);
   });
 });

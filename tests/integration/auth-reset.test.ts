@@ -80,10 +80,18 @@ describe('using a reset link', () => {
     // Old browser signed out, new password works, old one does not, address confirmed.
     expect((await fetch(`${base}/api/v1/account`, { headers: { cookie: oldSession } })).status).toBe(401);
     await signIn(base, user.email, NEW_PASSWORD);
-    expect((await postForm(base, '/sign-in', { intent: 'password', email: user.email, password: user.password }, { ip: uniqueClientIp() })).status).toBe(401);
+    expect(
+      (await postForm(base, '/sign-in', { intent: 'password', email: user.email, password: user.password }, { ip: uniqueClientIp() }))
+        .status,
+    ).toBe(401);
     expect((await knex('users').where({ id: user.id }).first()).emailVerified).not.toBeNull();
 
-    const again = await postForm(base, `/reset/password?token=${token}`, { token, password: 'another-fresh-choice-of-words-8' }, { ip: uniqueClientIp() });
+    const again = await postForm(
+      base,
+      `/reset/password?token=${token}`,
+      { token, password: 'another-fresh-choice-of-words-8' },
+      { ip: uniqueClientIp() },
+    );
     expect(again.status).toBe(410);
     const shown = await fetch(`${base}${link.pathname}${link.search}`);
     expect(shown.status).toBe(410);
@@ -95,14 +103,18 @@ describe('using a reset link', () => {
   it('explains an expired link and offers a new one', async () => {
     const user = await createUser(knex, { tag: 'reset-expired' });
     const link = await resetLink(user.email);
-    await knex('user_tokens').where({ user_id: user.id, purpose: 'reset_password' }).update({ expires_at: knex.raw(`now() - interval '1 second'`) });
+    await knex('user_tokens')
+      .where({ user_id: user.id, purpose: 'reset_password' })
+      .update({ expires_at: knex.raw(`now() - interval '1 second'`) });
     const res = await fetch(`${base}${link.pathname}${link.search}`);
     expect(res.status).toBe(410);
     const html = await res.text();
     expect(html).toContain('This link has expired');
     expect(html).toContain('Ask for a new link');
     const token = link.searchParams.get('token')!;
-    expect((await postForm(base, `/reset/password?token=${token}`, { token, password: NEW_PASSWORD }, { ip: uniqueClientIp() })).status).toBe(410);
+    expect(
+      (await postForm(base, `/reset/password?token=${token}`, { token, password: NEW_PASSWORD }, { ip: uniqueClientIp() })).status,
+    ).toBe(410);
   });
 
   it('stops an older link working once a newer one is sent', async () => {

@@ -59,7 +59,8 @@ describe('sign-up form', () => {
 
   it('refuses a password built from the member’s own name and address', async () => {
     const email = uniqueEmail('ownname');
-    const res = await signUp({ name: 'Quillon Marsh', email, password: `quillon${email.slice(4, 14)}` });
+    // zxcvbn alone scores "quillonmarsh" 3 or more; given the name as a user input it drops below 3.
+    const res = await signUp({ name: 'Quillon Marsh', email, password: 'quillonmarsh' });
     expect(res.status).toBe(400);
     expect(fieldMessages(await res.text(), 'password')[0]).toBe('This password would be easy to guess.');
   });
@@ -119,7 +120,9 @@ describe('joining with an address', () => {
     await signUp({ name: 'Late Opener', email, password: STRONG_PASSWORD });
     const link = linkIn(await waitForMail(INTEGRATION_PORT, email), '/verify');
     const user = await knex('users').where({ email }).first();
-    await knex('user_tokens').where({ user_id: user.id }).update({ expires_at: knex.raw(`now() - interval '1 minute'`) });
+    await knex('user_tokens')
+      .where({ user_id: user.id })
+      .update({ expires_at: knex.raw(`now() - interval '1 minute'`) });
     const res = await fetch(`${base}${link.pathname}${link.search}`);
     expect(res.status).toBe(410);
     const html = await res.text();

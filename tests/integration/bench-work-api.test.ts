@@ -15,7 +15,12 @@ let me: ReturnType<typeof as>;
 
 beforeAll(async () => {
   world = await makeWorld(knex);
-  fix = await makeFix(knex, { authorId: (await makeMember(knex)).id, machineIds: [world.machines[0]!.id], revisions: 2, cautions: [{ kind: 'mains' }] });
+  fix = await makeFix(knex, {
+    authorId: (await makeMember(knex)).id,
+    machineIds: [world.machines[0]!.id],
+    revisions: 2,
+    cautions: [{ kind: 'mains' }],
+  });
   member = await makeMember(knex, { shopName: 'Harbour Row Video' });
   me = as(base, await signIn(base, member.email, PASSWORD));
 });
@@ -26,7 +31,12 @@ describe('/api/v1/bench-reports', () => {
     const body = { fix: fix.slug, machine: world.machines[1]!.slug, outcome: 'fixed', note: 'Belt swapped, runs well.' };
     const created = await me.post('/api/v1/bench-reports', body);
     expect(created.status).toBe(201);
-    expect((await created.json()).report).toMatchObject({ created: true, counted: true, revisionNumber: 2, benchScore: { counted: 1, fixed: 1 } });
+    expect((await created.json()).report).toMatchObject({
+      created: true,
+      counted: true,
+      revisionNumber: 2,
+      benchScore: { counted: 1, fixed: 1 },
+    });
     const changed = await me.post('/api/v1/bench-reports', { ...body, outcome: 'came_back', heldDays: 30 });
     expect(changed.status).toBe(200);
     expect((await changed.json()).report.benchScore).toMatchObject({ counted: 1, fixed: 0, cameBack: 1 });
@@ -41,26 +51,52 @@ describe('/api/v1/bench-reports', () => {
     const body = await res.json();
     expect(body.error.code).toBe('bad_request');
     expect(body.error.fields.heldDays[0]).toMatch(/how many days/);
-    const wrongMachine = await (await me.post('/api/v1/bench-reports', { fix: fix.slug, machine: world.outsider.slug, outcome: 'fixed' })).json();
+    const wrongMachine = await (
+      await me.post('/api/v1/bench-reports', { fix: fix.slug, machine: world.outsider.slug, outcome: 'fixed' })
+    ).json();
     expect(wrongMachine.error.fields.machine[0]).toMatch(/applies to/);
   });
 
   it('refuses signed-out requests with 401 and unverified members with 403', async () => {
-    const anonymous = await as(base, '').post('/api/v1/bench-reports', { fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'fixed' });
+    const anonymous = await as(base, '').post('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[0]!.slug,
+      outcome: 'fixed',
+    });
     expect(anonymous.status).toBe(401);
     expect((await anonymous.json()).error.code).toBe('unauthorised');
     const unverified = await makeMember(knex, { verified: false });
-    const res = await as(base, await signIn(base, unverified.email, PASSWORD)).post('/api/v1/bench-reports', { fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'fixed' });
+    const res = await as(base, await signIn(base, unverified.email, PASSWORD)).post('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[0]!.slug,
+      outcome: 'fixed',
+    });
     expect(res.status).toBe(403);
   });
 
   it('takes the plain form of the fix page and sends the reader back with a message', async () => {
-    const res = await me.form('/api/v1/bench-reports', { fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'partly', heldDays: '9', back: `/fixes/${fix.slug}#bench-report` });
+    const res = await me.form('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[0]!.slug,
+      outcome: 'partly',
+      heldDays: '9',
+      back: `/fixes/${fix.slug}#bench-report`,
+    });
     expect(res.status).toBe(303);
     expect(res.headers.get('location')).toBe(`/fixes/${fix.slug}?bench=saved#bench-report`);
-    const missingDays = await me.form('/api/v1/bench-reports', { fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'came_back', back: `/fixes/${fix.slug}` });
+    const missingDays = await me.form('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[0]!.slug,
+      outcome: 'came_back',
+      back: `/fixes/${fix.slug}`,
+    });
     expect(missingDays.headers.get('location')).toBe(`/fixes/${fix.slug}?bench=need_days`);
-    const offSite = await me.form('/api/v1/bench-reports', { fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'fixed', back: 'https://elsewhere.example/' });
+    const offSite = await me.form('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[0]!.slug,
+      outcome: 'fixed',
+      back: 'https://elsewhere.example/',
+    });
     expect(offSite.headers.get('location')).toBe('/?bench=saved');
   });
 
@@ -91,7 +127,12 @@ describe('/api/v1/fixes/:slug/bench-reports', () => {
 
 describe('/api/v1/handover-notes', () => {
   it('creates a note with the account’s shop name, lists it, and serves its public JSON signed out', async () => {
-    const res = await me.post('/api/v1/handover-notes', { fix: fix.slug, revision: 1, message: 'Thanks for waiting.', partsReplaced: ['Drive belt'] });
+    const res = await me.post('/api/v1/handover-notes', {
+      fix: fix.slug,
+      revision: 1,
+      message: 'Thanks for waiting.',
+      partsReplaced: ['Drive belt'],
+    });
     expect(res.status).toBe(201);
     const { note } = await res.json();
     expect(note.code).toMatch(/^[23456789ABCDEFGHJKMNPQRSTUVWXYZ]{10}$/);
@@ -138,7 +179,11 @@ describe('/api/v1/handover-notes', () => {
 
 describe('/api/v1/job-sheets', () => {
   it('creates, reads, changes and lists a job sheet of one’s own', async () => {
-    const created = await me.post('/api/v1/job-sheets', { customerRef: 'API ticket 1', machine: world.machines[0]!.slug, reportedSymptom: 'No rewind' });
+    const created = await me.post('/api/v1/job-sheets', {
+      customerRef: 'API ticket 1',
+      machine: world.machines[0]!.slug,
+      reportedSymptom: 'No rewind',
+    });
     expect(created.status).toBe(201);
     const { jobSheet } = await created.json();
     expect(created.headers.get('location')).toBe(`/api/v1/job-sheets/${jobSheet.id}`);
@@ -150,7 +195,13 @@ describe('/api/v1/job-sheets', () => {
   });
 
   it('applies a fix with its pinned revision and exports invoice lines as CSV and JSON', async () => {
-    const { jobSheet } = await (await me.post('/api/v1/job-sheets', { customerRef: 'API ticket 2', labourMinutes: 30, partsUsed: [{ kind: 'belt', value: '=HYPERLINK("x"), 4 mm', quantity: 1 }] })).json();
+    const { jobSheet } = await (
+      await me.post('/api/v1/job-sheets', {
+        customerRef: 'API ticket 2',
+        labourMinutes: 30,
+        partsUsed: [{ kind: 'belt', value: '=HYPERLINK("x"), 4 mm', quantity: 1 }],
+      })
+    ).json();
     const applied = await me.post(`/api/v1/job-sheets/${jobSheet.id}/fixes`, { fix: fix.slug, revision: 1 });
     expect((await applied.json()).jobSheet.fixes[0]).toMatchObject({ slug: fix.slug, revisionNumber: 1 });
     const { note } = await (await me.post('/api/v1/handover-notes', { fix: fix.slug, revision: 1, jobSheetId: jobSheet.id })).json();

@@ -2,7 +2,17 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, proofNewRevision, type TestFix, type TestWorld } from './bench-work-support';
-import { applyFixToJob, createJobSheet, deleteJobSheet, fixChoicesFor, getJobSheet, invoiceLinesFor, listJobSheets, removeFixFromJob, updateJobSheet } from '@/server/job-sheets';
+import {
+  applyFixToJob,
+  createJobSheet,
+  deleteJobSheet,
+  fixChoicesFor,
+  getJobSheet,
+  invoiceLinesFor,
+  listJobSheets,
+  removeFixFromJob,
+  updateJobSheet,
+} from '@/server/job-sheets';
 import { createHandoverNote } from '@/server/handover-notes';
 import { handoverNoteInputSchema, jobSheetCreateSchema, jobSheetListQuerySchema, jobSheetPatchSchema } from '@/lib/schemas/bench-work';
 import { closeDb } from '@/server/db';
@@ -43,7 +53,13 @@ describe('createJobSheet and getJobSheet', () => {
       status: 'diagnosing',
     });
     const sheet = await getJobSheet(owner.id, id);
-    expect(sheet).toMatchObject({ customerRef: 'Ticket 3301', serialNumber: 'A1B2C3', labourMinutes: 75, status: 'diagnosing', machine: { slug: world.machines[0]!.slug } });
+    expect(sheet).toMatchObject({
+      customerRef: 'Ticket 3301',
+      serialNumber: 'A1B2C3',
+      labourMinutes: 75,
+      status: 'diagnosing',
+      machine: { slug: world.machines[0]!.slug },
+    });
     // Parts keep the order-list line shape; a line without a source is marked as coming from this job.
     expect(sheet?.partsUsed[0]).toMatchObject({ kind: 'belt', quantity: 1, ref: '', source: 'Job sheet Ticket 3301' });
     const stranger = await makeMember(knex);
@@ -65,10 +81,19 @@ describe('createJobSheet and getJobSheet', () => {
 describe('updateJobSheet', () => {
   it('changes only the fields given and answers not found for another member', async () => {
     const id = await job(owner.id, { customerRef: 'Ticket 3302', findings: 'Nothing yet' });
-    expect(await updateJobSheet(owner.id, id, jobSheetPatchSchema.parse({ status: 'repaired', outcome: 'Plays and records again.' }))).toEqual({ ok: true, value: id });
-    expect(await getJobSheet(owner.id, id)).toMatchObject({ status: 'repaired', outcome: 'Plays and records again.', findings: 'Nothing yet' });
+    expect(
+      await updateJobSheet(owner.id, id, jobSheetPatchSchema.parse({ status: 'repaired', outcome: 'Plays and records again.' })),
+    ).toEqual({ ok: true, value: id });
+    expect(await getJobSheet(owner.id, id)).toMatchObject({
+      status: 'repaired',
+      outcome: 'Plays and records again.',
+      findings: 'Nothing yet',
+    });
     const stranger = await makeMember(knex);
-    expect(await updateJobSheet(stranger.id, id, jobSheetPatchSchema.parse({ status: 'collected' }))).toMatchObject({ ok: false, code: 'not_found' });
+    expect(await updateJobSheet(stranger.id, id, jobSheetPatchSchema.parse({ status: 'collected' }))).toMatchObject({
+      ok: false,
+      code: 'not_found',
+    });
     expect((await getJobSheet(owner.id, id))?.status).toBe('repaired');
   });
 });
@@ -120,14 +145,29 @@ describe('invoiceLinesFor', () => {
     });
     await applyFixToJob(owner.id, id, fix.slug);
     await applyFixToJob(owner.id, id, familyFix.slug);
-    const created = await createHandoverNote({ id: owner.id, shopName: null }, handoverNoteInputSchema.parse({ fix: fix.slug, jobSheetId: id }));
+    const created = await createHandoverNote(
+      { id: owner.id, shopName: null },
+      handoverNoteInputSchema.parse({ fix: fix.slug, jobSheetId: id }),
+    );
     const code = created.ok ? created.code : '';
     const invoice = await invoiceLinesFor(owner.id, id);
     expect(invoice?.lines).toEqual([
       { kind: 'labour', description: 'Labour', quantity: 1.5, unit: 'h', link: '' },
       { kind: 'part', description: 'capacitor 470uF 16V 105C (C512)', quantity: 2, unit: 'pcs', link: '' },
-      { kind: 'repair_notes', description: 'Repair notes: Tape stops after seconds (r1)', quantity: 1, unit: '', link: expect.stringMatching(new RegExp(`/n/${code}$`)) },
-      { kind: 'fix', description: 'Repair followed: Clock dead on power-up (r1)', quantity: 1, unit: '', link: expect.stringMatching(new RegExp(`/fixes/${familyFix.slug}/r/1$`)) },
+      {
+        kind: 'repair_notes',
+        description: 'Repair notes: Tape stops after seconds (r1)',
+        quantity: 1,
+        unit: '',
+        link: expect.stringMatching(new RegExp(`/n/${code}$`)),
+      },
+      {
+        kind: 'fix',
+        description: 'Repair followed: Clock dead on power-up (r1)',
+        quantity: 1,
+        unit: '',
+        link: expect.stringMatching(new RegExp(`/fixes/${familyFix.slug}/r/1$`)),
+      },
     ]);
     expect(await invoiceLinesFor((await makeMember(knex)).id, id)).toBeNull();
   });

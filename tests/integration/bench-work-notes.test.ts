@@ -16,7 +16,11 @@ let fix: TestFix;
 beforeAll(async () => {
   world = await makeWorld(knex);
   shop = await makeMember(knex, { shopName: 'Kestrel Lane Repairs' });
-  fix = await makeFix(knex, { authorId: (await makeMember(knex)).id, machineIds: [world.machines[0]!.id], cautions: [{ kind: 'mains' }, { kind: 'laser' }, { kind: 'mains', detail: 'twice' }] });
+  fix = await makeFix(knex, {
+    authorId: (await makeMember(knex)).id,
+    machineIds: [world.machines[0]!.id],
+    cautions: [{ kind: 'mains' }, { kind: 'laser' }, { kind: 'mains', detail: 'twice' }],
+  });
 });
 afterAll(async () => {
   await knex.destroy();
@@ -48,9 +52,15 @@ describe('createHandoverNote', () => {
     const other = await makeMember(knex);
     const job = await createJobSheet(other.id, jobSheetCreateSchema.parse({ customerRef: 'Not yours' }));
     const jobId = job.ok ? job.value : -1;
-    const refused = await createHandoverNote({ id: shop.id, shopName: null }, handoverNoteInputSchema.parse({ fix: fix.slug, jobSheetId: jobId }));
+    const refused = await createHandoverNote(
+      { id: shop.id, shopName: null },
+      handoverNoteInputSchema.parse({ fix: fix.slug, jobSheetId: jobId }),
+    );
     expect(refused).toMatchObject({ ok: false, code: 'bad_request', fields: { jobSheetId: ['Choose one of your own job sheets.'] } });
-    const noRevision = await createHandoverNote({ id: shop.id, shopName: null }, handoverNoteInputSchema.parse({ fix: fix.slug, revision: 9 }));
+    const noRevision = await createHandoverNote(
+      { id: shop.id, shopName: null },
+      handoverNoteInputSchema.parse({ fix: fix.slug, revision: 9 }),
+    );
     expect(noRevision).toMatchObject({ ok: false, fields: { revision: ['The fix has no proofed revision r9.'] } });
   });
 
@@ -62,13 +72,21 @@ describe('createHandoverNote', () => {
 describe('findPublicNote', () => {
   it('keeps showing the pinned revision after the fix changes', async () => {
     const changing = await makeFix(knex, { authorId: (await makeMember(knex)).id, machineIds: [world.machines[0]!.id] });
-    const created = await createHandoverNote({ id: shop.id, shopName: null }, handoverNoteInputSchema.parse({ fix: changing.slug, partsReplaced: ['Drive belt', 'Idler tyre'] }));
+    const created = await createHandoverNote(
+      { id: shop.id, shopName: null },
+      handoverNoteInputSchema.parse({ fix: changing.slug, partsReplaced: ['Drive belt', 'Idler tyre'] }),
+    );
     const code = created.ok ? created.code : '';
     await proofNewRevision(knex, changing, shop.id);
     const found = await findPublicNote(code);
     expect(found.state).toBe('found');
     if (found.state !== 'found') return;
-    expect(found.note.fix).toMatchObject({ revisionNumber: 1, permalink: `/fixes/${changing.slug}/r/1`, hasNewerRevision: true, readable: true });
+    expect(found.note.fix).toMatchObject({
+      revisionNumber: 1,
+      permalink: `/fixes/${changing.slug}/r/1`,
+      hasNewerRevision: true,
+      readable: true,
+    });
     expect(found.note.fix.symptoms[0]).toBe('Symptom seen in r1');
     expect(found.note.partsReplaced).toEqual(['Drive belt', 'Idler tyre']);
   });
@@ -87,12 +105,23 @@ describe('findPublicNote', () => {
   });
 
   it('shows job details only when the member chose to include them, and none once the job sheet is deleted', async () => {
-    const job = await createJobSheet(shop.id, jobSheetCreateSchema.parse({ customerRef: 'Invoice 5521', machine: world.machines[0]!.slug, serialNumber: 'SN-77812', findings: 'Belt had stretched and glazed.' }));
+    const job = await createJobSheet(
+      shop.id,
+      jobSheetCreateSchema.parse({
+        customerRef: 'Invoice 5521',
+        machine: world.machines[0]!.slug,
+        serialNumber: 'SN-77812',
+        findings: 'Belt had stretched and glazed.',
+      }),
+    );
     const jobId = job.ok ? job.value : -1;
     const withDetails = await note(shop.id, null, { jobSheetId: jobId, includeJobDetails: true });
     const without = await note(shop.id, null, { jobSheetId: jobId });
     const shown = await findPublicNote(withDetails);
-    expect(shown.state === 'found' && shown.note.job).toMatchObject({ serialNumber: 'SN-77812', findings: 'Belt had stretched and glazed.' });
+    expect(shown.state === 'found' && shown.note.job).toMatchObject({
+      serialNumber: 'SN-77812',
+      findings: 'Belt had stretched and glazed.',
+    });
     expect(JSON.stringify(shown)).not.toContain('Invoice 5521');
     const hidden = await findPublicNote(without);
     expect(hidden.state === 'found' && hidden.note.job).toBeNull();

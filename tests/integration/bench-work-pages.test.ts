@@ -28,7 +28,14 @@ beforeAll(async () => {
   me = as(base, await signIn(base, (await makeMember(knex, { shopName: 'Saltmarsh Repairs' })).email, PASSWORD));
   // Reports for the statistics: three counted, one of them on the older revision, and the author's own.
   const reporters = await Promise.all([makeMember(knex), makeMember(knex), makeMember(knex)]);
-  const row = (memberId: number, outcome: string, revisionId: number, heldDays: number | null = null) => ({ fix_id: fix.id, revision_id: revisionId, machine_id: world.machines[0]!.id, member_id: memberId, outcome, held_days: heldDays });
+  const row = (memberId: number, outcome: string, revisionId: number, heldDays: number | null = null) => ({
+    fix_id: fix.id,
+    revision_id: revisionId,
+    machine_id: world.machines[0]!.id,
+    member_id: memberId,
+    outcome,
+    held_days: heldDays,
+  });
   await knex('bench_reports').insert([
     row(reporters[0]!.id, 'fixed', fix.revisionIds[1]!),
     row(reporters[1]!.id, 'came_back', fix.revisionIds[1]!, 60),
@@ -62,7 +69,13 @@ describe('fix page bench report form', () => {
   });
 
   it('lists the member’s own report after a post, with the saved message', async () => {
-    const posted = await me.form('/api/v1/bench-reports', { fix: fix.slug, machine: world.machines[1]!.slug, revision: '2', outcome: 'partly', back: `/fixes/${fix.slug}#bench-report` });
+    const posted = await me.form('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[1]!.slug,
+      revision: '2',
+      outcome: 'partly',
+      back: `/fixes/${fix.slug}#bench-report`,
+    });
     const page = await html(await me.get(posted.headers.get('location') ?? '/'));
     expect(page).toContain('Your bench report is saved');
     expect(page).toMatch(/Your report on the [^:]+: <strong>Partly fixed<\/strong>/);
@@ -71,7 +84,14 @@ describe('fix page bench report form', () => {
 
 describe('customer’s note page', () => {
   it('is plain, printable, unindexed and lists the cautions that concern an owner', async () => {
-    const { note } = await (await me.post('/api/v1/handover-notes', { fix: fix.slug, message: 'Thank you for bringing it in.', warranty: '3 months on parts and labour', partsReplaced: ['Drive belt'] })).json();
+    const { note } = await (
+      await me.post('/api/v1/handover-notes', {
+        fix: fix.slug,
+        message: 'Thank you for bringing it in.',
+        warranty: '3 months on parts and labour',
+        partsReplaced: ['Drive belt'],
+      })
+    ).json();
     const res = await anonymous.get(`/n/${note.code}`);
     expect(res.status).toBe(200);
     expect(res.headers.get('x-robots-tag')).toBe('noindex');
@@ -101,7 +121,13 @@ describe('customer’s note page', () => {
   });
 
   it('writes a note from the plain form and sends the member to it', async () => {
-    const res = await me.form('/notes/new', { fix: `${base}/fixes/${fix.slug}/r/1`, shopName: '', message: 'All done.', partsReplaced: 'Belt\n\nIdler tyre\n', warranty: '' });
+    const res = await me.form('/notes/new', {
+      fix: `${base}/fixes/${fix.slug}/r/1`,
+      shopName: '',
+      message: 'All done.',
+      partsReplaced: 'Belt\n\nIdler tyre\n',
+      warranty: '',
+    });
     expect(res.status).toBe(303);
     const code = /\/notes\/([A-Z0-9]+)\?note=created/.exec(res.headers.get('location') ?? '')?.[1] ?? '';
     const { note } = await (await anonymous.get(`/api/v1/handover-notes/${code}`)).json();
@@ -111,7 +137,13 @@ describe('customer’s note page', () => {
 
 describe('job sheet pages', () => {
   it('books in a machine, applies a fix, records a bench report and lists the sheet, all without script', async () => {
-    const created = await me.form('/jobs/new', { customerRef: 'Walk-in 44', machine: world.machines[1]!.slug, serialNumber: 'S-1', reportedSymptom: 'Stops', status: 'booked_in' });
+    const created = await me.form('/jobs/new', {
+      customerRef: 'Walk-in 44',
+      machine: world.machines[1]!.slug,
+      serialNumber: 'S-1',
+      reportedSymptom: 'Stops',
+      status: 'booked_in',
+    });
     expect(created.status).toBe(303);
     const jobPath = (created.headers.get('location') ?? '').split('?')[0]!;
     expect(jobPath).toMatch(/^\/jobs\/\d+$/);
@@ -120,7 +152,14 @@ describe('job sheet pages', () => {
     const page = await html(await me.get(jobPath));
     expect(page).toContain('pinned to r2');
     expect(page).toMatch(new RegExp(`/notes/new\\?fix=${fix.slug}&(amp|#38);revision=2&(amp|#38);job=${jobPath.split('/')[2]}"`));
-    const report = await me.form('/api/v1/bench-reports', { fix: fix.slug, machine: world.machines[1]!.slug, revision: '2', outcome: 'fixed', heldDays: '', back: `${jobPath}#fix-${fix.slug}` });
+    const report = await me.form('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[1]!.slug,
+      revision: '2',
+      outcome: 'fixed',
+      heldDays: '',
+      back: `${jobPath}#fix-${fix.slug}`,
+    });
     expect(report.headers.get('location')).toBe(`${jobPath}?bench=saved#fix-${fix.slug}`);
     const list = await me.get('/jobs?sort=customer');
     const listPage = await html(list);
@@ -132,16 +171,39 @@ describe('job sheet pages', () => {
   it('saves findings, parts and labour from the form, and shows field messages for bad values', async () => {
     const created = await me.form('/jobs/new', { customerRef: 'Walk-in 45', status: 'booked_in' });
     const jobPath = (created.headers.get('location') ?? '').split('?')[0]!;
-    const bad = await me.form(jobPath, { intent: 'save', customerRef: 'Walk-in 45', status: 'diagnosing', labourMinutes: 'forty', 'parts.0.kind': 'capacitor', 'parts.0.value': '470uF', 'parts.0.quantity': '' });
+    const bad = await me.form(jobPath, {
+      intent: 'save',
+      customerRef: 'Walk-in 45',
+      status: 'diagnosing',
+      labourMinutes: 'forty',
+      'parts.0.kind': 'capacitor',
+      'parts.0.value': '470uF',
+      'parts.0.quantity': '',
+    });
     expect(bad.status).toBe(400);
     const badPage = await html(bad);
     expect(badPage).toContain('Give labour in whole minutes.');
     expect(badPage).toMatch(/quantity: [^<]*/);
     expect(badPage).toContain('value="470uF"');
-    const good = await me.form(jobPath, { intent: 'save', customerRef: 'Walk-in 45', status: 'repaired', labourMinutes: '40', findings: 'Dry joint on the motor plug', 'parts.0.kind': 'capacitor', 'parts.0.value': '470uF', 'parts.0.rating': '16V', 'parts.0.quantity': '2' });
+    const good = await me.form(jobPath, {
+      intent: 'save',
+      customerRef: 'Walk-in 45',
+      status: 'repaired',
+      labourMinutes: '40',
+      findings: 'Dry joint on the motor plug',
+      'parts.0.kind': 'capacitor',
+      'parts.0.value': '470uF',
+      'parts.0.rating': '16V',
+      'parts.0.quantity': '2',
+    });
     expect(good.status).toBe(303);
     const json = await (await me.get(`/api/v1/job-sheets/${jobPath.split('/')[2]}`)).json();
-    expect(json.jobSheet).toMatchObject({ status: 'repaired', labourMinutes: 40, findings: 'Dry joint on the motor plug', partsUsed: [{ kind: 'capacitor', value: '470uF', rating: '16V', quantity: 2, source: 'Job sheet Walk-in 45' }] });
+    expect(json.jobSheet).toMatchObject({
+      status: 'repaired',
+      labourMinutes: 40,
+      findings: 'Dry joint on the motor plug',
+      partsUsed: [{ kind: 'capacitor', value: '470uF', rating: '16V', quantity: 2, source: 'Job sheet Walk-in 45' }],
+    });
   });
 
   it('sends signed-out readers to sign in', async () => {

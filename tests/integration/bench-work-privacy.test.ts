@@ -15,7 +15,11 @@ let stranger: ReturnType<typeof as>;
 
 beforeAll(async () => {
   world = await makeWorld(knex);
-  fix = await makeFix(knex, { authorId: (await makeMember(knex)).id, machineIds: [world.machines[0]!.id], cautions: [{ kind: 'stored_charge' }] });
+  fix = await makeFix(knex, {
+    authorId: (await makeMember(knex)).id,
+    machineIds: [world.machines[0]!.id],
+    cautions: [{ kind: 'stored_charge' }],
+  });
   owner = as(base, await signIn(base, (await makeMember(knex)).email, PASSWORD));
   stranger = as(base, await signIn(base, (await makeMember(knex)).email, PASSWORD));
 });
@@ -104,7 +108,14 @@ describe('another member’s job sheet', () => {
 
 describe('deleting a job sheet', () => {
   it('removes the job details from the notes made from it, which keep working', async () => {
-    const { jobSheet } = await (await owner.post('/api/v1/job-sheets', { customerRef: 'Ticket 881', machine: world.machines[0]!.slug, serialNumber: 'SN-440022', findings: 'Cracked solder at the regulator' })).json();
+    const { jobSheet } = await (
+      await owner.post('/api/v1/job-sheets', {
+        customerRef: 'Ticket 881',
+        machine: world.machines[0]!.slug,
+        serialNumber: 'SN-440022',
+        findings: 'Cracked solder at the regulator',
+      })
+    ).json();
     const code = await newNote({ fix: fix.slug, jobSheetId: jobSheet.id, includeJobDetails: true });
     const before = await (await anonymous.get(`/n/${code}`)).text();
     expect(before).toContain('SN-440022');
@@ -140,10 +151,20 @@ describe('invalid fields', () => {
   });
 
   it('names each bad field of a job sheet in the API answer', async () => {
-    const res = await owner.post('/api/v1/job-sheets', { customerRef: '', labourMinutes: 1.5, partsUsed: [{ kind: 'gizmo', value: '', quantity: 0 }] });
+    const res = await owner.post('/api/v1/job-sheets', {
+      customerRef: '',
+      labourMinutes: 1.5,
+      partsUsed: [{ kind: 'gizmo', value: '', quantity: 0 }],
+    });
     expect(res.status).toBe(400);
     const { error } = await res.json();
-    expect(Object.keys(error.fields).sort()).toEqual(['customerRef', 'labourMinutes', 'partsUsed.0.kind', 'partsUsed.0.quantity', 'partsUsed.0.value']);
+    expect(Object.keys(error.fields).sort()).toEqual([
+      'customerRef',
+      'labourMinutes',
+      'partsUsed.0.kind',
+      'partsUsed.0.quantity',
+      'partsUsed.0.value',
+    ]);
     const broken = await owner.raw('/api/v1/job-sheets', '{"customerRef": ', 'application/json');
     expect(broken.status).toBe(400);
     expect((await broken.json()).error.message).toBe('The body is not valid JSON.');

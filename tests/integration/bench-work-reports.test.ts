@@ -24,7 +24,8 @@ afterAll(async () => {
   await closeDb();
 });
 
-const report = (over: Record<string, unknown>) => benchReportInputSchema.parse({ fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'fixed', ...over });
+const report = (over: Record<string, unknown>) =>
+  benchReportInputSchema.parse({ fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'fixed', ...over });
 
 async function saved(memberId: number, over: Record<string, unknown>) {
   const result = await saveBenchReport(memberId, report(over));
@@ -74,7 +75,8 @@ describe('bench score from reports', () => {
   it('weighs reports on an older revision at half, counts came-back against the fix, refreshes the search row', async () => {
     const own = await makeFix(knex, { authorId: author.id, machineIds: [world.machines[1]!.id], revisions: 2 });
     const members = await Promise.all([makeMember(knex), makeMember(knex), makeMember(knex)]);
-    const input = (over: Record<string, unknown>) => benchReportInputSchema.parse({ fix: own.slug, machine: world.machines[1]!.slug, outcome: 'fixed', ...over });
+    const input = (over: Record<string, unknown>) =>
+      benchReportInputSchema.parse({ fix: own.slug, machine: world.machines[1]!.slug, outcome: 'fixed', ...over });
     await saveBenchReport(members[0]!.id, input({}));
     await saveBenchReport(members[1]!.id, input({ outcome: 'came_back', heldDays: 12 }));
     await saveBenchReport(members[2]!.id, input({ revision: 1 }));
@@ -90,13 +92,36 @@ describe('bench score from reports', () => {
 
   it('shows the author’s own report but leaves it out of the score and the counts', async () => {
     const own = await makeFix(knex, { authorId: author.id, machineIds: [world.machines[0]!.id] });
-    const result = await saveBenchReport(author.id, benchReportInputSchema.parse({ fix: own.slug, machine: world.machines[0]!.slug, outcome: 'fixed' }));
+    const result = await saveBenchReport(
+      author.id,
+      benchReportInputSchema.parse({ fix: own.slug, machine: world.machines[0]!.slug, outcome: 'fixed' }),
+    );
     expect(result.ok && result.report.counted).toBe(false);
     const view = (await benchScoresFor([own.id])).get(own.id)!;
     expect(view).toMatchObject({ counted: 0, ownReports: 1, score: null });
     const byRevision = await benchCountsByRevision(own.id);
     expect(byRevision).toEqual([{ revisionNumber: 1, isCurrent: true, fixed: 0, partly: 0, notFixed: 0, cameBack: 0, ownReports: 1 }]);
     expect((await knex('fix_search').where({ fix_id: own.id }).first('report_count')).report_count).toBe(0);
+  });
+});
+
+describe('bench_reports table', () => {
+  it('refuses a report whose revision belongs to another fix', async () => {
+    const other = await makeFix(knex, { authorId: author.id, machineIds: [world.machines[0]!.id] });
+    const member = await makeMember(knex);
+    const error = await knex('bench_reports')
+      .insert({
+        fix_id: fix.id,
+        revision_id: other.revisionIds[0],
+        machine_id: world.machines[0]!.id,
+        member_id: member.id,
+        outcome: 'fixed',
+      })
+      .then(
+        () => null,
+        (e: { constraint?: string }) => e.constraint,
+      );
+    expect(error).toBe('bench_reports_revision_of_fix_fk');
   });
 });
 
@@ -110,7 +135,12 @@ describe('benchReportInputSchema', () => {
   });
 
   it('names a bad outcome and a bad reading in plain words', () => {
-    const bad = benchReportInputSchema.safeParse({ fix: 'a-fix', machine: 'a-machine', outcome: 'maybe', readings: [{ testPoint: '', expected: '5 V' }] });
+    const bad = benchReportInputSchema.safeParse({
+      fix: 'a-fix',
+      machine: 'a-machine',
+      outcome: 'maybe',
+      readings: [{ testPoint: '', expected: '5 V' }],
+    });
     const messages = bad.error?.issues.map((i) => `${i.path.join('.')}: ${i.message}`) ?? [];
     expect(messages).toContain('outcome: Choose an outcome: fixed, partly, not fixed or fault came back.');
     expect(messages.some((m) => m.startsWith('readings.0.testPoint: Name the test point'))).toBe(true);

@@ -13,7 +13,10 @@ export function unique(): string {
 
 let passwordHash: Promise<string> | undefined;
 
-export async function makeMember(knex: Knex, options: { verified?: boolean; shopName?: string | null; name?: string } = {}): Promise<{ id: number; email: string; name: string }> {
+export async function makeMember(
+  knex: Knex,
+  options: { verified?: boolean; shopName?: string | null; name?: string } = {},
+): Promise<{ id: number; email: string; name: string }> {
   passwordHash ??= hashPassword(PASSWORD);
   const suffix = unique();
   const email = `bench-${suffix}@example.test`;
@@ -44,13 +47,23 @@ export interface TestWorld {
 /** An invented maker of our own with one chassis family, two machines in it and one machine outside it. */
 export async function makeWorld(knex: Knex): Promise<TestWorld> {
   const s = unique();
-  const [maker] = await knex('makers').insert({ slug: `tm-${s}`, name: `Testmark ${s}` }).returning(['id', 'slug']);
+  const [maker] = await knex('makers')
+    .insert({ slug: `tm-${s}`, name: `Testmark ${s}` })
+    .returning(['id', 'slug']);
   const [chassis] = await knex('chassis_families')
     .insert({ slug: `tm-${s}-deck`, maker_id: maker.id, name: `Test deck ${s}`, code: `TD${s}`.toUpperCase(), device_type: 'vcr' })
     .returning(['id', 'slug']);
   const machine = async (n: string, chassisId: number | null) => {
     const [row] = await knex('machines')
-      .insert({ slug: `tm-${s}-${n}`, maker_id: maker.id, chassis_family_id: chassisId, model_number: `TM-${n}${s}`.toUpperCase(), model_code: `tm${n}${s}`, region: 'PAL', device_type: 'vcr' })
+      .insert({
+        slug: `tm-${s}-${n}`,
+        maker_id: maker.id,
+        chassis_family_id: chassisId,
+        model_number: `TM-${n}${s}`.toUpperCase(),
+        model_code: `tm${n}${s}`,
+        region: 'PAL',
+        device_type: 'vcr',
+      })
       .returning(['id', 'slug']);
     return row as { id: number; slug: string };
   };
@@ -66,16 +79,28 @@ export interface TestFix {
   revisionIds: number[];
 }
 
-const body = JSON.stringify({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Replace the worn belt and clean the pulleys.' }] }] });
+const body = JSON.stringify({
+  type: 'doc',
+  content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Replace the worn belt and clean the pulleys.' }] }],
+});
 
 /** A live fix with `revisions` proofed revisions, applying to the given machines, with a search row. */
 export async function makeFix(
   knex: Knex,
-  options: { authorId: number; machineIds: number[]; chassisIds?: number[]; revisions?: number; cautions?: { kind: string; detail?: string }[]; title?: string },
+  options: {
+    authorId: number;
+    machineIds: number[];
+    chassisIds?: number[];
+    revisions?: number;
+    cautions?: { kind: string; detail?: string }[];
+    title?: string;
+  },
 ): Promise<TestFix> {
   const proofer = await knex('users').where({ email: 'moderator@example.test' }).first('id');
   const s = unique();
-  const [fix] = await knex('fixes').insert({ slug: `test-fix-${s}`, created_by: options.authorId }).returning(['id', 'slug']);
+  const [fix] = await knex('fixes')
+    .insert({ slug: `test-fix-${s}`, created_by: options.authorId })
+    .returning(['id', 'slug']);
   const revisionIds: number[] = [];
   const count = options.revisions ?? 1;
   for (let n = 1; n <= count; n++) {
@@ -97,7 +122,8 @@ export async function makeFix(
       .returning('id');
     revisionIds.push(rev.id);
     for (const machineId of options.machineIds) await knex('revision_machines').insert({ revision_id: rev.id, machine_id: machineId });
-    for (const chassisId of options.chassisIds ?? []) await knex('revision_chassis').insert({ revision_id: rev.id, chassis_family_id: chassisId });
+    for (const chassisId of options.chassisIds ?? [])
+      await knex('revision_chassis').insert({ revision_id: rev.id, chassis_family_id: chassisId });
   }
   const live = revisionIds.at(-1) as number;
   await knex('fixes').where({ id: fix.id }).update({ current_revision_id: live });
@@ -137,7 +163,12 @@ export function as(base: string, cookie: string) {
     fetch(`${base}${path}`, {
       method,
       redirect: 'manual',
-      headers: { Origin: base, ...(cookie ? { Cookie: cookie } : {}), ...(body !== undefined && !(body instanceof URLSearchParams) ? { 'Content-Type': 'application/json' } : {}), ...headers },
+      headers: {
+        Origin: base,
+        ...(cookie ? { Cookie: cookie } : {}),
+        ...(body !== undefined && !(body instanceof URLSearchParams) ? { 'Content-Type': 'application/json' } : {}),
+        ...headers,
+      },
       body: body === undefined ? undefined : body instanceof URLSearchParams ? body : JSON.stringify(body),
     });
   return {
@@ -148,6 +179,11 @@ export function as(base: string, cookie: string) {
     form: (path: string, fields: Record<string, string> | [string, string][]) => send('POST', path, new URLSearchParams(fields)),
     /** A POST with a body and content type exactly as given (for malformed input). */
     raw: (path: string, body: string, type: string) =>
-      fetch(`${base}${path}`, { method: 'POST', redirect: 'manual', headers: { Origin: base, 'Content-Type': type, ...(cookie ? { Cookie: cookie } : {}) }, body }),
+      fetch(`${base}${path}`, {
+        method: 'POST',
+        redirect: 'manual',
+        headers: { Origin: base, 'Content-Type': type, ...(cookie ? { Cookie: cookie } : {}) },
+        body,
+      }),
   };
 }

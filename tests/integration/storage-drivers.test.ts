@@ -53,7 +53,12 @@ describe('S3-compatible storage', () => {
   });
 
   it('is the driver chosen when S3_ENDPOINT and S3_BUCKET are set', async () => {
-    const config = readConfig({ S3_ENDPOINT: endpoint, S3_BUCKET: 'bench-photos', S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' });
+    const config = readConfig({
+      S3_ENDPOINT: endpoint,
+      S3_BUCKET: 'bench-photos',
+      S3_ACCESS_KEY_ID: 'S3RVER',
+      S3_SECRET_ACCESS_KEY: 'S3RVER',
+    });
     await roundTrip(storageFromConfig(config));
   });
 });

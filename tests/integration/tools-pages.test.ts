@@ -92,6 +92,36 @@ describe('tool pages without JavaScript', () => {
   });
 });
 
+/** The island's module and everything it imports statically, with the text of each module. */
+async function staticModuleGraph(html: string): Promise<Map<string, string>> {
+  const entries = [...html.matchAll(/component-url="([^"]+)"/g)].map((m) => m[1] as string);
+  const seen = new Map<string, string>();
+  const queue = [...entries];
+  while (queue.length > 0) {
+    const path = queue.shift() as string;
+    if (seen.has(path)) continue;
+    const text = await (await site.get(path)).text();
+    seen.set(path, text);
+    for (const m of text.matchAll(/(?:from|import)\s*"(\.\/[^"]+\.js)"/g)) queue.push(new URL(m[1] as string, `http://x${path}`).pathname);
+  }
+  return seen;
+}
+
+describe('chart code', () => {
+  it('is loaded only by the two chart pages, and there only on demand', async () => {
+    for (const slug of ['value-decoder', 'preferred-values', 'substitute-check', 'esr']) {
+      const graph = await staticModuleGraph((await page(`/tools/${slug}`)).html);
+      expect(graph.size).toBeGreaterThan(0);
+      for (const text of graph.values()) expect(text).not.toContain('chart-setup');
+    }
+    for (const slug of ['bleed-down', 'life-estimate']) {
+      const graph = await staticModuleGraph((await page(`/tools/${slug}`)).html);
+      expect([...graph.keys()].some((path) => path.includes('chart-setup'))).toBe(false);
+      expect([...graph.values()].some((text) => text.includes('chart-setup'))).toBe(true);
+    }
+  });
+});
+
 describe('bad input on the pages', () => {
   it.each([
     [{ capacitance: '47x', resistance: '470k', voltage: '340V' }, 'not a unit or prefix'],

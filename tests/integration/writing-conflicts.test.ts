@@ -24,13 +24,25 @@ afterAll(() => knex.destroy());
 describe('submitting against a stale base', () => {
   it('answers 409 with both versions, keeps the draft, and submits once the writer builds on the live revision', async () => {
     const { slug, revisionId: r1 } = await publishFix(base, first, moderator, completeValues(machineId));
-    const mine = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: completeValues(machineId, { cause: 'My longer cause, typed carefully.' }) }, cookie: first.cookie });
-    const theirs = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: completeValues(machineId, { cause: 'Their cause, proofed first.' }) }, cookie: second.cookie });
+    const mine = await call(base, '/api/v1/drafts', {
+      body: { fixSlug: slug, values: completeValues(machineId, { cause: 'My longer cause, typed carefully.' }) },
+      cookie: first.cookie,
+    });
+    const theirs = await call(base, '/api/v1/drafts', {
+      body: { fixSlug: slug, values: completeValues(machineId, { cause: 'Their cause, proofed first.' }) },
+      cookie: second.cookie,
+    });
     expect(mine.body.revision.baseRevisionId).toBe(r1);
     await call(base, `/api/v1/drafts/${theirs.body.revision.id}/submit`, { body: {}, cookie: second.cookie });
-    expect((await call(base, `/api/v1/proofing/${theirs.body.revision.id}/proof`, { body: {}, cookie: moderator.cookie })).status).toBe(200);
+    expect((await call(base, `/api/v1/proofing/${theirs.body.revision.id}/proof`, { body: {}, cookie: moderator.cookie })).status).toBe(
+      200,
+    );
 
-    const saved = await call(base, `/api/v1/drafts/${mine.body.revision.id}`, { method: 'PUT', body: { values: mine.body.revision.values }, cookie: first.cookie });
+    const saved = await call(base, `/api/v1/drafts/${mine.body.revision.id}`, {
+      method: 'PUT',
+      body: { values: mine.body.revision.values },
+      cookie: first.cookie,
+    });
     expect(saved.body.baseIsStale).toBe(true);
     const stale = await call(base, `/api/v1/drafts/${mine.body.revision.id}/submit`, { body: {}, cookie: first.cookie });
     expect(stale.status).toBe(409);
@@ -40,12 +52,23 @@ describe('submitting against a stale base', () => {
     expect(stale.body.live.values.cause).toBe('Their cause, proofed first.');
     // Both versions, but no one's e-mail address.
     expect(JSON.stringify(stale.body)).not.toContain(second.email);
-    expect((await knex('revisions').where({ id: mine.body.revision.id }).first('state', 'cause'))).toEqual({ state: 'draft', cause: 'My longer cause, typed carefully.' });
+    expect(await knex('revisions').where({ id: mine.body.revision.id }).first('state', 'cause')).toEqual({
+      state: 'draft',
+      cause: 'My longer cause, typed carefully.',
+    });
 
     // A base may only move onto the live revision.
-    const wrongBase = await call(base, `/api/v1/drafts/${mine.body.revision.id}`, { method: 'PUT', body: { values: stale.body.yours.values, baseRevisionId: r1 + 999999 }, cookie: first.cookie });
+    const wrongBase = await call(base, `/api/v1/drafts/${mine.body.revision.id}`, {
+      method: 'PUT',
+      body: { values: stale.body.yours.values, baseRevisionId: r1 + 999999 },
+      cookie: first.cookie,
+    });
     expect(wrongBase.status).toBe(409);
-    const rebased = await call(base, `/api/v1/drafts/${mine.body.revision.id}`, { method: 'PUT', body: { values: stale.body.yours.values, baseRevisionId: stale.body.live.id }, cookie: first.cookie });
+    const rebased = await call(base, `/api/v1/drafts/${mine.body.revision.id}`, {
+      method: 'PUT',
+      body: { values: stale.body.yours.values, baseRevisionId: stale.body.live.id },
+      cookie: first.cookie,
+    });
     expect(rebased.status).toBe(200);
     expect(rebased.body.baseIsStale).toBe(false);
     expect((await call(base, `/api/v1/drafts/${mine.body.revision.id}/submit`, { body: {}, cookie: first.cookie })).status).toBe(200);
@@ -78,7 +101,10 @@ describe('nobody proofs their own revision', () => {
     const page = await (await fetch(`${base}/proofing/${id}`, { headers: { cookie: moderator.cookie } })).text();
     expect(page).toContain('Nobody proofs their own');
     expect(page).not.toContain(`/api/v1/proofing/${id}/proof`);
-    const db = await knex('revisions').where({ id }).update({ state: 'proofed', proofer_id: moderator.id, proofed_at: new Date() }).catch((e: { constraint?: string }) => e);
+    const db = await knex('revisions')
+      .where({ id })
+      .update({ state: 'proofed', proofer_id: moderator.id, proofed_at: new Date() })
+      .catch((e: { constraint?: string }) => e);
     expect((db as { constraint?: string }).constraint).toBe('revisions_own_proof_check');
     expect((await call(base, `/api/v1/proofing/${id}/proof`, { body: {}, cookie: otherModerator.cookie })).status).toBe(200);
   });
@@ -102,6 +128,11 @@ describe('nobody proofs their own revision', () => {
     expect((await knex('revisions').where({ id: amendmentId }).first('author_id')).author_id).toBe(moderator.id);
     expect((await call(base, `/api/v1/proofing/${amendmentId}/proof`, { body: {}, cookie: moderator.cookie })).status).toBe(403);
     expect((await call(base, `/api/v1/proofing/${amendmentId}/proof`, { body: {}, cookie: otherModerator.cookie })).status).toBe(200);
-    expect(await knex('audit_log').where({ action: 'revision.amend', subject_id: String(originalId) }).count('* as n').first()).toEqual({ n: '1' });
+    expect(
+      await knex('audit_log')
+        .where({ action: 'revision.amend', subject_id: String(originalId) })
+        .count('* as n')
+        .first(),
+    ).toEqual({ n: '1' });
   });
 });

@@ -12,7 +12,10 @@ let stored: Record<string, unknown>;
 
 beforeAll(async () => {
   writer = await session(knex, base, 'member', 'input');
-  const created = await call(base, '/api/v1/drafts', { body: { values: completeValues(await someMachineId(knex, 4)) }, cookie: writer.cookie });
+  const created = await call(base, '/api/v1/drafts', {
+    body: { values: completeValues(await someMachineId(knex, 4)) },
+    cookie: writer.cookie,
+  });
   draftId = created.body.revision.id;
   stored = await knex('revisions').where({ id: draftId }).first();
 });
@@ -24,37 +27,63 @@ async function expectUntouched(): Promise<void> {
 
 describe('saving a draft with bad input', () => {
   it('answers 400 to malformed JSON', async () => {
-    const answer = await call(base, `/api/v1/drafts/${draftId}`, { method: 'PUT', raw: '{"values": {"title": "cut off', cookie: writer.cookie });
+    const answer = await call(base, `/api/v1/drafts/${draftId}`, {
+      method: 'PUT',
+      raw: '{"values": {"title": "cut off',
+      cookie: writer.cookie,
+    });
     expect(answer.status).toBe(400);
     expect(answer.body.error.message).toMatch(/not valid JSON/);
     await expectUntouched();
   });
 
   it('names the body when the editor JSON is not a document', async () => {
-    const answer = await call(base, `/api/v1/drafts/${draftId}`, { method: 'PUT', body: { values: { ...completeValues(1), body: { type: 'paragraph', content: 'oops' } } }, cookie: writer.cookie });
+    const answer = await call(base, `/api/v1/drafts/${draftId}`, {
+      method: 'PUT',
+      body: { values: { ...completeValues(1), body: { type: 'paragraph', content: 'oops' } } },
+      cookie: writer.cookie,
+    });
     expect(answer.status).toBe(400);
     expect(answer.body.error.fields.body[0]).toMatch(/remedy could not be read/);
     await expectUntouched();
   });
 
   it('names each bad field: a quantity that is not a number, a machine not in the catalogue, a photo that is not the writer’s', async () => {
-    const values = completeValues(1, { parts: [{ ref: 'C1', kind: 'capacitor', value: '10uF', rating: '', quantity: 'two' as unknown as number, notes: '' }] });
+    const values = completeValues(1, {
+      parts: [{ ref: 'C1', kind: 'capacitor', value: '10uF', rating: '', quantity: 'two' as unknown as number, notes: '' }],
+    });
     const answer = await call(base, `/api/v1/drafts/${draftId}`, { method: 'PUT', body: { values }, cookie: writer.cookie });
     expect(answer.status).toBe(400);
     expect(Object.keys(answer.body.error.fields)).toEqual(['values.parts.0.quantity'].map((k) => k.replace('values.', '')));
-    const unknownMachine = await call(base, `/api/v1/drafts/${draftId}`, { method: 'PUT', body: { values: completeValues(987654321) }, cookie: writer.cookie });
+    const unknownMachine = await call(base, `/api/v1/drafts/${draftId}`, {
+      method: 'PUT',
+      body: { values: completeValues(987654321) },
+      cookie: writer.cookie,
+    });
     expect(unknownMachine.body.error.fields.machineIds[0]).toMatch(/not in the catalogue/);
     const someonesPhoto = await knex('photos').where('owner_id', '<>', writer.id).first('id');
-    const notMine = await call(base, `/api/v1/drafts/${draftId}`, { method: 'PUT', body: { values: completeValues(1, { photoIds: [someonesPhoto.id] }) }, cookie: writer.cookie });
+    const notMine = await call(base, `/api/v1/drafts/${draftId}`, {
+      method: 'PUT',
+      body: { values: completeValues(1, { photoIds: [someonesPhoto.id] }) },
+      cookie: writer.cookie,
+    });
     // A seeded illustration is on a proofed revision, so it is public and may be reused; an unknown id may not.
     expect(notMine.status).toBe(200);
-    const missing = await call(base, `/api/v1/drafts/${draftId}`, { method: 'PUT', body: { values: completeValues(1, { photoIds: [987654321] }) }, cookie: writer.cookie });
+    const missing = await call(base, `/api/v1/drafts/${draftId}`, {
+      method: 'PUT',
+      body: { values: completeValues(1, { photoIds: [987654321] }) },
+      cookie: writer.cookie,
+    });
     expect(missing.body.error.fields.photoIds[0]).toMatch(/no longer exists/);
     stored = await knex('revisions').where({ id: draftId }).first();
   });
 
   it('refuses other content types and bodies over the limit', async () => {
-    const plain = await fetch(`${base}/api/v1/drafts/${draftId}`, { method: 'PUT', headers: { cookie: writer.cookie, 'content-type': 'text/plain', origin: base }, body: '{}' });
+    const plain = await fetch(`${base}/api/v1/drafts/${draftId}`, {
+      method: 'PUT',
+      headers: { cookie: writer.cookie, 'content-type': 'text/plain', origin: base },
+      body: '{}',
+    });
     expect(plain.status).toBe(415);
     const huge = JSON.stringify({ values: { ...completeValues(1), cause: 'x'.repeat(3 * 1024 * 1024) } });
     const big = await call(base, `/api/v1/drafts/${draftId}`, { method: 'PUT', raw: huge, cookie: writer.cookie });

@@ -30,7 +30,9 @@ describe('writing', () => {
   });
 
   it('refuses an unconfirmed account', async () => {
-    expect((await call(base, '/api/v1/drafts', { body: { values: completeValues(machineId) }, cookie: unverified.cookie })).status).toBe(403);
+    expect((await call(base, '/api/v1/drafts', { body: { values: completeValues(machineId) }, cookie: unverified.cookie })).status).toBe(
+      403,
+    );
     expect((await fetch(`${base}/write`, { headers: { cookie: unverified.cookie }, redirect: 'manual' })).status).toBe(403);
   });
 
@@ -38,7 +40,10 @@ describe('writing', () => {
     const created = await call(base, '/api/v1/drafts', { body: { values: completeValues(machineId) }, cookie: member.cookie });
     const id = created.body.revision.id;
     expect((await call(base, `/api/v1/drafts/${id}`, { cookie: other.cookie })).status).toBe(404);
-    expect((await call(base, `/api/v1/drafts/${id}`, { method: 'PUT', body: { values: completeValues(machineId) }, cookie: other.cookie })).status).toBe(404);
+    expect(
+      (await call(base, `/api/v1/drafts/${id}`, { method: 'PUT', body: { values: completeValues(machineId) }, cookie: other.cookie }))
+        .status,
+    ).toBe(404);
     expect((await call(base, `/api/v1/drafts/${id}/submit`, { body: {}, cookie: other.cookie })).status).toBe(404);
     expect((await fetch(`${base}/write?draft=${id}`, { headers: { cookie: other.cookie } })).status).toBe(404);
     // Drafts stay private even from moderators.
@@ -50,7 +55,10 @@ describe('writing', () => {
 
   it('opens the one draft a writer has of a fix rather than starting a second', async () => {
     const { slug } = await publishFix(base, member, moderator, completeValues(machineId));
-    const firstDraft = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: completeValues(machineId) }, cookie: other.cookie });
+    const firstDraft = await call(base, '/api/v1/drafts', {
+      body: { fixSlug: slug, values: completeValues(machineId) },
+      cookie: other.cookie,
+    });
     expect(firstDraft.status).toBe(201);
     const second = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: completeValues(machineId) }, cookie: other.cookie });
     expect(second.status).toBe(409);

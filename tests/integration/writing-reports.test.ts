@@ -43,13 +43,27 @@ describe('the fix page', () => {
 
 describe('reporting a fix', () => {
   it('takes a form post, refuses the same open report twice, and needs a reason', async () => {
-    const sent = await postForm(base, `/api/v1/fixes/${slug}/reports`, { reason: 'dangerous', detail: 'The remedy has you probe the primary side with no caution about stored charge.' }, { cookie: member.cookie });
+    const sent = await postForm(
+      base,
+      `/api/v1/fixes/${slug}/reports`,
+      { reason: 'dangerous', detail: 'The remedy has you probe the primary side with no caution about stored charge.' },
+      { cookie: member.cookie },
+    );
     expect(sent.status).toBe(303);
     expect(sent.headers.get('location')).toBe(`/fixes/${slug}?report=sent#report`);
-    expect(await (await fetch(`${base}/fixes/${slug}?report=sent`, { headers: { cookie: member.cookie } })).text()).toContain('your report reached the moderators');
-    const again = await postForm(base, `/api/v1/fixes/${slug}/reports`, { reason: 'dangerous', detail: 'Same again, for the same reason.' }, { cookie: member.cookie });
+    expect(await (await fetch(`${base}/fixes/${slug}?report=sent`, { headers: { cookie: member.cookie } })).text()).toContain(
+      'your report reached the moderators',
+    );
+    const again = await postForm(
+      base,
+      `/api/v1/fixes/${slug}/reports`,
+      { reason: 'dangerous', detail: 'Same again, for the same reason.' },
+      { cookie: member.cookie },
+    );
     expect(again.status).toBe(303);
-    expect(new URL(again.headers.get('location') ?? '', base).searchParams.get('report_error')).toMatch(/^You have already reported this fix/);
+    expect(new URL(again.headers.get('location') ?? '', base).searchParams.get('report_error')).toMatch(
+      /^You have already reported this fix/,
+    );
     const noReason = await call(base, `/api/v1/fixes/${slug}/reports`, { body: { reason: 'boring', detail: 'x' }, cookie: member.cookie });
     expect(noReason.status).toBe(400);
     expect(noReason.body.error.fields.reason).toBeDefined();
@@ -64,26 +78,47 @@ describe('reporting a fix', () => {
     const report = await knex('reports').where({ fix_id: fixId, state: 'open' }).first('id');
     const desk = await (await fetch(`${base}/proofing`, { headers: { cookie: moderator.cookie } })).text();
     expect(desk).toContain(`data-report="${report.id}"`);
-    const resolved = await postForm(base, `/api/v1/proofing/reports/${report.id}`, { outcome: 'resolved', note: 'Caution added in r2.' }, { cookie: moderator.cookie });
+    const resolved = await postForm(
+      base,
+      `/api/v1/proofing/reports/${report.id}`,
+      { outcome: 'resolved', note: 'Caution added in r2.' },
+      { cookie: moderator.cookie },
+    );
     expect(resolved.status).toBe(303);
     const row = await knex('reports').where({ id: report.id }).first('state', 'resolved_by', 'resolution_note');
     expect(row).toEqual({ state: 'resolved', resolved_by: moderator.id, resolution_note: 'Caution added in r2.' });
-    const actions = await knex('audit_log').where({ subject_type: 'report', subject_id: String(report.id) }).pluck('action');
+    const actions = await knex('audit_log')
+      .where({ subject_type: 'report', subject_id: String(report.id) })
+      .pluck('action');
     expect(actions).toEqual(expect.arrayContaining(['report.create', 'report.resolve']));
-    expect((await postForm(base, `/api/v1/proofing/reports/${report.id}`, { outcome: 'dismissed' }, { cookie: member.cookie })).status).toBe(403);
+    expect(
+      (await postForm(base, `/api/v1/proofing/reports/${report.id}`, { outcome: 'dismissed' }, { cookie: member.cookie })).status,
+    ).toBe(403);
   });
 });
 
 describe('locking and hiding', () => {
   it('locks a fix against edits by members (moderators still write), and unlocks it', async () => {
     expect((await postForm(base, `/api/v1/proofing/fixes/${slug}`, { action: 'lock' }, { cookie: member.cookie })).status).toBe(403);
-    expect((await postForm(base, `/api/v1/proofing/fixes/${slug}`, { action: 'lock', note: 'Edit war' }, { cookie: moderator.cookie })).status).toBe(303);
-    const refused = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: completeValues(await someMachineId(knex, 3)) }, cookie: member.cookie });
+    expect(
+      (await postForm(base, `/api/v1/proofing/fixes/${slug}`, { action: 'lock', note: 'Edit war' }, { cookie: moderator.cookie })).status,
+    ).toBe(303);
+    const refused = await call(base, '/api/v1/drafts', {
+      body: { fixSlug: slug, values: completeValues(await someMachineId(knex, 3)) },
+      cookie: member.cookie,
+    });
     expect(refused.status).toBe(403);
     expect(refused.body.error.message).toMatch(/locked by a moderator/);
-    expect(await (await fetch(`${base}/fixes/${slug}/edit`, { headers: { cookie: member.cookie } })).text()).toContain('This fix is locked');
-    expect(await (await fetch(`${base}/fixes/${slug}`, { headers: { cookie: member.cookie } })).text()).not.toContain(`href="/fixes/${slug}/edit"`);
-    const byModerator = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: completeValues(await someMachineId(knex, 3)) }, cookie: moderator.cookie });
+    expect(await (await fetch(`${base}/fixes/${slug}/edit`, { headers: { cookie: member.cookie } })).text()).toContain(
+      'This fix is locked',
+    );
+    expect(await (await fetch(`${base}/fixes/${slug}`, { headers: { cookie: member.cookie } })).text()).not.toContain(
+      `href="/fixes/${slug}/edit"`,
+    );
+    const byModerator = await call(base, '/api/v1/drafts', {
+      body: { fixSlug: slug, values: completeValues(await someMachineId(knex, 3)) },
+      cookie: moderator.cookie,
+    });
     expect(byModerator.status).toBe(201);
     expect((await postForm(base, `/api/v1/proofing/fixes/${slug}`, { action: 'unlock' }, { cookie: moderator.cookie })).status).toBe(303);
     expect((await knex('fixes').where({ id: fixId }).first('locked_at')).locked_at).toBeNull();
@@ -98,7 +133,9 @@ describe('locking and hiding', () => {
     expect((await postForm(base, `/api/v1/proofing/fixes/${slug}`, { action: 'unhide' }, { cookie: moderator.cookie })).status).toBe(303);
     expect((await fetch(`${base}/fixes/${slug}`)).status).toBe(200);
     expect(await knex('fix_search').where({ fix_id: fixId }).first('fix_id')).toEqual({ fix_id: fixId });
-    const actions = await knex('audit_log').where({ subject_type: 'fix', subject_id: String(fixId) }).pluck('action');
+    const actions = await knex('audit_log')
+      .where({ subject_type: 'fix', subject_id: String(fixId) })
+      .pluck('action');
     expect(actions).toEqual(expect.arrayContaining(['fix.lock', 'fix.unlock', 'fix.hide', 'fix.unhide']));
   });
 });

@@ -33,7 +33,11 @@ describe('a new fix from draft to live', () => {
     expect(notReady.body.error.fields.symptoms[0]).toMatch(/at least one symptom/);
     expect((await knex('revisions').where({ id }).first('state')).state).toBe('draft');
 
-    const saved = await call(base, `/api/v1/drafts/${id}`, { method: 'PUT', body: { values: { ...values, symptoms: ['Capstan stops after ten minutes'] } }, cookie: author.cookie });
+    const saved = await call(base, `/api/v1/drafts/${id}`, {
+      method: 'PUT',
+      body: { values: { ...values, symptoms: ['Capstan stops after ten minutes'] } },
+      cookie: author.cookie,
+    });
     expect(saved.status).toBe(200);
     const submitted = await call(base, `/api/v1/drafts/${id}/submit`, { body: {}, cookie: author.cookie });
     expect(submitted.status).toBe(200);
@@ -42,7 +46,10 @@ describe('a new fix from draft to live', () => {
     // Waiting: on the desk, nowhere public, and no longer editable in place.
     const desk = await fetch(`${base}/proofing`, { headers: { cookie: moderator.cookie } });
     expect(await desk.text()).toContain(`data-desk-revision="${id}"`);
-    const fix = await knex('revisions as r').join('fixes as f', 'f.id', 'r.fix_id').where('r.id', id).first('f.id', 'f.slug', 'f.current_revision_id');
+    const fix = await knex('revisions as r')
+      .join('fixes as f', 'f.id', 'r.fix_id')
+      .where('r.id', id)
+      .first('f.id', 'f.slug', 'f.current_revision_id');
     expect(fix.current_revision_id).toBeNull();
     expect((await fetch(`${base}/fixes/${fix.slug}`)).status).toBe(404);
     const late = await call(base, `/api/v1/drafts/${id}`, { method: 'PUT', body: { values }, cookie: author.cookie });
@@ -62,7 +69,9 @@ describe('a new fix from draft to live', () => {
     expect(live.current_revision_id).toBe(id);
     expect(await knex('fix_machines').where({ fix_id: live.id }).pluck('machine_id')).toEqual([machineId]);
     expect((await knex('fix_search').where({ fix_id: live.id }).first('revision_id')).revision_id).toBe(id);
-    const audit = await knex('audit_log').where({ subject_type: 'revision', subject_id: String(id) }).pluck('action');
+    const audit = await knex('audit_log')
+      .where({ subject_type: 'revision', subject_id: String(id) })
+      .pluck('action');
     expect(audit).toEqual(expect.arrayContaining(['revision.submit', 'revision.proof']));
     const mail = await waitForMail(INTEGRATION_PORT, author.email, { subject: 'is live' });
     expect(mail.text).toContain('Clear and complete.');
@@ -79,7 +88,10 @@ describe('returning and amending', () => {
     const noNote = await call(base, `/api/v1/proofing/${id}/return`, { body: { note: '  ' }, cookie: moderator.cookie });
     expect(noNote.status).toBe(400);
     expect(noNote.body.error.fields.note[0]).toMatch(/always carries a note/);
-    const returned = await call(base, `/api/v1/proofing/${id}/return`, { body: { note: 'Say which way round C512 goes.' }, cookie: moderator.cookie });
+    const returned = await call(base, `/api/v1/proofing/${id}/return`, {
+      body: { note: 'Say which way round C512 goes.' },
+      cookie: moderator.cookie,
+    });
     expect(returned.status).toBe(200);
     const mail = await waitForMail(INTEGRATION_PORT, author.email, { subject: 'returned' });
     expect(mail.text).toContain('Say which way round C512 goes.');
@@ -108,9 +120,15 @@ describe('returning and amending', () => {
     const created = await call(base, '/api/v1/drafts', { body: { values: completeValues(machineId) }, cookie: author.cookie });
     const id: number = created.body.revision.id;
     await call(base, `/api/v1/drafts/${id}/submit`, { body: {}, cookie: author.cookie });
-    const error = await knex('revisions').where({ id }).update({ cause: 'changed behind everyone’s back' }).catch((e: { constraint?: string }) => e);
+    const error = await knex('revisions')
+      .where({ id })
+      .update({ cause: 'changed behind everyone’s back' })
+      .catch((e: { constraint?: string }) => e);
     expect((error as { constraint?: string }).constraint).toBe('revisions_frozen_check');
-    const backwards = await knex('revisions').where({ id }).update({ state: 'draft' }).catch((e: { constraint?: string }) => e);
+    const backwards = await knex('revisions')
+      .where({ id })
+      .update({ state: 'draft' })
+      .catch((e: { constraint?: string }) => e);
     expect((backwards as { constraint?: string }).constraint).toBe('revisions_transition_check');
   });
 });
@@ -122,7 +140,10 @@ describe('editing a live fix', () => {
     expect(editPage.status).toBe(200);
     expect(await editPage.text()).toContain('astro-island');
 
-    const created = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: completeValues(machineId, { cause: 'A second, better explained cause.' }) }, cookie: author.cookie });
+    const created = await call(base, '/api/v1/drafts', {
+      body: { fixSlug: slug, values: completeValues(machineId, { cause: 'A second, better explained cause.' }) },
+      cookie: author.cookie,
+    });
     expect(created.status).toBe(201);
     expect(created.body.revision.baseRevisionId).toBe(revisionId);
     const id: number = created.body.revision.id;

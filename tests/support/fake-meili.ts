@@ -237,6 +237,18 @@ export class FakeMeili {
       const task = this.tasks[Number(uid)];
       return task ? { status: 200, body: task } : { status: 404, body: { message: 'task not found', code: 'task_not_found', type: 'invalid_request', link: '' } };
     }
+    if (root === 'swap-indexes' && method === 'POST') {
+      return this.enqueue(null, 'indexSwap', () => {
+        for (const swap of body as { indexes: [string, string] }[]) {
+          const [a, b] = swap.indexes;
+          const first = this.indexes.get(a);
+          const second = this.indexes.get(b);
+          if (!first || !second) throw Object.assign(new Error(`Indexes ${a} and ${b} must both exist.`), { code: 'index_not_found' });
+          this.indexes.set(a, second);
+          this.indexes.set(b, first);
+        }
+      });
+    }
     if (root !== 'indexes') return { status: 404, body: { message: 'not found', code: 'not_found', type: 'invalid_request', link: '' } };
     if (method === 'POST' && uid === undefined) {
       return this.enqueue(body.uid, 'indexCreation', () => {
@@ -246,6 +258,11 @@ export class FakeMeili {
     }
     if (uid === undefined) return { status: 405, body: {} };
     const existing = this.indexes.get(uid);
+    if (section === undefined && method === 'DELETE') {
+      return this.enqueue(uid, 'indexDeletion', () => {
+        if (!this.indexes.delete(uid)) throw Object.assign(new Error(`Index \`${uid}\` not found.`), { code: 'index_not_found' });
+      });
+    }
     if (section === 'settings' && method === 'GET') return existing ? { status: 200, body: existing.settings } : notFound(uid);
     if (section === 'settings') return this.enqueue(uid, 'settingsUpdate', () => Object.assign(this.index(uid).settings, sub === 'synonyms' ? { synonyms: body } : body));
     if (section === 'documents' && method === 'POST' && sub === undefined) {

@@ -8,12 +8,17 @@ export async function mailsTo(serverPort: number, to: string): Promise<StoredMai
 }
 
 /** The newest message to `to` (optionally with a subject containing `subject`), waiting for it to arrive. */
-export async function waitForMail(serverPort: number, to: string, options: { subject?: string; count?: number; timeoutMs?: number } = {}): Promise<StoredMail> {
+export async function waitForMail(
+  serverPort: number,
+  to: string,
+  options: { subject?: string; count?: number; timeoutMs?: number } = {},
+): Promise<StoredMail> {
   const deadline = Date.now() + (options.timeoutMs ?? 10_000);
   for (;;) {
     const found = (await mailsTo(serverPort, to)).filter((mail) => !options.subject || mail.subject.includes(options.subject));
     if (found.length >= (options.count ?? 1) && found[0]) return found[0];
-    if (Date.now() > deadline) throw new Error(`No mail to ${to}${options.subject ? ` about "${options.subject}"` : ''} within the time allowed`);
+    if (Date.now() > deadline)
+      throw new Error(`No mail to ${to}${options.subject ? ` about "${options.subject}"` : ''} within the time allowed`);
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
 }

@@ -26,7 +26,10 @@ export interface TestUser {
   name: string;
 }
 
-export async function createUser(knex: Knex, options: { role?: Role; verified?: boolean; suspended?: boolean; tag?: string; password?: string } = {}): Promise<TestUser> {
+export async function createUser(
+  knex: Knex,
+  options: { role?: Role; verified?: boolean; suspended?: boolean; tag?: string; password?: string } = {},
+): Promise<TestUser> {
   const email = uniqueEmail(options.tag ?? options.role ?? 'member');
   const password = options.password ?? STRONG_PASSWORD;
   const name = `Test ${options.tag ?? options.role ?? 'member'} ${email.slice(4, 14)}`;
@@ -45,7 +48,12 @@ export async function createUser(knex: Knex, options: { role?: Role; verified?: 
 }
 
 /** A same-origin form post, as a browser sends it. */
-export function postForm(base: string, path: string, fields: Record<string, string>, options: { cookie?: string; origin?: string | null; ip?: string } = {}): Promise<Response> {
+export function postForm(
+  base: string,
+  path: string,
+  fields: Record<string, string>,
+  options: { cookie?: string; origin?: string | null; ip?: string } = {},
+): Promise<Response> {
   const headers: Record<string, string> = { 'content-type': 'application/x-www-form-urlencoded' };
   if (options.origin !== null) headers.origin = options.origin ?? base;
   if (options.cookie) headers.cookie = options.cookie;
@@ -75,7 +83,8 @@ export function clearsSession(response: Response): boolean {
 /** Signs in with the password form; returns the Cookie header that carries the session. */
 export async function signIn(base: string, email: string, password: string, ip?: string): Promise<string> {
   const response = await postForm(base, '/sign-in', { intent: 'password', email, password, next: '/' }, { ip: ip ?? uniqueClientIp() });
-  if (response.status !== 303) throw new Error(`Signing in as ${email} answered ${response.status}: ${(await response.text()).slice(0, 300)}`);
+  if (response.status !== 303)
+    throw new Error(`Signing in as ${email} answered ${response.status}: ${(await response.text()).slice(0, 300)}`);
   const cookie = cookiesFrom(response);
   if (!cookie.includes('authjs.session-token')) throw new Error(`Signing in as ${email} set no session cookie`);
   return cookie;

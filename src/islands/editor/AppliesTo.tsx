@@ -39,7 +39,11 @@ export function AppliesTo({ machines, chassis, onChange, error }: AppliesToProps
     <fieldset id="field-machineIds" className="grid gap-2" aria-invalid={error ? true : undefined}>
       <legend className="font-sans font-semibold">Applies to</legend>
       <Chips title="Machines" items={machines} onRemove={(id) => onChange({ machines: machines.filter((m) => m.id !== id), chassis })} />
-      <Chips title="Chassis families" items={chassis} onRemove={(id) => onChange({ machines, chassis: chassis.filter((c) => c.id !== id) })} />
+      <Chips
+        title="Chassis families"
+        items={chassis}
+        onRemove={(id) => onChange({ machines, chassis: chassis.filter((c) => c.id !== id) })}
+      />
       <CatalogueTypeahead label="Add a machine or chassis family" onPick={pick} exclude={exclude} />
       <p className="font-sans text-sm text-brick empty:hidden" role={error ? 'alert' : undefined}>
         {error}

@@ -66,7 +66,11 @@ export function BodyToolbar({ editor, editorId, onOpenPanel }: BodyToolbarProps)
       <ToolButton label="Insert picture" onPress={() => onOpenPanel('figure')}>
         Picture
       </ToolButton>
-      <ToolButton label="Insert table" disabled={state.inTable} onPress={run((c) => c.insertTable({ rows: 3, cols: 3, withHeaderRow: true }))}>
+      <ToolButton
+        label="Insert table"
+        disabled={state.inTable}
+        onPress={run((c) => c.insertTable({ rows: 3, cols: 3, withHeaderRow: true }))}
+      >
         Table
       </ToolButton>
       {state.inTable && (

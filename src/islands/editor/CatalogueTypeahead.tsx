@@ -51,7 +51,13 @@ export function CatalogueTypeahead({ label, onPick, exclude }: TypeaheadProps) {
     setOpen(false);
     setActive(0);
   };
-  const status = lookup.isFetching ? 'Looking…' : lookup.isError ? `The catalogue could not be searched: ${lookup.error.message}` : expanded ? `${hits.length} match${hits.length === 1 ? '' : 'es'}` : '';
+  const status = lookup.isFetching
+    ? 'Looking…'
+    : lookup.isError
+      ? `The catalogue could not be searched: ${lookup.error.message}`
+      : expanded
+        ? `${hits.length} match${hits.length === 1 ? '' : 'es'}`
+        : '';
   return (
     <div className="relative font-sans">
       <label htmlFor={`${id}-input`} className="block font-semibold">
@@ -93,7 +99,13 @@ export function CatalogueTypeahead({ label, onPick, exclude }: TypeaheadProps) {
       <p id={`${id}-status`} className="sr-only" aria-live="polite">
         {status}
       </p>
-      <ul id={`${id}-list`} role="listbox" aria-label={`${label}: matches`} hidden={!expanded || hits.length === 0} className="absolute z-10 mt-1 max-h-64 w-full overflow-auto rounded border border-rule-strong bg-paper shadow">
+      <ul
+        id={`${id}-list`}
+        role="listbox"
+        aria-label={`${label}: matches`}
+        hidden={!expanded || hits.length === 0}
+        className="absolute z-10 mt-1 max-h-64 w-full overflow-auto rounded border border-rule-strong bg-paper shadow"
+      >
         {hits.map((hit, i) => (
           <li
             key={`${hit.kind}-${hit.id}`}

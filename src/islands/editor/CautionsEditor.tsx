@@ -18,22 +18,42 @@ export function CautionsEditor({ control, register, errors }: CautionsEditorProp
     <fieldset id="field-cautions" className="grid gap-3">
       <legend className="font-sans font-semibold">Cautions</legend>
       <p className="font-sans text-sm text-ink-soft">
-        Add one for every hazard of this repair: mains, stored charge, lasers, heat, sharp edges, springs. Readers see them before the remedy, with a reminder to follow local electrical codes and licensed practice.
+        Add one for every hazard of this repair: mains, stored charge, lasers, heat, sharp edges, springs. Readers see them before the
+        remedy, with a reminder to follow local electrical codes and licensed practice.
       </p>
       {fields.map((field, i) => (
         <div key={field.id} className="caution grid gap-2 p-3">
-          <label className="font-sans text-sm font-semibold" htmlFor={`caution-${i}-kind`}>Hazard</label>
+          <label className="font-sans text-sm font-semibold" htmlFor={`caution-${i}-kind`}>
+            Hazard
+          </label>
           <select id={`caution-${i}-kind`} className="input" {...register(`cautions.${i}.kind`)}>
-            {cautionKinds.map((k) => <option key={k} value={k}>{cautionLabels[k]}</option>)}
+            {cautionKinds.map((k) => (
+              <option key={k} value={k}>
+                {cautionLabels[k]}
+              </option>
+            ))}
           </select>
-          <label className="font-sans text-sm font-semibold" htmlFor={`caution-${i}-detail`}>What to watch for in this fix</label>
+          <label className="font-sans text-sm font-semibold" htmlFor={`caution-${i}-detail`}>
+            What to watch for in this fix
+          </label>
           <textarea id={`caution-${i}-detail`} className="input" rows={2} maxLength={600} {...register(`cautions.${i}.detail`)} />
-          <div><button type="button" className="btn-quiet" onClick={() => remove(i)}>Remove this caution</button></div>
+          <div>
+            <button type="button" className="btn-quiet" onClick={() => remove(i)}>
+              Remove this caution
+            </button>
+          </div>
         </div>
       ))}
-      <p className="font-sans text-sm text-brick empty:hidden" role={message ? 'alert' : undefined}>{message}</p>
+      <p className="font-sans text-sm text-brick empty:hidden" role={message ? 'alert' : undefined}>
+        {message}
+      </p>
       <div>
-        <button type="button" className="btn-quiet" disabled={unused.length === 0} onClick={() => append({ kind: unused[0] as CautionKind, detail: '' })}>
+        <button
+          type="button"
+          className="btn-quiet"
+          disabled={unused.length === 0}
+          onClick={() => append({ kind: unused[0] as CautionKind, detail: '' })}
+        >
           Add a caution
         </button>
       </div>

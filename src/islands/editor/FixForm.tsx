@@ -27,14 +27,22 @@ import type { EditorRevisionData, FixEditorProps, LabelledRefData, PhotoRefData 
 
 export function FixForm(props: FixEditorProps) {
   const start = useRestoredStart(props);
-  const form = useForm<FixDraftInput, unknown, FixDraft>({ defaultValues: start.values, resolver: zodResolver(fixSubmissionSchema), mode: 'onSubmit' });
+  const form = useForm<FixDraftInput, unknown, FixDraft>({
+    defaultValues: start.values,
+    resolver: zodResolver(fixSubmissionSchema),
+    mode: 'onSubmit',
+  });
   const { register, control, setValue, getValues, formState } = form;
   const [machines, setMachines] = useState<LabelledRefData[]>(start.machines);
   const [chassis, setChassis] = useState<LabelledRefData[]>(start.chassis);
   const [photos, setPhotos] = useState<PhotoRefData[]>(start.photos);
   const [incoming, setIncoming] = useState<IncomingFiles | null>(null);
-  const [summary, setSummary] = useState<{ title: string; items: SummaryItem[] } | null>(null);
-  const [baseNote, setBaseNote] = useState<string | null>(props.draft && props.draft.baseRevisionId !== props.draft.liveRevisionId ? 'The live fix changed since this draft was started; submitting will show both versions.' : null);
+  const [summary, setSummary] = useState<{ title: string; items: SummaryItem[]; tone?: 'error' | 'info' } | null>(null);
+  const [baseNote, setBaseNote] = useState<string | null>(
+    props.draft && props.draft.baseRevisionId !== props.draft.liveRevisionId
+      ? 'The live fix changed since this draft was started; submitting will show both versions.'
+      : null,
+  );
   const editorRef = useRef<Editor | null>(null);
   const pendingInserts = useRef<PhotoRefData[]>([]);
   const refsRef = useRef({ machines, chassis, photos });
@@ -46,7 +54,8 @@ export function FixForm(props: FixEditorProps) {
     getValues,
     getRefs: () => refsRef.current,
     onSaved: (saved) => {
-      if (!props.fixSlug && !new URLSearchParams(window.location.search).has('draft')) window.history.replaceState(null, '', `/write?draft=${saved.revision.id}`);
+      if (!props.fixSlug && !new URLSearchParams(window.location.search).has('draft'))
+        window.history.replaceState(null, '', `/write?draft=${saved.revision.id}`);
       setBaseNote(saved.baseIsStale ? 'The live fix changed since this draft was started; submitting will show both versions.' : null);
     },
     onRefused: (failure) => {
@@ -68,17 +77,33 @@ export function FixForm(props: FixEditorProps) {
   const setTargets = (next: { machines: LabelledRefData[]; chassis: LabelledRefData[] }) => {
     setMachines(next.machines);
     setChassis(next.chassis);
-    setValue('machineIds', next.machines.map((m) => m.id), { shouldDirty: true });
-    setValue('chassisIds', next.chassis.map((c) => c.id), { shouldDirty: true });
+    setValue(
+      'machineIds',
+      next.machines.map((m) => m.id),
+      { shouldDirty: true },
+    );
+    setValue(
+      'chassisIds',
+      next.chassis.map((c) => c.id),
+      { shouldDirty: true },
+    );
   };
   const setPhotoList = (next: PhotoRefData[]) => {
     setPhotos(next);
-    setValue('photoIds', next.map((p) => p.id), { shouldDirty: true });
+    setValue(
+      'photoIds',
+      next.map((p) => p.id),
+      { shouldDirty: true },
+    );
   };
   const onPhotoReady = (photo: PhotoRefData, insert: boolean) => {
     setPhotos((current) => {
       const next = current.some((p) => p.id === photo.id) ? current : [...current, photo];
-      setValue('photoIds', next.map((p) => p.id), { shouldDirty: true });
+      setValue(
+        'photoIds',
+        next.map((p) => p.id),
+        { shouldDirty: true },
+      );
       return next;
     });
     if (insert && editorRef.current) insertFigure(editorRef.current, photo);
@@ -113,11 +138,12 @@ export function FixForm(props: FixEditorProps) {
       {props.notice && <p className="rounded bg-teal-wash p-3 font-sans text-sm">{props.notice}</p>}
       {start.restored && (
         <p className="rounded bg-amber-wash p-3 font-sans text-sm" role="status">
-          Restored changes you made in this browser at {new Date(start.restored).toLocaleTimeString()} that had not reached the server; they are being saved now.
+          Restored changes you made in this browser at {new Date(start.restored).toLocaleTimeString()} that had not reached the server; they
+          are being saved now.
         </p>
       )}
       {baseNote && <p className="rounded bg-amber-wash p-3 font-sans text-sm">{baseNote}</p>}
-      {summary && <ErrorSummary title={summary.title} items={summary.items} />}
+      {summary && <ErrorSummary title={summary.title} items={summary.items} tone={summary.tone ?? 'error'} />}
       {submission.conflict && (
         <StaleBasePanel
           live={submission.conflict}
@@ -128,12 +154,55 @@ export function FixForm(props: FixEditorProps) {
         />
       )}
 
-      <Field id="field-title" label="Title" hint="The symptom and the machine family in a few words, e.g. “Tray opens, then closes again at once”." error={errors.title?.message}>
+      <Field
+        id="field-title"
+        label="Title"
+        hint="The symptom and the machine family in a few words, e.g. “Tray opens, then closes again at once”."
+        error={errors.title?.message}
+      >
         {(a) => <input {...a} className="input w-full font-serif text-xl" maxLength={fixDraftLimits.title} {...register('title')} />}
       </Field>
-      <AppliesTo machines={machines} chassis={chassis} onChange={setTargets} error={errors.machineIds?.message ?? errors.chassisIds?.message} />
-      <Controller control={control} name="symptoms" render={({ field }) => <ListField id="field-symptoms" legend="Symptoms" itemLabel="symptom" hint="What the owner sees or hears, one per line." values={field.value ?? []} onChange={field.onChange} maxItems={fixDraftLimits.symptoms} maxLength={fixDraftLimits.symptom} error={errors.symptoms?.message} />} />
-      <Controller control={control} name="errorCodes" render={({ field }) => <ListField id="field-errorCodes" legend="Error codes on the display" itemLabel="error code" hint="As shown, e.g. E21 or U-07; leave empty if none." values={field.value ?? []} onChange={field.onChange} maxItems={fixDraftLimits.errorCodes} maxLength={fixDraftLimits.errorCode} error={errors.errorCodes?.message} mono />} />
+      <AppliesTo
+        machines={machines}
+        chassis={chassis}
+        onChange={setTargets}
+        error={errors.machineIds?.message ?? errors.chassisIds?.message}
+      />
+      <Controller
+        control={control}
+        name="symptoms"
+        render={({ field }) => (
+          <ListField
+            id="field-symptoms"
+            legend="Symptoms"
+            itemLabel="symptom"
+            hint="What the owner sees or hears, one per line."
+            values={field.value ?? []}
+            onChange={field.onChange}
+            maxItems={fixDraftLimits.symptoms}
+            maxLength={fixDraftLimits.symptom}
+            error={errors.symptoms?.message}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="errorCodes"
+        render={({ field }) => (
+          <ListField
+            id="field-errorCodes"
+            legend="Error codes on the display"
+            itemLabel="error code"
+            hint="As shown, e.g. E21 or U-07; leave empty if none."
+            values={field.value ?? []}
+            onChange={field.onChange}
+            maxItems={fixDraftLimits.errorCodes}
+            maxLength={fixDraftLimits.errorCode}
+            error={errors.errorCodes?.message}
+            mono
+          />
+        )}
+      />
       <Field id="field-cause" label="Cause" hint="What is physically wrong, in a sentence or two." error={errors.cause?.message}>
         {(a) => <textarea {...a} className="input w-full" rows={3} maxLength={fixDraftLimits.cause} {...register('cause')} />}
       </Field>
@@ -142,24 +211,49 @@ export function FixForm(props: FixEditorProps) {
           {(a) => (
             <select {...a} className="input" {...register('difficulty', { setValueAs: (v: string) => (v === '' ? null : v) })}>
               <option value="">Not given</option>
-              {difficulties.map((d) => <option key={d} value={d}>{difficultyLabels[d]}</option>)}
+              {difficulties.map((d) => (
+                <option key={d} value={d}>
+                  {difficultyLabels[d]}
+                </option>
+              ))}
             </select>
           )}
         </Field>
         <Field id="field-timeMinutes" label="Bench time in minutes" error={errors.timeMinutes?.message}>
-          {(a) => <input {...a} type="number" min={1} max={10000} className="input w-32" {...register('timeMinutes', { setValueAs: (v: string) => (v === '' || v === null ? null : Number(v)) })} />}
+          {(a) => (
+            <input
+              {...a}
+              type="number"
+              min={1}
+              max={10000}
+              className="input w-32"
+              {...register('timeMinutes', { setValueAs: (v: string) => (v === '' || v === null ? null : Number(v)) })}
+            />
+          )}
         </Field>
       </div>
       <CautionsEditor control={control} register={register} errors={errors} />
       <div id="field-body" className="grid gap-2">
         <h2 className="font-sans font-semibold">Remedy</h2>
-        <p className="font-sans text-sm text-ink-soft">The steps, in order. Put caution boxes before the steps they guard. Paste from a word processor keeps lists and tables; pasted pictures are uploaded as photos.</p>
-        <BodyEditor initial={start.values.body} onChange={onBodyChange} photos={photos} onImageFiles={(files) => setIncoming({ files, insert: true, batch: Date.now() })} onReady={onEditorReady} error={errors.body?.message} />
+        <p className="font-sans text-sm text-ink-soft">
+          The steps, in order. Put caution boxes before the steps they guard. Paste from a word processor keeps lists and tables; pasted
+          pictures are uploaded as photos.
+        </p>
+        <BodyEditor
+          initial={start.values.body}
+          onChange={onBodyChange}
+          photos={photos}
+          onImageFiles={(files) => setIncoming({ files, insert: true, batch: Date.now() })}
+          onReady={onEditorReady}
+          error={errors.body?.message}
+        />
       </div>
       <PartsEditor control={control} register={register} errors={errors} />
       <ReadingsEditor control={control} register={register} errors={errors} />
       <section className="grid gap-3" aria-labelledby="photos-title">
-        <h2 id="photos-title" className="font-sans font-semibold">Photos</h2>
+        <h2 id="photos-title" className="font-sans font-semibold">
+          Photos
+        </h2>
         <PhotoList
           photos={photos}
           onRemove={(id) => setPhotoList(photos.filter((p) => p.id !== id))}
@@ -174,7 +268,12 @@ export function FixForm(props: FixEditorProps) {
         />
         <PhotoUploader onReady={onPhotoReady} incoming={incoming} />
       </section>
-      <Field id="field-editSummary" label="What you changed, for the proofer" hint="One line, e.g. “Added the second capacitor and a reading at TP4”." error={errors.editSummary?.message}>
+      <Field
+        id="field-editSummary"
+        label="What you changed, for the proofer"
+        hint="One line, e.g. “Added the second capacitor and a reading at TP4”."
+        error={errors.editSummary?.message}
+      >
         {(a) => <input {...a} className="input w-full" maxLength={fixDraftLimits.editSummary} {...register('editSummary')} />}
       </Field>
     </form>

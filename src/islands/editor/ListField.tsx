@@ -55,7 +55,13 @@ export function ListField({ legend, itemLabel, hint, values, onChange, maxItems,
                 }
               }}
             />
-            <button type="button" className="btn-quiet" aria-label={`Remove ${itemLabel} ${i + 1}`} onClick={() => remove(i)} disabled={lines.length === 1 && line === ''}>
+            <button
+              type="button"
+              className="btn-quiet"
+              aria-label={`Remove ${itemLabel} ${i + 1}`}
+              onClick={() => remove(i)}
+              disabled={lines.length === 1 && line === ''}
+            >
               Remove
             </button>
           </li>

@@ -76,7 +76,11 @@ export function PanelField({ label, value, onChange, hint, required, multiline, 
         {label}
         {required && <span aria-hidden="true"> *</span>}
       </label>
-      {multiline ? <textarea {...common} rows={2} onChange={(e) => onChange(e.target.value)} /> : <input {...common} type="text" onChange={(e) => onChange(e.target.value)} />}
+      {multiline ? (
+        <textarea {...common} rows={2} onChange={(e) => onChange(e.target.value)} />
+      ) : (
+        <input {...common} type="text" onChange={(e) => onChange(e.target.value)} />
+      )}
       {hint && (
         <p id={hintId} className="text-ink-soft">
           {hint}

@@ -16,7 +16,9 @@ const kindLabel = (k: PartKind) => k.replace(/_/g, ' ');
 function decoded(value: string, rating: string, kind: PartKind): { ok: boolean; text: string } | null {
   if (value.trim() === '') return null;
   const result = describePart(value, rating, { kind });
-  return result.ok ? { ok: true, text: `Reads as ${result.value.label}` } : { ok: false, text: `${result.error.message} For example: ${result.error.example}` };
+  return result.ok
+    ? { ok: true, text: `Reads as ${result.value.label}` }
+    : { ok: false, text: `${result.error.message} For example: ${result.error.example}` };
 }
 
 export function PartsEditor({ control, register, errors }: PartsEditorProps) {
@@ -28,13 +30,27 @@ export function PartsEditor({ control, register, errors }: PartsEditorProps) {
         <caption className="text-left font-semibold">Parts list</caption>
         <thead>
           <tr className="bg-paper-deep text-left">
-            <th scope="col" className="px-2 py-1">Ref.</th>
-            <th scope="col" className="px-2 py-1">Kind</th>
-            <th scope="col" className="px-2 py-1">Value</th>
-            <th scope="col" className="px-2 py-1">Rating</th>
-            <th scope="col" className="px-2 py-1">Qty</th>
-            <th scope="col" className="px-2 py-1">Notes</th>
-            <th scope="col" className="px-2 py-1"><span className="sr-only">Row actions</span></th>
+            <th scope="col" className="px-2 py-1">
+              Ref.
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Kind
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Value
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Rating
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Qty
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Notes
+            </th>
+            <th scope="col" className="px-2 py-1">
+              <span className="sr-only">Row actions</span>
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -45,31 +61,85 @@ export function PartsEditor({ control, register, errors }: PartsEditorProps) {
             const n = i + 1;
             return (
               <tr key={field.id} className="border-b border-rule align-top">
-                <td className="px-1 py-1"><input aria-label={`Reference of part ${n}`} className="input w-20 font-mono" maxLength={40} {...register(`parts.${i}.ref`)} /></td>
+                <td className="px-1 py-1">
+                  <input
+                    aria-label={`Reference of part ${n}`}
+                    className="input w-20 font-mono"
+                    maxLength={40}
+                    {...register(`parts.${i}.ref`)}
+                  />
+                </td>
                 <td className="px-1 py-1">
                   <select aria-label={`Kind of part ${n}`} className="input" {...register(`parts.${i}.kind`)}>
-                    {partKinds.map((k) => <option key={k} value={k}>{kindLabel(k)}</option>)}
+                    {partKinds.map((k) => (
+                      <option key={k} value={k}>
+                        {kindLabel(k)}
+                      </option>
+                    ))}
                   </select>
                 </td>
                 <td className="px-1 py-1">
-                  <input aria-label={`Value of part ${n}`} aria-describedby={`part-${i}-check`} aria-invalid={check?.ok === false || serverError ? true : undefined} className="input w-32 font-mono" maxLength={120} {...register(`parts.${i}.value`)} />
-                  <p id={`part-${i}-check`} className={`mt-1 max-w-xs ${check?.ok === false || serverError ? 'text-brick' : 'text-ink-soft'} empty:hidden`}>
+                  <input
+                    aria-label={`Value of part ${n}`}
+                    aria-describedby={`part-${i}-check`}
+                    aria-invalid={check?.ok === false || serverError ? true : undefined}
+                    className="input w-32 font-mono"
+                    maxLength={120}
+                    {...register(`parts.${i}.value`)}
+                  />
+                  <p
+                    id={`part-${i}-check`}
+                    className={`mt-1 max-w-xs ${check?.ok === false || serverError ? 'text-brick' : 'text-ink-soft'} empty:hidden`}
+                  >
                     {serverError ?? check?.text}
                   </p>
                 </td>
-                <td className="px-1 py-1"><input aria-label={`Rating of part ${n}`} className="input w-32 font-mono" maxLength={120} {...register(`parts.${i}.rating`)} /></td>
-                <td className="px-1 py-1"><input aria-label={`Quantity of part ${n}`} type="number" min={1} max={999} className="input w-16" {...register(`parts.${i}.quantity`, { valueAsNumber: true })} /></td>
-                <td className="px-1 py-1"><input aria-label={`Notes on part ${n}`} className="input w-40" maxLength={500} {...register(`parts.${i}.notes`)} /></td>
+                <td className="px-1 py-1">
+                  <input
+                    aria-label={`Rating of part ${n}`}
+                    className="input w-32 font-mono"
+                    maxLength={120}
+                    {...register(`parts.${i}.rating`)}
+                  />
+                </td>
+                <td className="px-1 py-1">
+                  <input
+                    aria-label={`Quantity of part ${n}`}
+                    type="number"
+                    min={1}
+                    max={999}
+                    className="input w-16"
+                    {...register(`parts.${i}.quantity`, { valueAsNumber: true })}
+                  />
+                </td>
+                <td className="px-1 py-1">
+                  <input aria-label={`Notes on part ${n}`} className="input w-40" maxLength={500} {...register(`parts.${i}.notes`)} />
+                </td>
                 <td className="whitespace-nowrap px-1 py-1">
-                  <button type="button" className="btn-quiet" aria-label={`Move part ${n} up`} disabled={i === 0} onClick={() => move(i, i - 1)}>↑</button>
-                  <button type="button" className="btn-quiet" aria-label={`Remove part ${n}`} onClick={() => remove(i)}>Remove</button>
+                  <button
+                    type="button"
+                    className="btn-quiet"
+                    aria-label={`Move part ${n} up`}
+                    disabled={i === 0}
+                    onClick={() => move(i, i - 1)}
+                  >
+                    ↑
+                  </button>
+                  <button type="button" className="btn-quiet" aria-label={`Remove part ${n}`} onClick={() => remove(i)}>
+                    Remove
+                  </button>
                 </td>
               </tr>
             );
           })}
         </tbody>
       </table>
-      <button type="button" className="btn-quiet mt-2" disabled={fields.length >= fixDraftLimits.parts} onClick={() => append(emptyPartRow())}>
+      <button
+        type="button"
+        className="btn-quiet mt-2"
+        disabled={fields.length >= fixDraftLimits.parts}
+        onClick={() => append(emptyPartRow())}
+      >
         Add a part
       </button>
     </div>

@@ -4,7 +4,8 @@ import type { FixDraft } from '@/lib/schemas/fix-draft';
 import { cautionLabels, difficultyLabels } from '@/lib/schemas/revision';
 import type { EditorRevisionData, LabelledRefData, PhotoRefData } from './types';
 
-export type SectionName = 'Title' | 'Machines' | 'Symptoms' | 'Cause' | 'Difficulty and time' | 'Cautions' | 'Remedy' | 'Parts' | 'Readings' | 'Photos';
+export type SectionName =
+  'Title' | 'Machines' | 'Symptoms' | 'Cause' | 'Difficulty and time' | 'Cautions' | 'Remedy' | 'Parts' | 'Readings' | 'Photos';
 
 interface StaleBasePanelProps {
   live: EditorRevisionData;
@@ -17,16 +18,28 @@ interface StaleBasePanelProps {
 /** A section as plain lines a writer can read and copy from. */
 function sectionText(section: SectionName, c: ComparableRevision): string {
   switch (section) {
-    case 'Title': return c.title;
-    case 'Machines': return [...c.machines, ...c.chassis].join('\n');
-    case 'Symptoms': return [...c.symptoms, ...(c.errorCodes.length ? [`Codes: ${c.errorCodes.join(', ')}`] : [])].join('\n');
-    case 'Cause': return c.cause;
-    case 'Difficulty and time': return [c.difficulty ? difficultyLabels[c.difficulty] : '', c.timeMinutes ? `${c.timeMinutes} minutes` : ''].filter(Boolean).join('\n');
-    case 'Cautions': return c.cautions.map((k) => `${cautionLabels[k.kind]}${k.detail ? `: ${k.detail}` : ''}`).join('\n');
-    case 'Remedy': return c.bodyText;
-    case 'Parts': return c.parts.map((p) => [p.ref, p.value, p.rating, `× ${p.quantity}`, p.notes].filter(Boolean).join(' ')).join('\n');
-    case 'Readings': return c.readings.map((r) => `${r.testPoint}: ${r.expected}${r.measured ? ` (faulty: ${r.measured})` : ''}`).join('\n');
-    case 'Photos': return c.photos.map((p) => p.alt).join('\n');
+    case 'Title':
+      return c.title;
+    case 'Machines':
+      return [...c.machines, ...c.chassis].join('\n');
+    case 'Symptoms':
+      return [...c.symptoms, ...(c.errorCodes.length ? [`Codes: ${c.errorCodes.join(', ')}`] : [])].join('\n');
+    case 'Cause':
+      return c.cause;
+    case 'Difficulty and time':
+      return [c.difficulty ? difficultyLabels[c.difficulty] : '', c.timeMinutes ? `${c.timeMinutes} minutes` : '']
+        .filter(Boolean)
+        .join('\n');
+    case 'Cautions':
+      return c.cautions.map((k) => `${cautionLabels[k.kind]}${k.detail ? `: ${k.detail}` : ''}`).join('\n');
+    case 'Remedy':
+      return c.bodyText;
+    case 'Parts':
+      return c.parts.map((p) => [p.ref, p.value, p.rating, `× ${p.quantity}`, p.notes].filter(Boolean).join(' ')).join('\n');
+    case 'Readings':
+      return c.readings.map((r) => `${r.testPoint}: ${r.expected}${r.measured ? ` (faulty: ${r.measured})` : ''}`).join('\n');
+    case 'Photos':
+      return c.photos.map((p) => p.alt).join('\n');
   }
 }
 
@@ -36,10 +49,12 @@ export function StaleBasePanel({ live, yours, onTakeLive, onRebase, busy }: Stal
   const sections = diffRevisions(liveSide, mine).changedSections as SectionName[];
   return (
     <section aria-labelledby="stale-title" className="rounded border border-amber bg-amber-wash p-4 font-sans text-sm">
-      <h2 id="stale-title" className="font-serif text-xl font-semibold text-amber-ink">The fix changed while you were writing</h2>
+      <h2 id="stale-title" className="font-serif text-xl font-semibold text-amber-ink">
+        The fix changed while you were writing
+      </h2>
       <p className="mt-1">
-        r{live.number} went live after you started. Your text is kept, in this form and on the server. Below are the sections where yours and the live one differ: keep yours, or take the live
-        version of a section. Then build on r{live.number} and submit again.
+        r{live.number} went live after you started. Your text is kept, in this form and on the server. Below are the sections where yours
+        and the live one differ: keep yours, or take the live version of a section. Then build on r{live.number} and submit again.
       </p>
       <div className="mt-3 grid gap-3">
         {sections.map((section) => (

@@ -41,7 +41,15 @@ export function Toolbar({ label, controls, children }: ToolbarProps) {
   };
 
   return (
-    <div ref={ref} role="toolbar" aria-label={label} aria-controls={controls} className="flex flex-wrap gap-1 border-b border-rule bg-paper-deep p-1" onKeyDown={onKeyDown} onFocus={onFocus}>
+    <div
+      ref={ref}
+      role="toolbar"
+      aria-label={label}
+      aria-controls={controls}
+      className="flex flex-wrap gap-1 border-b border-rule bg-paper-deep p-1"
+      onKeyDown={onKeyDown}
+      onFocus={onFocus}
+    >
       {children}
     </div>
   );

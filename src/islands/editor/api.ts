@@ -20,7 +20,8 @@ export async function callApi<T>(path: string, init: { method: string; body?: un
   try {
     response = await fetch(path, {
       method: init.method,
-      headers: init.body === undefined ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
+      headers:
+        init.body === undefined ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
       body: init.body === undefined ? undefined : JSON.stringify(init.body),
       credentials: 'same-origin',
     });
@@ -57,7 +58,10 @@ export function createDraftRequest(fixSlug: string | null, values: FixDraftInput
 }
 
 export function saveDraftRequest(draftId: number, values: FixDraftInput, baseRevisionId?: number | null): Promise<ApiResult<SavedDraft>> {
-  return callApi(`/api/v1/drafts/${draftId}`, { method: 'PUT', body: baseRevisionId === undefined ? { values } : { values, baseRevisionId } });
+  return callApi(`/api/v1/drafts/${draftId}`, {
+    method: 'PUT',
+    body: baseRevisionId === undefined ? { values } : { values, baseRevisionId },
+  });
 }
 
 export function submitDraftRequest(draftId: number, values: FixDraftInput): Promise<ApiResult<{ revision: EditorRevisionData }>> {

@@ -39,15 +39,36 @@ export function ReadingPanel({ editor, onClose }: PanelProps) {
   const [error, setError] = useState<string | null>(null);
   const set = (field: keyof typeof reading) => (value: string) => setReading((r) => ({ ...r, [field]: value }));
   const apply = () => {
-    if (!reading.testPoint.trim() || !reading.expected.trim()) return setError('A reading needs a test point and the value a good unit shows.');
+    if (!reading.testPoint.trim() || !reading.expected.trim())
+      return setError('A reading needs a test point and the value a good unit shows.');
     if (selected) editor.chain().focus().updateAttributes('reading', reading).run();
     else editor.chain().focus().insertContent({ type: 'reading', attrs: reading }).run();
     onClose();
   };
   return (
-    <Panel title={selected ? 'Change the reading' : 'Insert a reading'} submitLabel={selected ? 'Change reading' : 'Insert reading'} onSubmit={apply} onClose={onClose} error={error}>
-      <PanelField label="Test point" required value={reading.testPoint} onChange={set('testPoint')} hint="Where to measure, e.g. TP12 or the 5 V rail at C512." maxLength={120} />
-      <PanelField label="Expected" required value={reading.expected} onChange={set('expected')} hint="What a good unit shows, e.g. 5.0 V." maxLength={80} />
+    <Panel
+      title={selected ? 'Change the reading' : 'Insert a reading'}
+      submitLabel={selected ? 'Change reading' : 'Insert reading'}
+      onSubmit={apply}
+      onClose={onClose}
+      error={error}
+    >
+      <PanelField
+        label="Test point"
+        required
+        value={reading.testPoint}
+        onChange={set('testPoint')}
+        hint="Where to measure, e.g. TP12 or the 5 V rail at C512."
+        maxLength={120}
+      />
+      <PanelField
+        label="Expected"
+        required
+        value={reading.expected}
+        onChange={set('expected')}
+        hint="What a good unit shows, e.g. 5.0 V."
+        maxLength={80}
+      />
       <PanelField label="Typical faulty reading" value={reading.measured} onChange={set('measured')} maxLength={80} />
       <PanelField label="Note" value={reading.note} onChange={set('note')} maxLength={300} />
     </Panel>
@@ -59,11 +80,21 @@ export function CautionPanel({ editor, onClose }: PanelProps) {
   const [kind, setKind] = useState<CautionKind>(current ?? 'mains');
   const apply = () => {
     if (current) editor.chain().focus().updateAttributes('caution', { kind }).run();
-    else editor.chain().focus().insertContent({ type: 'caution', attrs: { kind }, content: [{ type: 'paragraph' }] }).run();
+    else
+      editor
+        .chain()
+        .focus()
+        .insertContent({ type: 'caution', attrs: { kind }, content: [{ type: 'paragraph' }] })
+        .run();
     onClose();
   };
   return (
-    <Panel title={current ? 'Change the caution' : 'Insert a caution box'} submitLabel={current ? 'Change caution' : 'Insert caution'} onSubmit={apply} onClose={onClose}>
+    <Panel
+      title={current ? 'Change the caution' : 'Insert a caution box'}
+      submitLabel={current ? 'Change caution' : 'Insert caution'}
+      onSubmit={apply}
+      onClose={onClose}
+    >
       <label className="block font-semibold" htmlFor="caution-kind">
         What can hurt
       </label>
@@ -74,7 +105,9 @@ export function CautionPanel({ editor, onClose }: PanelProps) {
           </option>
         ))}
       </select>
-      <p className="text-ink-soft">Put it before the step it guards. The box ends with a reminder to follow local electrical codes and licensed practice.</p>
+      <p className="text-ink-soft">
+        Put it before the step it guards. The box ends with a reminder to follow local electrical codes and licensed practice.
+      </p>
     </Panel>
   );
 }
@@ -114,5 +147,9 @@ export function FigurePanel({ editor, onClose, photos }: PanelProps & { photos: 
 /** A figure node for an uploaded photo: its ~960 px JPEG, its alt text, its caption (kept apart from the alt text). */
 export function insertFigure(editor: Editor, photo: PhotoRefData): void {
   if (!photo.figureSrc) return;
-  editor.chain().focus().insertContent({ type: 'figure', attrs: { src: photo.figureSrc, alt: photo.alt, caption: photo.caption } }).run();
+  editor
+    .chain()
+    .focus()
+    .insertContent({ type: 'figure', attrs: { src: photo.figureSrc, alt: photo.alt, caption: photo.caption } })
+    .run();
 }

@@ -24,7 +24,15 @@ export function journalScope(input: { draftId: number | null; fixSlug: string | 
 
 function isEntry(value: unknown): value is JournalEntry {
   const v = value as JournalEntry;
-  return typeof v === 'object' && v !== null && v.version === 1 && typeof v.editedAt === 'string' && !Number.isNaN(Date.parse(v.editedAt)) && typeof v.values === 'object' && v.values !== null;
+  return (
+    typeof v === 'object' &&
+    v !== null &&
+    v.version === 1 &&
+    typeof v.editedAt === 'string' &&
+    !Number.isNaN(Date.parse(v.editedAt)) &&
+    typeof v.values === 'object' &&
+    v.values !== null
+  );
 }
 
 export function readJournal(store: JournalStore, scope: string): JournalEntry | null {
@@ -66,7 +74,10 @@ export function clearJournal(store: JournalStore, scope: string): void {
  * Restore the journal when it was edited after the server's copy was saved and says something different. A clock
  * skew between browser and server can only make us offer a restore the writer may decline, never lose text.
  */
-export function shouldRestore(entry: JournalEntry | null, server: { updatedAt: string | null; values: FixDraftInput }): entry is JournalEntry {
+export function shouldRestore(
+  entry: JournalEntry | null,
+  server: { updatedAt: string | null; values: FixDraftInput },
+): entry is JournalEntry {
   if (!entry) return false;
   if (JSON.stringify(entry.values) === JSON.stringify(server.values)) return false;
   if (server.updatedAt === null) return true;

@@ -45,7 +45,11 @@ export function useAutosave(options: AutosaveOptions): Autosave {
   const versions = useRef({ edit: 0, saved: 0 });
   const inFlight = useRef<Promise<void> | null>(null);
   const again = useRef(false);
-  const timers = useRef<{ debounce?: ReturnType<typeof setTimeout>; retry?: ReturnType<typeof setTimeout>; journal?: ReturnType<typeof setTimeout> }>({});
+  const timers = useRef<{
+    debounce?: ReturnType<typeof setTimeout>;
+    retry?: ReturnType<typeof setTimeout>;
+    journal?: ReturnType<typeof setTimeout>;
+  }>({});
   const attempts = useRef(0);
   const opts = useRef(options);
   opts.current = options;
@@ -53,7 +57,15 @@ export function useAutosave(options: AutosaveOptions): Autosave {
 
   const writeLocal = useCallback(() => {
     const store = storage();
-    const ok = store !== null && writeJournal(store, scope(), { version: 1, editedAt: new Date().toISOString(), draftId: draftRef.current, values: opts.current.getValues(), refs: opts.current.getRefs() });
+    const ok =
+      store !== null &&
+      writeJournal(store, scope(), {
+        version: 1,
+        editedAt: new Date().toISOString(),
+        draftId: draftRef.current,
+        values: opts.current.getValues(),
+        refs: opts.current.getRefs(),
+      });
     setJournalFailed(!ok);
   }, []);
 

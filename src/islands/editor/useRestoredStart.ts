@@ -16,7 +16,13 @@ export interface FormStart {
 export function useRestoredStart(props: FixEditorProps): FormStart {
   const [start] = useState<FormStart>(() => {
     const server = props.draft ?? { ...props.start, updatedAt: null };
-    const base: FormStart = { values: server.values, machines: server.machines, chassis: server.chassis, photos: server.photos, restored: null };
+    const base: FormStart = {
+      values: server.values,
+      machines: server.machines,
+      chassis: server.chassis,
+      photos: server.photos,
+      restored: null,
+    };
     let store: Storage | null = null;
     try {
       store = window.localStorage;
@@ -37,7 +43,12 @@ export function useRestoredStart(props: FixEditorProps): FormStart {
     const chassis = pick(known.chassis, entry.values.chassisIds);
     const photos = pick(known.photos, entry.values.photoIds);
     return {
-      values: { ...entry.values, machineIds: machines.map((m) => m.id), chassisIds: chassis.map((c) => c.id), photoIds: photos.map((p) => p.id) },
+      values: {
+        ...entry.values,
+        machineIds: machines.map((m) => m.id),
+        chassisIds: chassis.map((c) => c.id),
+        photoIds: photos.map((p) => p.id),
+      },
       machines,
       chassis,
       photos,

@@ -12,7 +12,7 @@ interface SubmissionOptions {
   form: UseFormReturn<FixDraftInput, unknown, FixDraft>;
   autosave: Autosave;
   doneHref: string;
-  setSummary: (summary: { title: string; items: SummaryItem[] } | null) => void;
+  setSummary: (summary: { title: string; items: SummaryItem[]; tone?: 'error' | 'info' } | null) => void;
   labels: { machines: LabelledRefData[]; chassis: LabelledRefData[]; photos: PhotoRefData[] };
 }
 
@@ -27,7 +27,10 @@ export function useSubmission({ form, autosave, doneHref, setSummary }: Submissi
       const saved = await autosave.flush();
       const draftId = autosave.draftIdNow();
       if (!saved || draftId === null) {
-        setSummary({ title: 'The draft could not be saved, so it was not submitted. Your text is kept in this browser; try again in a moment.', items: [] });
+        setSummary({
+          title: 'The draft could not be saved, so it was not submitted. Your text is kept in this browser; try again in a moment.',
+          items: [],
+        });
         return;
       }
       const result = await submitDraftRequest(draftId, form.getValues());
@@ -53,7 +56,10 @@ export function useSubmission({ form, autosave, doneHref, setSummary }: Submissi
     void form.handleSubmit(
       () => send(),
       (errors) => {
-        setSummary({ title: 'The revision is not ready to submit yet; see the marked fields. Your draft is saved as it is.', items: flattenErrors(errors) });
+        setSummary({
+          title: 'The revision is not ready to submit yet; see the marked fields. Your draft is saved as it is.',
+          items: flattenErrors(errors),
+        });
         void autosave.flush();
       },
     )(event);
@@ -70,7 +76,7 @@ export function useSubmission({ form, autosave, doneHref, setSummary }: Submissi
       setSummary({ title: `Could not build on r${conflict.number}: ${result.failure.message}`, items: [] });
       return;
     }
-    setSummary({ title: `Your draft now builds on r${conflict.number}. Check it, then submit again.`, items: [] });
+    setSummary({ title: `Your draft now builds on r${conflict.number}. Check it, then submit again.`, items: [], tone: 'info' });
     setConflict(null);
   };
 

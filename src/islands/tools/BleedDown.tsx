@@ -57,19 +57,19 @@ function BleedResult({ result }: { result: BleedOutcomeResult }): ReactElement {
         <caption className="text-left font-semibold">The decay in figures</caption>
         <thead>
           <tr>
-            <th scope="col" className="text-left">Point</th>
-            <th scope="col" className="text-right">Time</th>
-            <th scope="col" className="text-right">Voltage</th>
+            <th scope="col" className="px-2 py-1 text-left">Point</th>
+            <th scope="col" className="px-2 py-1 text-right">Time</th>
+            <th scope="col" className="px-2 py-1 text-right">Voltage</th>
           </tr>
         </thead>
         <tbody>
           {result.keyPoints.map((p) => (
             <tr key={p.label}>
-              <th scope="row" className="text-left font-normal">
+              <th scope="row" className="px-2 py-1 text-left font-normal">
                 {p.label}
               </th>
-              <td className="value text-right">{duration(p.timeS)}</td>
-              <td className="value text-right">{significant(p.voltageV)} V</td>
+              <td className="px-2 py-1 value text-right">{duration(p.timeS)}</td>
+              <td className="px-2 py-1 value text-right">{significant(p.voltageV)} V</td>
             </tr>
           ))}
         </tbody>

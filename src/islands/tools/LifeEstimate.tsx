@@ -55,19 +55,19 @@ function LifeResult({ result }: { result: LifeOutcomeResult }): ReactElement {
         <caption className="text-left font-semibold">Life against temperature in figures</caption>
         <thead>
           <tr>
-            <th scope="col" className="text-right">Temperature</th>
-            <th scope="col" className="text-right">Life</th>
-            <th scope="col" className="text-right">Years</th>
+            <th scope="col" className="px-2 py-1 text-right">Temperature</th>
+            <th scope="col" className="px-2 py-1 text-right">Life</th>
+            <th scope="col" className="px-2 py-1 text-right">Years</th>
           </tr>
         </thead>
         <tbody>
           {result.curve.map((p) => (
             <tr key={p.temperatureC}>
-              <th scope="row" className="value text-right font-normal">
+              <th scope="row" className="px-2 py-1 value text-right font-normal">
                 {celsius(p.temperatureC)}
               </th>
-              <td className="value text-right">{hours(p.lifeH)}</td>
-              <td className="value text-right">{years(p.lifeH / HOURS_PER_YEAR)}</td>
+              <td className="px-2 py-1 value text-right">{hours(p.lifeH)}</td>
+              <td className="px-2 py-1 value text-right">{years(p.lifeH / HOURS_PER_YEAR)}</td>
             </tr>
           ))}
         </tbody>

@@ -55,21 +55,21 @@ function Verdict({ result }: { result: SubstituteResult }): ReactElement {
         <caption className="sr-only">Each check with its reason</caption>
         <thead>
           <tr>
-            <th scope="col" className="text-left">Check</th>
-            <th scope="col" className="text-left">Result</th>
-            <th scope="col" className="text-left">Why</th>
+            <th scope="col" className="px-2 py-1 text-left">Check</th>
+            <th scope="col" className="px-2 py-1 text-left">Result</th>
+            <th scope="col" className="px-2 py-1 text-left">Why</th>
           </tr>
         </thead>
         <tbody>
           {result.checks.map((c) => (
-            <tr key={c.check} className="align-top">
-              <th scope="row" className="text-left font-semibold">
+            <tr key={c.check} className="border-b border-rule align-top">
+              <th scope="row" className="px-2 py-1 text-left font-semibold">
                 {checkNames[c.check]}
               </th>
-              <td>
+              <td className="px-2 py-1">
                 <StatusMark status={c.status} />
               </td>
-              <td>{c.reason}</td>
+              <td className="px-2 py-1">{c.reason}</td>
             </tr>
           ))}
         </tbody>

@@ -51,7 +51,12 @@ function position<R>(pair: [R | null, R | null], after: readonly R[], before: re
   return pair[0] ? before.indexOf(pair[0]) - 0.5 : 0;
 }
 
-export function diffRows<R extends Row>(before: readonly R[], after: readonly R[], columns: readonly (keyof R & string)[], keyOf: (row: R) => string): RowDiff[] {
+export function diffRows<R extends Row>(
+  before: readonly R[],
+  after: readonly R[],
+  columns: readonly (keyof R & string)[],
+  keyOf: (row: R) => string,
+): RowDiff[] {
   return matchRows(before, after, keyOf).map(([a, b]) => {
     const cells = columns.map((column) => {
       const was = a ? String(a[column] ?? '') : '';

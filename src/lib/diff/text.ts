@@ -15,9 +15,7 @@ export interface LineDiff {
 }
 
 function toSpans(changes: { value: string; added: boolean; removed: boolean }[]): DiffSpan[] {
-  return changes
-    .filter((c) => c.value !== '')
-    .map((c) => ({ kind: c.added ? 'added' : c.removed ? 'removed' : 'same', text: c.value }));
+  return changes.filter((c) => c.value !== '').map((c) => ({ kind: c.added ? 'added' : c.removed ? 'removed' : 'same', text: c.value }));
 }
 
 /** Words that differ between two short texts (a title, a cause, a note). */
@@ -40,10 +38,20 @@ function mergeChangeRuns(spans: DiffSpan[]): DiffSpan[] {
     }
     let end = i;
     // Extend over whitespace-only shared spans that have another change after them.
-    while (end + 1 < spans.length && (spans[end + 1]!.kind !== 'same' || (/^\s+$/.test(spans[end + 1]!.text) && spans[end + 2] && spans[end + 2]!.kind !== 'same'))) end++;
+    while (
+      end + 1 < spans.length &&
+      (spans[end + 1]!.kind !== 'same' || (/^\s+$/.test(spans[end + 1]!.text) && spans[end + 2] && spans[end + 2]!.kind !== 'same'))
+    )
+      end++;
     const run = spans.slice(i, end + 1);
-    const removed = run.filter((s) => s.kind !== 'added').map((s) => s.text).join('');
-    const added = run.filter((s) => s.kind !== 'removed').map((s) => s.text).join('');
+    const removed = run
+      .filter((s) => s.kind !== 'added')
+      .map((s) => s.text)
+      .join('');
+    const added = run
+      .filter((s) => s.kind !== 'removed')
+      .map((s) => s.text)
+      .join('');
     if (run.some((s) => s.kind === 'removed')) out.push({ kind: 'removed', text: removed });
     if (run.some((s) => s.kind === 'added')) out.push({ kind: 'added', text: added });
     i = end + 1;
@@ -61,7 +69,10 @@ export function hasChanges(spans: DiffSpan[]): boolean {
  */
 export function diffLinesOf(before: string, after: string): LineDiff[] {
   const split = (value: string) => value.replace(/\n$/, '').split('\n');
-  const raw = diffLines(before.endsWith('\n') || before === '' ? before : `${before}\n`, after.endsWith('\n') || after === '' ? after : `${after}\n`);
+  const raw = diffLines(
+    before.endsWith('\n') || before === '' ? before : `${before}\n`,
+    after.endsWith('\n') || after === '' ? after : `${after}\n`,
+  );
   const out: LineDiff[] = [];
   for (let i = 0; i < raw.length; i++) {
     const change = raw[i]!;

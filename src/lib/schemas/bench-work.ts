@@ -96,7 +96,11 @@ const jobSheetFields = {
   reportedSymptom: z.string().trim().max(2000, 'Keep the reported symptom under 2000 characters.'),
   findings: z.string().trim().max(4000, 'Keep the findings under 4000 characters.'),
   partsUsed: z.array(jobPartSchema).max(200, 'A job sheet holds at most 200 part lines.'),
-  labourMinutes: z.number({ error: 'Give labour in whole minutes.' }).int('Give labour in whole minutes.').min(0, 'Labour cannot be negative.').max(100_000, 'Labour above 100000 minutes is not one job.'),
+  labourMinutes: z
+    .number({ error: 'Give labour in whole minutes.' })
+    .int('Give labour in whole minutes.')
+    .min(0, 'Labour cannot be negative.')
+    .max(100_000, 'Labour above 100000 minutes is not one job.'),
   status: jobStatusSchema,
   outcome: z.string().trim().max(2000, 'Keep the outcome under 2000 characters.'),
 };
@@ -203,11 +207,17 @@ export function fixRefFromText(text: string | undefined): { slug: string; revisi
 /** What the page says after a bench report form post, by the code in `?bench=`; problems are marked. */
 export const benchNotices: Record<string, { text: string; problem: boolean }> = {
   saved: { text: 'Your bench report is saved. Thank you: it counts towards the bench score.', problem: false },
-  saved_own: { text: 'Your bench report is saved. As the author of this fix, your report is shown but not counted in its score.', problem: false },
+  saved_own: {
+    text: 'Your bench report is saved. As the author of this fix, your report is shown but not counted in its score.',
+    problem: false,
+  },
   need_days: { text: 'The report was not saved: when the fault came back, say how many days the repair held.', problem: true },
   bad_machine: { text: 'The report was not saved: choose a machine this fix applies to, or one of its chassis family.', problem: true },
   bad_revision: { text: 'The report was not saved: that revision of the fix cannot take reports.', problem: true },
   not_found: { text: 'The report was not saved: the fix is no longer available.', problem: true },
-  rate_limited: { text: 'The report was not saved: you have saved many bench reports in a short time. Please try again later.', problem: true },
+  rate_limited: {
+    text: 'The report was not saved: you have saved many bench reports in a short time. Please try again later.',
+    problem: true,
+  },
   invalid: { text: 'The report was not saved: some fields were not valid. Check the outcome, days held and note.', problem: true },
 };

@@ -28,7 +28,11 @@ export const draftPartRowSchema = z.object({
   kind: partKindSchema,
   value: z.string().trim().max(120),
   rating: z.string().trim().max(120),
-  quantity: z.number({ error: 'Quantity is a whole number from 1 to 999.' }).int('Quantity is a whole number.').min(1, 'Quantity is at least 1.').max(999, 'Quantity is at most 999.'),
+  quantity: z
+    .number({ error: 'Quantity is a whole number from 1 to 999.' })
+    .int('Quantity is a whole number.')
+    .min(1, 'Quantity is at least 1.')
+    .max(999, 'Quantity is at most 999.'),
   notes: z.string().trim().max(500),
 });
 export type DraftPartRow = z.infer<typeof draftPartRowSchema>;
@@ -90,7 +94,11 @@ export function submissionIssues(draft: FixDraft): Issue[] {
   need(draft.symptoms.length >= 1, ['symptoms'], 'Name at least one symptom, as the owner would describe it.');
   need(draft.cause.length >= 1, ['cause'], 'Say what causes the fault.');
   need(bodyPlainText(draft.body).length > 0, ['body'], 'Write the remedy: the steps that fix the fault.');
-  need(draft.machineIds.length + draft.chassisIds.length >= 1, ['machineIds'], 'Pick at least one machine or chassis family this fix applies to.');
+  need(
+    draft.machineIds.length + draft.chassisIds.length >= 1,
+    ['machineIds'],
+    'Pick at least one machine or chassis family this fix applies to.',
+  );
   issues.push(...partIssues(draft.parts), ...readingIssues(draft.readings), ...bodyNodeIssues(draft.body));
   const kinds = draft.cautions.map((c) => c.kind);
   need(new Set(kinds).size === kinds.length, ['cautions'], 'Each kind of caution appears once; put all its detail in one entry.');
@@ -105,7 +113,8 @@ function partIssues(parts: DraftPartRow[]): Issue[] {
       return;
     }
     const decoded = describePart(row.value, row.rating, { kind: row.kind });
-    if (!decoded.ok) issues.push({ path: ['parts', i, 'value'], message: `${decoded.error.message} For example: ${decoded.error.example}` });
+    if (!decoded.ok)
+      issues.push({ path: ['parts', i, 'value'], message: `${decoded.error.message} For example: ${decoded.error.example}` });
   });
   return issues;
 }
@@ -113,7 +122,8 @@ function partIssues(parts: DraftPartRow[]): Issue[] {
 function readingIssues(readings: DraftReading[]): Issue[] {
   const issues: Issue[] = [];
   readings.forEach((r, i) => {
-    if (r.testPoint === '') issues.push({ path: ['readings', i, 'testPoint'], message: 'Name the test point, e.g. TP12 or the 5 V rail at C512.' });
+    if (r.testPoint === '')
+      issues.push({ path: ['readings', i, 'testPoint'], message: 'Name the test point, e.g. TP12 or the 5 V rail at C512.' });
     if (r.expected === '') issues.push({ path: ['readings', i, 'expected'], message: 'Give the expected value, e.g. 5.0 V.' });
   });
   return issues;
@@ -125,7 +135,10 @@ function bodyNodeIssues(doc: BodyDoc): Issue[] {
   const visit = (node: BodyNode) => {
     const attrs = node.attrs ?? {};
     if (node.type === 'reading' && (!attrs.testPoint || !attrs.expected)) {
-      issues.push({ path: ['body'], message: `A reading in the remedy${attrs.testPoint ? ` (at ${attrs.testPoint})` : ''} needs both a test point and an expected value.` });
+      issues.push({
+        path: ['body'],
+        message: `A reading in the remedy${attrs.testPoint ? ` (at ${attrs.testPoint})` : ''} needs both a test point and an expected value.`,
+      });
     }
     if ((node.type === 'figure' || node.type === 'image') && !String(attrs.alt ?? '').trim()) {
       issues.push({ path: ['body'], message: 'Every picture in the remedy needs alt text: what it shows, for readers who cannot see it.' });

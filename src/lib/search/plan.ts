@@ -152,8 +152,7 @@ export function buildPlan(parsed: ParsedQuery, vocabulary: Vocabulary, families:
     plainWords(next, span.from);
     const typed = words.slice(span.from, span.to);
     const allStop = typed.every((w) => w.stop);
-    const term = span.to - span.from > 1 ? `"${span.term}"` : span.term;
-    textClauses.push({ kind: 'text', label: typed.map((w) => w.text).join(' '), terms: [term], alternatives: span.alternatives.map(quoteMultiWord), soft: allStop, exact: false, position: span.from });
+    textClauses.push({ kind: 'text', label: typed.map((w) => w.text).join(' '), terms: [quoteMultiWord(span.term)], alternatives: span.alternatives.map(quoteMultiWord), soft: allStop, exact: false, position: span.from });
     next = span.to;
   }
   plainWords(next, words.length);

@@ -24,7 +24,15 @@ export interface ChartOptions {
   targetTicks: number;
 }
 
-export const defaultChartOptions: ChartOptions = { width: 560, barHeight: 18, labelHeight: 18, gap: 10, valueRoom: 40, maxLabelChars: 70, targetTicks: 5 };
+export const defaultChartOptions: ChartOptions = {
+  width: 560,
+  barHeight: 18,
+  labelHeight: 18,
+  gap: 10,
+  valueRoom: 40,
+  maxLabelChars: 70,
+  targetTicks: 5,
+};
 
 export interface BarGeometry {
   label: string;
@@ -75,7 +83,10 @@ export function countTicks(max: number, target: number): number[] {
 export function shortenLabel(label: string, maxChars: number): string {
   const chars = [...label];
   if (chars.length <= maxChars) return label;
-  return `${chars.slice(0, Math.max(1, maxChars - 1)).join('').trimEnd()}…`;
+  return `${chars
+    .slice(0, Math.max(1, maxChars - 1))
+    .join('')
+    .trimEnd()}…`;
 }
 
 /** Lays out bars top to bottom in the order given; negative or non-finite values are drawn as 0. */

@@ -15,7 +15,12 @@ export const accountIntents = ['profile', 'password', 'resend-confirmation', 'si
 export type AccountIntent = (typeof accountIntents)[number];
 
 /** A form that asks for the current password counts a wrong one like a failed sign-in. */
-async function currentPasswordMatches(userId: number, email: string, password: string | undefined, clientKey: string): Promise<FormOutcome | null> {
+async function currentPasswordMatches(
+  userId: number,
+  email: string,
+  password: string | undefined,
+  clientKey: string,
+): Promise<FormOutcome | null> {
   const row = await findUserById(userId);
   if (!row?.password_hash) return null;
   const limit = await check('sign_in_failure', clientKey, email);

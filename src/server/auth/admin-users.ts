@@ -13,7 +13,11 @@ export const USERS_PER_PAGE = 50;
 export type ListedUser = Omit<UserRow, 'password_hash' | 'sessions_valid_after'>;
 
 /** Members matching a name, e-mail or shop name fragment, newest first; deleted accounts left out. */
-export async function listUsers(query: string | undefined, page: number, knex: Knex = db()): Promise<{ users: ListedUser[]; total: number }> {
+export async function listUsers(
+  query: string | undefined,
+  page: number,
+  knex: Knex = db(),
+): Promise<{ users: ListedUser[]; total: number }> {
   const base = knex('users').whereNull('deleted_at');
   if (query) {
     const like = `%${query.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
@@ -41,7 +45,11 @@ function back(fields: Record<string, string>, notice: string): string {
 type Subject = { id: number; role: Role; suspended_at: Date | null; suspended_reason: string | null };
 
 async function subjectFor(trx: Knex, userId: number): Promise<Subject | null> {
-  const row = await trx('users').where({ id: userId }).whereNull('deleted_at').forUpdate().first('id', 'role', 'suspended_at', 'suspended_reason');
+  const row = await trx('users')
+    .where({ id: userId })
+    .whereNull('deleted_at')
+    .forUpdate()
+    .first('id', 'role', 'suspended_at', 'suspended_reason');
   return row ? { ...row, role: roleOf(row) } : null;
 }
 
@@ -55,7 +63,16 @@ async function changeRole(actor: SessionUser, fields: Record<string, string>): P
     if (!can(actor, 'manage_users', { subject })) return refused(403, 'You cannot change this member’s role (nobody changes their own).');
     if (subject.role === role) return redirectTo(back(fields, 'unchanged'));
     await trx('users').where({ id: userId }).update({ role });
-    await writeAudit({ actorId: actor.id, action: 'user.role_change', subjectType: 'user', subjectId: userId, detail: { before: { role: subject.role }, after: { role } } }, trx);
+    await writeAudit(
+      {
+        actorId: actor.id,
+        action: 'user.role_change',
+        subjectType: 'user',
+        subjectId: userId,
+        detail: { before: { role: subject.role }, after: { role } },
+      },
+      trx,
+    );
     return redirectTo(back(fields, 'role-changed'));
   });
 }
@@ -71,7 +88,13 @@ async function suspend(actor: SessionUser, fields: Record<string, string>): Prom
     if (subject.suspended_at) return redirectTo(back(fields, 'unchanged'));
     await trx('users').where({ id: userId }).update({ suspended_at: trx.fn.now(), suspended_reason: reason });
     await writeAudit(
-      { actorId: actor.id, action: 'user.suspend', subjectType: 'user', subjectId: userId, detail: { before: { suspended: false }, after: { suspended: true, reason } } },
+      {
+        actorId: actor.id,
+        action: 'user.suspend',
+        subjectType: 'user',
+        subjectId: userId,
+        detail: { before: { suspended: false }, after: { suspended: true, reason } },
+      },
       trx,
     );
     return redirectTo(back(fields, 'suspended'));

@@ -18,7 +18,9 @@ function decoy(): Promise<string> {
   return decoyHash;
 }
 
-export async function authorizeCredentials(raw: Partial<Record<string, unknown>>): Promise<{ id: string; name: string | null; email: string } | null> {
+export async function authorizeCredentials(
+  raw: Partial<Record<string, unknown>>,
+): Promise<{ id: string; name: string | null; email: string } | null> {
   const parsed = signInSchema.pick({ email: true, password: true }).safeParse(raw);
   if (!parsed.success) return null;
   const { email, password } = parsed.data;

@@ -13,7 +13,11 @@ export function tombstoneEmail(userId: number): string {
 
 export async function anonymiseAccount(userId: number, actorId: number | null, knex: Knex = db()): Promise<boolean> {
   return knex.transaction(async (trx) => {
-    const before = await trx('users').where({ id: userId }).whereNull('deleted_at').forUpdate().first<{ email: string } | undefined>('email');
+    const before = await trx('users')
+      .where({ id: userId })
+      .whereNull('deleted_at')
+      .forUpdate()
+      .first<{ email: string } | undefined>('email');
     if (!before) return false;
     // Unused sign-in links for the old address.
     await trx('verification_token').where({ identifier: before.email }).delete();
@@ -31,7 +35,7 @@ export async function anonymiseAccount(userId: number, actorId: number | null, k
         suspended_at: null,
         suspended_reason: null,
         deleted_at: trx.fn.now(),
-        sessions_valid_after: trx.fn.now(),
+        sessions_valid_after: new Date(),
       });
     if (updated === 0) return false;
     // The row stays (fixes, revisions and bench reports point at it), so cascades do not fire: remove private records here.

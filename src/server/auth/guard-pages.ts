@@ -18,7 +18,10 @@ export function forbiddenPage(user: SessionUser): string {
   if (!user.verified) {
     return page(
       'Confirm your e-mail address first',
-      ['Your account can read everything on Benchlore, but writing starts once you have confirmed your e-mail address.', 'Your account page can send the confirmation mail again.'],
+      [
+        'Your account can read everything on Benchlore, but writing starts once you have confirmed your e-mail address.',
+        'Your account page can send the confirmation mail again.',
+      ],
       [
         ['/account', 'Go to your account'],
         ['/', 'Back to the front page'],
@@ -38,5 +41,9 @@ export function notServedPage(): string {
 
 /** Fails closed: a route missing from src/server/route-access.ts is refused until someone lists it. */
 export function unlistedPage(): string {
-  return page('Not open yet', ['This page has not been given an access rule yet, so it is closed for now.'], [['/', 'Back to the front page']]);
+  return page(
+    'Not open yet',
+    ['This page has not been given an access rule yet, so it is closed for now.'],
+    [['/', 'Back to the front page']],
+  );
 }

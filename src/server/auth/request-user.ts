@@ -15,7 +15,7 @@ export async function resolveUser(request: Request, cookies: AstroCookies): Prom
   const cookieHeader = request.headers.get('cookie');
   if (!cookieHeader?.includes(sessionCookieName())) return null;
   const claims = await readSessionClaims(cookieHeader);
-  const lookup = claims ? await loadSessionUser(claims.userId, claims.issuedAt) : null;
+  const lookup = claims ? await loadSessionUser(claims.userId, claims.signedInAtMs) : null;
   if (lookup?.user) return lookup.user;
   // Expired, tampered with, suspended, deleted or ended elsewhere: stop the browser sending it.
   clearSessionCookies(cookies, cookieHeader);

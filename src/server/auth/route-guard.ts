@@ -20,7 +20,10 @@ function errorJson(status: number, code: string, message: string, headers: Recor
 }
 
 function html(status: number, body: string, headers: Record<string, string> = {}): Response {
-  return new Response(body, { status, headers: { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'private, no-store', ...headers } });
+  return new Response(body, {
+    status,
+    headers: { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'private, no-store', ...headers },
+  });
 }
 
 /** Pages send the reader to sign in and back; a form post comes back to its page, not to a POST. */
@@ -35,7 +38,9 @@ function denied(context: GuardContext, user: SessionUser | null): Response {
   const api = isApi(context.routePattern);
   if (!user) return api ? errorJson(401, 'unauthorised', 'Sign in to do this.') : signInRedirect(context);
   if (api) {
-    const message = user.verified ? 'Your account may not do this.' : 'Confirm your e-mail address first: your account page can send the mail again.';
+    const message = user.verified
+      ? 'Your account may not do this.'
+      : 'Confirm your e-mail address first: your account page can send the mail again.';
     return errorJson(403, 'forbidden', message);
   }
   return html(403, forbiddenPage(user));
@@ -59,7 +64,9 @@ export function guardRequest(context: GuardContext, user: SessionUser | null): R
   if (decision.kind === 'method_not_allowed' || decision.access === 'closed') {
     const allow = decision.kind === 'method_not_allowed' ? decision.allow : ['GET', 'HEAD'];
     const headers = { Allow: allow.join(', ') };
-    return api ? errorJson(405, 'method_not_allowed', 'This address does not take that method.', headers) : html(405, notServedPage(), headers);
+    return api
+      ? errorJson(405, 'method_not_allowed', 'This address does not take that method.', headers)
+      : html(405, notServedPage(), headers);
   }
   return allowed(decision.access, user) ? null : denied(context, user);
 }

@@ -12,10 +12,13 @@ export function sessionCookieName(secure: boolean = useSecureCookies()): string 
   return `${secure ? '__Secure-' : ''}authjs.session-token`;
 }
 
+/** A tampered or expired cookie is routine: getToken's own console logging would only be noise. */
+const quiet = { error: (): void => {}, warn: (): void => {}, debug: (): void => {} };
+
 export interface SessionClaims {
   userId: number;
-  /** Seconds since the epoch, as in the token's iat claim. */
-  issuedAt: number | undefined;
+  /** When the member signed in, in milliseconds (our authAt claim; the JWT's iat has whole seconds only). */
+  signedInAtMs: number | undefined;
 }
 
 /** The user id from a valid, unexpired session token in the Cookie header; null otherwise. */
@@ -26,10 +29,16 @@ export async function readSessionClaims(cookieHeader: string | null): Promise<Se
   if (!cookieHeader.includes(name)) return null;
   // Only the cookie: a bearer header is not a way in.
   const req = new Request('http://session.invalid/', { headers: { cookie: cookieHeader } });
-  const token = await getToken({ req, secret, secureCookie: useSecureCookies(), cookieName: name, salt: name, logger: { error: () => {}, warn: () => {}, debug: () => {} } as never });
+  const token = await getToken({ req, secret, secureCookie: useSecureCookies(), cookieName: name, salt: name, logger: quiet });
   const userId = Number(token?.sub);
   if (!token || !Number.isInteger(userId) || userId <= 0) return null;
-  return { userId, issuedAt: typeof token.iat === 'number' ? token.iat : undefined };
+  return { userId, signedInAtMs: signedInAt(token) };
+}
+
+/** The sign-in time a token carries: our millisecond claim, else the JWT's whole-second iat. */
+export function signedInAt(token: { authAt?: unknown; iat?: unknown }): number | undefined {
+  if (typeof token.authAt === 'number') return token.authAt;
+  return typeof token.iat === 'number' ? token.iat * 1000 : undefined;
 }
 
 /** Removes the session cookie and any chunks of it, so a signed-out browser stops sending it. */

@@ -1,6 +1,7 @@
 // Auth.js callbacks: who may finish signing in, and what the session token carries (the user id only).
 import type { Account, User } from '@auth/core/types';
 import type { JWT } from '@auth/core/jwt';
+import { signedInAt } from './session-cookie';
 import { findUserByEmail, loadSessionUser } from './users';
 
 interface SignInParams {
@@ -30,9 +31,11 @@ interface JwtParams {
  * endpoint), the account must still be active and the token newer than any "sign out everywhere".
  */
 export async function refreshToken({ token, user }: JwtParams): Promise<JWT | null> {
-  if (user?.id) return { sub: String(user.id) };
+  // authAt: the sign-in moment to the millisecond, compared with "sign out everywhere" and password changes.
+  if (user?.id) return { sub: String(user.id), authAt: Date.now() };
   const userId = Number(token.sub);
   if (!Number.isInteger(userId) || userId <= 0) return null;
-  const lookup = await loadSessionUser(userId, typeof token.iat === 'number' ? token.iat : undefined);
-  return lookup.user ? { sub: String(userId) } : null;
+  const authAt = signedInAt(token);
+  const lookup = await loadSessionUser(userId, authAt);
+  return lookup.user ? { sub: String(userId), authAt } : null;
 }

@@ -23,7 +23,10 @@ export async function passwordSignIn(fields: Record<string, string>, asker: Aske
     return redirectTo(outcome.location, outcome.setCookies);
   }
   if (outcome.code === 'suspended') {
-    return refused(403, 'This account is suspended and cannot sign in. If you think this is a mistake, the house rules say how to ask the moderators to look again.');
+    return refused(
+      403,
+      'This account is suspended and cannot sign in. If you think this is a mistake, the house rules say how to ask the moderators to look again.',
+    );
   }
   await consume('sign_in_failure', asker.clientKey, email);
   // One message for an unknown address and a wrong password alike.

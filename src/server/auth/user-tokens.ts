@@ -13,7 +13,12 @@ export function hashToken(token: string): string {
 }
 
 /** A new token for the user; earlier unused tokens of the same purpose stop working. */
-export async function issueToken(userId: number, purpose: TokenPurpose, lifetimeSeconds = tokenLifetimeSeconds[purpose], knex: Knex = db()): Promise<string> {
+export async function issueToken(
+  userId: number,
+  purpose: TokenPurpose,
+  lifetimeSeconds = tokenLifetimeSeconds[purpose],
+  knex: Knex = db(),
+): Promise<string> {
   const token = randomBytes(32).toString('base64url');
   await knex.transaction(async (trx) => {
     await trx('user_tokens').where({ user_id: userId, purpose }).whereNull('used_at').update({ used_at: trx.fn.now() });

@@ -58,7 +58,7 @@ export async function findUserById(id: number, knex: Knex = db()): Promise<UserR
 export type SessionLookup = { user: SessionUser } | { user: null; reason: 'missing' | 'deleted' | 'suspended' | 'ended' };
 
 /** The account behind a session token, read fresh on every request so role changes and suspensions apply at once. */
-export async function loadSessionUser(id: number, issuedAtSeconds: number | undefined, knex: Knex = db()): Promise<SessionLookup> {
+export async function loadSessionUser(id: number, signedInAtMs: number | undefined, knex: Knex = db()): Promise<SessionLookup> {
   const row = await knex<UserRow>('users')
     .where({ id })
     .first('id', 'name', 'email', 'role', 'emailVerified', 'shop_name', 'suspended_at', 'deleted_at', 'sessions_valid_after');
@@ -66,7 +66,7 @@ export async function loadSessionUser(id: number, issuedAtSeconds: number | unde
   if (row.deleted_at) return { user: null, reason: 'deleted' };
   if (row.suspended_at) return { user: null, reason: 'suspended' };
   // A token issued before the cut-off (a password change, "sign out everywhere") no longer counts.
-  if (row.sessions_valid_after && (issuedAtSeconds ?? 0) * 1000 < row.sessions_valid_after.getTime()) return { user: null, reason: 'ended' };
+  if (row.sessions_valid_after && (signedInAtMs ?? 0) < row.sessions_valid_after.getTime()) return { user: null, reason: 'ended' };
   return { user: toSessionUser(row) };
 }
 
@@ -89,19 +89,22 @@ export async function createMember(member: NewMember, knex: Knex = db()): Promis
 
 /** Changes the fields given; a missing field stays as it is. */
 export async function updateProfile(id: number, profile: { name?: string; shopName?: string | null }, knex: Knex = db()): Promise<void> {
-  const changes = { ...(profile.name !== undefined ? { name: profile.name } : {}), ...(profile.shopName !== undefined ? { shop_name: profile.shopName } : {}) };
+  const changes = {
+    ...(profile.name !== undefined ? { name: profile.name } : {}),
+    ...(profile.shopName !== undefined ? { shop_name: profile.shopName } : {}),
+  };
   if (Object.keys(changes).length === 0) return;
   await knex('users').where({ id }).whereNull('deleted_at').update(changes);
 }
 
-/** Whole seconds, like a token's issue time: a session started in the same second as the change still counts. */
-function sessionCutoff(knex: Knex): Knex.Raw {
-  return knex.raw(`date_trunc('second', now())`);
+/** The app's clock, like the authAt claim it is compared with: sessions started before this moment end. */
+function sessionCutoff(): Date {
+  return new Date();
 }
 
 /** A new password ends every session issued before it, other browsers included. */
 export async function setPassword(id: number, passwordHash: string, knex: Knex = db()): Promise<void> {
-  await knex('users').where({ id }).whereNull('deleted_at').update({ password_hash: passwordHash, sessions_valid_after: sessionCutoff(knex) });
+  await knex('users').where({ id }).whereNull('deleted_at').update({ password_hash: passwordHash, sessions_valid_after: sessionCutoff() });
 }
 
 export async function markVerified(id: number, knex: Knex = db()): Promise<void> {
@@ -109,6 +112,6 @@ export async function markVerified(id: number, knex: Knex = db()): Promise<void>
 }
 
 export async function endAllSessions(id: number, knex: Knex = db()): Promise<void> {
-  await knex('users').where({ id }).update({ sessions_valid_after: sessionCutoff(knex) });
+  await knex('users').where({ id }).update({ sessions_valid_after: sessionCutoff() });
   await knex('sessions').where({ userId: id }).delete();
 }

@@ -58,7 +58,10 @@ export function alreadyJoinedMail(to: string, signInUrl: string, resetUrl: strin
     greeting: 'Hello,',
     before: ['Someone asked to create a Benchlore account with this e-mail address, but you already have one. No second account was made.'],
     action: { label: 'Sign in to Benchlore', url: signInUrl },
-    after: [`If you have forgotten your password, choose a new one here: ${resetUrl}`, 'If this was not you, you need do nothing: your account has not changed.'],
+    after: [
+      `If you have forgotten your password, choose a new one here: ${resetUrl}`,
+      'If this was not you, you need do nothing: your account has not changed.',
+    ],
   });
 }
 

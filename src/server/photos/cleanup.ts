@@ -19,9 +19,18 @@ export async function cleanupAbandonedPhotos(knex: Knex, now: Date = new Date())
     .whereNull('p.deleted_at')
     .where('p.is_illustration', false)
     .where('p.created_at', '<', cutoff)
-    .whereNotExists(knex('revision_photos as rp').join('revisions as r', 'r.id', 'rp.revision_id').whereRaw('rp.photo_id = p.id').whereNot('r.state', 'draft'))
     .whereNotExists(
-      knex('revision_photos as rp').join('revisions as r', 'r.id', 'rp.revision_id').whereRaw('rp.photo_id = p.id').where('r.state', 'draft').where('r.updated_at', '>=', draftCutoff),
+      knex('revision_photos as rp')
+        .join('revisions as r', 'r.id', 'rp.revision_id')
+        .whereRaw('rp.photo_id = p.id')
+        .whereNot('r.state', 'draft'),
+    )
+    .whereNotExists(
+      knex('revision_photos as rp')
+        .join('revisions as r', 'r.id', 'rp.revision_id')
+        .whereRaw('rp.photo_id = p.id')
+        .where('r.state', 'draft')
+        .where('r.updated_at', '>=', draftCutoff),
     )
     .limit(500)
     .select('p.id', 'p.renditions');

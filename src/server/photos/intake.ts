@@ -9,7 +9,11 @@ import { photoRef, type PhotoRef } from './photo-refs';
 import { MAX_ALT_LENGTH, MAX_CAPTION_LENGTH } from './upload-limits';
 
 export const photoTextSchema = z.object({
-  alt: z.string().trim().min(1, 'Describe what the photo shows (alt text), for readers who cannot see it.').max(MAX_ALT_LENGTH, `Alt text is at most ${MAX_ALT_LENGTH} characters.`),
+  alt: z
+    .string()
+    .trim()
+    .min(1, 'Describe what the photo shows (alt text), for readers who cannot see it.')
+    .max(MAX_ALT_LENGTH, `Alt text is at most ${MAX_ALT_LENGTH} characters.`),
   caption: z.string().trim().max(MAX_CAPTION_LENGTH, `The caption is at most ${MAX_CAPTION_LENGTH} characters.`).default(''),
 });
 
@@ -33,7 +37,10 @@ export async function takeInPhoto(knex: Knex, owner: Writer, bytes: Buffer, rawF
   const type = await sniffPhotoType(bytes);
   if (!type.ok) return type;
   const header = await readImageHeader(bytes);
-  if (!header) return refuse('bad_request', 'The image could not be read: the file may be damaged. Save it again as JPEG or PNG.', { file: ['The image could not be read.'] });
+  if (!header)
+    return refuse('bad_request', 'The image could not be read: the file may be damaged. Save it again as JPEG or PNG.', {
+      file: ['The image could not be read.'],
+    });
   if (header.width * header.height > MAX_INPUT_PIXELS) {
     const message = `The image is ${header.width} × ${header.height} pixels (${megapixels(header.width * header.height)}); the largest we take is ${megapixels(MAX_INPUT_PIXELS)}. Scale it down and upload it again.`;
     return refuse('payload_too_large', message, { file: [message] });
@@ -81,11 +88,25 @@ async function duplicate(knex: Knex, owner: Writer, photoId: number): Promise<In
   const usable = await knex('photos as p')
     .where('p.id', photoId)
     .where((q) =>
-      q.where('p.owner_id', owner.id).orWhereExists(
-        knex('revision_photos as rp').join('revisions as r', 'r.id', 'rp.revision_id').whereRaw('rp.photo_id = p.id').whereNot('r.state', 'draft'),
-      ),
+      q
+        .where('p.owner_id', owner.id)
+        .orWhereExists(
+          knex('revision_photos as rp')
+            .join('revisions as r', 'r.id', 'rp.revision_id')
+            .whereRaw('rp.photo_id = p.id')
+            .whereNot('r.state', 'draft'),
+        ),
     )
     .first('p.id');
-  if (usable) return refuse('conflict', 'This photo was uploaded before; the existing copy is used.', undefined, { photoId, photo: await photoRef(knex, photoId) });
-  return refuse('conflict', 'Someone else has already uploaded this exact photo, and it cannot be used twice. Take or choose another.', undefined, { photoId });
+  if (usable)
+    return refuse('conflict', 'This photo was uploaded before; the existing copy is used.', undefined, {
+      photoId,
+      photo: await photoRef(knex, photoId),
+    });
+  return refuse(
+    'conflict',
+    'Someone else has already uploaded this exact photo, and it cannot be used twice. Take or choose another.',
+    undefined,
+    { photoId },
+  );
 }

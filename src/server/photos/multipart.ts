@@ -11,14 +11,19 @@ export interface PhotoUpload {
 }
 
 const megabytes = (n: number) => `${Math.round(n / (1024 * 1024))} MB`;
-const tooLarge = () => refuse('payload_too_large', `The photo is larger than ${megabytes(MAX_PHOTO_BYTES)}. Save it smaller (a long side of about 3000 pixels is plenty) and try again.`);
+const tooLarge = () =>
+  refuse(
+    'payload_too_large',
+    `The photo is larger than ${megabytes(MAX_PHOTO_BYTES)}. Save it smaller (a long side of about 3000 pixels is plenty) and try again.`,
+  );
 
 /** Refuses before reading a byte when the declared length is already too large. */
 export function checkDeclaredLength(request: Request): Outcome<null> {
   const declared = request.headers.get('content-length');
   if (declared !== null && (!/^\d+$/.test(declared) || Number(declared) > MAX_UPLOAD_REQUEST_BYTES)) return tooLarge();
   const type = request.headers.get('content-type') ?? '';
-  if (!type.toLowerCase().startsWith('multipart/form-data')) return refuse('unsupported_media_type', 'Send the photo as multipart/form-data with a "file" field.');
+  if (!type.toLowerCase().startsWith('multipart/form-data'))
+    return refuse('unsupported_media_type', 'Send the photo as multipart/form-data with a "file" field.');
   return succeed(null);
 }
 

@@ -33,7 +33,17 @@ export interface PhotoRow {
   renditions: Rendition[];
 }
 
-export const photoRefColumns = ['p.id', 'p.owner_id', 'p.alt_text', 'p.caption', 'p.processing_state', 'p.processing_error', 'p.width', 'p.height', 'p.renditions'];
+export const photoRefColumns = [
+  'p.id',
+  'p.owner_id',
+  'p.alt_text',
+  'p.caption',
+  'p.processing_state',
+  'p.processing_error',
+  'p.width',
+  'p.height',
+  'p.renditions',
+];
 
 export function toPhotoRef(row: PhotoRow): PhotoRef {
   const jpegs = row.renditions.filter((r) => r.format === 'jpeg').sort((a, b) => a.width - b.width);

@@ -16,7 +16,15 @@ export interface PhotoView {
   srcsetJpeg: string;
 }
 
-export function toPhotoView(row: { id: number; alt_text: string; caption: string; width: number; height: number; is_illustration: boolean; renditions: Rendition[] }): PhotoView {
+export function toPhotoView(row: {
+  id: number;
+  alt_text: string;
+  caption: string;
+  width: number;
+  height: number;
+  is_illustration: boolean;
+  renditions: Rendition[];
+}): PhotoView {
   const jpegs = row.renditions.filter((r) => r.format === 'jpeg').sort((a, b) => a.width - b.width);
   const webps = row.renditions.filter((r) => r.format === 'webp').sort((a, b) => a.width - b.width);
   const srcset = (list: Rendition[]) => list.map((r) => `${mediaUrl(r.key)} ${r.width}w`).join(', ');

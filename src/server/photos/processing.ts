@@ -24,7 +24,10 @@ async function processOne(knex: Knex): Promise<boolean> {
     if (!photo) return false;
     const upload = await trx('photo_uploads').where({ photo_id: photo.id }).first('bytes');
     if (!upload) {
-      await trx('photos').where({ id: photo.id }).update({ processing_state: 'failed', processing_error: 'The uploaded file was lost before it could be processed; upload it again.' });
+      await trx('photos').where({ id: photo.id }).update({
+        processing_state: 'failed',
+        processing_error: 'The uploaded file was lost before it could be processed; upload it again.',
+      });
       return true;
     }
     try {

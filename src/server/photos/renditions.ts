@@ -21,16 +21,28 @@ export function widthsFor(originalWidth: number): number[] {
   return widths.length > 0 ? widths : [originalWidth];
 }
 
-export async function makeRenditions(input: Buffer, keyPrefix: string): Promise<{ width: number; height: number; renditions: RenditionOutput[] }> {
+export async function makeRenditions(
+  input: Buffer,
+  keyPrefix: string,
+): Promise<{ width: number; height: number; renditions: RenditionOutput[] }> {
   const meta = await openImage(input).toBuffer({ resolveWithObject: true });
   const { width, height } = meta.info;
   const renditions: RenditionOutput[] = [];
   for (const w of widthsFor(width)) {
     for (const format of ['webp', 'jpeg'] as const) {
       const pipeline = openImage(input).resize({ width: w, withoutEnlargement: true });
-      const out = await (format === 'webp' ? pipeline.webp({ quality: 80 }) : pipeline.jpeg({ quality: 82, mozjpeg: true })).toBuffer({ resolveWithObject: true });
+      const out = await (format === 'webp' ? pipeline.webp({ quality: 80 }) : pipeline.jpeg({ quality: 82, mozjpeg: true })).toBuffer({
+        resolveWithObject: true,
+      });
       const ext = format === 'webp' ? 'webp' : 'jpg';
-      renditions.push({ width: out.info.width, height: out.info.height, format, key: `${keyPrefix}-${w}.${ext}`, bytes: out.info.size, body: out.data });
+      renditions.push({
+        width: out.info.width,
+        height: out.info.height,
+        format,
+        key: `${keyPrefix}-${w}.${ext}`,
+        bytes: out.info.size,
+        body: out.data,
+      });
     }
   }
   return { width, height, renditions };

@@ -2,9 +2,9 @@
 import type { Knex } from 'knex';
 import { parseQuery } from '@/lib/search/tokens';
 import { buildPlan, planTerms, type CodeClause, type SearchPlan, type TextClause } from '@/lib/search/plan';
-import { activeWordFamilies } from './word-families';
+import { compiledWordFamilies } from './word-families';
 import { lookupVocabulary } from './vocabulary';
-import { pgArray } from './sql-fragment';
+import { lexemeQuery, phraseQuery } from '@/lib/search/tsquery-text';
 
 export interface CompiledTextClause {
   clause: TextClause;
@@ -40,14 +40,25 @@ export const andQuery = (parts: string[]): string =>
     .map((p) => `(${p})`)
     .join(' & ');
 
-/** websearch_to_tsquery for many terms at once; the map holds '' for terms of stop words only. */
-async function compileTerms(knex: Knex, terms: string[]): Promise<Map<string, string>> {
-  if (terms.length === 0) return new Map();
-  const { rows } = await knex.raw<{ rows: { term: string; q: string }[] }>(
-    `SELECT term, websearch_to_tsquery('english', benchlore_unaccent(term))::text AS q FROM unnest(?::text[]) AS term`,
-    [pgArray(terms)],
-  );
-  return new Map(rows.map((r) => [r.term, r.q]));
+/**
+ * tsquery text for every term of the plan, from what the lookups returned: family terms compiled by
+ * websearch_to_tsquery with the families, words from their stems, phrases and literal codes from their
+ * pieces. No term needs another round trip.
+ */
+function compileTerms(plan: SearchPlan, termQueries: Map<string, string>, stems: Map<string, string>): Map<string, string> {
+  const compiled = new Map<string, string>();
+  const wordQuery = (word: string) => {
+    const stem = stems.get(word);
+    // A piece no lookup saw (a literal code's piece) stands for itself.
+    return stem === undefined ? lexemeQuery(word) : stem === '' ? '' : lexemeQuery(stem);
+  };
+  for (const term of planTerms(plan)) {
+    const family = termQueries.get(term);
+    if (family !== undefined) compiled.set(term, family);
+    else if (term.startsWith('"')) compiled.set(term, phraseQuery(term.replace(/"/g, '').split(' ').map((w) => stems.get(w) ?? w)));
+    else compiled.set(term, wordQuery(term));
+  }
+  return compiled;
 }
 
 function compileClause(clause: TextClause, compiled: Map<string, string>): CompiledTextClause {
@@ -61,9 +72,9 @@ function compileClause(clause: TextClause, compiled: Map<string, string>): Compi
 
 export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQuery> {
   const parsed = parseQuery(text);
-  const [vocabulary, families] = await Promise.all([lookupVocabulary(knex, parsed), activeWordFamilies(knex)]);
+  const [{ vocabulary, stems }, { families, termQueries }] = await Promise.all([lookupVocabulary(knex, parsed), compiledWordFamilies(knex)]);
   const plan = buildPlan(parsed, vocabulary, families);
-  const compiled = await compileTerms(knex, planTerms(plan));
+  const compiled = compileTerms(plan, termQueries, stems);
   const textClauses = plan.clauses.filter((c): c is TextClause => c.kind === 'text').map((c) => compileClause(c, compiled));
   const hardText = textClauses.filter((c) => c.any !== '' && !(c.clause.soft || c.typed === ''));
   const softText = textClauses.filter((c) => c.any !== '' && (c.clause.soft || c.typed === ''));

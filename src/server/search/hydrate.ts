@@ -4,7 +4,8 @@ import type { CautionKind } from '@/lib/schemas/revision';
 import { MARK_END, MARK_START, escapeHtml, markedHtml } from '@/lib/search/highlight';
 import type { Proximity } from '@/lib/search/ranking';
 import type { SearchHit, SearchHitThumbnail } from '@/lib/search/result-types';
-import { photosOfRevisions } from '../photos/photo-views';
+import { toPhotoView } from '../photos/photo-views';
+import type { Rendition } from '../photos/renditions';
 
 export interface RankedRow {
   fixId: number;
@@ -25,6 +26,7 @@ interface HitRow {
   title_marked: string | null;
   snippet_marked: string | null;
   machines: string[] | null;
+  photo: { id: number; alt_text: string; caption: string; width: number; height: number; is_illustration: boolean; renditions: Rendition[] } | null;
 }
 
 /** Marked text from the database, or plain text escaped when nothing was marked. */
@@ -44,10 +46,11 @@ export function headlineColumns(knex: Knex, tsquery: string): Knex.Raw[] {
   ];
 }
 
-function thumbnailOf(photos: Awaited<ReturnType<typeof photosOfRevisions>>, revisionId: number): SearchHitThumbnail | null {
-  const first = photos.get(revisionId)?.[0];
-  if (!first || !first.src) return null;
-  return { src: first.src, srcset: first.srcsetJpeg, alt: first.alt, width: first.width, height: first.height };
+function thumbnailOf(photo: HitRow['photo']): SearchHitThumbnail | null {
+  if (!photo) return null;
+  const view = toPhotoView(photo);
+  if (!view.src) return null;
+  return { src: view.src, srcset: view.srcsetJpeg, alt: view.alt, width: view.width, height: view.height };
 }
 
 /** Hits in the order given. `marks` overrides the highlighted title and snippet (the Meilisearch adapter's own). */
@@ -70,9 +73,14 @@ export async function hydrateHits(knex: Knex, ranked: RankedRow[], tsquery: stri
       knex.raw(`ARRAY(SELECT m.slug || '|' || mk.name || ' ' || m.model_number || ' (' || m.region || ')'
         FROM machines m JOIN makers mk ON mk.id = m.maker_id
         WHERE m.id = ANY(s.machine_ids) ORDER BY mk.name, m.model_number, m.region) AS machines`),
+      // The first photo of the live revision, in the same query: a thumbnail costs no extra round trip.
+      knex.raw(`(SELECT json_build_object('id', p.id, 'alt_text', p.alt_text, 'caption', p.caption, 'width', p.width, 'height', p.height,
+                   'is_illustration', p.is_illustration, 'renditions', p.renditions)
+                 FROM revision_photos rp JOIN photos p ON p.id = rp.photo_id
+                 WHERE s.has_photos AND rp.revision_id = s.revision_id AND p.deleted_at IS NULL AND jsonb_array_length(p.renditions) > 0
+                 ORDER BY rp.position LIMIT 1) AS photo`),
     );
   const byId = new Map(rows.map((r) => [r.fix_id, r]));
-  const photos = await photosOfRevisions(rows.filter((r) => r.has_photos).map((r) => r.revision_id));
   return ranked.flatMap((r) => {
     const row = byId.get(r.fixId);
     if (!row) return [];
@@ -91,7 +99,7 @@ export async function hydrateHits(knex: Knex, ranked: RankedRow[], tsquery: stri
         }),
         cautionKinds: row.caution_kinds,
         benchScore: { score: row.bench_score, reports: row.report_count },
-        thumbnail: row.has_photos ? thumbnailOf(photos, row.revision_id) : null,
+        thumbnail: thumbnailOf(row.photo),
         proximity: r.proximity,
         matchedAll: r.matchedAll,
       },

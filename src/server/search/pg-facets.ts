@@ -9,15 +9,10 @@ import { frag, raw, type Fragment } from './sql-fragment';
 export const FACET_CAP = 2000;
 
 interface FacetRow {
-  dim: 'maker' | 'chassis' | 'deviceType' | 'format' | 'caution' | 'photos';
+  dim: 'maker' | 'chassis' | 'deviceType' | 'format' | 'caution' | 'photos' | 'rows';
   value: string;
+  label: string;
   n: string;
-}
-
-async function labelsFor(knex: Knex, table: 'makers' | 'chassis_families', ids: string[]): Promise<Map<string, { slug: string; name: string }>> {
-  if (ids.length === 0) return new Map();
-  const rows: { id: number; slug: string; name: string }[] = await knex(table).whereIn('id', ids.map(Number)).select('id', 'slug', 'name');
-  return new Map(rows.map((r) => [String(r.id), { slug: r.slug, name: r.name }]));
 }
 
 const byCount = (a: FacetValue, b: FacetValue) => b.count - a.count || a.label.localeCompare(b.label);
@@ -28,26 +23,21 @@ export async function facetCounts(knex: Knex, match: Fragment): Promise<{ facets
     `WITH m AS MATERIALIZED (
        SELECT s.maker_ids, s.chassis_ids, s.device_types, s.formats, s.caution_kinds, s.has_photos FROM fix_search s
        WHERE ${match.sql} ORDER BY s.bench_score DESC NULLS LAST, s.fix_id LIMIT ${FACET_CAP + 1})
-     SELECT 'maker' AS dim, v::text AS value, count(*) AS n FROM m, unnest(m.maker_ids) v GROUP BY v
-     UNION ALL SELECT 'chassis', v::text, count(*) FROM m, unnest(m.chassis_ids) v GROUP BY v
-     UNION ALL SELECT 'deviceType', v, count(*) FROM m, unnest(m.device_types) v GROUP BY v
-     UNION ALL SELECT 'format', v, count(*) FROM m, unnest(m.formats) v GROUP BY v
-     UNION ALL SELECT 'caution', v, count(*) FROM m, unnest(m.caution_kinds) v GROUP BY v
-     UNION ALL SELECT 'photos', 'yes', count(*) FROM m WHERE m.has_photos
-     UNION ALL SELECT 'rows', 'all', count(*) FROM m`,
+     SELECT 'maker' AS dim, mk.slug AS value, mk.name AS label, count(*) AS n FROM m, unnest(m.maker_ids) v JOIN makers mk ON mk.id = v GROUP BY mk.slug, mk.name
+     UNION ALL SELECT 'chassis', c.slug, c.name, count(*) FROM m, unnest(m.chassis_ids) v JOIN chassis_families c ON c.id = v GROUP BY c.slug, c.name
+     UNION ALL SELECT 'deviceType', v, v, count(*) FROM m, unnest(m.device_types) v GROUP BY v
+     UNION ALL SELECT 'format', v, v, count(*) FROM m, unnest(m.formats) v GROUP BY v
+     UNION ALL SELECT 'caution', v, v, count(*) FROM m, unnest(m.caution_kinds) v GROUP BY v
+     UNION ALL SELECT 'photos', 'yes', 'yes', count(*) FROM m WHERE m.has_photos
+     UNION ALL SELECT 'rows', 'all', 'all', count(*) FROM m`,
     ...match.bindings,
   );
-  const { rows } = (await raw(knex, sql)) as unknown as { rows: (FacetRow | { dim: 'rows'; value: string; n: string })[] };
-  const of = (dim: string) => rows.filter((r) => r.dim === dim);
-  const [makers, chassis] = await Promise.all([labelsFor(knex, 'makers', of('maker').map((r) => r.value)), labelsFor(knex, 'chassis_families', of('chassis').map((r) => r.value))]);
-  const named = (dim: string, names: Map<string, { slug: string; name: string }>): FacetValue[] =>
-    of(dim).flatMap((r) => {
-      const name = names.get(r.value);
-      return name ? [{ value: name.slug, label: name.name, count: Number(r.n) }] : [];
-    });
+  const { rows } = (await raw(knex, sql)) as unknown as { rows: FacetRow[] };
+  const of = (dim: FacetRow['dim']) => rows.filter((r) => r.dim === dim);
+  const named = (dim: FacetRow['dim']): FacetValue[] => of(dim).map((r) => ({ value: r.value, label: r.label, count: Number(r.n) }));
   const facets: SearchFacets = {
-    maker: named('maker', makers).sort(byCount),
-    chassis: named('chassis', chassis).sort(byCount),
+    maker: named('maker').sort(byCount),
+    chassis: named('chassis').sort(byCount),
     deviceType: of('deviceType')
       .map((r) => ({ value: r.value, label: deviceTypeLabels[r.value as DeviceType] ?? r.value, count: Number(r.n) }))
       .sort(byCount),

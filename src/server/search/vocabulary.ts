@@ -59,52 +59,68 @@ interface WordRow {
   typed: string;
   stem: string;
   known: boolean;
+  word: string | null;
+  word_stem: string | null;
+  ndoc: number | null;
 }
 
-/** Looks up what the database knows about a parsed query's words and code windows, in two queries. */
-export async function lookupVocabulary(knex: Knex, parsed: ParsedQuery): Promise<Vocabulary> {
-  const words = [...new Set(parsed.pieces.filter((p) => !p.hasDigit).map((p) => p.text))];
+/** The vocabulary for planning, and the English stem of every word involved (typed, or offered as a correction). */
+export interface LookedUp {
+  vocabulary: Vocabulary;
+  stems: Map<string, string>;
+}
+
+/** Up to this many stored words are compared with each unknown word (same first letter, near length). */
+const SHAPE_CANDIDATES = 400;
+const TRIGRAM_CANDIDATES = 40;
+
+/**
+ * One query for the words: each word's stem, whether any fix uses it, and for unknown words of four
+ * letters or more the stored words that could be a slip for it (same first letter and near length, or
+ * trigram-close). The edit distance is then measured in code (see correctWord).
+ */
+function wordsQuery(knex: Knex, words: string[]): Promise<{ rows: WordRow[] }> {
+  if (words.length === 0) return Promise.resolve({ rows: [] });
+  return knex.raw<{ rows: WordRow[] }>(
+    `WITH t AS (SELECT typed, ${STEM_OF('typed')} AS stem FROM unnest(?::text[]) AS typed),
+     k AS (SELECT t.typed, t.stem, EXISTS (SELECT 1 FROM search_words w WHERE w.word = t.typed OR (t.stem <> '' AND w.stem = t.stem)) AS known FROM t)
+     SELECT k.typed, k.stem, k.known, c.word, c.stem AS word_stem, c.ndoc
+     FROM k LEFT JOIN LATERAL (
+       (SELECT w.word, w.stem, w.ndoc FROM search_words w
+         WHERE NOT k.known AND k.stem <> '' AND length(k.typed) BETWEEN 4 AND 40
+           AND left(w.word, 1) = left(k.typed, 1) AND length(w.word) BETWEEN length(k.typed) - 2 AND length(k.typed) + 2
+         ORDER BY w.ndoc DESC, w.word LIMIT ${SHAPE_CANDIDATES})
+       UNION
+       (SELECT w.word, w.stem, w.ndoc FROM search_words w
+         WHERE NOT k.known AND k.stem <> '' AND length(k.typed) BETWEEN 4 AND 40 AND w.word % k.typed
+         ORDER BY similarity(w.word, k.typed) DESC, w.word LIMIT ${TRIGRAM_CANDIDATES})
+     ) AS c ON true`,
+    [pgArray(words)],
+  );
+}
+
+/** Looks up what the database knows about a parsed query's words and code windows, in two parallel queries. */
+export async function lookupVocabulary(knex: Knex, parsed: ParsedQuery): Promise<LookedUp> {
+  const phraseWords = parsed.phrases.flatMap((p) => p.split(' '));
+  const words = [...new Set([...parsed.pieces.filter((p) => !p.hasDigit).map((p) => p.text), ...phraseWords, ...parsed.excluded])];
   const windows = codeGroups(parsed.pieces).flatMap(codeWindows);
   const digitKeys = [...new Set(windows.map(digitsOf).filter((d) => d !== ''))];
   const [wordRows, codeRows] = await Promise.all([
-    words.length
-      ? knex.raw<{ rows: WordRow[] }>(
-          `SELECT t.typed, ${STEM_OF('t.typed')} AS stem,
-             EXISTS (SELECT 1 FROM search_words w WHERE w.word = t.typed OR w.stem = ${STEM_OF('t.typed')}) AS known
-           FROM unnest(?::text[]) AS t(typed)`,
-          [pgArray(words)],
-        )
-      : Promise.resolve({ rows: [] as WordRow[] }),
+    wordsQuery(knex, words),
     digitKeys.length ? knex('search_codes').whereIn('digits', digitKeys).limit(500).pluck('code') : Promise.resolve([] as string[]),
   ]);
   const known = new Set<string>();
   const stopwords = new Set<string>();
-  const unknown: string[] = [];
+  const stems = new Map<string, string>();
+  const candidates = new Map<string, { word: string; ndoc: number }[]>();
   for (const row of wordRows.rows) {
+    stems.set(row.typed, row.stem);
     if (row.stem === '') stopwords.add(row.typed);
     else if (row.known) known.add(row.typed);
-    else unknown.push(row.typed);
+    if (row.word !== null && row.word_stem !== null) {
+      stems.set(row.word, row.word_stem);
+      candidates.set(row.typed, [...(candidates.get(row.typed) ?? []), { word: row.word, ndoc: Number(row.ndoc ?? 0) }]);
+    }
   }
-  return { known, stopwords, candidates: await correctionCandidates(knex, unknown), codes: codeRows as string[] };
-}
-
-/** Stored words that could be a slip for each unknown word: same first letter and near length, or trigram-close. */
-async function correctionCandidates(knex: Knex, unknown: string[]): Promise<Map<string, { word: string; ndoc: number }[]>> {
-  const candidates = new Map<string, { word: string; ndoc: number }[]>();
-  const correctable = unknown.filter((w) => w.length >= 4 && w.length <= 40);
-  if (correctable.length === 0) return candidates;
-  const { rows } = await knex.raw<{ rows: { typed: string; word: string; ndoc: number }[] }>(
-    `SELECT t.typed, c.word, c.ndoc
-     FROM unnest(?::text[]) AS t(typed)
-     CROSS JOIN LATERAL (
-       (SELECT w.word, w.ndoc FROM search_words w
-         WHERE left(w.word, 1) = left(t.typed, 1) AND length(w.word) BETWEEN length(t.typed) - 2 AND length(t.typed) + 2
-         ORDER BY w.ndoc DESC, w.word LIMIT 400)
-       UNION
-       (SELECT w.word, w.ndoc FROM search_words w WHERE w.word % t.typed ORDER BY similarity(w.word, t.typed) DESC, w.word LIMIT 40)
-     ) AS c`,
-    [pgArray(correctable)],
-  );
-  for (const row of rows) candidates.set(row.typed, [...(candidates.get(row.typed) ?? []), { word: row.word, ndoc: Number(row.ndoc) }]);
-  return candidates;
+  return { vocabulary: { known, stopwords, candidates, codes: codeRows as string[] }, stems };
 }

@@ -21,13 +21,23 @@ export function s3Storage(settings: S3Settings): StorageDriver {
     region: settings.region,
     // Path-style addressing (endpoint/bucket/key) works with every S3-compatible server, virtual hosts need DNS.
     forcePathStyle: true,
-    ...(settings.accessKeyId && settings.secretAccessKey ? { credentials: { accessKeyId: settings.accessKeyId, secretAccessKey: settings.secretAccessKey } } : {}),
+    ...(settings.accessKeyId && settings.secretAccessKey
+      ? { credentials: { accessKeyId: settings.accessKeyId, secretAccessKey: settings.secretAccessKey } }
+      : {}),
   });
   const bucket = settings.bucket;
   return {
     async put(key, body, contentType) {
       assertKey(key);
-      await client.send(new PutObjectCommand({ Bucket: bucket, Key: key, Body: body, ContentType: contentType, CacheControl: 'public, max-age=31536000, immutable' }));
+      await client.send(
+        new PutObjectCommand({
+          Bucket: bucket,
+          Key: key,
+          Body: body,
+          ContentType: contentType,
+          CacheControl: 'public, max-age=31536000, immutable',
+        }),
+      );
     },
     async get(key) {
       assertKey(key);

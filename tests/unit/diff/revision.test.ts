@@ -51,6 +51,11 @@ describe('diffRevisions', () => {
   it('reports a difficulty change in words', () => {
     const diff = diffRevisions(base, { ...base, difficulty: 'skilled' });
     expect(diff.changedSections).toEqual(['Difficulty and time']);
-    expect(diff.difficulty.filter((s) => s.kind === 'added').map((s) => s.text).join('')).toContain('Skilled');
+    expect(
+      diff.difficulty
+        .filter((s) => s.kind === 'added')
+        .map((s) => s.text)
+        .join(''),
+    ).toContain('Skilled');
   });
 });

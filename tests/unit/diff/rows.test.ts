@@ -7,8 +7,14 @@ const columns = ['ref', 'value', 'quantity'] as const;
 
 describe('diffRows', () => {
   it('matches rows by reference designator even when the order changed', () => {
-    const before: Part[] = [{ ref: 'C512', value: '470uF', quantity: 1 }, { ref: 'C513', value: '100uF', quantity: 2 }];
-    const after: Part[] = [{ ref: 'C513', value: '100uF', quantity: 2 }, { ref: 'C512', value: '680uF', quantity: 1 }];
+    const before: Part[] = [
+      { ref: 'C512', value: '470uF', quantity: 1 },
+      { ref: 'C513', value: '100uF', quantity: 2 },
+    ];
+    const after: Part[] = [
+      { ref: 'C513', value: '100uF', quantity: 2 },
+      { ref: 'C512', value: '680uF', quantity: 1 },
+    ];
     const rows = diffRows(before, after, columns, (p) => p.ref);
     expect(rows.map((r) => r.status)).toEqual(['same', 'changed']);
     const changed = rows[1]!.cells.filter((c) => c.changed);

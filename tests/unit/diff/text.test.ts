@@ -2,7 +2,11 @@
 import { describe, expect, it } from 'vitest';
 import { diffLinesOf, diffWordsOf, hasChanges } from '@/lib/diff';
 
-const join = (spans: { kind: string; text: string }[], keep: string[]) => spans.filter((s) => keep.includes(s.kind)).map((s) => s.text).join('');
+const join = (spans: { kind: string; text: string }[], keep: string[]) =>
+  spans
+    .filter((s) => keep.includes(s.kind))
+    .map((s) => s.text)
+    .join('');
 
 describe('diffWordsOf', () => {
   it('marks the replaced word and rebuilds both texts from the spans', () => {
@@ -23,7 +27,10 @@ describe('diffWordsOf', () => {
 
 describe('diffLinesOf', () => {
   it('pairs a removed and an added line into one changed line with its words marked', () => {
-    const lines = diffLinesOf('Unplug the deck.\nRemove four screws.\nLift the lid.', 'Unplug the deck.\nRemove six screws.\nLift the lid.');
+    const lines = diffLinesOf(
+      'Unplug the deck.\nRemove four screws.\nLift the lid.',
+      'Unplug the deck.\nRemove six screws.\nLift the lid.',
+    );
     expect(lines.map((l) => l.kind)).toEqual(['same', 'changed', 'same']);
     const changed = lines[1]!;
     expect(changed.spans.filter((s) => s.kind === 'removed').map((s) => s.text)).toEqual(['four']);

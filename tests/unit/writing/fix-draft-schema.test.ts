@@ -37,12 +37,18 @@ describe('fixDraftSchema', () => {
   });
 
   it('cleans unknown nodes out of the body instead of storing them', () => {
-    const parsed = fixDraftSchema.parse({ ...emptyDraft(), body: { type: 'doc', content: [{ type: 'script', content: [{ type: 'text', text: 'x' }] }, { type: 'paragraph' }] } });
+    const parsed = fixDraftSchema.parse({
+      ...emptyDraft(),
+      body: { type: 'doc', content: [{ type: 'script', content: [{ type: 'text', text: 'x' }] }, { type: 'paragraph' }] },
+    });
     expect(JSON.stringify(parsed.body)).not.toContain('script');
   });
 
   it('refuses a quantity that is not a whole number', () => {
-    const result = fixDraftSchema.safeParse({ ...emptyDraft(), parts: [{ ref: '', kind: 'belt', value: 'belt', rating: '', quantity: 1.5, notes: '' }] });
+    const result = fixDraftSchema.safeParse({
+      ...emptyDraft(),
+      parts: [{ ref: '', kind: 'belt', value: 'belt', rating: '', quantity: 1.5, notes: '' }],
+    });
     expect(result.error?.issues[0]?.path).toEqual(['parts', 0, 'quantity']);
   });
 });
@@ -59,7 +65,10 @@ describe('fixSubmissionSchema', () => {
   });
 
   it('shows the value decoder’s message and example on a part value it cannot read', () => {
-    const fields = fieldsOf({ ...complete(), parts: [{ ref: 'C1', kind: 'capacitor', value: '47 0uF', rating: '', quantity: 1, notes: '' }] });
+    const fields = fieldsOf({
+      ...complete(),
+      parts: [{ ref: 'C1', kind: 'capacitor', value: '47 0uF', rating: '', quantity: 1, notes: '' }],
+    });
     expect(fields['parts.0.value']).toMatch(/For example:/);
   });
 
@@ -69,14 +78,26 @@ describe('fixSubmissionSchema', () => {
     const inBody = submissionIssues(
       fixDraftSchema.parse({
         ...complete(),
-        body: { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Measure.' }] }, { type: 'reading', attrs: { testPoint: 'TP3', expected: '', measured: '', note: '' } }] },
+        body: {
+          type: 'doc',
+          content: [
+            { type: 'paragraph', content: [{ type: 'text', text: 'Measure.' }] },
+            { type: 'reading', attrs: { testPoint: 'TP3', expected: '', measured: '', note: '' } },
+          ],
+        },
       }),
     );
     expect(inBody.map((i) => i.message).join(' ')).toMatch(/at TP3.*expected value/);
   });
 
   it('refuses the same caution kind twice', () => {
-    const fields = fieldsOf({ ...complete(), cautions: [{ kind: 'mains', detail: '' }, { kind: 'mains', detail: 'again' }] });
+    const fields = fieldsOf({
+      ...complete(),
+      cautions: [
+        { kind: 'mains', detail: '' },
+        { kind: 'mains', detail: 'again' },
+      ],
+    });
     expect(fields.cautions).toMatch(/once/);
   });
 });

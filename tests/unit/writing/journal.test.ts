@@ -28,7 +28,13 @@ describe('journal', () => {
   });
 
   it('reports a refused write (quota) rather than pretending', () => {
-    const full: JournalStore = { getItem: () => null, setItem: () => { throw new Error('QuotaExceededError'); }, removeItem: () => undefined };
+    const full: JournalStore = {
+      getItem: () => null,
+      setItem: () => {
+        throw new Error('QuotaExceededError');
+      },
+      removeItem: () => undefined,
+    };
     expect(writeJournal(full, 'new', entry('2026-01-05T10:00:00Z', 'x'))).toBe(false);
   });
 

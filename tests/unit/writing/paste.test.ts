@@ -11,7 +11,11 @@ import { sanitiseBody, type BodyNode } from '@/lib/tiptap/allowlist';
 const fixture = readFileSync(join(process.cwd(), 'tests/fixtures/clipboard/word-processor.html'), 'utf8');
 // Browsers keep the legacy CSSStyleSheet.rules alias that ProseMirror's paste reads; happy-dom 21 only has cssRules.
 if (!('rules' in CSSStyleSheet.prototype)) {
-  Object.defineProperty(CSSStyleSheet.prototype, 'rules', { get(this: CSSStyleSheet) { return this.cssRules; } });
+  Object.defineProperty(CSSStyleSheet.prototype, 'rules', {
+    get(this: CSSStyleSheet) {
+      return this.cssRules;
+    },
+  });
 }
 let editor: Editor | null = null;
 afterEach(() => editor?.destroy());

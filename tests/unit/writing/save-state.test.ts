@@ -1,6 +1,14 @@
 // The save indicator: "saved" only for the newest edit the server confirmed; failures say so and keep saying so.
 import { describe, expect, it } from 'vitest';
-import { hasUnsaved, initialSaveState, retryDelay, saveLabel, saveReducer, type SaveEvent, type SaveState } from '@/islands/editor/save-state';
+import {
+  hasUnsaved,
+  initialSaveState,
+  retryDelay,
+  saveLabel,
+  saveReducer,
+  type SaveEvent,
+  type SaveState,
+} from '@/islands/editor/save-state';
 
 const run = (...events: SaveEvent[]): SaveState => events.reduce(saveReducer, initialSaveState);
 const label = (state: SaveState) => saveLabel(state, (iso) => iso.slice(11, 16));
@@ -15,13 +23,22 @@ describe('saveReducer and saveLabel', () => {
   });
 
   it('does not claim saved when the writer typed during the save', () => {
-    const state = run({ type: 'edited' }, { type: 'started', version: 1 }, { type: 'edited' }, { type: 'succeeded', version: 1, at: '2026-01-05T10:42:00Z' });
+    const state = run(
+      { type: 'edited' },
+      { type: 'started', version: 1 },
+      { type: 'edited' },
+      { type: 'succeeded', version: 1, at: '2026-01-05T10:42:00Z' },
+    );
     expect(label(state).kind).toBe('unsaved');
     expect(hasUnsaved(state)).toBe(true);
   });
 
   it('shows the server’s message when a save fails, and that it retries', () => {
-    const state = run({ type: 'edited' }, { type: 'started', version: 1 }, { type: 'failed', version: 1, message: 'the server could not be reached (offline?)', retrying: true });
+    const state = run(
+      { type: 'edited' },
+      { type: 'started', version: 1 },
+      { type: 'failed', version: 1, message: 'the server could not be reached (offline?)', retrying: true },
+    );
     expect(label(state)).toEqual({ kind: 'failed', text: 'Not saved — the server could not be reached (offline?) Retrying…' });
     expect(hasUnsaved(state)).toBe(true);
   });

@@ -51,14 +51,16 @@ function chartData({ points, seriesLabel, marker, level }: LineChartProps): Char
   return { datasets };
 }
 
-function chartOptions({ xTitle, yTitle, logY }: LineChartProps): ChartOptions<'line'> {
+function chartOptions({ xTitle, yTitle, logY, points }: LineChartProps): ChartOptions<'line'> {
+  const xs = points.map((p) => p.x);
+  const xBounds = xs.length > 1 ? { min: Math.min(...xs), max: Math.max(...xs) } : {};
   return {
     animation: false,
     responsive: true,
     maintainAspectRatio: false,
     parsing: false,
     scales: {
-      x: { type: 'linear', title: { display: true, text: xTitle } },
+      x: { type: 'linear', title: { display: true, text: xTitle }, ...xBounds },
       y: { type: logY ? 'logarithmic' : 'linear', title: { display: true, text: yTitle }, ...(logY ? {} : { min: 0 }) },
     },
     plugins: { legend: { position: 'bottom' }, tooltip: { intersect: false, mode: 'nearest' } },

@@ -1,9 +1,9 @@
 // The frame every tool shares: a GET form to its own page (so it works without JavaScript) beside the result.
-import type { FormEvent, ReactElement, ReactNode } from 'react';
+import type { SubmitEvent, ReactElement, ReactNode } from 'react';
 
 export interface ToolShellProps {
   path: string;
-  onSubmit: (event: FormEvent<HTMLFormElement>) => void;
+  onSubmit: (event: SubmitEvent<HTMLFormElement>) => void;
   /** The form's fields. */
   children: ReactNode;
   result: ReactNode;
@@ -14,7 +14,7 @@ export interface ToolShellProps {
 
 export function ToolShell({ path, onSubmit, children, result, submitLabel = 'Work it out', exampleHref }: ToolShellProps): ReactElement {
   return (
-    <div className="tool grid gap-6 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]">
+    <div className="tool grid gap-6 print:block lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]">
       <form method="get" action={path} onSubmit={onSubmit} className="tool-form panel space-y-4 self-start" noValidate>
         {children}
         <div className="flex flex-wrap items-center gap-3">

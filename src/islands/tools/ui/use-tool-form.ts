@@ -1,5 +1,5 @@
 // State of a tool's form: fields as typed, the outcome recomputed on every keystroke, the address kept in step.
-import { useEffect, useMemo, useRef, useState, type FormEvent } from 'react';
+import { useEffect, useMemo, useRef, useState, type SubmitEvent } from 'react';
 import { queryFromFields, type Outcome } from '../model/form-reader';
 
 export interface ToolForm<F extends string, R> {
@@ -7,7 +7,7 @@ export interface ToolForm<F extends string, R> {
   outcome: Outcome<F, R>;
   setField: (name: F, value: string) => void;
   setFields: (fields: Record<F, string>) => void;
-  onSubmit: (event: FormEvent<HTMLFormElement>) => void;
+  onSubmit: (event: SubmitEvent<HTMLFormElement>) => void;
 }
 
 export function useToolForm<F extends string, R>(

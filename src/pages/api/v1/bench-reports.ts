@@ -40,7 +40,12 @@ export const POST: APIRoute = async ({ locals, request }) => {
   const limit = await consumeLimit('bench_report', String(user.id));
   if (!limit.ok) {
     const minutes = Math.ceil(limit.retryAfterSeconds / 60);
-    const response = refuse('too_many_requests', `You have saved many bench reports in a short time. Try again in about ${minutes} minutes.`, undefined, 'rate_limited');
+    const response = refuse(
+      'too_many_requests',
+      `You have saved many bench reports in a short time. Try again in about ${minutes} minutes.`,
+      undefined,
+      'rate_limited',
+    );
     response.headers.set('Retry-After', String(limit.retryAfterSeconds));
     return response;
   }

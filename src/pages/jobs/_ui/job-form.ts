@@ -1,7 +1,15 @@
 // Reads the job sheet forms and carries out their buttons (save, apply or remove a fix, delete) for the pages.
 import { fieldErrors } from '@/server/http';
 import { applyFixToJob, deleteJobSheet, removeFixFromJob, updateJobSheet } from '@/server/job-sheets';
-import { fixRefFromText, formNumber, formRows, formText, jobSheetCreateSchema, jobSheetPatchSchema, type FormFields } from '@/lib/schemas/bench-work';
+import {
+  fixRefFromText,
+  formNumber,
+  formRows,
+  formText,
+  jobSheetCreateSchema,
+  jobSheetPatchSchema,
+  type FormFields,
+} from '@/lib/schemas/bench-work';
 
 export const partFields = ['ref', 'kind', 'value', 'rating', 'quantity', 'notes', 'source'] as const;
 
@@ -16,7 +24,10 @@ export function jobSheetFromForm(form: FormFields): Record<string, unknown> {
     labourMinutes: formNumber(form, 'labourMinutes') ?? 0,
     status: formText(form, 'status') ?? 'booked_in',
     outcome: formText(form, 'outcome') ?? '',
-    partsUsed: formRows(form, 'parts', partFields).map((row) => ({ ...row, quantity: row.quantity === '' ? Number.NaN : Number(row.quantity) })),
+    partsUsed: formRows(form, 'parts', partFields).map((row) => ({
+      ...row,
+      quantity: row.quantity === '' ? Number.NaN : Number(row.quantity),
+    })),
   };
 }
 
@@ -24,10 +35,18 @@ export type JobFormOutcome =
   | { kind: 'redirect'; location: string }
   | { kind: 'form'; status: number; message: string; fields: Record<string, string[]>; values?: Record<string, unknown> };
 
-const problem = (message: string, fields: Record<string, string[]> = {}, values?: Record<string, unknown>): JobFormOutcome => ({ kind: 'form', status: 400, message, fields, ...(values ? { values } : {}) });
+const problem = (message: string, fields: Record<string, string[]> = {}, values?: Record<string, unknown>): JobFormOutcome => ({
+  kind: 'form',
+  status: 400,
+  message,
+  fields,
+  ...(values ? { values } : {}),
+});
 
 /** The new-sheet form: validated input, or the messages to show beside the fields. */
-export function parseNewJobSheet(form: FormFields): { ok: true; data: ReturnType<typeof jobSheetCreateSchema.parse> } | { ok: false; outcome: JobFormOutcome } {
+export function parseNewJobSheet(
+  form: FormFields,
+): { ok: true; data: ReturnType<typeof jobSheetCreateSchema.parse> } | { ok: false; outcome: JobFormOutcome } {
   const values = jobSheetFromForm(form);
   const parsed = jobSheetCreateSchema.safeParse(values);
   if (parsed.success) return { ok: true, data: parsed.data };
@@ -41,9 +60,13 @@ export async function handleJobSheetPost(ownerId: number, id: number, form: Form
   if (intent === 'save') {
     const values = jobSheetFromForm(form);
     const parsed = jobSheetPatchSchema.safeParse(values);
-    if (!parsed.success) return problem('The job sheet was not saved: please correct the fields marked below.', fieldErrors(parsed.error), values);
+    if (!parsed.success)
+      return problem('The job sheet was not saved: please correct the fields marked below.', fieldErrors(parsed.error), values);
     const saved = await updateJobSheet(ownerId, id, parsed.data);
-    if (!saved.ok) return saved.code === 'not_found' ? { kind: 'form', status: 404, message: saved.message, fields: {} } : problem(saved.message, saved.fields, values);
+    if (!saved.ok)
+      return saved.code === 'not_found'
+        ? { kind: 'form', status: 404, message: saved.message, fields: {} }
+        : problem(saved.message, saved.fields, values);
     return { kind: 'redirect', location: `${here}?job=saved` };
   }
   if (intent === 'apply_fix') {
@@ -58,7 +81,10 @@ export async function handleJobSheetPost(ownerId: number, id: number, form: Form
     return { kind: 'redirect', location: `${here}?job=fix_removed#applied-fixes` };
   }
   if (intent === 'delete') {
-    if (formText(form, 'confirm') !== 'yes') return problem('Tick the box to confirm that the job sheet and its customer data should be deleted.', { confirm: ['Tick to confirm.'] });
+    if (formText(form, 'confirm') !== 'yes')
+      return problem('Tick the box to confirm that the job sheet and its customer data should be deleted.', {
+        confirm: ['Tick to confirm.'],
+      });
     await deleteJobSheet(ownerId, id);
     return { kind: 'redirect', location: '/jobs?job=deleted' };
   }

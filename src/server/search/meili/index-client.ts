@@ -1,5 +1,5 @@
 // Our one way into a Meilisearch server: the client, index set-up, and document changes that wait for their tasks.
-import { Meilisearch, type Index, type Task } from 'meilisearch';
+import { Meilisearch, type Index, type IndexSwap, type Task } from 'meilisearch';
 import type { WordFamily } from '@/lib/search/word-families';
 import { indexSettings, MEILI_INDEX } from './settings';
 import type { MeiliFixDocument } from './documents';
@@ -18,7 +18,7 @@ export class MeiliIndex {
   readonly client: Meilisearch;
   readonly uid: string;
 
-  constructor(connection: MeiliConnection) {
+  constructor(readonly connection: MeiliConnection) {
     this.client = new Meilisearch({ host: connection.url, apiKey: connection.key, timeout: 10_000 });
     this.uid = connection.index ?? MEILI_INDEX;
   }
@@ -47,6 +47,19 @@ export class MeiliIndex {
 
   async clear(): Promise<void> {
     expectSucceeded(await this.index.deleteAllDocuments().waitTask({ timeout: TASK_TIMEOUT_MS }));
+  }
+
+  /** Swaps this index's contents with another's in one step, so readers never see a half-built index. */
+  async swapWith(other: MeiliIndex): Promise<void> {
+    // Sent without the newer "rename" field, which older servers refuse as unknown.
+    const swap = { indexes: [this.uid, other.uid] } as unknown as IndexSwap;
+    expectSucceeded(await this.client.swapIndexes([swap]).waitTask({ timeout: TASK_TIMEOUT_MS }));
+  }
+
+  /** Deletes the index if it exists. */
+  async drop(): Promise<void> {
+    const task = await this.client.deleteIndex(this.uid).waitTask({ timeout: TASK_TIMEOUT_MS });
+    if (task.status === 'failed' && task.error?.code !== 'index_not_found') throw taskError(task);
   }
 }
 

@@ -17,12 +17,17 @@ export const PATCH: APIRoute = async ({ locals, request }) => {
   if (!user) return apiError('unauthorised', 'Sign in to do this.');
   const read = await readJson(request);
   if (!read.ok) {
-    return read.reason === 'too_large' ? apiError('payload_too_large', 'The body is larger than an account change needs.') : apiError('bad_request', 'Send a JSON object.');
+    return read.reason === 'too_large'
+      ? apiError('payload_too_large', 'The body is larger than an account change needs.')
+      : apiError('bad_request', 'Send a JSON object.');
   }
   // Only the fields sent are changed; "shopName": "" or null removes the shop name.
   const parsed = profileSchema.partial().strict().safeParse(read.body);
   if (!parsed.success) return apiError('bad_request', 'Some fields are not valid.', fieldErrors(parsed.error));
-  const changes = { ...(parsed.data.name !== undefined ? { name: parsed.data.name } : {}), ...('shopName' in parsed.data ? { shopName: parsed.data.shopName ?? null } : {}) };
+  const changes = {
+    ...(parsed.data.name !== undefined ? { name: parsed.data.name } : {}),
+    ...('shopName' in parsed.data ? { shopName: parsed.data.shopName ?? null } : {}),
+  };
   await updateProfile(user.id, changes);
   const updated = { ...user, ...changes };
   return json({ user: updated, can: allowedActions(updated) }, { cache: 'private' });

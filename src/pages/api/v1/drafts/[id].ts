@@ -30,7 +30,10 @@ export const PUT: APIRoute = async ({ params, request, locals }) => {
   if (isFailure(input)) return failureResponse(input);
   const body = bodySchema.safeParse(input.data);
   if (!body.success) return apiError('bad_request', 'The request is not valid.', fieldErrors(body.error));
-  const saveInput = body.data.baseRevisionId === undefined ? { values: body.data.values } : { values: body.data.values, baseRevisionId: body.data.baseRevisionId };
+  const saveInput =
+    body.data.baseRevisionId === undefined
+      ? { values: body.data.values }
+      : { values: body.data.values, baseRevisionId: body.data.baseRevisionId };
   return answer(await saveDraft(user, id, saveInput), { form: false }, { back: '/write' });
 };
 

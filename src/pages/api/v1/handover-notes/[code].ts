@@ -24,12 +24,18 @@ export const GET: APIRoute = async (context) => {
     return apiError('not_found', 'No hand-over note has that code. Check it against your invoice.');
   }
   if (lookup.state === 'revoked') {
-    return json({ error: { code: 'gone', message: 'The repair shop has withdrawn this hand-over note.' } }, { status: 410, cache: 'private' });
+    return json(
+      { error: { code: 'gone', message: 'The repair shop has withdrawn this hand-over note.' } },
+      { status: 410, cache: 'private' },
+    );
   }
   return json({ note: lookup.note }, { cache: 'private' });
 };
 
-async function revoke(locals: App.Locals, code: string): Promise<{ status: 'revoked' | 'already_revoked' | 'not_found' } | { denied: Response }> {
+async function revoke(
+  locals: App.Locals,
+  code: string,
+): Promise<{ status: 'revoked' | 'already_revoked' | 'not_found' } | { denied: Response }> {
   const user = locals.user;
   if (!user) return { denied: apiError('unauthorised', 'Sign in to withdraw a note.') };
   if (!can(user, 'write_handover_note')) return { denied: apiError('forbidden', 'Your account may not withdraw notes.') };

@@ -25,7 +25,8 @@ export const POST: APIRoute = async ({ locals, request }) => {
   }
   const body = await readBenchBody(request);
   if (body.kind === 'error') return body.response;
-  if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send the note as JSON; the form on /notes/new posts to its own page.');
+  if (body.kind !== 'json')
+    return apiError('unsupported_media_type', 'Send the note as JSON; the form on /notes/new posts to its own page.');
   const parsed = handoverNoteInputSchema.safeParse(body.data);
   if (!parsed.success) return apiError('bad_request', 'Some fields of the note are not valid.', fieldErrors(parsed.error));
   const created = await createHandoverNote({ id: user.id, shopName: user.shopName }, parsed.data);

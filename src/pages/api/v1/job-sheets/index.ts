@@ -21,10 +21,14 @@ export const POST: APIRoute = async ({ locals, request }) => {
   if (!can(user, 'own_job_sheets')) return apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.');
   const body = await readBenchBody(request);
   if (body.kind === 'error') return body.response;
-  if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send the job sheet as JSON; the form on /jobs/new posts to its own page.');
+  if (body.kind !== 'json')
+    return apiError('unsupported_media_type', 'Send the job sheet as JSON; the form on /jobs/new posts to its own page.');
   const parsed = jobSheetCreateSchema.safeParse(body.data);
   if (!parsed.success) return apiError('bad_request', 'Some fields of the job sheet are not valid.', fieldErrors(parsed.error));
   const created = await createJobSheet(user.id, parsed.data);
   if (!created.ok) return apiError(created.code, created.message, created.fields);
-  return json({ jobSheet: await getJobSheet(user.id, created.value) }, { status: 201, cache: 'private', headers: { Location: `/api/v1/job-sheets/${created.value}` } });
+  return json(
+    { jobSheet: await getJobSheet(user.id, created.value) },
+    { status: 201, cache: 'private', headers: { Location: `/api/v1/job-sheets/${created.value}` } },
+  );
 };

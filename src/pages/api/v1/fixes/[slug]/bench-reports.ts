@@ -15,6 +15,7 @@ export const GET: APIRoute = async ({ params }) => {
     fix: { slug: fix.slug, liveRevision: fix.currentRevisionNumber },
     benchScore: scores.get(fix.id) ?? emptyBenchScore(),
     byRevision,
-    method: 'Lower bound of the 95 % Wilson score interval; partly counts half, fault came back counts as not fixed, reports on older revisions weigh half, the author’s own reports are shown but not counted.',
+    method:
+      'Lower bound of the 95 % Wilson score interval; partly counts half, fault came back counts as not fixed, reports on older revisions weigh half, the author’s own reports are shown but not counted.',
   });
 };

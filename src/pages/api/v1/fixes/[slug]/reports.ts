@@ -17,6 +17,15 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (isFailure(input)) return failureResponse(input);
   const back = `/fixes/${slug.data}#report`;
   const body = reportInputSchema.safeParse(input.data);
-  if (!body.success) return answer(refuse('bad_request', 'The report is not complete.', fieldErrors(body.error)), input, { back, errorParam: 'report_error' });
-  return answer(await createReport(user, slug.data, body.data), input, { status: 201, back, done: `/fixes/${slug.data}?report=sent#report`, errorParam: 'report_error' });
+  if (!body.success)
+    return answer(refuse('bad_request', 'The report is not complete.', fieldErrors(body.error)), input, {
+      back,
+      errorParam: 'report_error',
+    });
+  return answer(await createReport(user, slug.data, body.data), input, {
+    status: 201,
+    back,
+    done: `/fixes/${slug.data}?report=sent#report`,
+    errorParam: 'report_error',
+  });
 };
