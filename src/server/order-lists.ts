@@ -27,7 +27,10 @@ function toSaved(row: OrderListRow | undefined): SavedOrderList {
 
 /** A member's list; a member who never saved one has an empty list (no row until the first save). */
 export async function getOrderList(ownerId: number): Promise<SavedOrderList> {
-  const row: OrderListRow | undefined = await db()('order_lists').where('owner_id', ownerId).orderBy('id').first('id', 'name', 'lines', 'updated_at');
+  const row: OrderListRow | undefined = await db()('order_lists')
+    .where('owner_id', ownerId)
+    .orderBy('id')
+    .first('id', 'name', 'lines', 'updated_at');
   return toSaved(row);
 }
 
@@ -35,13 +38,19 @@ async function writeLines(trx: Knex.Transaction, ownerId: number, existingId: nu
   const payload = { lines: JSON.stringify(lines), updated_at: trx.fn.now() };
   const [row] = existingId
     ? await trx('order_lists').where({ id: existingId, owner_id: ownerId }).update(payload).returning(['id', 'name', 'lines', 'updated_at'])
-    : await trx('order_lists').insert({ owner_id: ownerId, ...payload }).returning(['id', 'name', 'lines', 'updated_at']);
+    : await trx('order_lists')
+        .insert({ owner_id: ownerId, ...payload })
+        .returning(['id', 'name', 'lines', 'updated_at']);
   return toSaved(row as OrderListRow | undefined);
 }
 
 /** Locks the member's list row (if any) so two saves at once do not lose lines. */
 async function lockedList(trx: Knex.Transaction, ownerId: number): Promise<SavedOrderList> {
-  const row: OrderListRow | undefined = await trx('order_lists').where('owner_id', ownerId).orderBy('id').forUpdate().first('id', 'name', 'lines', 'updated_at');
+  const row: OrderListRow | undefined = await trx('order_lists')
+    .where('owner_id', ownerId)
+    .orderBy('id')
+    .forUpdate()
+    .first('id', 'name', 'lines', 'updated_at');
   return toSaved(row);
 }
 

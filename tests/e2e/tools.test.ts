@@ -126,7 +126,7 @@ describe('order list', () => {
     await context.close();
   });
 
-  it('merges the browser copy into a member\'s saved list on the first visit signed in, and saves edits', async () => {
+  it("merges the browser copy into a member's saved list on the first visit signed in, and saves edits", async () => {
     const { slug, partCount } = await fixWithCapacitors();
     const knex = testDb();
     const member = await createUser(knex, { tag: 'order-list' });
@@ -139,7 +139,10 @@ describe('order list', () => {
     await page.goto(`${base}/sign-in`);
     await page.fill('#pw-email', member.email);
     await page.fill('#pw-password', member.password);
-    await Promise.all([page.waitForURL((url) => url.pathname !== '/sign-in'), page.click('form:has(input[value="password"]) button[type="submit"]')]);
+    await Promise.all([
+      page.waitForURL((url) => url.pathname !== '/sign-in'),
+      page.click('form:has(input[value="password"]) button[type="submit"]'),
+    ]);
     await page.goto(`${base}/order-list`);
     await hydrated(page);
     await page.getByText(`Merged ${rows} ${rows === 1 ? 'line' : 'lines'} kept in this browser into your saved list.`).waitFor();
@@ -151,12 +154,20 @@ describe('order list', () => {
     // An edit is saved with the account: it is there after a reload, from the server.
     const [put] = await Promise.all([
       page.waitForResponse((r) => r.url() === `${base}/api/v1/order-list` && r.request().method() === 'PUT'),
-      page.getByLabel(/^Quantity of /).first().fill('7'),
+      page
+        .getByLabel(/^Quantity of /)
+        .first()
+        .fill('7'),
     ]);
     expect(put.status()).toBe(200);
     await page.reload();
     await hydrated(page);
-    await expect(page.getByLabel(/^Quantity of /).first().inputValue()).resolves.toBe('7');
+    await expect(
+      page
+        .getByLabel(/^Quantity of /)
+        .first()
+        .inputValue(),
+    ).resolves.toBe('7');
     await context.close();
   });
 });

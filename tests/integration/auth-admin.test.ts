@@ -121,7 +121,7 @@ describe('suspending', () => {
     expect(api.status).toBe(401);
     expect(clearsSession(api)).toBe(true);
     const page = await fetch(`${base}/`, { headers: { cookie } });
-    expect(await page.text()).toMatch(/>Sign in</);
+    expect(await page.text()).toMatch(/>\s*Sign in\s*</);
     const [entry] = await auditFor(member.id, 'user.suspend');
     expect(entry.actor_id).toBe(moderator.id);
     expect(entry.detail).toEqual({ before: { suspended: false }, after: { suspended: true, reason: 'Posting spam links' } });

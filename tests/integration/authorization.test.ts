@@ -203,9 +203,9 @@ describe('route guard', () => {
 
 describe('navigation by role', () => {
   const link = (href: string, label: string) => new RegExp(`href="${href}"[^>]*>\\s*${label}\\s*<`);
-  const signInLink = />Sign in</;
+  const signInLink = />\s*Sign in\s*</;
   const joinLink = link('/sign-up', 'Join');
-  const signOut = />Sign out</;
+  const signOut = />\s*Sign out\s*</;
   const write = link('/write', 'Write a fix');
   const proofing = link('/proofing', 'Proofing desk');
   const adminLink = link('/admin/users', 'Admin');

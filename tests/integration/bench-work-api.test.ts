@@ -169,6 +169,16 @@ describe('/api/v1/handover-notes', () => {
     expect((await gone.json()).error.code).toBe('gone');
   });
 
+  it('revokes from the plain button on the note page and sends the member back to it', async () => {
+    const { note } = await (await me.post('/api/v1/handover-notes', { fix: fix.slug })).json();
+    const res = await me.form(`/api/v1/handover-notes/${note.code}`, {});
+    expect(res.status).toBe(303);
+    expect(res.headers.get('location')).toBe(`/notes/${note.code}?note=revoked`);
+    const page = await (await me.get(res.headers.get('location')!)).text();
+    expect(page).toContain('The note is withdrawn');
+    expect(page).not.toContain('Withdraw this note</button>');
+  });
+
   it('answers bad note input with field messages', async () => {
     const res = await me.post('/api/v1/handover-notes', { fix: fix.slug, revision: 0, partsReplaced: [''], warranty: 'x'.repeat(301) });
     expect(res.status).toBe(400);

@@ -35,7 +35,14 @@ describe('addRows', () => {
     const first = added([row('C512', '470uF', '16V 105C')]);
     const both = added([row('C1411', '470 µF', '16 V 105 °C', 'Slow to start (r1)', 2)], first);
     expect(both).toHaveLength(1);
-    expect(both[0]).toEqual(expect.objectContaining({ label: '470 µF 16 V 105 °C', quantity: 3, refs: ['C512', 'C1411'], sources: ['Dead after a storm (r2)', 'Slow to start (r1)'] }));
+    expect(both[0]).toEqual(
+      expect.objectContaining({
+        label: '470 µF 16 V 105 °C',
+        quantity: 3,
+        refs: ['C512', 'C1411'],
+        sources: ['Dead after a storm (r2)', 'Slow to start (r1)'],
+      }),
+    );
   });
 
   it('keeps an unreadable row as its own flagged line, and the same unreadable row twice as one', () => {

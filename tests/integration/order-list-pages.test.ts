@@ -30,7 +30,9 @@ beforeAll(async () => {
 /** A live fix of our own whose one proofed revision has the parts above (revisions are never changed in place). */
 async function makeFixWithParts(authorId: number, machineId: number): Promise<{ slug: string }> {
   const proofer = await knex('users').where({ email: 'moderator@example.test' }).first('id');
-  const [created] = await knex('fixes').insert({ slug: `order-list-fix-${unique()}`, created_by: authorId }).returning(['id', 'slug']);
+  const [created] = await knex('fixes')
+    .insert({ slug: `order-list-fix-${unique()}`, created_by: authorId })
+    .returning(['id', 'slug']);
   const body = { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Replace the dried-out capacitors.' }] }] };
   const [revision] = await knex('revisions')
     .insert({
@@ -156,6 +158,8 @@ describe('adding parts as a signed-in member', () => {
     const page = await (await me.get('/order-list?added=5')).text();
     expect(page).toContain('This list is saved with your account.');
     expect(page).toContain('Added 5 parts to your saved list.');
+    // Without JavaScript the saved list can still be downloaded.
+    expect(page).toContain('href="/api/v1/order-list?format=csv"');
   });
 
   it('saves edits with PUT, refuses bad lines with 400, and answers the CSV', async () => {
@@ -168,7 +172,9 @@ describe('adding parts as a signed-in member', () => {
     expect((await putList('', { lines: edited })).status).toBe(401);
     const saved = await putList(cookie, { lines: edited });
     expect(saved.status).toBe(200);
-    expect((await me.get('/api/v1/order-list').then((r) => r.json())).lines[0]).toEqual(expect.objectContaining({ quantity: 3, spares: 1 }));
+    expect((await me.get('/api/v1/order-list').then((r) => r.json())).lines[0]).toEqual(
+      expect.objectContaining({ quantity: 3, spares: 1 }),
+    );
 
     const bad = await putList(cookie, { lines: [{ ...edited[0], quantity: -1 }] });
     expect(bad.status).toBe(400);

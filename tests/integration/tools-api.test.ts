@@ -10,7 +10,11 @@ async function getJson(path: string): Promise<{ status: number; body: any; heade
   return { status: res.status, body: await res.json(), headers: res.headers };
 }
 
-async function postJson(path: string, body: unknown, headers: Record<string, string> = {}): Promise<{ status: number; body: any; headers: Headers }> {
+async function postJson(
+  path: string,
+  body: unknown,
+  headers: Record<string, string> = {},
+): Promise<{ status: number; body: any; headers: Headers }> {
   const res = await fetch(`${api.base}${path}`, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json', ...headers },
@@ -33,7 +37,9 @@ describe('GET /api/v1/tools/decode', () => {
     expect(status).toBe(200);
     // SI prefix µ = 10^-6: 470 µF is 0.00047 F.
     expect(body.canonical).toBe('470 µF 16 V 105 °C low-ESR');
-    expect(body.spec).toEqual(expect.objectContaining({ quantity: 'capacitance', magnitude: 0.00047, voltage: 16, temperatureC: 105, lowEsr: true }));
+    expect(body.spec).toEqual(
+      expect.objectContaining({ quantity: 'capacitance', magnitude: 0.00047, voltage: 16, temperatureC: 105, lowEsr: true }),
+    );
     expect(headers.get('cache-control')).toContain('public');
   });
 
@@ -84,7 +90,11 @@ describe('POST /api/v1/tools/decode', () => {
   });
 
   it('answers 415 for a body that is not JSON', async () => {
-    const res = await fetch(`${api.base}/api/v1/tools/decode`, { method: 'POST', headers: { 'Content-Type': 'text/csv' }, body: 'value\n470uF' });
+    const res = await fetch(`${api.base}/api/v1/tools/decode`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'text/csv' },
+      body: 'value\n470uF',
+    });
     expect(res.status).toBe(415);
     expect((await res.json()).error.code).toBe('unsupported_media_type');
   });
@@ -132,18 +142,26 @@ describe('POST /api/v1/tools/substitute', () => {
     expect(status).toBe(200);
     expect(body.verdict).toBe('pass');
     // Common practice: at least 1.25 × 12 V = 15 V; 25 V passes.
-    expect(body.checks.find((c: any) => c.check === 'headroom')).toEqual(expect.objectContaining({ status: 'pass', reason: expect.stringContaining('15 V') }));
+    expect(body.checks.find((c: any) => c.check === 'headroom')).toEqual(
+      expect.objectContaining({ status: 'pass', reason: expect.stringContaining('15 V') }),
+    );
     expectClean(body);
   });
 
   it('fails a part with a lower voltage and a lower temperature class', async () => {
-    const { body } = await postJson('/api/v1/tools/substitute', { original, candidate: { capacitanceF: 0.00047, ratedVoltageV: 10, temperatureC: 85 } });
+    const { body } = await postJson('/api/v1/tools/substitute', {
+      original,
+      candidate: { capacitanceF: 0.00047, ratedVoltageV: 10, temperatureC: 85 },
+    });
     expect(body.verdict).toBe('fail');
     expect(body.checks.find((c: any) => c.check === 'ratedVoltage').status).toBe('fail');
   });
 
   it('answers 400 naming each bad field, with an example body', async () => {
-    const { status, body } = await postJson('/api/v1/tools/substitute', { original: { ...original, capacitanceF: '47x' }, candidate: { capacitanceF: 0.00047, ratedVoltageV: -25 } });
+    const { status, body } = await postJson('/api/v1/tools/substitute', {
+      original: { ...original, capacitanceF: '47x' },
+      candidate: { capacitanceF: 0.00047, ratedVoltageV: -25 },
+    });
     expect(status).toBe(400);
     expect(Object.keys(body.error.fields)).toEqual(expect.arrayContaining(['original.capacitanceF', 'candidate.ratedVoltageV']));
     expect(body.error.message).toContain('For example:');
@@ -151,7 +169,10 @@ describe('POST /api/v1/tools/substitute', () => {
   });
 
   it('answers 400 for an infinite capacitance (1e999 reads as Infinity in JSON)', async () => {
-    const { status, body } = await postJson('/api/v1/tools/substitute', `{"original":{"capacitanceF":1e999,"ratedVoltageV":16},"candidate":{"capacitanceF":0.00047,"ratedVoltageV":16}}`);
+    const { status, body } = await postJson(
+      '/api/v1/tools/substitute',
+      `{"original":{"capacitanceF":1e999,"ratedVoltageV":16},"candidate":{"capacitanceF":0.00047,"ratedVoltageV":16}}`,
+    );
     expect(status).toBe(400);
     expect(body.error.fields['original.capacitanceF'][0]).toMatch(/number/);
   });
@@ -173,7 +194,11 @@ describe('POST /api/v1/tools/order-list', () => {
   });
 
   it('answers the CSV with its headers when asked for format=csv', async () => {
-    const res = await fetch(`${api.base}/api/v1/tools/order-list?format=csv`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ lines }) });
+    const res = await fetch(`${api.base}/api/v1/tools/order-list?format=csv`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ lines }),
+    });
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('text/csv; charset=utf-8');
     expect(res.headers.get('content-disposition')).toBe('attachment; filename="order-list.csv"');

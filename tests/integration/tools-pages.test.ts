@@ -16,7 +16,10 @@ function visibleText(html: string): string {
     .replace(/\s+/g, ' ');
 }
 
-async function page(path: string, query: Record<string, string> = {}): Promise<{ status: number; html: string; text: string; headers: Headers }> {
+async function page(
+  path: string,
+  query: Record<string, string> = {},
+): Promise<{ status: number; html: string; text: string; headers: Headers }> {
   const search = new URLSearchParams(query).toString();
   const res = await site.get(search === '' ? path : `${path}?${search}`);
   const html = await res.text();
@@ -34,7 +37,8 @@ describe('the tools index', () => {
     for (const slug of ['value-decoder', 'preferred-values', 'substitute-check', 'esr', 'life-estimate', 'bleed-down']) {
       expect(html).toContain(`href="/tools/${slug}"`);
     }
-    for (const source of ['IEC 60062', 'IEC 60063', 'IEC 62368-1', '10-kelvin rule', 'tan δ', 'common practice']) expect(text).toContain(source);
+    for (const source of ['IEC 60062', 'IEC 60063', 'IEC 62368-1', '10-kelvin rule', 'tan δ', 'common practice'])
+      expect(text).toContain(source);
     expect(html).toContain('href="/order-list"');
   });
 });
@@ -58,7 +62,9 @@ describe('tool pages without JavaScript', () => {
 
   it('value decoder: RKM and three-digit codes read as IEC 60062 gives them', async () => {
     // IEC 60062: 4u7 = 4.7 µF; 473 = 47 × 10^3 pF = 47 nF; K = ±10 %.
-    expect((await page('/tools/value-decoder', { value: '4u7', kind: 'capacitor', rating: '50V' })).text).toContain('Canonical form: 4.7 µF 50 V');
+    expect((await page('/tools/value-decoder', { value: '4u7', kind: 'capacitor', rating: '50V' })).text).toContain(
+      'Canonical form: 4.7 µF 50 V',
+    );
     expect((await page('/tools/value-decoder', { value: '473K', kind: 'capacitor' })).text).toContain('47 nF ±10 %');
   });
 
@@ -70,7 +76,12 @@ describe('tool pages without JavaScript', () => {
   });
 
   it('substitute check: a lower temperature class fails with its reason', async () => {
-    const { text } = await page('/tools/substitute-check', { value: '470uF', rating: '16V 105C low-ESR', candidateValue: '470uF', candidateRating: '25V 85C low-ESR' });
+    const { text } = await page('/tools/substitute-check', {
+      value: '470uF',
+      rating: '16V 105C low-ESR',
+      candidateValue: '470uF',
+      candidateRating: '25V 85C low-ESR',
+    });
     expect(text).toContain('The candidate does not fit');
     expect(text).toContain('85 °C class is lower than the original');
   });

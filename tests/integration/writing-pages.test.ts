@@ -76,7 +76,7 @@ describe('comparing revisions', () => {
     expect(anonymous).not.toContain('Restore r');
     expect(anonymous).not.toMatch(/<script/i);
     const signedIn = await (await fetch(`${base}/fixes/${slug}/history`, { headers: { cookie: writer.cookie } })).text();
-    expect(signedIn).toMatch(/href="\/fixes\/[^"]+\/edit\?from=\d+">Restore r\d+ as a new revision/);
+    expect(signedIn).toMatch(/href="\/fixes\/[^"]+\/edit\?from=\d+">\s*Restore r\d+ as a new revision/);
     expect(signedIn).toContain('proofed like any other');
   });
 

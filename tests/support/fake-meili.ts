@@ -4,7 +4,7 @@
   expressions (=, !=, IN [...], AND, OR, NOT, parentheses, arrays of conditions) with Meilisearch's
   quoting and escapes, counts facets, and marks matched words. Its matching is simple on purpose: a
   document matches when it contains the query's words (or their synonyms), dropping words from the
-  end until something matches. Use it to check our requests, settings and result mapping, never
+  end until something matches (unless matchingStrategy is "all"); a quoted phrase counts as its words. Use it to check our requests, settings and result mapping, never
   ranking quality. It can be stopped and started again on the same port to play an outage.
 */
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
@@ -159,7 +159,7 @@ function searchDocs(index: FakeIndex, body: Record<string, unknown>) {
   const candidates = [...index.docs.values()].filter(test);
   let used = queryWords.length;
   let hits = candidates.filter((d) => queryWords.every((w) => matches(d, w)));
-  while (hits.length === 0 && used > 1) {
+  while (hits.length === 0 && used > 1 && body.matchingStrategy !== 'all') {
     used--;
     hits = candidates.filter((d) => queryWords.slice(0, used).every((w) => matches(d, w)));
   }

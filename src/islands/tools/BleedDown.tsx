@@ -57,9 +57,15 @@ function BleedResult({ result }: { result: BleedOutcomeResult }): ReactElement {
         <caption className="text-left font-semibold">The decay in figures</caption>
         <thead>
           <tr>
-            <th scope="col" className="px-2 py-1 text-left">Point</th>
-            <th scope="col" className="px-2 py-1 text-right">Time</th>
-            <th scope="col" className="px-2 py-1 text-right">Voltage</th>
+            <th scope="col" className="px-2 py-1 text-left">
+              Point
+            </th>
+            <th scope="col" className="px-2 py-1 text-right">
+              Time
+            </th>
+            <th scope="col" className="px-2 py-1 text-right">
+              Voltage
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -81,7 +87,13 @@ function BleedResult({ result }: { result: BleedOutcomeResult }): ReactElement {
 export default function BleedDown({ initialFields, submitted }: BleedDownProps): ReactElement {
   const form = useToolForm(PATH, initialFields, submitted, bleedOutcome);
   const errors = form.outcome.state === 'invalid' ? form.outcome.errors : {};
-  const field = (name: BleedField) => ({ name, label: labels[name], value: form.fields[name], onChange: (v: string) => form.setField(name, v), error: errors[name] });
+  const field = (name: BleedField) => ({
+    name,
+    label: labels[name],
+    value: form.fields[name],
+    onChange: (v: string) => form.setField(name, v),
+    error: errors[name],
+  });
   return (
     <ToolShell
       path={PATH}
@@ -96,7 +108,11 @@ export default function BleedDown({ initialFields, submitted }: BleedDownProps):
     >
       <Field {...field('capacitance')} hint="As marked on the can: 150uF, 150 µF or 150 mfd" placeholder="150uF" />
       <Field {...field('resistance')} hint="The bleed resistor across it: 470k, 470 kΩ, 100k" placeholder="470k" />
-      <Field {...field('voltage')} hint="Measured or expected across the capacitor: mains peak is about 325–340 V on 230 V" placeholder="340V" />
+      <Field
+        {...field('voltage')}
+        hint="Measured or expected across the capacitor: mains peak is about 325–340 V on 230 V"
+        placeholder="340V"
+      />
       <Field {...field('safeVoltage')} optional hint="Blank means 60 V, the ES1 limit for DC in IEC 62368-1" placeholder="60V" />
     </ToolShell>
   );

@@ -25,7 +25,11 @@ export interface EsrCheckProps {
 
 function referenceRows(reference: EsrReference): Array<{ label: string; value: string; strong?: boolean }> {
   return [
-    { label: `Largest ESR of a new part at ${reference.frequencyHz} Hz`, value: quantityText(reference.esrOhm, 'resistance'), strong: true },
+    {
+      label: `Largest ESR of a new part at ${reference.frequencyHz} Hz`,
+      value: quantityText(reference.esrOhm, 'resistance'),
+      strong: true,
+    },
     { label: 'From tan δ', value: significant(reference.tanDelta) },
     { label: 'Table', value: `${reference.table}, ${reference.frequencyHz} Hz, ${reference.temperatureC} °C` },
   ];
@@ -60,7 +64,9 @@ function EsrResultView({ result }: { result: EsrResult }): ReactElement {
       <p className="flex flex-wrap items-center gap-2 text-lg font-semibold">
         <StatusMark status={judgement.verdict} /> {judgement.reason}
       </p>
-      <Figures rows={[...referenceRows(judgement.reference), { label: 'Measured ÷ reference', value: `× ${significant(judgement.ratio)}` }]} />
+      <Figures
+        rows={[...referenceRows(judgement.reference), { label: 'Measured ÷ reference', value: `× ${significant(judgement.ratio)}` }]}
+      />
       <Assumptions items={judgement.assumptions} />
     </div>
   );
@@ -69,7 +75,13 @@ function EsrResultView({ result }: { result: EsrResult }): ReactElement {
 export default function EsrCheck({ initialFields, submitted }: EsrCheckProps): ReactElement {
   const form = useToolForm(PATH, initialFields, submitted, esrOutcome);
   const errors = form.outcome.state === 'invalid' ? form.outcome.errors : {};
-  const field = (name: EsrField) => ({ name, label: labels[name], value: form.fields[name], onChange: (v: string) => form.setField(name, v), error: errors[name] });
+  const field = (name: EsrField) => ({
+    name,
+    label: labels[name],
+    value: form.fields[name],
+    onChange: (v: string) => form.setField(name, v),
+    error: errors[name],
+  });
   return (
     <ToolShell
       path={PATH}
@@ -78,7 +90,11 @@ export default function EsrCheck({ initialFields, submitted }: EsrCheckProps): R
       result={
         <>
           <PrintedInputs fields={form.fields} labels={labels} />
-          {form.outcome.state === 'done' ? <EsrResultView result={form.outcome.result} /> : <NotYet outcome={form.outcome} labels={labels} />}
+          {form.outcome.state === 'done' ? (
+            <EsrResultView result={form.outcome.result} />
+          ) : (
+            <NotYet outcome={form.outcome} labels={labels} />
+          )}
         </>
       }
     >

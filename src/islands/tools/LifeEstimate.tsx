@@ -55,9 +55,15 @@ function LifeResult({ result }: { result: LifeOutcomeResult }): ReactElement {
         <caption className="text-left font-semibold">Life against temperature in figures</caption>
         <thead>
           <tr>
-            <th scope="col" className="px-2 py-1 text-right">Temperature</th>
-            <th scope="col" className="px-2 py-1 text-right">Life</th>
-            <th scope="col" className="px-2 py-1 text-right">Years</th>
+            <th scope="col" className="px-2 py-1 text-right">
+              Temperature
+            </th>
+            <th scope="col" className="px-2 py-1 text-right">
+              Life
+            </th>
+            <th scope="col" className="px-2 py-1 text-right">
+              Years
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -79,7 +85,13 @@ function LifeResult({ result }: { result: LifeOutcomeResult }): ReactElement {
 export default function LifeEstimate({ initialFields, submitted }: LifeEstimateProps): ReactElement {
   const form = useToolForm(PATH, initialFields, submitted, lifeOutcome);
   const errors = form.outcome.state === 'invalid' ? form.outcome.errors : {};
-  const field = (name: LifeField) => ({ name, label: labels[name], value: form.fields[name], onChange: (v: string) => form.setField(name, v), error: errors[name] });
+  const field = (name: LifeField) => ({
+    name,
+    label: labels[name],
+    value: form.fields[name],
+    onChange: (v: string) => form.setField(name, v),
+    error: errors[name],
+  });
   return (
     <ToolShell
       path={PATH}
@@ -94,7 +106,11 @@ export default function LifeEstimate({ initialFields, submitted }: LifeEstimateP
     >
       <Field {...field('ratedLife')} hint="From the datasheet or the sleeve, in hours: 1000, 2000, 5000" placeholder="2000" />
       <Field {...field('ratedTemperature')} hint="The part's class in °C: 85 or 105" placeholder="105" />
-      <Field {...field('ambient')} hint="Air beside the part in °C; beside a regulator's heatsink this is well above room" placeholder="55" />
+      <Field
+        {...field('ambient')}
+        hint="Air beside the part in °C; beside a regulator's heatsink this is well above room"
+        placeholder="55"
+      />
       <Field {...field('selfHeating')} optional hint="Kelvin the ripple current adds inside the can; blank for none" placeholder="5" />
     </ToolShell>
   );

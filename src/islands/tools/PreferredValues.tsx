@@ -61,7 +61,11 @@ export default function PreferredValues({ initialFields, submitted }: PreferredV
       result={
         <>
           <PrintedInputs fields={form.fields} labels={labels} />
-          {form.outcome.state === 'done' ? <PreferredResultView result={form.outcome.result} /> : <NotYet outcome={form.outcome} labels={labels} />}
+          {form.outcome.state === 'done' ? (
+            <PreferredResultView result={form.outcome.result} />
+          ) : (
+            <NotYet outcome={form.outcome} labels={labels} />
+          )}
         </>
       }
     >

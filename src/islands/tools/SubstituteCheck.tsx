@@ -55,9 +55,15 @@ function Verdict({ result }: { result: SubstituteResult }): ReactElement {
         <caption className="sr-only">Each check with its reason</caption>
         <thead>
           <tr>
-            <th scope="col" className="px-2 py-1 text-left">Check</th>
-            <th scope="col" className="px-2 py-1 text-left">Result</th>
-            <th scope="col" className="px-2 py-1 text-left">Why</th>
+            <th scope="col" className="px-2 py-1 text-left">
+              Check
+            </th>
+            <th scope="col" className="px-2 py-1 text-left">
+              Result
+            </th>
+            <th scope="col" className="px-2 py-1 text-left">
+              Why
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -81,7 +87,13 @@ function Verdict({ result }: { result: SubstituteResult }): ReactElement {
 export default function SubstituteCheck({ initialFields, submitted }: SubstituteCheckProps): ReactElement {
   const form = useToolForm(PATH, initialFields, submitted, substituteOutcome);
   const errors = form.outcome.state === 'invalid' ? form.outcome.errors : {};
-  const field = (name: SubstituteField) => ({ name, label: labels[name], value: form.fields[name], onChange: (v: string) => form.setField(name, v), error: errors[name] });
+  const field = (name: SubstituteField) => ({
+    name,
+    label: labels[name],
+    value: form.fields[name],
+    onChange: (v: string) => form.setField(name, v),
+    error: errors[name],
+  });
   return (
     <ToolShell
       path={PATH}

@@ -35,7 +35,8 @@ function specRows(spec: Extract<PartSpec, { kind: 'electrical' }>): Array<{ labe
   if (spec.powerW !== undefined) rows.push({ label: 'Power', value: quantityText(spec.powerW, 'power', 6) });
   if (spec.rippleCurrentA !== undefined) rows.push({ label: 'Ripple current', value: quantityText(spec.rippleCurrentA, 'current', 6) });
   if (spec.lifeHours !== undefined) rows.push({ label: 'Rated life', value: `${significant(spec.lifeHours, 6)} h` });
-  if (spec.diameterMm !== undefined && spec.heightMm !== undefined) rows.push({ label: 'Can', value: `Ø${spec.diameterMm} × ${spec.heightMm} mm` });
+  if (spec.diameterMm !== undefined && spec.heightMm !== undefined)
+    rows.push({ label: 'Can', value: `Ø${spec.diameterMm} × ${spec.heightMm} mm` });
   if (spec.leadPitchMm !== undefined) rows.push({ label: 'Lead pitch', value: `${spec.leadPitchMm} mm` });
   if (spec.words.length > 0) rows.push({ label: 'Other words', value: spec.words.join(', ') });
   return rows;
@@ -46,7 +47,9 @@ function DecodedSpec({ spec }: { spec: PartSpec }): ReactElement {
     return (
       <div className="space-y-2">
         <p className="value text-lg font-semibold text-teal">{spec.label}</p>
-        <p className="text-sm text-ink-soft">A {spec.partKind.replace(/_/g, ' ')} is matched by its description, written one way so equal parts group on an order list.</p>
+        <p className="text-sm text-ink-soft">
+          A {spec.partKind.replace(/_/g, ' ')} is matched by its description, written one way so equal parts group on an order list.
+        </p>
       </div>
     );
   }

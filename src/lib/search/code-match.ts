@@ -44,6 +44,8 @@ export interface CodeGroup {
   /** Index of the group's first piece in the query's pieces. */
   start: number;
   pieces: string[];
+  /** For each piece, whether a dash, dot or slash bound it to the one before ("E-22"): such a pair is never split. */
+  tight: boolean[];
 }
 
 const MAX_CODE_LETTERS_PIECE = 3;
@@ -61,11 +63,17 @@ export function codeGroups(pieces: Piece[]): CodeGroup[] {
     const fits = piece.hasDigit || piece.text.length <= MAX_CODE_LETTERS_PIECE;
     if (!fits || (current && !piece.joinsPrevious)) flush();
     if (!fits) return;
-    current ??= { start: index, pieces: [] };
+    current ??= { start: index, pieces: [], tight: [] };
     current.pieces.push(piece.text);
+    current.tight.push(current.pieces.length > 1 && piece.tight);
   });
   flush();
   return groups;
+}
+
+/** A window may not cut between two pieces a dash bound together: "E-22" is never read as "22". */
+function keepsTightPairs(group: CodeGroup, from: number, to: number): boolean {
+  return !group.tight[from] && !group.tight[to];
 }
 
 /** Every joined window of a group that holds a digit: the strings looked up among stored codes. */
@@ -73,6 +81,7 @@ export function codeWindows(group: CodeGroup): string[] {
   const windows = new Set<string>();
   for (let from = 0; from < group.pieces.length; from++) {
     for (let to = from + 1; to <= Math.min(group.pieces.length, from + MAX_WINDOW_PIECES); to++) {
+      if (!keepsTightPairs(group, from, to)) continue;
       const joined = group.pieces.slice(from, to).join('');
       if (/\d/.test(joined) && joined.length <= 16) windows.add(joined);
     }
@@ -112,7 +121,7 @@ export function resolveCodeGroup(group: CodeGroup, stored: readonly string[]): C
     let found: CodeSpan | null = null;
     for (let to = Math.min(group.pieces.length, from + MAX_WINDOW_PIECES); to > from && !found; to--) {
       const typed = group.pieces.slice(from, to).join('');
-      if (!/\d/.test(typed)) continue;
+      if (!/\d/.test(typed) || !keepsTightPairs(group, from, to)) continue;
       const { exact, variants } = matchesFor(typed, stored);
       if (exact.length + variants.length > 0) found = { from: group.start + from, to: group.start + to, typed, exact, variants };
     }

@@ -51,19 +51,27 @@ export interface SearchPlan {
   ignored: string[];
 }
 
-/** Best stored word for an unknown one: fewest slips, then the most used, then alphabetical. */
-export function correctWord(word: string, candidates: readonly { word: string; ndoc: number }[]): string | null {
+/**
+ * Best stored word for an unknown one: fewest slips, then a word of some word family (the trade's own
+ * vocabulary: "drawr" is "drawer", not "draw"), then the most used, then alphabetical.
+ */
+export function correctWord(word: string, candidates: readonly { word: string; ndoc: number }[], preferred: ReadonlySet<string> = new Set()): string | null {
   const limit = allowedEdits(word.length);
   if (limit === 0) return null;
+  const key = (c: { word: string; distance: number; ndoc: number }): [number, number, number] => [c.distance, preferred.has(c.word) ? 0 : 1, -c.ndoc];
   let best: { word: string; distance: number; ndoc: number } | null = null;
   for (const candidate of candidates) {
     const distance = editDistance(word, candidate.word, limit);
     if (distance > limit) continue;
-    const better =
-      !best || distance < best.distance || (distance === best.distance && (candidate.ndoc > best.ndoc || (candidate.ndoc === best.ndoc && candidate.word < best.word)));
-    if (better) best = { word: candidate.word, distance, ndoc: candidate.ndoc };
+    const scored = { word: candidate.word, distance, ndoc: candidate.ndoc };
+    if (!best || compareKeys(key(scored), key(best)) < 0 || (compareKeys(key(scored), key(best)) === 0 && scored.word < best.word)) best = scored;
   }
   return best?.word ?? null;
+}
+
+function compareKeys(a: readonly number[], b: readonly number[]): number {
+  for (let i = 0; i < a.length; i++) if ((a[i] ?? 0) !== (b[i] ?? 0)) return (a[i] ?? 0) - (b[i] ?? 0);
+  return 0;
 }
 
 interface Word {
@@ -123,7 +131,9 @@ function wordsOf(parsed: ParsedQuery, vocabulary: Vocabulary, families: readonly
     const text = piece.text;
     if (vocabulary.stopwords.has(text)) return words.push({ text, stop: true });
     if (vocabulary.known.has(text) || familyWords.has(text)) return words.push({ text, stop: false });
-    const corrected = correctWord(text, vocabulary.candidates.get(text) ?? []);
+    // Family words are candidates too, even where no fix uses them yet: they lead to their family.
+    const familyCandidates = [...familyWords].filter((w) => w.length > 2).map((w) => ({ word: w, ndoc: 0 }));
+    const corrected = correctWord(text, [...(vocabulary.candidates.get(text) ?? []), ...familyCandidates], familyWords);
     if (corrected) {
       plan.corrections.push({ from: text, to: corrected });
       return words.push({ text: corrected, stop: false });

@@ -85,6 +85,8 @@ export async function hydrateHits(knex: Knex, ranked: RankedRow[], tsquery: stri
     const row = byId.get(r.fixId);
     if (!row) return [];
     const own = marks?.get(r.fixId);
+    // Fragments may start or end on a separator between symptoms; it reads better without.
+    const trimSeparators = (html: string) => html.replace(/^(\s*·\s*)+/, '').replace(/(\s*·\s*)+$/, '');
     const symptoms = row.symptoms.replace(/ \. /g, ' · ');
     return [
       {
@@ -92,7 +94,7 @@ export async function hydrateHits(knex: Knex, ranked: RankedRow[], tsquery: stri
         slug: row.slug,
         title: row.title,
         titleHtml: own ? markedHtml(own.title) : row.title_marked ? markedHtml(row.title_marked) : escapeHtml(row.title),
-        snippetHtml: own ? markedHtml(own.snippet) : row.snippet_marked ? markedHtml(row.snippet_marked) : escapeHtml(symptoms),
+        snippetHtml: trimSeparators(own ? markedHtml(own.snippet) : row.snippet_marked ? markedHtml(row.snippet_marked) : escapeHtml(symptoms)),
         machines: (row.machines ?? []).map((m) => {
           const [slug = '', label = ''] = m.split('|');
           return { slug, label };

@@ -2,6 +2,7 @@
 import type { Knex } from 'knex';
 import { seededRandom, pick } from './prng';
 import { demoUsers } from './demo/users';
+import { demoFixes } from './demo/fixes';
 import type { SeededIds } from './seed-catalogue';
 
 const notes: Record<string, string[]> = {
@@ -14,10 +15,13 @@ const notes: Record<string, string[]> = {
 export async function seedBenchReports(knex: Knex, ids: SeededIds): Promise<number> {
   const random = seededRandom(20261201);
   const reporters = demoUsers.filter((u) => u.role !== 'admin').map((u) => ({ key: u.key, id: ids.users.get(u.key) }));
-  const fixes = await knex('fixes as f')
+  // Only the demo fixes, in the demo world's own order, so a re-run draws the same reports whatever else exists.
+  const order = new Map(demoFixes.map((f, i) => [f.slug, i]));
+  const rows = await knex('fixes as f')
     .whereNull('f.deleted_at')
-    .orderBy('f.id')
-    .select('f.id', 'f.created_by', 'f.current_revision_id', knex.raw('ARRAY(SELECT id FROM revisions r WHERE r.fix_id = f.id AND r.state = ? ORDER BY number) AS revision_ids', ['proofed']));
+    .whereIn('f.slug', [...order.keys()])
+    .select('f.id', 'f.slug', 'f.created_by', 'f.current_revision_id', knex.raw('ARRAY(SELECT id FROM revisions r WHERE r.fix_id = f.id AND r.state = ? ORDER BY number) AS revision_ids', ['proofed']));
+  const fixes = rows.sort((a, b) => (order.get(a.slug) ?? 0) - (order.get(b.slug) ?? 0));
   let inserted = 0;
   for (const fix of fixes) {
     const machineIds: number[] = (

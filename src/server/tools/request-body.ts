@@ -56,7 +56,12 @@ export async function readJsonBody(request: Request): Promise<BodyRead<unknown>>
     return { ok: true, value: JSON.parse(text.value) as unknown };
   } catch (error) {
     const detail = error instanceof SyntaxError ? ` (${error.message})` : '';
-    return { ok: false, response: apiError('bad_request', `The body is not valid JSON${detail}.`, { _: ['Send one JSON object, e.g. {"value": "470uF", "rating": "16V"}.'] }) };
+    return {
+      ok: false,
+      response: apiError('bad_request', `The body is not valid JSON${detail}.`, {
+        _: ['Send one JSON object, e.g. {"value": "470uF", "rating": "16V"}.'],
+      }),
+    };
   }
 }
 

@@ -37,11 +37,11 @@ describe('codeMatchQuality', () => {
 describe('codeGroups and codeWindows', () => {
   it('groups short pieces around digits, so "KX 44 N" and "DR-4120 K" spell codes', () => {
     const groups = codeGroups(piecesOf('tray kx 44 n wont close'));
-    expect(groups).toEqual([{ start: 1, pieces: ['kx', '44', 'n'] }]);
+    expect(groups).toEqual([{ start: 1, pieces: ['kx', '44', 'n'], tight: [false, false, false] }]);
     expect(codeWindows(groups[0]!)).toEqual(expect.arrayContaining(['kx44n', 'kx44', '44n', '44']));
   });
   it('does not pull long words into a code', () => {
-    expect(codeGroups(piecesOf('rewind 4120'))).toEqual([{ start: 1, pieces: ['4120'] }]);
+    expect(codeGroups(piecesOf('rewind 4120'))).toEqual([{ start: 1, pieces: ['4120'], tight: [false] }]);
   });
 });
 
@@ -58,6 +58,11 @@ describe('resolveCodeGroup', () => {
   it('leaves an unknown code unresolved rather than guessing its neighbour', () => {
     const [group] = codeGroups(piecesOf('kx-46n'));
     expect(resolveCodeGroup(group!, stored)).toEqual([]);
+  });
+  it('never reads the digits of a dashed code on their own: "E-22" is not "22"', () => {
+    const [group] = codeGroups(piecesOf('e-22'));
+    expect(resolveCodeGroup(group!, ['kc22d', 'e21'])).toEqual([]);
+    expect(codeWindows(group!)).toEqual(['e22']);
   });
   it('leaves trailing words of the group alone', () => {
     const [group] = codeGroups(piecesOf('e-21 on'));

@@ -26,6 +26,9 @@ describe('correctWord', () => {
     expect(correctWord('tary', [{ word: 'tape', ndoc: 30 }, { word: 'tray', ndoc: 9 }])).toBe('tray');
     expect(correctWord('bolt', [{ word: 'belt', ndoc: 3 }, { word: 'boot', ndoc: 5 }])).toBe('boot');
   });
+  it('prefers a word of a word family when slips are equal', () => {
+    expect(correctWord('drawr', [{ word: 'draw', ndoc: 9 }, { word: 'drawer', ndoc: 1 }], new Set(['drawer']))).toBe('drawer');
+  });
   it('does not correct short words or far-off ones', () => {
     expect(correctWord('ff', [{ word: 'fan', ndoc: 3 }])).toBeNull();
     expect(correctWord('zzzz', [{ word: 'tray', ndoc: 3 }])).toBeNull();

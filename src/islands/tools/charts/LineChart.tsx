@@ -29,7 +29,14 @@ const BRICK = '#9a2f1f';
 
 function chartData({ points, seriesLabel, marker, level }: LineChartProps): ChartData<'line'> {
   const datasets: ChartData<'line'>['datasets'] = [
-    { label: seriesLabel, data: points.map((p) => ({ x: p.x, y: p.y })), borderColor: TEAL, backgroundColor: TEAL, pointRadius: 0, borderWidth: 2 },
+    {
+      label: seriesLabel,
+      data: points.map((p) => ({ x: p.x, y: p.y })),
+      borderColor: TEAL,
+      backgroundColor: TEAL,
+      pointRadius: 0,
+      borderWidth: 2,
+    },
   ];
   if (level && points.length > 0) {
     const xs = points.map((p) => p.x);
@@ -46,7 +53,14 @@ function chartData({ points, seriesLabel, marker, level }: LineChartProps): Char
     });
   }
   if (marker) {
-    datasets.push({ label: marker.label, data: [{ x: marker.x, y: marker.y }], borderColor: BRICK, backgroundColor: BRICK, pointRadius: 5, showLine: false });
+    datasets.push({
+      label: marker.label,
+      data: [{ x: marker.x, y: marker.y }],
+      borderColor: BRICK,
+      backgroundColor: BRICK,
+      pointRadius: 5,
+      showLine: false,
+    });
   }
   return { datasets };
 }

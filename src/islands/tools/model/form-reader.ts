@@ -79,7 +79,10 @@ export class FormReader<F extends string> {
 }
 
 /** The fields a tool knows, read from a query string; unknown parameters are ignored, long ones cut. */
-export function fieldsFromQuery<F extends string>(names: readonly F[], query: URLSearchParams): { fields: Record<F, string>; submitted: boolean } {
+export function fieldsFromQuery<F extends string>(
+  names: readonly F[],
+  query: URLSearchParams,
+): { fields: Record<F, string>; submitted: boolean } {
   const fields = {} as Record<F, string>;
   let submitted = false;
   for (const name of names) {

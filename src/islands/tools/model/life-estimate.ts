@@ -31,8 +31,14 @@ export function lifeOutcome(fields: Readonly<Record<LifeField, string>>, submitt
   const ratedTemperatureC = form.required('ratedTemperature', readCelsius('Rated temperature', '105 °C or 85 °C'));
   const ambientTemperatureC = form.required('ambient', readCelsius('Temperature beside the part', '55 °C'));
   const selfHeatingK = form.optional('selfHeating', readKelvin);
-  if (!form.complete || ratedLifeH === undefined || ratedTemperatureC === undefined || ambientTemperatureC === undefined) return form.stopped();
-  const estimate = estimateLife({ ratedLifeH, ratedTemperatureC, ambientTemperatureC, ...(selfHeatingK !== undefined ? { selfHeatingK } : {}) });
+  if (!form.complete || ratedLifeH === undefined || ratedTemperatureC === undefined || ambientTemperatureC === undefined)
+    return form.stopped();
+  const estimate = estimateLife({
+    ratedLifeH,
+    ratedTemperatureC,
+    ambientTemperatureC,
+    ...(selfHeatingK !== undefined ? { selfHeatingK } : {}),
+  });
   if (!estimate.ok) return form.finish(estimate);
   const curve = lifeCurve({ ratedLifeH, ratedTemperatureC, fromC: curveStart(estimate.value.coreTemperatureC, ratedTemperatureC) });
   return form.finish(ok({ ...estimate.value, ratedLifeH, ratedTemperatureC, curve: curve.ok ? curve.value : [] }));

@@ -29,7 +29,10 @@ function stripUnit(text: string, units: readonly string[]): string {
 /** A plain decimal number, optionally followed by one of the field's units. */
 export function readNumber(text: string, spec: NumberSpec): Result<number> {
   if (text.length > MAX_FIELD_LENGTH) return fail(`${spec.what} is too long to be a number.`, spec.example);
-  const compact = text.normalize('NFKC').replace(/\u2212/g, '-').trim();
+  const compact = text
+    .normalize('NFKC')
+    .replace(/\u2212/g, '-')
+    .trim();
   if (compact === '') return fail(`${spec.what} is empty.`, spec.example);
   const bare = stripUnit(compact, spec.units ?? []);
   if (bare.includes(',')) return fail(`${spec.what}: write the decimal point as a dot and no thousands separator.`, spec.example);
@@ -46,7 +49,15 @@ export function readNumber(text: string, spec: NumberSpec): Result<number> {
 /** A temperature in °C as people write it: 85, 85C, 85 °C, -20. */
 export function readCelsius(what: string, example: string): (text: string) => Result<number> {
   return (text) =>
-    readNumber(text, { what, units: ['°C', 'º C', 'ºC', '° C', 'deg C', 'degC', 'C'], example, min: -55, max: 200, allowZero: true, allowNegative: true });
+    readNumber(text, {
+      what,
+      units: ['°C', 'º C', 'ºC', '° C', 'deg C', 'degC', 'C'],
+      example,
+      min: -55,
+      max: 200,
+      allowZero: true,
+      allowNegative: true,
+    });
 }
 
 const frequencyPrefixes: Record<string, number> = { '': 1, k: 1e3, K: 1e3, M: 1e6 };

@@ -169,6 +169,7 @@ export function decodeAddRows(payload: string): Result<OrderLineInput[]> {
     return fail('The list of parts in the address is not readable.', example);
   }
   const parsed = addRowsSchema.safeParse(json);
-  if (!parsed.success) return fail(`The parts in the address are not valid: ${parsed.error.issues[0]?.message ?? 'unknown problem'}`, example);
+  if (!parsed.success)
+    return fail(`The parts in the address are not valid: ${parsed.error.issues[0]?.message ?? 'unknown problem'}`, example);
   return ok(parsed.data);
 }

@@ -31,7 +31,10 @@ function readQuantityName(text: string): Result<Quantity> {
   return found ? ok(found.quantity) : fail(`"${text}" is not a quantity this tool rounds.`, 'resistance, capacitance or inductance');
 }
 
-export function preferredOutcome(fields: Readonly<Record<PreferredField, string>>, submitted: boolean): Outcome<PreferredField, PreferredResult> {
+export function preferredOutcome(
+  fields: Readonly<Record<PreferredField, string>>,
+  submitted: boolean,
+): Outcome<PreferredField, PreferredResult> {
   const form = new FormReader(fields, submitted);
   const series = form.optional('series', readSeries) ?? DEFAULT_SERIES;
   const quantity = form.optional('quantity', readQuantityName) ?? 'resistance';

@@ -43,7 +43,11 @@ export function capacitorSpecOf(spec: ElectricalSpec): Omit<CapacitorSpec, 'rate
   return out;
 }
 
-function readCapacitor(form: FormReader<SubstituteField>, valueField: SubstituteField, ratingField: SubstituteField): CapacitorSpec | undefined {
+function readCapacitor(
+  form: FormReader<SubstituteField>,
+  valueField: SubstituteField,
+  ratingField: SubstituteField,
+): CapacitorSpec | undefined {
   const value = form.required(valueField, (text) => ({ ok: true, value: text }));
   if (value === undefined) return undefined;
   const rating = form.text(ratingField);
@@ -65,7 +69,10 @@ function readCapacitor(form: FormReader<SubstituteField>, valueField: Substitute
 
 const readMillimetres = (what: string) => (text: string) => readNumber(text, { what, units: ['mm'], example: '10 mm', max: 200 });
 
-export function substituteOutcome(fields: Readonly<Record<SubstituteField, string>>, submitted: boolean): Outcome<SubstituteField, SubstituteResult> {
+export function substituteOutcome(
+  fields: Readonly<Record<SubstituteField, string>>,
+  submitted: boolean,
+): Outcome<SubstituteField, SubstituteResult> {
   const form = new FormReader(fields, submitted);
   const original = readCapacitor(form, 'value', 'rating');
   const candidate = readCapacitor(form, 'candidateValue', 'candidateRating');

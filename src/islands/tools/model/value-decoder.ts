@@ -49,7 +49,8 @@ export function decoderOutcome(fields: Readonly<Record<DecoderField, string>>, s
   const form = new FormReader(fields, submitted);
   const kindText = form.text('kind');
   const kind = partKindSchema.safeParse(kindText);
-  if (kindText !== '' && !kind.success) form.flag('kind', { message: `"${kindText}" is not a part kind.`, example: 'capacitor or resistor' });
+  if (kindText !== '' && !kind.success)
+    form.flag('kind', { message: `"${kindText}" is not a part kind.`, example: 'capacitor or resistor' });
   const valueText = form.required('value', (text) => ({ ok: true, value: text }));
   if (!form.complete || valueText === undefined) return form.stopped();
   const decoded = decodePart(valueText, form.text('rating'), kind.success ? kind.data : undefined);

@@ -62,7 +62,10 @@ export function useOrderList(mode: ListMode, initialLines: StoredLine[], incomin
       setLines(merged);
       persist(merged, true);
       clearBrowserLines();
-      if (browserCopy.length > 0) setMessage(`Merged ${browserCopy.length} ${browserCopy.length === 1 ? 'line' : 'lines'} kept in this browser into your saved list.`);
+      if (browserCopy.length > 0)
+        setMessage(
+          `Merged ${browserCopy.length} ${browserCopy.length === 1 ? 'line' : 'lines'} kept in this browser into your saved list.`,
+        );
     }
     cleanAddress();
     setLoaded(true);

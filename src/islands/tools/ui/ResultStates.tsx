@@ -3,7 +3,13 @@ import type { ReactElement } from 'react';
 import type { Outcome } from '../model/form-reader';
 import { FieldError } from './Field';
 
-export function NotYet<F extends string, R>({ outcome, labels }: { outcome: Outcome<F, R>; labels: Record<F, string> }): ReactElement | null {
+export function NotYet<F extends string, R>({
+  outcome,
+  labels,
+}: {
+  outcome: Outcome<F, R>;
+  labels: Record<F, string>;
+}): ReactElement | null {
   switch (outcome.state) {
     case 'empty':
       return <p className="text-ink-soft">Fill in the fields; the result appears here as you type.</p>;
@@ -28,7 +34,13 @@ export function NotYet<F extends string, R>({ outcome, labels }: { outcome: Outc
 }
 
 /** The inputs as read, printed above the result because the form itself does not print. */
-export function PrintedInputs<F extends string>({ fields, labels }: { fields: Record<F, string>; labels: Record<F, string> }): ReactElement {
+export function PrintedInputs<F extends string>({
+  fields,
+  labels,
+}: {
+  fields: Record<F, string>;
+  labels: Record<F, string>;
+}): ReactElement {
   const given = (Object.keys(labels) as F[]).filter((name) => (fields[name] ?? '').trim() !== '');
   return (
     <dl className="print-only mb-2 text-sm">

@@ -11,7 +11,8 @@ import { readJsonBody } from '@/server/tools/request-body';
 
 const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 
-const EXAMPLE = '{ "lines": [{ "key": "capacitance:470 µF 16 V", "label": "470 µF 16 V", "kind": "capacitor", "quantity": 2, "spares": 1 }] }';
+const EXAMPLE =
+  '{ "lines": [{ "key": "capacitance:470 µF 16 V", "label": "470 µF 16 V", "kind": "capacitor", "quantity": 2, "spares": 1 }] }';
 
 /** 401 when signed out, 403 when the account may not keep one yet (e-mail not confirmed). */
 function refusal(locals: App.Locals): Response {
@@ -38,7 +39,8 @@ export const PUT: APIRoute = async ({ locals, request }) => {
   const parsed = storedListSchema.safeParse(body.value);
   if (!parsed.success) return schemaError(parsed.error, EXAMPLE);
   const keys = new Set(parsed.data.lines.map((l) => l.key));
-  if (keys.size !== parsed.data.lines.length) return apiError('bad_request', 'Two lines have the same key; merge them first.', { lines: ['Each key once.'] });
+  if (keys.size !== parsed.data.lines.length)
+    return apiError('bad_request', 'Two lines have the same key; merge them first.', { lines: ['Each key once.'] });
   const saved = await saveOrderList(owner.id, parsed.data.lines);
   return json({ name: saved.name, lines: saved.lines, updatedAt: saved.updatedAt }, { cache: 'private' });
 };

@@ -60,7 +60,8 @@ export class MeiliSearchProvider implements SearchProvider {
       highlightPostTag: MARK_END,
       attributesToCrop: ['symptoms'],
       cropLength: 24,
-      matchingStrategy: 'last',
+      // A quoted phrase or a code no fix carries must be found, never dropped to widen the search.
+      matchingStrategy: analysed.hardText.some((c) => c.clause.exact) ? 'all' : 'last',
     });
     const ranked = response.hits
       .map((hit) => ({
