@@ -86,6 +86,8 @@ describe('sanitiseMailHtml', () => {
     const dirty =
       '<p style="color:red" onclick="steal()">Hello <strong>there</strong></p><script>alert(1)</script><img src="x" onerror="steal()"><a href="javascript:steal()">bad</a><a href="https://bench.example/a">good</a><iframe src="https://x.example"></iframe>';
     const clean = sanitiseMailHtml(dirty);
-    expect(clean).toBe('<p>Hello <strong>there</strong></p><a>bad</a><a href="https://bench.example/a" rel="noopener noreferrer">good</a>');
+    expect(clean).toBe(
+      '<p>Hello <strong>there</strong></p><a rel="noopener noreferrer">bad</a><a href="https://bench.example/a" rel="noopener noreferrer">good</a>',
+    );
   });
 });

@@ -16,12 +16,12 @@ export interface CandidateRow {
   levels: number[];
 }
 
-/** Broad queries are counted this far and no further ("1000+ fixes"). */
-export const COUNT_CAP = 1000;
 const ORDER = 'ORDER BY s.bench_score DESC NULLS LAST, s.fix_id';
+/** The stage whose size tells how many fixes match in all: every match, best bench score first. */
+const ANYWHERE_STAGE = 1;
 
-function stage(filter: Fragment, match: Fragment, limit: number): Fragment {
-  return frag(`(SELECT s.fix_id FROM fix_search s WHERE (${filter.sql}) AND (${match.sql}) ${ORDER} LIMIT ${limit})`, ...filter.bindings, ...match.bindings);
+function stage(filter: Fragment, match: Fragment, limit: number, number = 0): Fragment {
+  return frag(`(SELECT s.fix_id, ${number} AS stage FROM fix_search s WHERE (${filter.sql}) AND (${match.sql}) ${ORDER} LIMIT ${limit})`, ...filter.bindings, ...match.bindings);
 }
 
 /** Rows near the named machine get stages of their own, so a broad query cannot crowd them out. */
@@ -32,34 +32,42 @@ function nearStages(filter: Fragment, match: Fragment, machine: ResolvedMachine 
   return near.map((n) => stage(filter, frag(`(${match.sql}) AND (${n.sql})`, ...match.bindings, ...n.bindings), limit));
 }
 
-async function featuresOf(knex: Knex, analysed: AnalysedQuery, stages: Fragment[], known: string, extra = frag('')): Promise<{ rows: (CandidateRow & { total?: string })[] }> {
-  const union = joinFragments(stages, '\nUNION\n');
+/** The stages' rows with their features; `counted` is how many rows the anywhere stage gave. */
+async function featuresOf(knex: Knex, analysed: AnalysedQuery, stages: Fragment[], known: string): Promise<{ rows: (CandidateRow & { counted: string })[] }> {
+  const union = joinFragments(stages, '\nUNION ALL\n');
   const levels = levelsExpression(analysed, known);
   const sql = frag(
-    `WITH c AS (${union.sql}) ${extra.sql}
-     SELECT s.fix_id, s.bench_score, s.machine_ids, s.chassis_ids, s.maker_ids, ${levels.sql} AS levels${extra.sql ? ', (SELECT n FROM counted) AS total' : ''}
+    `WITH raw AS (${union.sql}),
+          c AS (SELECT DISTINCT fix_id FROM raw),
+          counted AS (SELECT count(*) AS n FROM raw WHERE stage = ${ANYWHERE_STAGE})
+     SELECT s.fix_id, s.bench_score, s.machine_ids, s.chassis_ids, s.maker_ids, ${levels.sql} AS levels, (SELECT n FROM counted) AS counted
      FROM c JOIN fix_search s ON s.fix_id = c.fix_id`,
     ...union.bindings,
-    ...extra.bindings,
     ...levels.bindings,
   );
-  return raw(knex, sql) as unknown as Promise<{ rows: (CandidateRow & { total?: string })[] }>;
+  return raw(knex, sql) as unknown as Promise<{ rows: (CandidateRow & { counted: string })[] }>;
+}
+
+export interface FullMatches {
+  rows: CandidateRow[];
+  /** How many fixes match every hard clause; a lower bound when `lowerBound`. */
+  total: number;
+  /**
+   * True when there are more matches than the stage limit: a broad query is not counted to the end
+   * (counting 60,000 matches costs more than ranking the best of them), and its facets come from a sample.
+   */
+  lowerBound: boolean;
 }
 
 /** Fixes matching every hard clause: in the title and symptoms, anywhere, and near the named machine. */
-export async function fullMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, machine: ResolvedMachine | null, limit: number): Promise<{ rows: CandidateRow[]; total: number }> {
+export async function fullMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, machine: ResolvedMachine | null, limit: number): Promise<FullMatches> {
   const inSummary = allClauses(analysed, 'doc_a');
   const anywhere = allClauses(analysed, 'document');
-  const stages = [stage(filter, inSummary, limit), stage(filter, anywhere, limit), ...nearStages(filter, inSummary, machine, limit), ...nearStages(filter, anywhere, machine, limit)];
-  const counted = frag(
-    `, counted AS (SELECT count(*) AS n FROM (SELECT 1 FROM fix_search s WHERE (${filter.sql}) AND (${anywhere.sql}) LIMIT ${COUNT_CAP + 1}) AS t)`,
-    ...filter.bindings,
-    ...anywhere.bindings,
-  );
+  const stages = [stage(filter, inSummary, limit), stage(filter, anywhere, limit, ANYWHERE_STAGE), ...nearStages(filter, inSummary, machine, limit), ...nearStages(filter, anywhere, machine, limit)];
   // Every row here matched all hard clauses, so "found in the body" needs no second look at the document.
-  const { rows } = await featuresOf(knex, analysed, stages, 'TRUE', counted);
-  const total = rows.length ? Number(rows[0]?.total ?? 0) : 0;
-  return { rows, total };
+  const { rows } = await featuresOf(knex, analysed, stages, 'TRUE');
+  const counted = rows.length ? Number(rows[0]?.counted ?? 0) : 0;
+  return { rows, total: counted, lowerBound: counted >= limit };
 }
 
 /** Fixes matching all hard clauses but one, then any clause at all: shown after the full matches. */

@@ -5,11 +5,11 @@ import { emptyFacets, type SearchResult } from '@/lib/search/result-types';
 import { CODE_WEIGHT, WORD_WEIGHT, proximityOf, rank, relevanceOf, type Rankable } from '@/lib/search/ranking';
 import { analyseQuery, orQuery, type AnalysedQuery } from './analyse';
 import { proximityTarget, resolveContext, type SearchContext } from './context';
-import { COUNT_CAP, fullMatches, partialMatches, type CandidateRow } from './pg-candidates';
-import { allClauses, filterCondition } from './pg-conditions';
+import { fullMatches, partialMatches, type CandidateRow } from './pg-candidates';
+import { filterCondition } from './pg-conditions';
 import { facetCounts } from './pg-facets';
 import { hydrateHits } from './hydrate';
-import { frag, pgArray, type Fragment } from './sql-fragment';
+import { frag, pgArray } from './sql-fragment';
 import { refreshFixSearchRow } from './fix-search-row';
 import type { SearchProvider } from './provider-types';
 
@@ -73,28 +73,27 @@ export class PostgresSearchProvider implements SearchProvider {
     const hardCount = analysed.hardText.length + analysed.codes.length;
     const full = await fullMatches(this.knex, analysed, filter, context.machine, limit);
     let rows = full.rows;
-    let facetMatch: Fragment = frag(`(${filter.sql}) AND (${allClauses(analysed, 'document').sql})`, ...filter.bindings, ...allClauses(analysed, 'document').bindings);
     let total = full.total;
-    if (full.total < window && hardCount > 0) {
+    if (!full.lowerBound && full.total < window && hardCount > 0) {
       const partial = (await partialMatches(this.knex, analysed, filter, limit)).filter((r) => !rows.some((f) => f.fix_id === r.fix_id));
       rows = [...rows, ...partial];
-      total = Math.min(COUNT_CAP + 1, full.total + partial.length);
-      facetMatch = frag('s.fix_id = ANY(?::int[])', pgArray(rows.map((r) => r.fix_id)));
+      total = full.total + partial.length;
     }
     const ranked = rank(toRanked(rows, analysed, context));
     const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
     const headline = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
+    // Facets are counted over the candidates: every match when the count is exact, the best ones otherwise.
+    const facetMatch = frag('s.fix_id = ANY(?::int[])', pgArray(rows.map((r) => r.fix_id)));
     const [hits, facets] = await Promise.all([hydrateHits(this.knex, pageRows, headline), total > 0 ? facetCounts(this.knex, facetMatch) : Promise.resolve(null)]);
-    const shownTotal = Math.min(total, COUNT_CAP);
     return {
       ...emptyResult(query, context, analysed),
       hits,
-      total: shownTotal,
-      totalIsLowerBound: total > COUNT_CAP,
-      totalMatchingAll: Math.min(full.total, COUNT_CAP),
-      pageCount: Math.max(1, Math.min(MAX_PAGE, Math.ceil(shownTotal / query.perPage))),
+      total,
+      totalIsLowerBound: full.lowerBound,
+      totalMatchingAll: full.total,
+      pageCount: Math.max(1, Math.min(MAX_PAGE, Math.ceil(total / query.perPage))),
       facets: facets?.facets ?? emptyFacets(),
-      facetsFromSample: facets?.capped ?? false,
+      facetsFromSample: full.lowerBound || (facets?.capped ?? false),
     };
   }
 
