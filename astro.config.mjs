@@ -17,7 +17,8 @@ export default defineConfig({
   security: {
     checkOrigin: true,
     allowedDomains: [
-      { protocol: publicOrigin.protocol.replace(':', ''), hostname: publicOrigin.hostname, port: publicOrigin.port || undefined },
+      // No port: the same build serves `npm start`, the test servers and any PORT chosen at run time.
+      { protocol: publicOrigin.protocol.replace(':', ''), hostname: publicOrigin.hostname },
     ],
   },
   server: { host: '127.0.0.1', port: 4321 },

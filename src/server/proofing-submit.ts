@@ -60,6 +60,14 @@ export async function submitDraft(writer: Writer, revisionId: number, input: { v
     const mine = await loadRevision(trx, revisionId);
     if (!mine) return refuse('not_found', 'There is no such draft among yours.');
     const issues = submissionIssues(mine.values);
+    // Readers are shown renditions: a photo still being made (or that failed) cannot go to the desk yet.
+    for (const photo of mine.photos.filter((p) => p.state !== 'ready')) {
+      const message =
+        photo.state === 'pending'
+          ? `The photo “${photo.alt}” is still being processed; submit again in a moment.`
+          : `The photo “${photo.alt}” could not be processed; remove it or upload it again.`;
+      issues.push({ path: ['photoIds'], message });
+    }
     if (issues.length)
       return refuse(
         'bad_request',

@@ -1,4 +1,5 @@
 // Bad input to the writing API gets the one error shape with field messages, and leaves the stored draft as it was.
+import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testDb } from '../support/db';
 import { INTEGRATION_PORT } from '../support/test-env';
@@ -100,6 +101,30 @@ describe('saving a draft with bad input', () => {
     expect(answer.status).toBe(400);
     expect(answer.body.error.fields['readings.0.expected'][0]).toMatch(/expected value/);
     expect(answer.body.error.fields['parts.0.value'][0]).toMatch(/comma[\s\S]*For example/);
+    expect((await knex('revisions').where({ id: draftId }).first('state')).state).toBe('draft');
+  });
+
+  it('refuses a submission while one of its photos is still being processed', async () => {
+    const sha = randomBytes(32).toString('hex');
+    const [{ id: photoId }] = await knex('photos')
+      .insert({
+        owner_id: writer.id,
+        storage_key: `uploads/${sha}`,
+        mime_type: 'image/jpeg',
+        byte_size: 10,
+        width: 10,
+        height: 10,
+        sha256: sha,
+        alt_text: 'Still waiting',
+        processing_state: 'pending',
+      })
+      .returning('id');
+    const answer = await call(base, `/api/v1/drafts/${draftId}/submit`, {
+      body: { values: completeValues(1, { photoIds: [photoId] }) },
+      cookie: writer.cookie,
+    });
+    expect(answer.status).toBe(400);
+    expect(answer.body.error.fields.photoIds[0]).toMatch(/“Still waiting” is still being processed/);
     expect((await knex('revisions').where({ id: draftId }).first('state')).state).toBe('draft');
   });
 });

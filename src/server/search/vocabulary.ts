@@ -21,6 +21,12 @@ export async function refreshVocabulary(knex: Knex): Promise<void> {
       SELECT word, ${STEM_OF('word')}, ndoc
       FROM ts_stat($$SELECT ${SIMPLE_DOCUMENT} FROM fix_search$$)
       WHERE ${WORD_SHAPE}`);
+    await trx.raw('DELETE FROM search_lexemes');
+    await trx.raw(`
+      INSERT INTO search_lexemes (lexeme, ndoc, ndoc_summary)
+      SELECT d.word, d.ndoc, coalesce(a.ndoc, 0)
+      FROM ts_stat('SELECT document FROM fix_search') AS d
+      LEFT JOIN ts_stat('SELECT doc_a FROM fix_search') AS a ON a.word = d.word`);
     await trx.raw('DELETE FROM search_codes');
     await trx.raw(`
       INSERT INTO search_codes (code, digits, ndoc)
@@ -43,6 +49,17 @@ export async function addFixToVocabulary(knex: Knex, fixId: number, isNewFix = f
      FROM fix_search, unnest(tsvector_to_array(${SIMPLE_DOCUMENT})) AS word
      WHERE fix_id = ? AND ${WORD_SHAPE}
      ON CONFLICT (word) ${onConflict}`,
+    [fixId],
+  );
+  const lexemeConflict = isNewFix
+    ? 'DO UPDATE SET ndoc = search_lexemes.ndoc + 1, ndoc_summary = search_lexemes.ndoc_summary + EXCLUDED.ndoc_summary'
+    : 'DO NOTHING';
+  await knex.raw(
+    `INSERT INTO search_lexemes (lexeme, ndoc, ndoc_summary)
+     SELECT lexeme, 1, CASE WHEN lexeme = ANY(tsvector_to_array(doc_a)) THEN 1 ELSE 0 END
+     FROM fix_search, unnest(tsvector_to_array(document)) AS lexeme
+     WHERE fix_id = ?
+     ON CONFLICT (lexeme) ${lexemeConflict}`,
     [fixId],
   );
   await knex.raw(
@@ -123,4 +140,30 @@ export async function lookupVocabulary(knex: Knex, parsed: ParsedQuery): Promise
     }
   }
   return { vocabulary: { known, stopwords, candidates, codes: codeRows as string[] }, stems };
+}
+
+export interface LexemeStats {
+  /** Live fixes in all (the planner's estimate, which ANALYZE and autovacuum keep close). */
+  total: number;
+  anywhere: (lexeme: string) => number;
+  summary: (lexeme: string) => number;
+  code: (code: string) => number;
+}
+
+/** Counts for the lexemes and codes of a query, for choosing how its candidates are read. */
+export async function lexemeStats(knex: Knex, lexemes: string[], codes: string[]): Promise<LexemeStats> {
+  const [lexemeRows, codeRows, table] = await Promise.all([
+    lexemes.length ? knex('search_lexemes').whereIn('lexeme', lexemes).select('lexeme', 'ndoc', 'ndoc_summary') : Promise.resolve([]),
+    codes.length ? knex('search_codes').whereIn('code', codes).select('code', 'ndoc') : Promise.resolve([]),
+    knex.raw<{ rows: { n: string }[] }>(`SELECT greatest(reltuples, 0)::bigint AS n FROM pg_class WHERE oid = 'fix_search'::regclass`),
+  ]);
+  const anywhere = new Map<string, number>(lexemeRows.map((r: { lexeme: string; ndoc: number }) => [r.lexeme, Number(r.ndoc)]));
+  const summary = new Map<string, number>(lexemeRows.map((r: { lexeme: string; ndoc_summary: number }) => [r.lexeme, Number(r.ndoc_summary)]));
+  const byCode = new Map<string, number>(codeRows.map((r: { code: string; ndoc: number }) => [r.code, Number(r.ndoc)]));
+  return {
+    total: Number(table.rows[0]?.n ?? 0),
+    anywhere: (l) => anywhere.get(l) ?? 0,
+    summary: (l) => summary.get(l) ?? 0,
+    code: (c) => byCode.get(c) ?? 0,
+  };
 }

@@ -1,0 +1,52 @@
+// Estimates how many fixes a tsquery matches from per-lexeme counts, to choose how candidates are read.
+/*
+  An OR adds its parts (an upper bound); a phrase or an AND inside one term takes its rarest part (also
+  an upper bound). Separate clauses of a query are AND-ed as if independent: the product of their shares.
+  The estimate only chooses between walking fixes best-score-first and collecting matches first; a poor
+  estimate costs time, never a wrong answer.
+*/
+
+type Count = (lexeme: string) => number;
+
+/** Matches of one tsquery text as we write it: quoted lexemes, ( ), |, &, <->, <N>, and ! for exclusion. */
+export function estimateMatches(tsquery: string, count: Count): number {
+  const tokens = tsquery.match(/'(?:[^']|'')*'|<\d*-?>|[()|&!]/g) ?? [];
+  let at = 0;
+  const primary = (): number => {
+    const token = tokens[at++];
+    if (token === '(') {
+      const inner = or();
+      at++; // the closing ')'
+      return inner;
+    }
+    if (token === '!') {
+      primary();
+      return Number.POSITIVE_INFINITY;
+    }
+    if (token?.startsWith("'")) return count(token.slice(1, -1).replace(/''/g, "'"));
+    return 0;
+  };
+  const and = (): number => {
+    let value = primary();
+    while (tokens[at] === '&' || tokens[at]?.startsWith('<')) {
+      at++;
+      value = Math.min(value, primary());
+    }
+    return value;
+  };
+  const or = (): number => {
+    let value = and();
+    while (tokens[at] === '|') {
+      at++;
+      value += and();
+    }
+    return value;
+  };
+  return tokens.length ? or() : 0;
+}
+
+/** Share of all fixes matching every clause, taking clauses as independent; 1 when there are none. */
+export function estimateShare(clauseMatches: readonly number[], total: number): number {
+  if (total <= 0) return 0;
+  return clauseMatches.reduce((share, matches) => share * Math.min(1, matches / total), 1);
+}
