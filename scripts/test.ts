@@ -9,10 +9,9 @@ const env = testEnv();
 rmSync(env.BENCHLORE_MEDIA_DIR ?? '', { recursive: true, force: true });
 await ensureDatabase(env, { fresh: true });
 migrateAndSeed(env);
-// The integration and browser servers run on ports of their own: build with a PUBLIC_ORIGIN that names no
-// port, so Astro's allowedDomains (read at build time) accepts 127.0.0.1 on any port and form posts pass
-// its origin check. Each test server then gets its full PUBLIC_ORIGIN at run time.
-buildIfStale({ ...env, PUBLIC_ORIGIN: 'http://127.0.0.1' });
+// astro.config.mjs allows the public host on any port, so the same build serves `npm start` and the test
+// servers on their own ports; each test server gets its full PUBLIC_ORIGIN at run time.
+buildIfStale(env);
 
 const report = join(env.BENCHLORE_DATA_DIR ?? '.data', `vitest-report-${env.BENCHLORE_DB_NAME}.json`);
 const args = [

@@ -7,6 +7,7 @@ import { analyseQuery, orQuery, type AnalysedQuery } from './analyse';
 import { proximityTarget, resolveContext, type SearchContext } from './context';
 import { fullMatches, partialMatches, type CandidateRow } from './pg-candidates';
 import { filterCondition } from './pg-conditions';
+import { readPlan } from './read-plan';
 import { facetCounts } from './pg-facets';
 import { hydrateHits } from './hydrate';
 import { frag, pgArray } from './sql-fragment';
@@ -71,11 +72,12 @@ export class PostgresSearchProvider implements SearchProvider {
     const window = query.page * query.perPage;
     const limit = Math.max(100, window + 20);
     const hardCount = analysed.hardText.length + analysed.codes.length;
-    const full = await fullMatches(this.knex, analysed, filter, context.machine, limit);
+    const plan = await readPlan(this.knex, analysed);
+    const full = await fullMatches(this.knex, analysed, filter, context.machine, limit, plan);
     let rows = full.rows;
     let total = full.total;
     if (!full.lowerBound && full.total < window && hardCount > 0) {
-      const partial = (await partialMatches(this.knex, analysed, filter, limit)).filter((r) => !rows.some((f) => f.fix_id === r.fix_id));
+      const partial = (await partialMatches(this.knex, analysed, filter, limit, plan)).filter((r) => !rows.some((f) => f.fix_id === r.fix_id));
       rows = [...rows, ...partial];
       total = full.total + partial.length;
     }
