@@ -1,4 +1,5 @@
 // Bench score per fix from its bench reports: counts by outcome and the Wilson lower bound over them.
+import type { Knex } from 'knex';
 import { db } from './db';
 import { benchScore } from '@/lib/bench/bench-score';
 
@@ -38,19 +39,20 @@ interface CountRow {
   n: string;
 }
 
-export async function benchScoresFor(fixIds: number[]): Promise<Map<number, BenchScoreView>> {
+/** `knex` defaults to the app's connection; the seed passes its own. */
+export async function benchScoresFor(fixIds: number[], knex: Knex = db()): Promise<Map<number, BenchScoreView>> {
   const scores = new Map<number, BenchScoreView>();
   if (fixIds.length === 0) return scores;
-  const rows: CountRow[] = await db()('bench_reports as b')
+  const rows: CountRow[] = await knex('bench_reports as b')
     .join('fixes as f', 'f.id', 'b.fix_id')
     .whereIn('b.fix_id', fixIds)
     .groupBy('b.fix_id', 'b.outcome', 'on_current', 'own')
     .select(
       'b.fix_id',
       'b.outcome',
-      db().raw('(b.revision_id = f.current_revision_id) AS on_current'),
-      db().raw('(b.member_id = f.created_by) AS own'),
-      db().raw('count(*) AS n'),
+      knex.raw('(b.revision_id = f.current_revision_id) AS on_current'),
+      knex.raw('(b.member_id = f.created_by) AS own'),
+      knex.raw('count(*) AS n'),
     );
   const tallies = new Map<number, { view: BenchScoreView; current: Counts; older: Counts }>();
   for (const row of rows) {

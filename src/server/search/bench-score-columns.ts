@@ -5,7 +5,7 @@ import { queueSearchSync } from './sync-queue';
 
 export async function refreshBenchScoreColumns(knex: Knex, fixIds?: number[]): Promise<void> {
   const ids: number[] = fixIds ?? (await knex('fix_search').pluck('fix_id'));
-  const scores = await benchScoresFor(ids);
+  const scores = await benchScoresFor(ids, knex);
   for (const id of ids) {
     const s = scores.get(id);
     const changed = await knex('fix_search')

@@ -1,6 +1,7 @@
 // Candidate fixes for a query, capped per stage and taken best bench score first, with the features ranking needs.
 import type { Knex } from 'knex';
 import type { CodeClause } from '@/lib/search/plan';
+import type { SearchScope } from '@/lib/search/query-schema';
 import { allClauses, anyClause, levelsExpression } from './pg-conditions';
 import type { AnalysedQuery, CompiledTextClause } from './analyse';
 import type { ResolvedMachine } from './context';
@@ -12,23 +13,41 @@ export interface CandidateRow {
   machine_ids: number[];
   chassis_ids: number[];
   maker_ids: number[];
+  device_types: string[];
+  formats: string[];
+  caution_kinds: string[];
+  has_photos: boolean;
   /** Clause levels: hard text clauses, then codes, then soft clauses. */
   levels: number[];
 }
 
 /**
  * Two ways to read the best-scored matches. `walk` follows the bench-score index and tests each fix: quick
- * when matches are dense (a broad word), ruinous when they are rare. `collect` gathers the matches through
- * the text index and sorts them: quick when they are few. The same order either way; the expression in
- * `collect` only keeps PostgreSQL from walking the index.
+ * when matches are dense (a broad word), slow when they are rare, so it stops after WALK_BUDGET fixes.
+ * `collect` gathers the matches through the text index and sorts them: quick when they are few. The
+ * expression in collect's order only keeps PostgreSQL from walking the index.
  */
-const ORDER = { walk: 'ORDER BY s.bench_score DESC NULLS LAST, s.fix_id', collect: 'ORDER BY coalesce(s.bench_score, -1) DESC, s.fix_id' } as const;
-export type ReadWay = keyof typeof ORDER;
+export type ReadWay = 'walk' | 'collect';
+const WALK_ORDER = 'ORDER BY s.bench_score DESC NULLS LAST, s.fix_id';
+const COLLECT_ORDER = 'ORDER BY coalesce(s.bench_score, -1) DESC, s.fix_id';
+/** A walk reads at most this many fixes (some 15 ms on a 2-core machine); a walk that runs out is redone by collecting. */
+export const WALK_BUDGET = 4000;
+const SUMMARY_STAGE = 0;
 /** The stage whose size tells how many fixes match in all: every match, best bench score first. */
 const ANYWHERE_STAGE = 1;
+const NEAR_STAGE = 2;
 
-function stage(filter: Fragment, match: Fragment, limit: number, way: ReadWay, number = 0): Fragment {
-  return frag(`(SELECT s.fix_id, ${number} AS stage FROM fix_search s WHERE (${filter.sql}) AND (${match.sql}) ${ORDER[way]} LIMIT ${limit})`, ...filter.bindings, ...match.bindings);
+function stage(filter: Fragment, match: Fragment, limit: number, way: ReadWay, number = NEAR_STAGE): Fragment {
+  if (way === 'collect') {
+    return frag(`(SELECT s.fix_id, ${number} AS stage FROM fix_search s WHERE (${filter.sql}) AND (${match.sql}) ${COLLECT_ORDER} LIMIT ${limit})`, ...filter.bindings, ...match.bindings);
+  }
+  // The match is a column of the bounded walk, tested row by row as the outer LIMIT pulls; rows come
+  // out in the walk's order.
+  return frag(
+    `(SELECT w.fix_id, ${number} AS stage FROM (SELECT s.fix_id, (${match.sql}) AS hit FROM fix_search s WHERE (${filter.sql}) ${WALK_ORDER} LIMIT ${WALK_BUDGET}) AS w WHERE w.hit LIMIT ${limit})`,
+    ...match.bindings,
+    ...filter.bindings,
+  );
 }
 
 /** How each stage is read, from the estimated share of fixes matching in the summary and anywhere. */
@@ -38,36 +57,55 @@ export interface ReadPlan {
   /** For partial matches: each "all clauses but this one" stage, then the "any clause" stage. */
   allButOne: ReadWay[];
   anyClause: ReadWay;
+  /** Fixes in the search table (an estimate), to tell a walk that ran out from one that saw everything. */
+  tableRows: number;
 }
 
 /**
- * Rows near the named machine get stages of their own, so a broad query cannot crowd them out. A machine
- * or a chassis family holds few fixes, so those are collected; a maker's share is large enough to walk.
+ * Rows near the named machine get stages of their own, so a broad query cannot crowd them out: matches in
+ * the title or symptoms on the machine, its chassis family and its maker, and matches anywhere on the
+ * machine itself. (A fix found only in the remedy of a sibling machine ranks below those anyway.) A
+ * machine holds few fixes, so its stages are collected; a family's or maker's share may be large.
  */
-function nearStages(filter: Fragment, match: Fragment, machine: ResolvedMachine | null, limit: number, way: ReadWay): Fragment[] {
-  if (!machine) return [];
-  const near: [Fragment, ReadWay][] = [
-    [frag('s.machine_ids @> ARRAY[?]::int[]', machine.id), 'collect'],
-    [frag('s.maker_ids @> ARRAY[?]::int[]', machine.makerId), way],
-  ];
-  if (machine.chassisId !== null) near.push([frag('s.chassis_ids @> ARRAY[?]::int[]', machine.chassisId), 'collect']);
-  return near.map(([n, nearWay]) => stage(filter, frag(`(${match.sql}) AND (${n.sql})`, ...match.bindings, ...n.bindings), limit, nearWay));
+function nearStages(filter: Fragment, inSummary: Fragment, anywhere: Fragment, near: NearMachine | null, limit: number, plan: ReadPlan): Fragment[] {
+  // Scoped to the machine, every candidate is already its own or its family-wide fix: nothing to add.
+  if (!near || near.scope === 'machine') return [];
+  const { machine } = near;
+  const within = (match: Fragment, level: Fragment, way: ReadWay) => stage(filter, frag(`(${match.sql}) AND (${level.sql})`, ...match.bindings, ...level.bindings), limit, way);
+  const onMachine = frag('s.machine_ids @> ARRAY[?]::int[]', machine.id);
+  // Against a broad text, the machine's few fixes are read through its own index and tested one by one:
+  // "IS TRUE" keeps PostgreSQL from also scanning the text index for tens of thousands of matches.
+  const tested = (match: Fragment, way: ReadWay) => (way === 'walk' ? frag(`(${match.sql}) IS TRUE`, ...match.bindings) : match);
+  const stages = [within(tested(inSummary, plan.summary), onMachine, 'collect'), within(tested(anywhere, plan.anywhere), onMachine, 'collect')];
+  if (near.scope === 'family') return stages;
+  stages.push(within(inSummary, frag('s.maker_ids @> ARRAY[?]::int[]', machine.makerId), plan.summary));
+  if (machine.chassisId !== null) stages.push(within(inSummary, frag('s.chassis_ids @> ARRAY[?]::int[]', machine.chassisId), plan.summary));
+  return stages;
 }
 
-/** The stages' rows with their features; `counted` is how many rows the anywhere stage gave. */
-async function featuresOf(knex: Knex, analysed: AnalysedQuery, stages: Fragment[], known: string): Promise<{ rows: (CandidateRow & { counted: string })[] }> {
+/** The machine the reader named, with how widely the search reaches around it. */
+export interface NearMachine {
+  machine: ResolvedMachine;
+  scope: SearchScope;
+}
+
+/** The stages' rows with their features, and how many rows each stage gave. */
+async function featuresOf(knex: Knex, analysed: AnalysedQuery, stages: Fragment[], known: string): Promise<{ rows: CandidateRow[]; byStage: Map<number, number> }> {
   const union = joinFragments(stages, '\nUNION ALL\n');
   const levels = levelsExpression(analysed, known);
   const sql = frag(
     `WITH raw AS (${union.sql}),
           c AS (SELECT DISTINCT fix_id FROM raw),
-          counted AS (SELECT count(*) AS n FROM raw WHERE stage = ${ANYWHERE_STAGE})
-     SELECT s.fix_id, s.bench_score, s.machine_ids, s.chassis_ids, s.maker_ids, ${levels.sql} AS levels, (SELECT n FROM counted) AS counted
+          counted AS (SELECT coalesce(json_object_agg(stage, n), '{}'::json) AS by_stage FROM (SELECT stage, count(*) AS n FROM raw GROUP BY stage) AS x)
+     SELECT s.fix_id, s.bench_score, s.machine_ids, s.chassis_ids, s.maker_ids, s.device_types, s.formats, s.caution_kinds, s.has_photos,
+            ${levels.sql} AS levels, (SELECT by_stage FROM counted) AS by_stage
      FROM c JOIN fix_search s ON s.fix_id = c.fix_id`,
     ...union.bindings,
     ...levels.bindings,
   );
-  return raw(knex, sql) as unknown as Promise<{ rows: (CandidateRow & { counted: string })[] }>;
+  const { rows } = (await raw(knex, sql)) as unknown as { rows: (CandidateRow & { by_stage: Record<string, number> })[] };
+  const byStage = new Map(Object.entries(rows[0]?.by_stage ?? {}).map(([k, v]) => [Number(k), Number(v)]));
+  return { rows, byStage };
 }
 
 export interface FullMatches {
@@ -82,18 +120,29 @@ export interface FullMatches {
 }
 
 /** Fixes matching every hard clause: in the title and symptoms, anywhere, and near the named machine. */
-export async function fullMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, machine: ResolvedMachine | null, limit: number, plan: ReadPlan): Promise<FullMatches> {
+export async function fullMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, near: NearMachine | null, limit: number, plan: ReadPlan): Promise<FullMatches> {
   const inSummary = allClauses(analysed, 'doc_a');
   const anywhere = allClauses(analysed, 'document');
   const stages = [
-    stage(filter, inSummary, limit, plan.summary),
+    stage(filter, inSummary, limit, plan.summary, SUMMARY_STAGE),
     stage(filter, anywhere, limit, plan.anywhere, ANYWHERE_STAGE),
-    ...nearStages(filter, inSummary, machine, limit, plan.summary),
-    ...nearStages(filter, anywhere, machine, limit, plan.anywhere),
+    ...nearStages(filter, inSummary, anywhere, near, limit, plan),
   ];
   // Every row here matched all hard clauses, so "found in the body" needs no second look at the document.
-  const { rows } = await featuresOf(knex, analysed, stages, 'TRUE');
-  const counted = rows.length ? Number(rows[0]?.counted ?? 0) : 0;
+  const first = await featuresOf(knex, analysed, stages, 'TRUE');
+  // A walk that came back short may have run out of budget before it ran out of matches: collect instead.
+  const ranOut = (number: number, way: ReadWay) => way === 'walk' && (first.byStage.get(number) ?? 0) < limit && plan.tableRows > WALK_BUDGET;
+  const redo: Fragment[] = [];
+  if (ranOut(SUMMARY_STAGE, plan.summary)) redo.push(stage(filter, inSummary, limit, 'collect', SUMMARY_STAGE));
+  if (ranOut(ANYWHERE_STAGE, plan.anywhere)) redo.push(stage(filter, anywhere, limit, 'collect', ANYWHERE_STAGE));
+  let rows = first.rows;
+  let counted = first.byStage.get(ANYWHERE_STAGE) ?? 0;
+  if (redo.length) {
+    const second = await featuresOf(knex, analysed, redo, 'TRUE');
+    const seen = new Set(rows.map((r) => r.fix_id));
+    rows = [...rows, ...second.rows.filter((r) => !seen.has(r.fix_id))];
+    if (ranOut(ANYWHERE_STAGE, plan.anywhere)) counted = second.byStage.get(ANYWHERE_STAGE) ?? 0;
+  }
   return { rows, total: counted, lowerBound: counted >= limit };
 }
 

@@ -8,15 +8,20 @@ import { proximityTarget, resolveContext, type SearchContext } from './context';
 import { fullMatches, partialMatches, type CandidateRow } from './pg-candidates';
 import { filterCondition } from './pg-conditions';
 import { readPlan } from './read-plan';
-import { facetCounts } from './pg-facets';
+import { facetsOf } from './pg-facets';
 import { hydrateHits } from './hydrate';
-import { frag, pgArray } from './sql-fragment';
 import { refreshFixSearchRow } from './fix-search-row';
 import type { SearchProvider } from './provider-types';
 
 interface Ranked extends Rankable {
   matchedAll: boolean;
+  row: CandidateRow;
 }
+
+const CANDIDATES = 50;
+
+/** A broad query's facets are counted over its best-ranked candidates only (the page says so). */
+const FACET_SAMPLE = 200;
 
 /** Weights of the required clauses in level order: text clauses, then codes. */
 function clauseWeights(analysed: AnalysedQuery): number[] {
@@ -37,6 +42,7 @@ function toRanked(rows: CandidateRow[], analysed: AnalysedQuery, context: Search
       proximity: proximityOf({ machineIds: row.machine_ids, chassisIds: row.chassis_ids, makerIds: row.maker_ids }, target),
       benchScore: row.bench_score,
       matchedAll: relevance.matched === fullWeight,
+      row,
     };
   });
 }
@@ -70,10 +76,11 @@ export class PostgresSearchProvider implements SearchProvider {
 
     const filter = filterCondition(query, context, analysed);
     const window = query.page * query.perPage;
-    const limit = Math.max(100, window + 20);
+    // Candidates per stage: enough for the page and a margin; counts stop here ("50+ fixes").
+    const limit = Math.max(CANDIDATES, window + 20);
     const hardCount = analysed.hardText.length + analysed.codes.length;
-    const plan = await readPlan(this.knex, analysed);
-    const full = await fullMatches(this.knex, analysed, filter, context.machine, limit, plan);
+    const plan = await readPlan(this.knex, analysed, limit);
+    const full = await fullMatches(this.knex, analysed, filter, context.machine ? { machine: context.machine, scope: query.scope } : null, limit, plan);
     let rows = full.rows;
     let total = full.total;
     if (!full.lowerBound && full.total < window && hardCount > 0) {
@@ -85,8 +92,8 @@ export class PostgresSearchProvider implements SearchProvider {
     const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
     const headline = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
     // Facets are counted over the candidates: every match when the count is exact, the best ones otherwise.
-    const facetMatch = frag('s.fix_id = ANY(?::int[])', pgArray(rows.map((r) => r.fix_id)));
-    const [hits, facets] = await Promise.all([hydrateHits(this.knex, pageRows, headline), total > 0 ? facetCounts(this.knex, facetMatch) : Promise.resolve(null)]);
+    const facetRows = full.lowerBound ? ranked.slice(0, FACET_SAMPLE).map((r) => r.row) : rows;
+    const [hits, facets] = await Promise.all([hydrateHits(this.knex, pageRows, headline), total > 0 ? facetsOf(this.knex, facetRows) : Promise.resolve(null)]);
     return {
       ...emptyResult(query, context, analysed),
       hits,
@@ -94,8 +101,8 @@ export class PostgresSearchProvider implements SearchProvider {
       totalIsLowerBound: full.lowerBound,
       totalMatchingAll: full.total,
       pageCount: Math.max(1, Math.min(MAX_PAGE, Math.ceil(total / query.perPage))),
-      facets: facets?.facets ?? emptyFacets(),
-      facetsFromSample: full.lowerBound || (facets?.capped ?? false),
+      facets: facets ?? emptyFacets(),
+      facetsFromSample: full.lowerBound,
     };
   }
 

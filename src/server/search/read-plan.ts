@@ -1,16 +1,21 @@
 // Chooses how the PostgreSQL provider reads candidates, from how many fixes its clauses are expected to match.
 import type { Knex } from 'knex';
-import { estimateMatches, estimateShare } from '@/lib/search/estimate';
+import { estimateMatches, estimateShare, walkThreshold } from '@/lib/search/estimate';
 import type { AnalysedQuery } from './analyse';
 import type { ReadPlan, ReadWay } from './pg-candidates';
 import { lexemeStats, type LexemeStats } from './vocabulary';
 
 /**
- * Walking the bench-score index reads about limit ÷ share fixes; collecting reads every match. Walking
- * wins once one fix in fifty matches: at 100,000 fixes that is 2,000 matches against some 5,000 fixes
- * read for the first hundred.
+ * Costs per fix read in µs, measured with EXPLAIN ANALYZE on the bench:search database (2 cores): testing
+ * the small title-and-symptoms vector while walking, about 1; testing the whole document (stored
+ * compressed), about 4. Collecting through the index costs about 1 per match, unless the query holds a
+ * phrase ("disc tray"): then each match is read back and rechecked, about 2.6 for the small vector and 7
+ * for the whole document.
  */
-export const WALK_SHARE = 0.02;
+const COSTS = {
+  summary: { walk: 1, collect: 1, collectPhrase: 2.6 },
+  anywhere: { walk: 4, collect: 1, collectPhrase: 7 },
+} as const;
 
 const lexemesOf = (tsquery: string): string[] => [...tsquery.matchAll(/'((?:[^']|'')*)'/g)].map((m) => (m[1] ?? '').replace(/''/g, "'"));
 
@@ -23,19 +28,23 @@ function clauseCounts(analysed: AnalysedQuery, stats: LexemeStats): { summary: n
   };
 }
 
-const wayFor = (share: number): ReadWay => (share >= WALK_SHARE ? 'walk' : 'collect');
+const wayFor = (share: number, threshold: number): ReadWay => (share >= threshold ? 'walk' : 'collect');
 
 /** One small query for the counts of the query's lexemes and codes. */
-export async function readPlan(knex: Knex, analysed: AnalysedQuery): Promise<ReadPlan> {
+export async function readPlan(knex: Knex, analysed: AnalysedQuery, limit: number): Promise<ReadPlan> {
   const lexemes = [...new Set([...analysed.hardText, ...analysed.softText].flatMap((c) => lexemesOf(c.any)))];
   const codes = analysed.codes.flatMap((c) => [...c.exact, ...c.variants]);
   const stats = await lexemeStats(knex, lexemes, codes);
   const counts = clauseCounts(analysed, stats);
   const anyShare = Math.min(1, counts.anywhere.reduce((a, b) => a + b, 0) / Math.max(1, stats.total));
+  const phrase = analysed.hardText.some((c) => /<\d*-?>/.test(c.any));
+  const summaryAt = walkThreshold(limit, stats.total, COSTS.summary.walk, phrase ? COSTS.summary.collectPhrase : COSTS.summary.collect);
+  const anywhereAt = walkThreshold(limit, stats.total, COSTS.anywhere.walk, phrase ? COSTS.anywhere.collectPhrase : COSTS.anywhere.collect);
   return {
-    summary: wayFor(estimateShare(counts.summary, stats.total)),
-    anywhere: wayFor(estimateShare(counts.anywhere, stats.total)),
-    allButOne: counts.anywhere.map((_, skip) => wayFor(estimateShare(counts.anywhere.filter((_c, i) => i !== skip), stats.total))),
-    anyClause: wayFor(anyShare),
+    summary: wayFor(estimateShare(counts.summary, stats.total), summaryAt),
+    anywhere: wayFor(estimateShare(counts.anywhere, stats.total), anywhereAt),
+    allButOne: counts.anywhere.map((_, skip) => wayFor(estimateShare(counts.anywhere.filter((_c, i) => i !== skip), stats.total), anywhereAt)),
+    anyClause: wayFor(anyShare, anywhereAt),
+    tableRows: stats.total,
   };
 }

@@ -38,7 +38,7 @@ export async function similarFixes(knex: Knex, symptom: string, machine: Resolve
   if (!analysed.searchable) return [];
   const query: SearchQuery = { text: symptom, machine: machine.named.slug, scope: machine.chassisId === null ? 'machine' : 'family', filters: {}, page: 1, perPage: MAX_SIMILAR };
   const filter = filterCondition(query, { machine, machineMissing: false, makerId: undefined, chassisId: undefined }, analysed);
-  const full = await fullMatches(knex, analysed, filter, machine, 50, { summary: 'collect', anywhere: 'collect' });
+  const full = await fullMatches(knex, analysed, filter, { machine, scope: query.scope }, 50, { summary: 'collect', anywhere: 'collect', allButOne: [], anyClause: 'collect', tableRows: 0 });
   const rows = full.rows.length >= MAX_SIMILAR ? full.rows : [...full.rows, ...(await partialMatches(knex, analysed, filter, 50, { allButOne: [], anyClause: 'collect' })).filter((r) => !full.rows.some((f) => f.fix_id === r.fix_id))];
   if (rows.length === 0) return [];
   const weights = [...analysed.hardText.map(() => WORD_WEIGHT), ...analysed.codes.map(() => CODE_WEIGHT)];

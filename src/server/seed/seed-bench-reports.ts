@@ -13,7 +13,6 @@ const notes: Record<string, string[]> = {
 };
 
 export async function seedBenchReports(knex: Knex, ids: SeededIds): Promise<number> {
-  const random = seededRandom(20261201);
   const reporters = demoUsers.filter((u) => u.role !== 'admin').map((u) => ({ key: u.key, id: ids.users.get(u.key) }));
   // Only the demo fixes, in the demo world's own order, so a re-run draws the same reports whatever else exists.
   const order = new Map(demoFixes.map((f, i) => [f.slug, i]));
@@ -25,11 +24,13 @@ export async function seedBenchReports(knex: Knex, ids: SeededIds): Promise<numb
   let inserted = 0;
   for (const fix of fixes) {
     const machineIds: number[] = (
-      await knex('fix_machines').where({ fix_id: fix.id }).pluck('machine_id')
+      await knex('fix_machines').where({ fix_id: fix.id }).orderBy('machine_id').pluck('machine_id')
     ).concat(
-      await knex('fix_chassis as fc').join('machines as m', 'm.chassis_family_id', 'fc.chassis_family_id').where('fc.fix_id', fix.id).pluck('m.id'),
+      await knex('fix_chassis as fc').join('machines as m', 'm.chassis_family_id', 'fc.chassis_family_id').where('fc.fix_id', fix.id).orderBy('m.id').pluck('m.id'),
     );
     if (machineIds.length === 0) continue;
+    // Each fix draws from its own sequence, so its reports do not depend on what else is in the database.
+    const random = seededRandom(seedOf(fix.slug));
     const count = 2 + Math.floor(random() * 4);
     for (let i = 0; i < count; i++) {
       const reporter = pick(random, reporters);
@@ -55,4 +56,10 @@ export async function seedBenchReports(knex: Knex, ids: SeededIds): Promise<numb
     }
   }
   return inserted;
+}
+
+function seedOf(text: string): number {
+  let h = 2166136261;
+  for (const ch of text) h = Math.imul(h ^ ch.charCodeAt(0), 16777619);
+  return h >>> 0;
 }
