@@ -46,7 +46,11 @@ export async function up(knex) {
     t.check(`difficulty IS NULL OR difficulty IN ('routine', 'careful', 'skilled', 'specialist')`, [], 'revisions_difficulty_check');
     t.check('time_minutes IS NULL OR time_minutes BETWEEN 1 AND 10000', [], 'revisions_time_check');
     t.check(`jsonb_typeof(body) = 'object'`, [], 'revisions_body_check');
-    t.check(`jsonb_typeof(parts) = 'array' AND jsonb_typeof(readings) = 'array' AND jsonb_typeof(cautions) = 'array'`, [], 'revisions_lists_check');
+    t.check(
+      `jsonb_typeof(parts) = 'array' AND jsonb_typeof(readings) = 'array' AND jsonb_typeof(cautions) = 'array'`,
+      [],
+      'revisions_lists_check',
+    );
     // Anything past a draft must name at least one symptom and a title.
     t.check(`state = 'draft' OR (cardinality(symptoms) >= 1 AND length(btrim(title)) > 0)`, [], 'revisions_symptoms_check');
     t.check(`state <> 'proofed' OR (proofer_id IS NOT NULL AND proofed_at IS NOT NULL)`, [], 'revisions_proofed_check');

@@ -56,7 +56,15 @@ export async function up(knex) {
 export async function down(knex) {
   await knex.schema.dropTableIfExists('search_codes');
   await knex.schema.dropTableIfExists('search_words');
-  for (const index of ['fix_search_bench_order_idx', 'fix_search_makers_idx', 'fix_search_direct_chassis_idx', 'fix_search_chassis_idx', 'fix_search_code_list_idx', 'fix_search_doc_a_idx', 'fix_search_document_idx']) {
+  for (const index of [
+    'fix_search_bench_order_idx',
+    'fix_search_makers_idx',
+    'fix_search_direct_chassis_idx',
+    'fix_search_chassis_idx',
+    'fix_search_code_list_idx',
+    'fix_search_doc_a_idx',
+    'fix_search_document_idx',
+  ]) {
     await knex.raw(`DROP INDEX IF EXISTS ${index}`);
   }
   await knex.raw('ALTER TABLE fix_search DROP COLUMN code_list');

@@ -19,7 +19,12 @@ const arg = (name: string, fallback: string) => {
 const SIZES = arg('sizes', '10000,100000').split(',').map(Number);
 const ROUNDS = Number(arg('rounds', '5'));
 
-const env: NodeJS.ProcessEnv = { ...process.env, BENCHLORE_DB_NAME: DB, BENCHLORE_MEDIA_DIR: '.data/media-benchlore_bench', LOG_LEVEL: 'warn' };
+const env: NodeJS.ProcessEnv = {
+  ...process.env,
+  BENCHLORE_DB_NAME: DB,
+  BENCHLORE_MEDIA_DIR: '.data/media-benchlore_bench',
+  LOG_LEVEL: 'warn',
+};
 delete env.DATABASE_URL;
 delete env.MEILI_URL;
 Object.assign(process.env, env);
@@ -40,11 +45,42 @@ const { normaliseCode } = await import('../src/lib/schemas/catalogue.ts');
 const knex = db();
 const random = seededRandom(20261202);
 const chance = (p: number) => random() < p;
-const some = <T>(items: readonly T[], min: number, max: number): T[] => Array.from({ length: min + Math.floor(random() * (max - min + 1)) }, () => pick(random, items));
+const some = <T>(items: readonly T[], min: number, max: number): T[] =>
+  Array.from({ length: min + Math.floor(random() * (max - min + 1)) }, () => pick(random, items));
 
 // Invented trade vocabulary for the synthetic fixes.
-const parts = ['tray', 'drawer', 'loading belt', 'idler tyre', 'pinch roller', 'capstan', 'spindle motor', 'laser pickup', 'mode switch', 'cam gear', 'reel sensor', 'clutch felt', 'head drum', 'audio head', 'sled motor', 'flex cable', 'relay', 'fan', 'display', 'tuner'];
-const supplies = ['power supply', 'standby supply', 'smoothing capacitor', 'regulator', 'bridge rectifier', 'fuse', 'switch-mode controller', 'output capacitor'];
+const parts = [
+  'tray',
+  'drawer',
+  'loading belt',
+  'idler tyre',
+  'pinch roller',
+  'capstan',
+  'spindle motor',
+  'laser pickup',
+  'mode switch',
+  'cam gear',
+  'reel sensor',
+  'clutch felt',
+  'head drum',
+  'audio head',
+  'sled motor',
+  'flex cable',
+  'relay',
+  'fan',
+  'display',
+  'tuner',
+];
+const supplies = [
+  'power supply',
+  'standby supply',
+  'smoothing capacitor',
+  'regulator',
+  'bridge rectifier',
+  'fuse',
+  'switch-mode controller',
+  'output capacitor',
+];
 const symptomForms = [
   (p: string) => `${p} won't open`,
   (p: string) => `${p} will not close`,
@@ -101,16 +137,37 @@ async function syntheticCatalogue(): Promise<Machine[]> {
   const chassisIds: number[] = [];
   for (let i = 0; i < 40; i++) {
     const maker = pick(random, makers);
-    const [row] = await knex('chassis_families').insert({ slug: `bench-chassis-${i}`, maker_id: maker.id, name: `Bench platform ${i}`, code: `BP-${i}`, device_type: 'dvd_recorder' }).returning('id');
+    const [row] = await knex('chassis_families')
+      .insert({ slug: `bench-chassis-${i}`, maker_id: maker.id, name: `Bench platform ${i}`, code: `BP-${i}`, device_type: 'dvd_recorder' })
+      .returning('id');
     chassisIds.push(row.id);
   }
   const rows = Array.from({ length: 400 }, (_, i) => {
     const model = `${pick(random, [...letters])}${pick(random, [...letters])}-${1000 + i * 7}${chance(0.3) ? pick(random, ['K', 'H', 'S']) : ''}`;
-    return { slug: `bench-${normaliseCode(model)}-pal`, maker_id: pick(random, makers).id, chassis_family_id: chance(0.8) ? pick(random, chassisIds) : null, model_number: model, model_code: normaliseCode(model), region: 'PAL', device_type: pick(random, ['vcr', 'dvd_recorder', 'cd_player', 'cassette_deck']), formats: [pick(random, ['VHS', 'DVD-R', 'CD', 'Compact Cassette'])] };
+    return {
+      slug: `bench-${normaliseCode(model)}-pal`,
+      maker_id: pick(random, makers).id,
+      chassis_family_id: chance(0.8) ? pick(random, chassisIds) : null,
+      model_number: model,
+      model_code: normaliseCode(model),
+      region: 'PAL',
+      device_type: pick(random, ['vcr', 'dvd_recorder', 'cd_player', 'cassette_deck']),
+      formats: [pick(random, ['VHS', 'DVD-R', 'CD', 'Compact Cassette'])],
+    };
   });
   await knex.batchInsert('machines', rows, 200);
-  const machines = await knex('machines as m').join('makers as mk', 'mk.id', 'm.maker_id').select('m.id', 'm.maker_id', 'mk.name as maker_name', 'm.chassis_family_id', 'm.model_number', 'm.device_type', 'm.formats');
-  return machines.map((m) => ({ id: m.id, makerId: m.maker_id, makerName: m.maker_name, chassisId: m.chassis_family_id, model: m.model_number, deviceType: m.device_type, formats: m.formats }));
+  const machines = await knex('machines as m')
+    .join('makers as mk', 'mk.id', 'm.maker_id')
+    .select('m.id', 'm.maker_id', 'mk.name as maker_name', 'm.chassis_family_id', 'm.model_number', 'm.device_type', 'm.formats');
+  return machines.map((m) => ({
+    id: m.id,
+    makerId: m.maker_id,
+    makerName: m.maker_name,
+    chassisId: m.chassis_family_id,
+    model: m.model_number,
+    deviceType: m.device_type,
+    formats: m.formats,
+  }));
 }
 
 function syntheticFix(i: number, machines: Machine[]) {
@@ -134,7 +191,13 @@ function syntheticFix(i: number, machines: Machine[]) {
     cause,
     remedy,
     parts: refs.map((r) => `${r} ${pick(random, ['470uF', '1000uF', '22uF', '1N4007', '4.7k'])}`).join(' . '),
-    codes: [...new Set([...onMachines.map((m) => normaliseCode(m.model)), ...refs.map(normaliseCode), ...(errorCode ? [normaliseCode(errorCode)] : [])])].join(' '),
+    codes: [
+      ...new Set([
+        ...onMachines.map((m) => normaliseCode(m.model)),
+        ...refs.map(normaliseCode),
+        ...(errorCode ? [normaliseCode(errorCode)] : []),
+      ]),
+    ].join(' '),
     errorCode,
     machines: onMachines,
     benchScore: score && score.ok ? score.value : null,
@@ -147,12 +210,32 @@ async function addFixes(from: number, to: number, machines: Machine[], users: { 
   for (let start = from; start < to; start += BATCH) {
     const batch = Array.from({ length: Math.min(BATCH, to - start) }, (_, k) => syntheticFix(start + k, machines));
     await knex.transaction(async (trx) => {
-      const fixIds: { id: number }[] = await trx('fixes').insert(batch.map((f) => ({ slug: f.slug, created_by: users.author }))).returning('id');
+      const fixIds: { id: number }[] = await trx('fixes')
+        .insert(batch.map((f) => ({ slug: f.slug, created_by: users.author })))
+        .returning('id');
       const now = new Date();
       const revIds: { id: number }[] = await trx('revisions')
-        .insert(batch.map((f, k) => ({ fix_id: fixIds[k]!.id, number: 1, author_id: users.author, proofer_id: users.proofer, title: f.title, body: JSON.stringify({ type: 'doc', content: [] }), symptoms: f.symptoms, error_codes: f.errorCode ? [f.errorCode] : [], cause: f.cause, state: 'proofed', submitted_at: now, proofed_at: now })))
+        .insert(
+          batch.map((f, k) => ({
+            fix_id: fixIds[k]!.id,
+            number: 1,
+            author_id: users.author,
+            proofer_id: users.proofer,
+            title: f.title,
+            body: JSON.stringify({ type: 'doc', content: [] }),
+            symptoms: f.symptoms,
+            error_codes: f.errorCode ? [f.errorCode] : [],
+            cause: f.cause,
+            state: 'proofed',
+            submitted_at: now,
+            proofed_at: now,
+          })),
+        )
         .returning('id');
-      await trx.raw('UPDATE fixes f SET current_revision_id = r.id FROM revisions r WHERE r.fix_id = f.id AND f.id BETWEEN ? AND ?', [fixIds[0]!.id, fixIds[fixIds.length - 1]!.id]);
+      await trx.raw('UPDATE fixes f SET current_revision_id = r.id FROM revisions r WHERE r.fix_id = f.id AND f.id BETWEEN ? AND ?', [
+        fixIds[0]!.id,
+        fixIds[fixIds.length - 1]!.id,
+      ]);
       await trx('fix_machines').insert(batch.flatMap((f, k) => f.machines.map((m) => ({ fix_id: fixIds[k]!.id, machine_id: m.id }))));
       // The search rows are written directly: what refreshFixSearchRow would write, without its per-fix queries.
       await trx('fix_search').insert(
@@ -193,7 +276,22 @@ function querySet(machines: Machine[]): Named[] {
   const slug = `bench-${normaliseCode(m.model)}-pal`;
   return [
     ...['tray', 'power', 'noise', 'belt', 'no power', 'capacitor', 'display'].map((q) => ({ q, kind: 'broad' as const })),
-    ...['tray wont open', 'noise from the spindle motor', 'display flickers', 'pinch roller slips', 'clicks then shuts down', 'tary wont close', 'smoothing capacitor dries out', 'grinding sled motor', 'E-42', 'F 17 tray', m.model.replace('-', ' '), `${m.model} no power`, 'hum in the sound', 'picture freezes'].map((q) => ({ q, kind: 'narrow' as const })),
+    ...[
+      'tray wont open',
+      'noise from the spindle motor',
+      'display flickers',
+      'pinch roller slips',
+      'clicks then shuts down',
+      'tary wont close',
+      'smoothing capacitor dries out',
+      'grinding sled motor',
+      'E-42',
+      'F 17 tray',
+      m.model.replace('-', ' '),
+      `${m.model} no power`,
+      'hum in the sound',
+      'picture freezes',
+    ].map((q) => ({ q, kind: 'narrow' as const })),
     // A machine named: its own fixes (the default scope), and every machine nearest first.
     { q: 'tray', kind: 'broad', machine: slug },
     { q: 'noise', kind: 'broad', machine: slug, scope: 'all' },
@@ -219,11 +317,19 @@ const percentile = (xs: number[], p: number) => {
 async function measure(size: number, queries: Named[]) {
   const provider = new PostgresSearchProvider(knex);
   const timings = { provider: [] as number[], naive: [] as number[], broad: [] as number[], narrow: [] as number[] };
+  const perQuery = new Map<string, number[]>();
   let maxTotal = 0;
   for (let round = 0; round <= ROUNDS; round++) {
     for (const query of queries) {
       let t = performance.now();
-      const result = await provider.search({ text: query.q, machine: query.machine, scope: query.scope ?? 'machine', filters: {}, page: 1, perPage: 10 });
+      const result = await provider.search({
+        text: query.q,
+        machine: query.machine,
+        scope: query.scope ?? 'machine',
+        filters: {},
+        page: 1,
+        perPage: 10,
+      });
       const providerMs = performance.now() - t;
       t = performance.now();
       await naiveSearch(query.q);
@@ -232,11 +338,21 @@ async function measure(size: number, queries: Named[]) {
       timings.provider.push(providerMs);
       timings.naive.push(naiveMs);
       timings[query.kind].push(providerMs);
+      const label = query.machine ? `${query.q} [${query.scope ?? 'machine'} scope]` : query.q;
+      perQuery.set(label, [...(perQuery.get(label) ?? []), providerMs]);
       maxTotal = Math.max(maxTotal, result.total);
     }
   }
-  const broadMatches: number[] = await Promise.all(['tray', 'power', 'noise'].map(async (w) => Number((await knex.raw(`SELECT count(*) AS n FROM fix_search WHERE document @@ to_tsquery('english', ?)`, [w])).rows[0].n)));
-  return { size, timings, broadMatches };
+  const broadMatches: number[] = await Promise.all(
+    ['tray', 'power', 'noise'].map(async (w) =>
+      Number((await knex.raw(`SELECT count(*) AS n FROM fix_search WHERE document @@ to_tsquery('english', ?)`, [w])).rows[0].n),
+    ),
+  );
+  const slowest = [...perQuery]
+    .map(([q, ms]) => ({ q, worst: Math.max(...ms) }))
+    .sort((a, b) => b.worst - a.worst)
+    .slice(0, 5);
+  return { size, timings, broadMatches, slowest };
 }
 
 const machines = await syntheticCatalogue();
@@ -257,8 +373,12 @@ for (const size of SIZES) {
 }
 
 const f = (ms: number) => ms.toFixed(1).padStart(7);
-console.log(`\nSearch latency in ms (${ROUNDS} rounds of ${queries.length} queries after one warm-up round; ${new Date().toISOString().slice(0, 10)})`);
-console.log('  fixes | provider p50    p95 | naive ILIKE p50    p95 | p95 ratio naive/provider | provider p95 broad / narrow | matches of tray, power, noise');
+console.log(
+  `\nSearch latency in ms (${ROUNDS} rounds of ${queries.length} queries after one warm-up round; ${new Date().toISOString().slice(0, 10)})`,
+);
+console.log(
+  '  fixes | provider p50    p95 | naive ILIKE p50    p95 | p95 ratio naive/provider | provider p95 broad / narrow | matches of tray, power, noise',
+);
 for (const r of results) {
   const pp95 = percentile(r.timings.provider, 95);
   const np95 = percentile(r.timings.naive, 95);
@@ -266,4 +386,9 @@ for (const r of results) {
     `${String(r.size).padStart(7)} | ${f(percentile(r.timings.provider, 50))} ${f(pp95)} | ${f(percentile(r.timings.naive, 50))}     ${f(np95)} | ${(np95 / pp95).toFixed(1).padStart(24)} | ${f(percentile(r.timings.broad, 95))} / ${f(percentile(r.timings.narrow, 95)).trim()}   | ${r.broadMatches.join(', ')}`,
   );
 }
+const last = results.at(-1);
+if (last)
+  console.log(
+    `Slowest queries at ${last.size} (worst of ${ROUNDS} runs): ${last.slowest.map((s) => `${s.q} ${s.worst.toFixed(1)} ms`).join('; ')}`,
+  );
 await closeDb();

@@ -38,7 +38,7 @@ export function ensureServerBinaries(): string {
     );
     process.exit(1);
   }
-  console.log('Installing Debian\'s postgresql package (first run only)...');
+  console.log("Installing Debian's postgresql package (first run only)...");
   execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit' });
   execFileSync('apt-get', ['install', '-y', '-qq', 'postgresql'], {
     stdio: 'inherit',
@@ -107,7 +107,12 @@ export function isInitialised(pg: LocalPg): boolean {
 export function init(pg: LocalPg): void {
   if (isInitialised(pg)) return;
   console.log(`Creating a PostgreSQL cluster in ${pg.clusterDir}`);
-  const res = runPg(pg, 'initdb', ['-D', pg.clusterDir, '-U', 'postgres', '--auth-local=peer', '--auth-host=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8'], { quiet: true });
+  const res = runPg(
+    pg,
+    'initdb',
+    ['-D', pg.clusterDir, '-U', 'postgres', '--auth-local=peer', '--auth-host=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8'],
+    { quiet: true },
+  );
   if (res.status !== 0) throw new Error(`initdb failed:\n${res.stdout}\n${res.stderr}`);
   // A local development and test cluster: durability settings are relaxed for speed. Production
   // uses its own server through DATABASE_URL.
@@ -143,11 +148,11 @@ function portTaken(port: number): Promise<boolean> {
 export async function start(pg: LocalPg): Promise<void> {
   if (isRunning(pg)) return;
   if (await portTaken(pg.port)) {
-    throw new Error(
-      `Port ${pg.port} on 127.0.0.1 is taken by another program. Stop it, or choose another port with BENCHLORE_PG_PORT.`,
-    );
+    throw new Error(`Port ${pg.port} on 127.0.0.1 is taken by another program. Stop it, or choose another port with BENCHLORE_PG_PORT.`);
   }
-  const res = runPg(pg, 'pg_ctl', ['-D', pg.clusterDir, '-l', pg.logFile, '-w', '-t', '60', '-o', `-p ${pg.port}`, 'start'], { quiet: true });
+  const res = runPg(pg, 'pg_ctl', ['-D', pg.clusterDir, '-l', pg.logFile, '-w', '-t', '60', '-o', `-p ${pg.port}`, 'start'], {
+    quiet: true,
+  });
   if (res.status !== 0) throw new Error(`PostgreSQL did not start; see ${pg.logFile}\n${res.stderr}`);
 }
 
@@ -158,7 +163,12 @@ export function stop(pg: LocalPg): void {
 
 /** Runs SQL as the cluster's superuser over the private socket. */
 export function superSql(pg: LocalPg, sql: string, database = 'postgres'): string {
-  const res = runPg(pg, 'psql', ['-X', '-q', '-t', '-A', '-v', 'ON_ERROR_STOP=1', '-h', pg.socketDir, '-p', String(pg.port), '-U', 'postgres', '-d', database], { quiet: true, input: sql });
+  const res = runPg(
+    pg,
+    'psql',
+    ['-X', '-q', '-t', '-A', '-v', 'ON_ERROR_STOP=1', '-h', pg.socketDir, '-p', String(pg.port), '-U', 'postgres', '-d', database],
+    { quiet: true, input: sql },
+  );
   if (res.status !== 0) throw new Error(`psql failed: ${res.stderr}`);
   return res.stdout.trim();
 }

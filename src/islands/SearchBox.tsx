@@ -100,7 +100,14 @@ function LiveSearchBox({ initialText, context }: SearchBoxProps): ReactElement {
         className={`absolute left-0 right-0 z-20 mt-1 max-h-[28rem] overflow-y-auto rounded border border-rule-strong shadow-lg ${expanded && hits.length > 0 ? '' : 'hidden'}`}
       >
         {hits.map((hit, index) => (
-          <ResultOption key={hit.fixId} hit={hit} id={`${listId}-${index}`} active={index === active} onChoose={choose} onHover={() => setActive(index)} />
+          <ResultOption
+            key={hit.fixId}
+            hit={hit}
+            id={`${listId}-${index}`}
+            active={index === active}
+            onChoose={choose}
+            onHover={() => setActive(index)}
+          />
         ))}
       </ul>
       <p className="sr-only" role="status" aria-live="polite">

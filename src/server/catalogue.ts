@@ -128,7 +128,11 @@ export async function listMachines(filter: MachineFilter): Promise<Page<MachineS
     .orderBy([{ column: 'mk.name' }, { column: 'm.model_number' }, { column: 'm.region' }])
     .limit(filter.perPage)
     .offset((filter.page - 1) * filter.perPage);
-  return toPage(rows.map((r) => summariseMachine(toMachine(r))), Number(countRow?.n ?? 0), filter);
+  return toPage(
+    rows.map((r) => summariseMachine(toMachine(r))),
+    Number(countRow?.n ?? 0),
+    filter,
+  );
 }
 
 export async function getMachine(slug: string): Promise<MachineDetail | null> {
@@ -159,7 +163,17 @@ export async function getChassis(slug: string): Promise<ChassisDetail | null> {
     .join('makers as mk', 'mk.id', 'c.maker_id')
     .whereNull('c.deleted_at')
     .where('c.slug', slug)
-    .first('c.id', 'c.slug', 'c.name', 'c.code', 'c.about', 'c.device_type', 'c.maker_id', 'mk.slug as maker_slug', 'mk.name as maker_name');
+    .first(
+      'c.id',
+      'c.slug',
+      'c.name',
+      'c.code',
+      'c.about',
+      'c.device_type',
+      'c.maker_id',
+      'mk.slug as maker_slug',
+      'mk.name as maker_name',
+    );
   if (!row) return null;
   return {
     id: row.id,
@@ -183,7 +197,11 @@ export interface MakerDetail extends MakerRef {
 export async function listMakers(): Promise<(MakerRef & { machineCount: number })[]> {
   const rows = await db()('makers as mk')
     .whereNull('mk.deleted_at')
-    .select('mk.slug', 'mk.name', db().raw('(SELECT count(*) FROM machines m WHERE m.maker_id = mk.id AND m.deleted_at IS NULL) AS machine_count'))
+    .select(
+      'mk.slug',
+      'mk.name',
+      db().raw('(SELECT count(*) FROM machines m WHERE m.maker_id = mk.id AND m.deleted_at IS NULL) AS machine_count'),
+    )
     .orderBy('mk.name');
   return rows.map((r) => ({ slug: r.slug, name: r.name, machineCount: Number(r.machine_count) }));
 }
@@ -204,7 +222,13 @@ export async function getMaker(slug: string): Promise<MakerDetail | null> {
   const families = await knex('chassis_families as c')
     .whereNull('c.deleted_at')
     .where('c.maker_id', maker.id)
-    .select('c.slug', 'c.name', 'c.code', 'c.device_type', knex.raw('(SELECT count(*) FROM machines m WHERE m.chassis_family_id = c.id AND m.deleted_at IS NULL) AS machine_count'))
+    .select(
+      'c.slug',
+      'c.name',
+      'c.code',
+      'c.device_type',
+      knex.raw('(SELECT count(*) FROM machines m WHERE m.chassis_family_id = c.id AND m.deleted_at IS NULL) AS machine_count'),
+    )
     .orderBy('c.name');
   return {
     id: maker.id,
@@ -212,6 +236,12 @@ export async function getMaker(slug: string): Promise<MakerDetail | null> {
     name: maker.name,
     country: maker.country,
     about: maker.about,
-    families: families.map((f) => ({ slug: f.slug, name: f.name, code: f.code, deviceType: f.device_type, machineCount: Number(f.machine_count) })),
+    families: families.map((f) => ({
+      slug: f.slug,
+      name: f.name,
+      code: f.code,
+      deviceType: f.device_type,
+      machineCount: Number(f.machine_count),
+    })),
   };
 }

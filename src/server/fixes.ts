@@ -214,7 +214,10 @@ export async function listFixSummaries(filter: SummaryFilter = {}): Promise<FixS
            WHERE fm.fix_id = f.id ORDER BY mk.name, m.model_number, m.region) AS machine_labels`,
       ),
     )
-    .orderBy([{ column: 'r.proofed_at', order: 'desc' }, { column: 'f.id', order: 'desc' }])
+    .orderBy([
+      { column: 'r.proofed_at', order: 'desc' },
+      { column: 'f.id', order: 'desc' },
+    ])
     .limit(filter.limit ?? 100)
     .offset(filter.offset ?? 0);
   const rows: SummaryRow[] = await q;

@@ -1,7 +1,16 @@
 // The one JSON response and error shape of the API: { error: { code, message, fields? } }.
 import type { z } from 'zod';
 
-export type ErrorCode = 'bad_request' | 'unauthorised' | 'forbidden' | 'not_found' | 'conflict' | 'too_many_requests' | 'payload_too_large' | 'unsupported_media_type' | 'internal';
+export type ErrorCode =
+  | 'bad_request'
+  | 'unauthorised'
+  | 'forbidden'
+  | 'not_found'
+  | 'conflict'
+  | 'too_many_requests'
+  | 'payload_too_large'
+  | 'unsupported_media_type'
+  | 'internal';
 
 const statusOf: Record<ErrorCode, number> = {
   bad_request: 400,
@@ -27,7 +36,10 @@ export const cachePolicies = {
   private: 'private, no-store',
 } as const;
 
-export function json(data: unknown, init: { status?: number; cache?: keyof typeof cachePolicies; headers?: Record<string, string> } = {}): Response {
+export function json(
+  data: unknown,
+  init: { status?: number; cache?: keyof typeof cachePolicies; headers?: Record<string, string> } = {},
+): Response {
   return new Response(JSON.stringify(data), {
     status: init.status ?? 200,
     headers: { 'Content-Type': 'application/json; charset=utf-8', 'Cache-Control': cachePolicies[init.cache ?? 'public'], ...init.headers },
@@ -50,7 +62,10 @@ export function fieldErrors(error: z.ZodError): Record<string, string[]> {
 }
 
 /** Parses URL search parameters with a schema; a failure is a ready 400 response. */
-export function parseSearchParams<S extends z.ZodType>(schema: S, url: URL): { ok: true; data: z.infer<S> } | { ok: false; response: Response } {
+export function parseSearchParams<S extends z.ZodType>(
+  schema: S,
+  url: URL,
+): { ok: true; data: z.infer<S> } | { ok: false; response: Response } {
   const raw: Record<string, string> = {};
   for (const [k, v] of url.searchParams) if (v !== '') raw[k] = v;
   const parsed = schema.safeParse(raw);

@@ -80,7 +80,10 @@ describe('the search box with JavaScript', () => {
     await page.keyboard.type(' motor hums');
     await page.getByRole('option').first().waitFor({ state: 'visible' });
     await page.waitForTimeout(2000);
-    const titlesOf = async (q: string) => ((await (await fetch(`${base}/api/v1/search?q=${encodeURIComponent(q)}&perPage=6`)).json()).hits as { title: string }[]).map((h) => h.title);
+    const titlesOf = async (q: string) =>
+      ((await (await fetch(`${base}/api/v1/search?q=${encodeURIComponent(q)}&perPage=6`)).json()).hits as { title: string }[]).map(
+        (h) => h.title,
+      );
     const [newest, older] = await Promise.all([titlesOf('tray motor hums'), titlesOf('tray')]);
     expect(newest).not.toEqual(older);
     const shown = await page.getByRole('option').locator('span.font-serif').allTextContents();

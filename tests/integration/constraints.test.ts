@@ -27,7 +27,15 @@ describe('schema constraints', () => {
     const fix = await knex('fixes').first('id', 'created_by');
     expect(
       await violation((t) =>
-        t('revisions').insert({ fix_id: fix.id, number: 999, author_id: fix.created_by, title: 'T', body: '{"type":"doc","content":[]}', state: 'submitted', symptoms: [] }),
+        t('revisions').insert({
+          fix_id: fix.id,
+          number: 999,
+          author_id: fix.created_by,
+          title: 'T',
+          body: '{"type":"doc","content":[]}',
+          state: 'submitted',
+          symptoms: [],
+        }),
       ),
     ).toBe('revisions_symptoms_check');
   });
@@ -37,8 +45,15 @@ describe('schema constraints', () => {
     expect(
       await violation((t) =>
         t('revisions').insert({
-          fix_id: fix.id, number: 998, author_id: fix.created_by, proofer_id: fix.created_by, proofed_at: new Date(),
-          title: 'T', body: '{"type":"doc","content":[]}', state: 'proofed', symptoms: ['x'],
+          fix_id: fix.id,
+          number: 998,
+          author_id: fix.created_by,
+          proofer_id: fix.created_by,
+          proofed_at: new Date(),
+          title: 'T',
+          body: '{"type":"doc","content":[]}',
+          state: 'proofed',
+          symptoms: ['x'],
         }),
       ),
     ).toBe('revisions_own_proof_check');
@@ -48,7 +63,13 @@ describe('schema constraints', () => {
     const report = await knex('bench_reports').first();
     expect(
       await violation((t) =>
-        t('bench_reports').insert({ fix_id: report.fix_id, revision_id: report.revision_id, machine_id: report.machine_id, member_id: report.member_id, outcome: 'fixed' }),
+        t('bench_reports').insert({
+          fix_id: report.fix_id,
+          revision_id: report.revision_id,
+          machine_id: report.machine_id,
+          member_id: report.member_id,
+          outcome: 'fixed',
+        }),
       ),
     ).toBe('bench_reports_fix_id_member_id_machine_id_unique');
   });
@@ -57,7 +78,12 @@ describe('schema constraints', () => {
     const report = await knex('bench_reports').first();
     expect(
       await violation((t) =>
-        t('handover_notes').insert({ code: 'ABCDEFGH10', fix_id: report.fix_id, revision_id: report.revision_id, member_id: report.member_id }),
+        t('handover_notes').insert({
+          code: 'ABCDEFGH10',
+          fix_id: report.fix_id,
+          revision_id: report.revision_id,
+          member_id: report.member_id,
+        }),
       ),
     ).toBe('handover_notes_code_check');
   });
@@ -65,7 +91,16 @@ describe('schema constraints', () => {
   it('refuses a machine model code that is not normalised', async () => {
     const maker = await knex('makers').first('id');
     expect(
-      await violation((t) => t('machines').insert({ slug: 'x-1', maker_id: maker.id, model_number: 'X-1', model_code: 'X-1', region: 'PAL', device_type: 'vcr' })),
+      await violation((t) =>
+        t('machines').insert({
+          slug: 'x-1',
+          maker_id: maker.id,
+          model_number: 'X-1',
+          model_code: 'X-1',
+          region: 'PAL',
+          device_type: 'vcr',
+        }),
+      ),
     ).toBe('machines_model_code_check');
   });
 });

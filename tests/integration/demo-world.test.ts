@@ -22,13 +22,20 @@ describe('demo world', () => {
     expect(await count(knex, 'SELECT count(*) AS n FROM machines')).toBeGreaterThanOrEqual(24);
     expect(await count(knex, `SELECT count(DISTINCT region) AS n FROM machines WHERE region IN ('PAL', 'NTSC')`)).toBe(2);
     expect(await count(knex, 'SELECT count(DISTINCT device_type) AS n FROM machines')).toBeGreaterThanOrEqual(7);
-    expect(await count(knex, `SELECT count(*) AS n FROM fixes f JOIN revisions r ON r.id = f.current_revision_id WHERE r.state = 'proofed'`)).toBeGreaterThanOrEqual(40);
-    expect(await count(knex, `SELECT count(*) AS n FROM (SELECT fix_id FROM revisions GROUP BY fix_id HAVING count(*) > 1) x`)).toBeGreaterThanOrEqual(5);
+    expect(
+      await count(knex, `SELECT count(*) AS n FROM fixes f JOIN revisions r ON r.id = f.current_revision_id WHERE r.state = 'proofed'`),
+    ).toBeGreaterThanOrEqual(40);
+    expect(
+      await count(knex, `SELECT count(*) AS n FROM (SELECT fix_id FROM revisions GROUP BY fix_id HAVING count(*) > 1) x`),
+    ).toBeGreaterThanOrEqual(5);
     expect(await count(knex, 'SELECT count(*) AS n FROM bench_reports')).toBeGreaterThanOrEqual(120);
     expect(await count(knex, 'SELECT count(*) AS n FROM photos WHERE is_illustration')).toBeGreaterThan(0);
     // Every live fix is searchable (other tests may add drafts, which are not).
     expect(await count(knex, 'SELECT count(*) AS n FROM fix_search')).toBe(
-      await count(knex, 'SELECT count(*) AS n FROM fixes WHERE current_revision_id IS NOT NULL AND deleted_at IS NULL AND hidden_at IS NULL'),
+      await count(
+        knex,
+        'SELECT count(*) AS n FROM fixes WHERE current_revision_id IS NOT NULL AND deleted_at IS NULL AND hidden_at IS NULL',
+      ),
     );
     expect(await count(knex, `SELECT count(DISTINCT role) AS n FROM users`)).toBe(4);
   });

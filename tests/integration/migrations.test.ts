@@ -23,14 +23,36 @@ afterAll(async () => {
 });
 
 const tables = async (knex: Knex): Promise<string[]> =>
-  (await knex.raw(`SELECT tablename FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`)).rows.map((r: { tablename: string }) => r.tablename);
+  (await knex.raw(`SELECT tablename FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`)).rows.map(
+    (r: { tablename: string }) => r.tablename,
+  );
 
 describe('migrations', () => {
   it('migrate up, roll everything back, and migrate up again to the same tables', async () => {
     const migrations = { ...knexConfig.migrations };
     await scratch.migrate.latest(migrations);
     const first = await tables(scratch);
-    expect(first).toEqual(expect.arrayContaining(['users', 'accounts', 'sessions', 'verification_token', 'makers', 'chassis_families', 'machines', 'fixes', 'revisions', 'photos', 'bench_reports', 'handover_notes', 'job_sheets', 'word_families', 'reports', 'audit_log', 'fix_search']));
+    expect(first).toEqual(
+      expect.arrayContaining([
+        'users',
+        'accounts',
+        'sessions',
+        'verification_token',
+        'makers',
+        'chassis_families',
+        'machines',
+        'fixes',
+        'revisions',
+        'photos',
+        'bench_reports',
+        'handover_notes',
+        'job_sheets',
+        'word_families',
+        'reports',
+        'audit_log',
+        'fix_search',
+      ]),
+    );
 
     await scratch.migrate.rollback(migrations, true);
     expect((await tables(scratch)).filter((t) => !t.startsWith('knex_'))).toEqual([]);

@@ -16,7 +16,9 @@ describe('GET /api/v1/machines', () => {
     expect(body.items).toHaveLength(5);
     expect(body.total).toBeGreaterThanOrEqual(24);
     expect(body.pageCount).toBe(Math.ceil(body.total / 5));
-    expect(body.items[0]).toEqual(expect.objectContaining({ slug: expect.any(String), modelNumber: expect.any(String), maker: expect.any(Object) }));
+    expect(body.items[0]).toEqual(
+      expect.objectContaining({ slug: expect.any(String), modelNumber: expect.any(String), maker: expect.any(Object) }),
+    );
   });
 
   it('filters by device type and region', async () => {

@@ -14,7 +14,10 @@ async function page(path: string): Promise<{ status: number; html: string; heade
 async function fixWithCautions(): Promise<string> {
   const knex = testDb();
   try {
-    const row = await knex('fixes as f').join('revisions as r', 'r.id', 'f.current_revision_id').whereRaw(`jsonb_array_length(r.cautions) > 0`).first('f.slug');
+    const row = await knex('fixes as f')
+      .join('revisions as r', 'r.id', 'f.current_revision_id')
+      .whereRaw(`jsonb_array_length(r.cautions) > 0`)
+      .first('f.slug');
     return row.slug;
   } finally {
     await knex.destroy();
@@ -61,7 +64,10 @@ describe('catalogue and machine pages', () => {
 
   it('shows a machine with its chassis family and fixes, without script', async () => {
     const knex = testDb();
-    const machine = await knex('machines as m').whereNotNull('m.chassis_family_id').whereExists(knex('fix_machines').whereRaw('machine_id = m.id')).first('slug');
+    const machine = await knex('machines as m')
+      .whereNotNull('m.chassis_family_id')
+      .whereExists(knex('fix_machines').whereRaw('machine_id = m.id'))
+      .first('slug');
     await knex.destroy();
     const { status, html } = await page(`/machines/${machine.slug}`);
     expect(status).toBe(200);
@@ -81,11 +87,14 @@ describe('every response', () => {
 });
 
 describe('help pages', () => {
-  it.each(['/help', '/help/writing-a-good-fix', '/help/working-safely', '/help/house-rules', '/help/content-licence', '/help/privacy'])('%s renders', async (path) => {
-    const { status, html } = await page(path);
-    expect(status).toBe(200);
-    expect(html).toContain('<main');
-  });
+  it.each(['/help', '/help/writing-a-good-fix', '/help/working-safely', '/help/house-rules', '/help/content-licence', '/help/privacy'])(
+    '%s renders',
+    async (path) => {
+      const { status, html } = await page(path);
+      expect(status).toBe(200);
+      expect(html).toContain('<main');
+    },
+  );
 });
 
 describe('media', () => {

@@ -67,7 +67,10 @@ describe('the search page', () => {
     expect(html).toContain('Search every machine');
     expect(html).toContain(`href="/write?symptom=${encodeURIComponent(words).replace(/%20/g, '+')}&#38;machine=tamberlyn-dr4120-pal"`);
     await page(path);
-    const miss = await knex('search_misses as sm').join('machines as m', 'm.id', 'sm.machine_id').where('sm.query_norm', words).first('sm.count', 'm.slug');
+    const miss = await knex('search_misses as sm')
+      .join('machines as m', 'm.id', 'sm.machine_id')
+      .where('sm.query_norm', words)
+      .first('sm.count', 'm.slug');
     expect(miss).toEqual({ count: 2, slug: 'tamberlyn-dr4120-pal' });
   });
 
@@ -99,7 +102,12 @@ describe('GET /api/v1/search', () => {
     expect(status).toBe(200);
     expect(body.provider).toBe('postgres');
     expect(body.hits[0]).toMatchObject({ slug: 'tl2-tray-will-not-open-e21', benchScore: { reports: expect.any(Number) } });
-    expect(body).toMatchObject({ total: expect.any(Number), page: 1, perPage: 5, facets: expect.objectContaining({ maker: expect.any(Array) }) });
+    expect(body).toMatchObject({
+      total: expect.any(Number),
+      page: 1,
+      perPage: 5,
+      facets: expect.objectContaining({ maker: expect.any(Array) }),
+    });
   });
 
   it('answers bad parameters with 400 in the one error shape, naming the fields', async () => {
@@ -126,7 +134,11 @@ describe('GET /api/v1/search/similar', () => {
   it('answers fixes that look like the symptom, for the machine or its family, in the documented shape', async () => {
     const { status, body } = await api('/api/v1/search/similar?symptom=tray+will+not+open&machine=tamberlyn-dr4120k-pal');
     expect(status).toBe(200);
-    expect(body.machine).toEqual({ slug: 'tamberlyn-dr4120k-pal', label: 'Tamberlyn DR-4120K (PAL)', chassis: { slug: 'tamberlyn-tl2-loader', name: 'TL-2 DVD recorder loader platform' } });
+    expect(body.machine).toEqual({
+      slug: 'tamberlyn-dr4120k-pal',
+      label: 'Tamberlyn DR-4120K (PAL)',
+      chassis: { slug: 'tamberlyn-tl2-loader', name: 'TL-2 DVD recorder loader platform' },
+    });
     expect(body.items[0]).toEqual({
       slug: 'tl2-tray-will-not-open-e21',
       title: 'Tray will not open, display shows E-21',
@@ -162,7 +174,8 @@ describe('wanted fixes', () => {
 });
 
 describe('word families', () => {
-  const form = (fields: Record<string, string>, cookie = editorCookie) => postForm(base, '/admin/word-families', fields, { cookie, ip: uniqueClientIp() });
+  const form = (fields: Record<string, string>, cookie = editorCookie) =>
+    postForm(base, '/admin/word-families', fields, { cookie, ip: uniqueClientIp() });
   const made: number[] = [];
   afterAll(async () => {
     if (made.length) await knex('word_families').whereIn('id', made).delete();
@@ -194,9 +207,15 @@ describe('word families', () => {
     expect((await form({ intent: 'restore', id: String(family.id) })).status).toBe(303);
     expect((await search()).total).toBeGreaterThan(0);
 
-    const audit = await knex('audit_log').where({ subject_type: 'word_family', subject_id: String(family.id) }).orderBy('id').select('action', 'detail', 'actor_id');
+    const audit = await knex('audit_log')
+      .where({ subject_type: 'word_family', subject_id: String(family.id) })
+      .orderBy('id')
+      .select('action', 'detail', 'actor_id');
     expect(audit.map((a) => a.action)).toEqual(['word_family.create', 'word_family.update', 'word_family.retire', 'word_family.restore']);
-    expect(audit[1].detail).toEqual({ before: { name, terms: [word, 'spindle motor'], retired: false }, after: { name, terms: [word, 'fishy smell'], retired: false } });
+    expect(audit[1].detail).toEqual({
+      before: { name, terms: [word, 'spindle motor'], retired: false },
+      after: { name, terms: [word, 'fishy smell'], retired: false },
+    });
     expect(audit[2].detail.after.retired).toBe(true);
     expect(audit.every((a) => a.actor_id !== null)).toBe(true);
   });

@@ -36,7 +36,9 @@ afterAll(async () => {
 describe('index settings and documents', () => {
   it('sets searchable, filterable and sortable attributes, our ranking rules, and synonyms from word families', () => {
     const settings = fake.indexes.get(INDEX)!.settings as Record<string, any>;
-    expect(settings.filterableAttributes).toEqual(expect.arrayContaining(['makers', 'machines', 'chassis', 'deviceTypes', 'formats', 'cautions', 'hasPhotos']));
+    expect(settings.filterableAttributes).toEqual(
+      expect.arrayContaining(['makers', 'machines', 'chassis', 'deviceTypes', 'formats', 'cautions', 'hasPhotos']),
+    );
     expect(settings.rankingRules).toEqual(['words', 'typo', 'proximity', 'attribute', 'exactness', 'benchRank:desc']);
     expect(settings.typoTolerance.disableOnAttributes).toEqual(['codes']);
     // The demo world's "tray" family (src/server/seed/demo/word-families.ts).
@@ -49,7 +51,11 @@ describe('index settings and documents', () => {
     const docs = [...fake.indexes.get(INDEX)!.docs.values()];
     expect(docs).toHaveLength(Number(live?.n));
     const e21 = docs.find((d) => d.slug === 'tl2-tray-will-not-open-e21')!;
-    expect(e21).toMatchObject({ codes: expect.arrayContaining(['e21', 'dr4120', 'tl2']), makers: ['tamberlyn'], familyChassis: ['tamberlyn-tl2-loader'] });
+    expect(e21).toMatchObject({
+      codes: expect.arrayContaining(['e21', 'dr4120', 'tl2']),
+      makers: ['tamberlyn'],
+      familyChassis: ['tamberlyn-tl2-loader'],
+    });
     expect(e21.machines).toContain('tamberlyn-dr4120-pal');
   });
 
@@ -71,7 +77,11 @@ describe('searching', () => {
     await provider.search(ask({ text: 'tray', machine: 'tamberlyn-dr4120-pal', filters: { caution: 'laser', hasPhotos: true } }));
     const body = searchRequests().at(-1)!.body as Record<string, any>;
     expect(body.q).toBe('tray');
-    expect(body.filter).toEqual(['(machines = "tamberlyn-dr4120-pal" OR familyChassis = "tamberlyn-tl2-loader")', 'hasPhotos = true', 'cautions = "laser"']);
+    expect(body.filter).toEqual([
+      '(machines = "tamberlyn-dr4120-pal" OR familyChassis = "tamberlyn-tl2-loader")',
+      'hasPhotos = true',
+      'cautions = "laser"',
+    ]);
     expect(body).toMatchObject({ showRankingScore: true, highlightPreTag: MARK_START, matchingStrategy: 'last' });
   });
 
@@ -103,7 +113,15 @@ describe('searching', () => {
 
   it('escapes quotes and backslashes in filter values, so a hostile value cannot widen the filter', async () => {
     const odd = 'say "hi" \\ there';
-    fake.indexes.get(INDEX)!.docs.set('9999001', { id: 9999001, slug: 'odd', title: 'odd maker test', makers: [odd], machines: [], chassis: [], familyChassis: [] });
+    fake.indexes.get(INDEX)!.docs.set('9999001', {
+      id: 9999001,
+      slug: 'odd',
+      title: 'odd maker test',
+      makers: [odd],
+      machines: [],
+      chassis: [],
+      familyChassis: [],
+    });
     try {
       const quoted = buildFilter(ask({ filters: { maker: odd } }), null, []);
       expect(quoted).toEqual(['makers = "say \\"hi\\" \\\\ there"']);
@@ -126,7 +144,9 @@ describe('the sync queue', () => {
     const author = await knex('users').where({ email: 'member@example.test' }).first('id');
     const proofer = await knex('users').where({ email: 'moderator@example.test' }).first('id');
     const machine = await knex('machines').where({ slug: 'kestrune-kt44-multi' }).first('id');
-    const [fix] = await knex('fixes').insert({ slug: `search-sync-check-${Date.now()}`, created_by: author.id }).returning('id');
+    const [fix] = await knex('fixes')
+      .insert({ slug: `search-sync-check-${Date.now()}`, created_by: author.id })
+      .returning('id');
     fixId = fix.id;
     const [revision] = await knex('revisions')
       .insert({
@@ -169,7 +189,10 @@ describe('the sync queue', () => {
     await sendSearchSync(knex, { fixId }, quickRetry);
     // The worker tries, fails against the closed port, and pg-boss keeps the job for a retry.
     await new Promise((r) => setTimeout(r, 2500));
-    const job = await knex.raw(`SELECT state, retry_count FROM pgboss.job WHERE name = 'search-sync' AND data->>'fixId' = ? ORDER BY created_on DESC LIMIT 1`, [String(fixId)]);
+    const job = await knex.raw(
+      `SELECT state, retry_count FROM pgboss.job WHERE name = 'search-sync' AND data->>'fixId' = ? ORDER BY created_on DESC LIMIT 1`,
+      [String(fixId)],
+    );
     expect(job.rows[0].state).toBe('retry');
     expect(job.rows[0].retry_count).toBeGreaterThanOrEqual(1);
     expect(docs().has(String(fixId))).toBe(false);
@@ -177,6 +200,23 @@ describe('the sync queue', () => {
     expect(await until(() => docs().has(String(fixId)), 20)).toBe(true);
     expect(docs().get(String(fixId))?.title).toBe('Sync check: take-up idler slips');
   }, 60_000);
+
+  it('sends a job inside the caller’s transaction: a rolled-back change leaves no job behind', async () => {
+    const marker = 987654321;
+    await knex
+      .transaction(async (trx) => {
+        await sendSearchSync(trx, { fixId: marker }, quickRetry);
+        throw new Error('roll back');
+      })
+      .catch(() => undefined);
+    const count = async (id: number) =>
+      (await knex.raw(`SELECT count(*)::int AS n FROM pgboss.job WHERE name = 'search-sync' AND data->>'fixId' = ?`, [String(id)])).rows[0]
+        .n;
+    expect(await count(marker)).toBe(0);
+    // The same call in a transaction that commits does leave its job (the worker then finds no such fix).
+    await knex.transaction((trx) => sendSearchSync(trx, { fixId: marker + 1 }, quickRetry));
+    expect(await count(marker + 1)).toBe(1);
+  });
 
   it('removes the document when the fix is no longer live', async () => {
     await knex('fixes').where({ id: fixId }).update({ deleted_at: new Date() });
@@ -187,21 +227,24 @@ describe('the sync queue', () => {
 });
 
 // A real server is only checked where one is configured; none can be installed on the development machines.
-describe.skipIf(!process.env.MEILI_URL)('against a real Meilisearch server (skipped unless MEILI_URL is set: none can be installed here)', () => {
-  let real: MeiliIndex;
-  beforeAll(() => {
-    real = new MeiliIndex({ url: process.env.MEILI_URL ?? '', key: process.env.MEILI_KEY, index: `benchlore_test_${Date.now()}` });
-  });
-  afterAll(async () => {
-    await real?.drop();
-  });
+describe.skipIf(!process.env.MEILI_URL)(
+  'against a real Meilisearch server (skipped unless MEILI_URL is set: none can be installed here)',
+  () => {
+    let real: MeiliIndex;
+    beforeAll(() => {
+      real = new MeiliIndex({ url: process.env.MEILI_URL ?? '', key: process.env.MEILI_KEY, index: `benchlore_test_${Date.now()}` });
+    });
+    afterAll(async () => {
+      await real?.drop();
+    });
 
-  it('takes our settings and documents and answers a code-filtered search', async () => {
-    const sent = await reindexMeili(knex, real);
-    expect(sent).toBeGreaterThan(40);
-    const result = await new MeiliSearchProvider(knex, real).search(ask({ text: 'E-21' }));
-    expect(result.hits.map((h) => h.slug)).toContain('tl2-tray-will-not-open-e21');
-    const typo = await new MeiliSearchProvider(knex, real).search(ask({ text: 'KX-45N' }));
-    expect(typo.total).toBe(0);
-  });
-});
+    it('takes our settings and documents and answers a code-filtered search', async () => {
+      const sent = await reindexMeili(knex, real);
+      expect(sent).toBeGreaterThan(40);
+      const result = await new MeiliSearchProvider(knex, real).search(ask({ text: 'E-21' }));
+      expect(result.hits.map((h) => h.slug)).toContain('tl2-tray-will-not-open-e21');
+      const typo = await new MeiliSearchProvider(knex, real).search(ask({ text: 'KX-45N' }));
+      expect(typo.total).toBe(0);
+    });
+  },
+);

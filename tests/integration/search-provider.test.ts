@@ -28,7 +28,10 @@ describe('codes', () => {
   it('finds a model number however it is typed', async () => {
     for (const typed of ['KT-44', 'kt44', 'KT 44', 'kt.44']) {
       const result = await search({ text: typed });
-      expect(result.hits.map((h) => h.slug), typed).toContain('kt44-play-stops-idler-tyre');
+      expect(
+        result.hits.map((h) => h.slug),
+        typed,
+      ).toContain('kt44-play-stops-idler-tyre');
     }
   });
 
@@ -57,7 +60,9 @@ describe('words', () => {
     const result = await search({ text: 'drawr opens then closes' });
     expect(result.corrections).toEqual([{ from: 'drawr', to: 'drawer' }]);
     // "drawer" is in the tray family, so tray fixes come up too.
-    expect(result.hits.slice(0, 3).map((h) => h.slug)).toEqual(expect.arrayContaining(['tl2-tray-opens-then-closes', 'kl9-drawer-opens-then-closes']));
+    expect(result.hits.slice(0, 3).map((h) => h.slug)).toEqual(
+      expect.arrayContaining(['tl2-tray-opens-then-closes', 'kl9-drawer-opens-then-closes']),
+    );
   });
 
   it('leaves out an unknown first word and returns what the other words find', async () => {
@@ -80,7 +85,7 @@ describe('words', () => {
     const result = await search({ text: 'drawer' });
     const hit = result.hits.find((h) => h.slug === 'tl2-tray-opens-then-closes');
     expect(hit?.titleHtml).toBe('<mark>Tray</mark> opens then closes again by itself');
-    expect(hit?.snippetHtml).toContain("won&#39;t");
+    expect(hit?.snippetHtml).toContain('won&#39;t');
   });
 });
 
@@ -98,13 +103,23 @@ describe('filters and facets', () => {
     expect(maker.hits.every((h) => h.machines.some((m) => m.label.startsWith('Kestrune')))).toBe(true);
   });
 
-  it('counts facets that agree with the filtered searches', async () => {
-    const all = await search({ text: 'no power' });
+  it('counts facets over the full matches, agreeing with the filtered searches', async () => {
+    const all = await search({ text: 'belt' });
+    // Counted to the end (not a broad query's sample), so the counts must agree exactly.
+    expect(all.totalIsLowerBound).toBe(false);
+    expect(all.facetsFromSample).toBe(false);
     expect(all.facets.maker.length).toBeGreaterThan(1);
     for (const facet of all.facets.maker) {
-      const narrowed = await search({ text: 'no power', filters: { maker: facet.value } });
-      expect(narrowed.total, facet.value).toBe(facet.count);
+      const narrowed = await search({ text: 'belt', filters: { maker: facet.value } });
+      expect(narrowed.totalMatchingAll, facet.value).toBe(facet.count);
     }
+  });
+
+  it('says when a broad query was counted only so far and its facets come from its best matches', async () => {
+    const broad = await search({ text: 'remove' });
+    expect(broad.totalIsLowerBound).toBe(true);
+    expect(broad.facetsFromSample).toBe(true);
+    expect(broad.total).toBeGreaterThanOrEqual(30);
   });
 
   it('finds nothing for a maker that does not exist, rather than ignoring the filter', async () => {
@@ -173,7 +188,9 @@ describe('keeping the index current', () => {
     const author = await knex('users').where({ email: 'member@example.test' }).first('id');
     const proofer = await knex('users').where({ email: 'moderator@example.test' }).first('id');
     const machine = await knex('machines').where({ slug: 'brindlecote-bcd15-multi' }).first('id');
-    const [fix] = await knex('fixes').insert({ slug: `search-upkeep-${Date.now()}`, created_by: author.id }).returning('id');
+    const [fix] = await knex('fixes')
+      .insert({ slug: `search-upkeep-${Date.now()}`, created_by: author.id })
+      .returning('id');
     fixId = fix.id;
     const [revision] = await knex('revisions')
       .insert({

@@ -139,7 +139,9 @@ function filterTest(filter: unknown, filterable: string[]): Test {
   if (filter === undefined || filter === null || filter === '') return () => true;
   if (typeof filter === 'string') return parseFilter(filter, filterable);
   if (!Array.isArray(filter)) throw new FilterError('filter must be a string or an array');
-  const parts = filter.map((f) => (Array.isArray(f) ? ((d: Doc) => f.some((g) => parseFilter(String(g), filterable)(d))) : parseFilter(String(f), filterable)));
+  const parts = filter.map((f) =>
+    Array.isArray(f) ? (d: Doc) => f.some((g) => parseFilter(String(g), filterable)(d)) : parseFilter(String(f), filterable),
+  );
   return (d) => parts.every((p) => p(d));
 }
 
@@ -151,7 +153,13 @@ function searchDocs(index: FakeIndex, body: Record<string, unknown>) {
   const synonyms = (index.settings.synonyms as Record<string, string[]> | undefined) ?? {};
   const test = filterTest(body.filter, filterable);
   const queryWords = words(String(body.q ?? ''));
-  const textOf = (d: Doc) => words(Object.entries(d).filter(([k]) => searchable.includes('*') || searchable.includes(k)).map(([, v]) => (Array.isArray(v) ? v.join(' ') : String(v))).join(' '));
+  const textOf = (d: Doc) =>
+    words(
+      Object.entries(d)
+        .filter(([k]) => searchable.includes('*') || searchable.includes(k))
+        .map(([, v]) => (Array.isArray(v) ? v.join(' ') : String(v)))
+        .join(' '),
+    );
   const matches = (d: Doc, w: string) => {
     const text = textOf(d);
     return [w, ...(synonyms[w] ?? [])].some((alt) => words(alt).every((part) => text.includes(part)));
@@ -164,7 +172,9 @@ function searchDocs(index: FakeIndex, body: Record<string, unknown>) {
     hits = candidates.filter((d) => queryWords.slice(0, used).every((w) => matches(d, w)));
   }
   const score = (d: Doc) => (queryWords.length === 0 ? 1 : queryWords.filter((w) => matches(d, w)).length / queryWords.length);
-  hits.sort((a, b) => score(b) - score(a) || Number(b.benchRank ?? 0) - Number(a.benchRank ?? 0) || String(a.id).localeCompare(String(b.id)));
+  hits.sort(
+    (a, b) => score(b) - score(a) || Number(b.benchRank ?? 0) - Number(a.benchRank ?? 0) || String(a.id).localeCompare(String(b.id)),
+  );
   return { hits, score, queryWords };
 }
 
@@ -173,7 +183,8 @@ function facetDistribution(hits: Doc[], facets: string[], filterable: string[]):
   for (const facet of facets) {
     if (!filterable.includes(facet)) throw new FilterError(`Attribute \`${facet}\` is not filterable.`);
     const counts: Record<string, number> = {};
-    for (const hit of hits) for (const v of [hit[facet]].flat()) if (v !== undefined && v !== null) counts[String(v)] = (counts[String(v)] ?? 0) + 1;
+    for (const hit of hits)
+      for (const v of [hit[facet]].flat()) if (v !== undefined && v !== null) counts[String(v)] = (counts[String(v)] ?? 0) + 1;
     out[facet] = counts;
   }
   return out;
@@ -213,12 +224,24 @@ export class FakeMeili {
   }
 
   private enqueue(indexUid: string | null, type: string, apply: () => void): { status: number; body: unknown } {
-    const task: FakeTask = { uid: this.tasks.length, indexUid, status: 'succeeded', type, error: null, enqueuedAt: new Date().toISOString() };
+    const task: FakeTask = {
+      uid: this.tasks.length,
+      indexUid,
+      status: 'succeeded',
+      type,
+      error: null,
+      enqueuedAt: new Date().toISOString(),
+    };
     try {
       apply();
     } catch (error) {
       task.status = 'failed';
-      task.error = { code: (error as { code?: string }).code ?? 'internal', message: String((error as Error).message), type: 'invalid_request', link: '' };
+      task.error = {
+        code: (error as { code?: string }).code ?? 'internal',
+        message: String((error as Error).message),
+        type: 'invalid_request',
+        link: '',
+      };
     }
     this.tasks.push(task);
     return { status: 202, body: { taskUid: task.uid, indexUid, status: 'enqueued', type, enqueuedAt: task.enqueuedAt } };
@@ -235,7 +258,9 @@ export class FakeMeili {
     if (root === 'health') return { status: 200, body: { status: 'available' } };
     if (root === 'tasks' && uid !== undefined) {
       const task = this.tasks[Number(uid)];
-      return task ? { status: 200, body: task } : { status: 404, body: { message: 'task not found', code: 'task_not_found', type: 'invalid_request', link: '' } };
+      return task
+        ? { status: 200, body: task }
+        : { status: 404, body: { message: 'task not found', code: 'task_not_found', type: 'invalid_request', link: '' } };
     }
     if (root === 'swap-indexes' && method === 'POST') {
       return this.enqueue(null, 'indexSwap', () => {
@@ -252,7 +277,8 @@ export class FakeMeili {
     if (root !== 'indexes') return { status: 404, body: { message: 'not found', code: 'not_found', type: 'invalid_request', link: '' } };
     if (method === 'POST' && uid === undefined) {
       return this.enqueue(body.uid, 'indexCreation', () => {
-        if (this.indexes.has(body.uid)) throw Object.assign(new Error(`Index \`${body.uid}\` already exists.`), { code: 'index_already_exists' });
+        if (this.indexes.has(body.uid))
+          throw Object.assign(new Error(`Index \`${body.uid}\` already exists.`), { code: 'index_already_exists' });
         this.index(body.uid).primaryKey = body.primaryKey ?? null;
       });
     }
@@ -264,7 +290,10 @@ export class FakeMeili {
       });
     }
     if (section === 'settings' && method === 'GET') return existing ? { status: 200, body: existing.settings } : notFound(uid);
-    if (section === 'settings') return this.enqueue(uid, 'settingsUpdate', () => Object.assign(this.index(uid).settings, sub === 'synonyms' ? { synonyms: body } : body));
+    if (section === 'settings')
+      return this.enqueue(uid, 'settingsUpdate', () =>
+        Object.assign(this.index(uid).settings, sub === 'synonyms' ? { synonyms: body } : body),
+      );
     if (section === 'documents' && method === 'POST' && sub === undefined) {
       return this.enqueue(uid, 'documentAdditionOrUpdate', () => {
         const index = this.index(uid);
@@ -273,11 +302,16 @@ export class FakeMeili {
         for (const doc of body as Doc[]) index.docs.set(String(doc[key]), doc);
       });
     }
-    if (section === 'documents' && sub === 'delete-batch') return this.enqueue(uid, 'documentDeletion', () => (body as unknown[]).forEach((id) => this.index(uid).docs.delete(String(id))));
+    if (section === 'documents' && sub === 'delete-batch')
+      return this.enqueue(uid, 'documentDeletion', () => (body as unknown[]).forEach((id) => this.index(uid).docs.delete(String(id))));
     if (section === 'documents' && method === 'DELETE') return this.enqueue(uid, 'documentDeletion', () => this.index(uid).docs.clear());
     if (section === 'search' && method === 'POST') return existing ? this.search(existing, body) : notFound(uid);
-    if (section === undefined && method === 'GET') return existing ? { status: 200, body: { uid, primaryKey: existing.primaryKey } } : notFound(uid);
-    return { status: 404, body: { message: `no route ${method} ${parts.join('/')}`, code: 'not_found', type: 'invalid_request', link: '' } };
+    if (section === undefined && method === 'GET')
+      return existing ? { status: 200, body: { uid, primaryKey: existing.primaryKey } } : notFound(uid);
+    return {
+      status: 404,
+      body: { message: `no route ${method} ${parts.join('/')}`, code: 'not_found', type: 'invalid_request', link: '' },
+    };
   }
 
   private search(index: FakeIndex, body: Record<string, any>): { status: number; body: unknown } {
@@ -288,17 +322,35 @@ export class FakeMeili {
       const limit = Number(body.limit ?? 20);
       const retrieve = body.attributesToRetrieve as string[] | undefined;
       const page = hits.slice(offset, offset + limit).map((doc) => {
-        const shown: Record<string, unknown> = retrieve && !retrieve.includes('*') ? Object.fromEntries(retrieve.filter((a) => a in doc).map((a) => [a, doc[a]])) : { ...doc };
+        const shown: Record<string, unknown> =
+          retrieve && !retrieve.includes('*') ? Object.fromEntries(retrieve.filter((a) => a in doc).map((a) => [a, doc[a]])) : { ...doc };
         if (body.showRankingScore) shown._rankingScore = score(doc);
         if (body.attributesToHighlight) {
-          shown._formatted = Object.fromEntries((body.attributesToHighlight as string[]).map((a) => [a, highlight(doc[a], queryWords, body.highlightPreTag ?? '<em>', body.highlightPostTag ?? '</em>')]));
+          shown._formatted = Object.fromEntries(
+            (body.attributesToHighlight as string[]).map((a) => [
+              a,
+              highlight(doc[a], queryWords, body.highlightPreTag ?? '<em>', body.highlightPostTag ?? '</em>'),
+            ]),
+          );
         }
         return shown;
       });
       const facets = body.facets ? facetDistribution(hits, body.facets, filterable) : undefined;
-      return { status: 200, body: { hits: page, query: body.q ?? '', offset, limit, estimatedTotalHits: hits.length, processingTimeMs: 0, ...(facets ? { facetDistribution: facets } : {}) } };
+      return {
+        status: 200,
+        body: {
+          hits: page,
+          query: body.q ?? '',
+          offset,
+          limit,
+          estimatedTotalHits: hits.length,
+          processingTimeMs: 0,
+          ...(facets ? { facetDistribution: facets } : {}),
+        },
+      };
     } catch (error) {
-      if (error instanceof FilterError) return { status: 400, body: { message: error.message, code: 'invalid_search_filter', type: 'invalid_request', link: '' } };
+      if (error instanceof FilterError)
+        return { status: 400, body: { message: error.message, code: 'invalid_search_filter', type: 'invalid_request', link: '' } };
       throw error;
     }
   }

@@ -1,4 +1,8 @@
 // Slugs in addresses: lower-case words joined by dashes.
 import { z } from 'zod';
 
-export const slugSchema = z.string().min(1).max(120).regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'Use lower-case letters, digits and dashes.');
+export const slugSchema = z
+  .string()
+  .min(1)
+  .max(120)
+  .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'Use lower-case letters, digits and dashes.');

@@ -38,11 +38,26 @@ export function countFacets(rows: readonly FacetRow[], makers: Named, chassis: N
     return found ? { value: found.slug, label: found.name } : null;
   };
   return {
-    maker: labelled(tally(rows, (r) => r.makerIds), byId(makers)),
-    chassis: labelled(tally(rows, (r) => r.chassisIds), byId(chassis)),
-    deviceType: labelled(tally(rows, (r) => r.deviceTypes), (v) => ({ value: v, label: deviceTypeLabels[v as DeviceType] ?? v })),
-    format: labelled(tally(rows, (r) => r.formats), (v) => ({ value: v, label: v })),
-    caution: labelled(tally(rows, (r) => r.cautionKinds), (v) => ({ value: v, label: cautionLabels[v as CautionKind] ?? v })),
+    maker: labelled(
+      tally(rows, (r) => r.makerIds),
+      byId(makers),
+    ),
+    chassis: labelled(
+      tally(rows, (r) => r.chassisIds),
+      byId(chassis),
+    ),
+    deviceType: labelled(
+      tally(rows, (r) => r.deviceTypes),
+      (v) => ({ value: v, label: deviceTypeLabels[v as DeviceType] ?? v }),
+    ),
+    format: labelled(
+      tally(rows, (r) => r.formats),
+      (v) => ({ value: v, label: v }),
+    ),
+    caution: labelled(
+      tally(rows, (r) => r.cautionKinds),
+      (v) => ({ value: v, label: cautionLabels[v as CautionKind] ?? v }),
+    ),
     hasPhotos: rows.filter((r) => r.hasPhotos).length,
   };
 }

@@ -17,6 +17,7 @@ export function escapeHtml(text: string): string {
 export function markedHtml(marked: string): string {
   let html = '';
   let open = false;
+  // eslint-disable-next-line no-control-regex -- the markers are control characters on purpose
   for (const part of marked.split(/([\u0002\u0003])/)) {
     if (part === MARK_START) {
       if (!open) html += '<mark>';
@@ -25,6 +26,7 @@ export function markedHtml(marked: string): string {
       if (open) html += '</mark>';
       open = false;
     } else {
+      // eslint-disable-next-line no-control-regex -- other control characters are dropped from the text
       html += escapeHtml(part.replace(/[\u0000-\u0008\u000b\u000c\u000e-\u001f]/g, ''));
     }
   }
@@ -33,5 +35,6 @@ export function markedHtml(marked: string): string {
 
 /** Removes the markers from text that will be used as plain text. */
 export function stripMarks(text: string): string {
+  // eslint-disable-next-line no-control-regex -- the markers are control characters on purpose
   return text.replace(/[\u0002\u0003]/g, '');
 }

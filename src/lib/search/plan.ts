@@ -55,16 +55,25 @@ export interface SearchPlan {
  * Best stored word for an unknown one: fewest slips, then a word of some word family (the trade's own
  * vocabulary: "drawr" is "drawer", not "draw"), then the most used, then alphabetical.
  */
-export function correctWord(word: string, candidates: readonly { word: string; ndoc: number }[], preferred: ReadonlySet<string> = new Set()): string | null {
+export function correctWord(
+  word: string,
+  candidates: readonly { word: string; ndoc: number }[],
+  preferred: ReadonlySet<string> = new Set(),
+): string | null {
   const limit = allowedEdits(word.length);
   if (limit === 0) return null;
-  const key = (c: { word: string; distance: number; ndoc: number }): [number, number, number] => [c.distance, preferred.has(c.word) ? 0 : 1, -c.ndoc];
+  const key = (c: { word: string; distance: number; ndoc: number }): [number, number, number] => [
+    c.distance,
+    preferred.has(c.word) ? 0 : 1,
+    -c.ndoc,
+  ];
   let best: { word: string; distance: number; ndoc: number } | null = null;
   for (const candidate of candidates) {
     const distance = editDistance(word, candidate.word, limit);
     if (distance > limit) continue;
     const scored = { word: candidate.word, distance, ndoc: candidate.ndoc };
-    if (!best || compareKeys(key(scored), key(best)) < 0 || (compareKeys(key(scored), key(best)) === 0 && scored.word < best.word)) best = scored;
+    if (!best || compareKeys(key(scored), key(best)) < 0 || (compareKeys(key(scored), key(best)) === 0 && scored.word < best.word))
+      best = scored;
   }
   return best?.word ?? null;
 }
@@ -117,13 +126,27 @@ function codeClauses(parsed: ParsedQuery, vocabulary: Vocabulary, consumed: Set<
         continue;
       }
       // A code no fix carries: it must be found as written, never as a neighbour's code.
-      clauses.push({ kind: 'text', label: texts.join(' '), terms: [texts.join(''), `"${texts.join(' ')}"`], alternatives: [], soft: false, exact: true, position: -1 });
+      clauses.push({
+        kind: 'text',
+        label: texts.join(' '),
+        terms: [texts.join(''), `"${texts.join(' ')}"`],
+        alternatives: [],
+        soft: false,
+        exact: true,
+        position: -1,
+      });
     }
   }
   return clauses;
 }
 
-function wordsOf(parsed: ParsedQuery, vocabulary: Vocabulary, families: readonly WordFamily[], consumed: ReadonlySet<number>, plan: SearchPlan): Word[] {
+function wordsOf(
+  parsed: ParsedQuery,
+  vocabulary: Vocabulary,
+  families: readonly WordFamily[],
+  consumed: ReadonlySet<number>,
+  plan: SearchPlan,
+): Word[] {
   const familyWords = familyVocabulary(families);
   const words: Word[] = [];
   parsed.pieces.forEach((piece, i) => {
@@ -162,11 +185,20 @@ export function buildPlan(parsed: ParsedQuery, vocabulary: Vocabulary, families:
     plainWords(next, span.from);
     const typed = words.slice(span.from, span.to);
     const allStop = typed.every((w) => w.stop);
-    textClauses.push({ kind: 'text', label: typed.map((w) => w.text).join(' '), terms: [quoteMultiWord(span.term)], alternatives: span.alternatives.map(quoteMultiWord), soft: allStop, exact: false, position: span.from });
+    textClauses.push({
+      kind: 'text',
+      label: typed.map((w) => w.text).join(' '),
+      terms: [quoteMultiWord(span.term)],
+      alternatives: span.alternatives.map(quoteMultiWord),
+      soft: allStop,
+      exact: false,
+      position: span.from,
+    });
     next = span.to;
   }
   plainWords(next, words.length);
-  for (const phrase of parsed.phrases) textClauses.push({ kind: 'text', label: phrase, terms: [`"${phrase}"`], alternatives: [], soft: false, exact: true, position: -1 });
+  for (const phrase of parsed.phrases)
+    textClauses.push({ kind: 'text', label: phrase, terms: [`"${phrase}"`], alternatives: [], soft: false, exact: true, position: -1 });
   plan.clauses = [...textClauses, ...codes];
   return plan;
 }

@@ -13,9 +13,7 @@ export type SearchScope = (typeof searchScopes)[number];
 export const MAX_PAGE = 50;
 export const DEFAULT_PER_PAGE = 10;
 
-const flag = z
-  .enum(['1', 'true', 'yes', 'on'], { error: 'Use photos=1 to keep only fixes with photos.' })
-  .transform(() => true as const);
+const flag = z.enum(['1', 'true', 'yes', 'on'], { error: 'Use photos=1 to keep only fixes with photos.' }).transform(() => true as const);
 
 export const searchParamsSchema = z.object({
   q: z.string().trim().max(MAX_QUERY_LENGTH, `Keep the search under ${MAX_QUERY_LENGTH} characters.`).default(''),

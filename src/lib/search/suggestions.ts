@@ -14,7 +14,10 @@ export function widerSearches(query: SearchQuery, machine: NamedMachine | null):
     suggestions.push({ href: searchHref(query, { scope: 'family', page: 1 }), label: `Search the whole ${machine.chassis.name} family` });
   }
   if (machine && query.scope !== 'all') {
-    suggestions.push({ href: searchHref(query, { scope: 'all', page: 1 }), label: `Search every machine (fixes for the ${machine.label} first)` });
+    suggestions.push({
+      href: searchHref(query, { scope: 'all', page: 1 }),
+      label: `Search every machine (fixes for the ${machine.label} first)`,
+    });
   }
   if (Object.keys(query.filters).length > 0) {
     suggestions.push({ href: searchHref(query, { filters: {}, page: 1 }), label: 'Search without the filters' });

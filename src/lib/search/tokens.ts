@@ -40,7 +40,7 @@ export function piecesOf(folded: string): Piece[] {
     const start = match.index ?? 0;
     const between = lastEnd < 0 ? '' : folded.slice(lastEnd, start);
     const joinsPrevious = lastEnd >= 0 && /^[\s\-./_]+$/.test(between);
-    pieces.push({ text: match[0], hasDigit: /\p{N}/u.test(match[0]), joinsPrevious, tight: joinsPrevious && /^[\-./_]+$/.test(between) });
+    pieces.push({ text: match[0], hasDigit: /\p{N}/u.test(match[0]), joinsPrevious, tight: joinsPrevious && /^[-./_]+$/.test(between) });
     lastEnd = start + match[0].length;
   }
   return pieces;
@@ -52,7 +52,9 @@ export function parseQuery(raw: string): ParsedQuery {
   const phrases: string[] = [];
   // A quote left open runs to the end of the query.
   const unquoted = folded.replace(/"([^"]*)("|$)/g, (_all, inner: string) => {
-    const phrase = piecesOf(inner).map((p) => p.text).join(' ');
+    const phrase = piecesOf(inner)
+      .map((p) => p.text)
+      .join(' ');
     if (phrase) phrases.push(phrase);
     return ' ';
   });

@@ -55,7 +55,16 @@ function compileTerms(plan: SearchPlan, termQueries: Map<string, string>, stems:
   for (const term of planTerms(plan)) {
     const family = termQueries.get(term);
     if (family !== undefined) compiled.set(term, family);
-    else if (term.startsWith('"')) compiled.set(term, phraseQuery(term.replace(/"/g, '').split(' ').map((w) => stems.get(w) ?? w)));
+    else if (term.startsWith('"'))
+      compiled.set(
+        term,
+        phraseQuery(
+          term
+            .replace(/"/g, '')
+            .split(' ')
+            .map((w) => stems.get(w) ?? w),
+        ),
+      );
     else compiled.set(term, wordQuery(term));
   }
   return compiled;
@@ -72,7 +81,10 @@ function compileClause(clause: TextClause, compiled: Map<string, string>): Compi
 
 export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQuery> {
   const parsed = parseQuery(text);
-  const [{ vocabulary, stems }, { families, termQueries }] = await Promise.all([lookupVocabulary(knex, parsed), compiledWordFamilies(knex)]);
+  const [{ vocabulary, stems }, { families, termQueries }] = await Promise.all([
+    lookupVocabulary(knex, parsed),
+    compiledWordFamilies(knex),
+  ]);
   const plan = buildPlan(parsed, vocabulary, families);
   const compiled = compileTerms(plan, termQueries, stems);
   const textClauses = plan.clauses.filter((c): c is TextClause => c.kind === 'text').map((c) => compileClause(c, compiled));

@@ -29,7 +29,18 @@ export async function findNamedMachine(knex: Knex, slug: string): Promise<Resolv
     })
     .where('m.slug', slug)
     .whereNull('m.deleted_at')
-    .first('m.id', 'm.slug', 'm.model_number', 'm.region', 'mk.id as maker_id', 'mk.slug as maker_slug', 'mk.name as maker_name', 'c.id as chassis_id', 'c.slug as chassis_slug', 'c.name as chassis_name');
+    .first(
+      'm.id',
+      'm.slug',
+      'm.model_number',
+      'm.region',
+      'mk.id as maker_id',
+      'mk.slug as maker_slug',
+      'mk.name as maker_name',
+      'c.id as chassis_id',
+      'c.slug as chassis_slug',
+      'c.name as chassis_name',
+    );
   if (!row) return null;
   return {
     id: row.id,

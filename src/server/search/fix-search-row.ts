@@ -35,7 +35,17 @@ async function appliesTo(knex: Knex, fixId: number): Promise<{ machines: Machine
       .join('makers as mk', 'mk.id', 'm.maker_id')
       .leftJoin('chassis_families as c', 'c.id', 'm.chassis_family_id')
       .where('fm.fix_id', fixId)
-      .select('m.id', 'm.maker_id', 'mk.name as maker_name', 'm.model_number', 'm.model_code', 'm.chassis_family_id', 'c.code as chassis_code', 'm.device_type', 'm.formats'),
+      .select(
+        'm.id',
+        'm.maker_id',
+        'mk.name as maker_name',
+        'm.model_number',
+        'm.model_code',
+        'm.chassis_family_id',
+        'c.code as chassis_code',
+        'm.device_type',
+        'm.formats',
+      ),
     knex('fix_chassis as fc')
       .join('chassis_families as c', 'c.id', 'fc.chassis_family_id')
       .join('makers as mk', 'mk.id', 'c.maker_id')

@@ -26,7 +26,15 @@ interface HitRow {
   title_marked: string | null;
   snippet_marked: string | null;
   machines: string[] | null;
-  photo: { id: number; alt_text: string; caption: string; width: number; height: number; is_illustration: boolean; renditions: Rendition[] } | null;
+  photo: {
+    id: number;
+    alt_text: string;
+    caption: string;
+    width: number;
+    height: number;
+    is_illustration: boolean;
+    renditions: Rendition[];
+  } | null;
 }
 
 /** Marked text from the database, or plain text escaped when nothing was marked. */
@@ -54,11 +62,19 @@ function thumbnailOf(photo: HitRow['photo']): SearchHitThumbnail | null {
 }
 
 /** Hits in the order given. `marks` overrides the highlighted title and snippet (the Meilisearch adapter's own). */
-export async function hydrateHits(knex: Knex, ranked: RankedRow[], tsquery: string, marks?: Map<number, { title: string; snippet: string }>): Promise<SearchHit[]> {
+export async function hydrateHits(
+  knex: Knex,
+  ranked: RankedRow[],
+  tsquery: string,
+  marks?: Map<number, { title: string; snippet: string }>,
+): Promise<SearchHit[]> {
   if (ranked.length === 0) return [];
   const rows: HitRow[] = await knex('fix_search as s')
     .join('fixes as f', 'f.id', 's.fix_id')
-    .whereIn('s.fix_id', ranked.map((r) => r.fixId))
+    .whereIn(
+      's.fix_id',
+      ranked.map((r) => r.fixId),
+    )
     .select(
       's.fix_id',
       'f.slug',
@@ -94,7 +110,9 @@ export async function hydrateHits(knex: Knex, ranked: RankedRow[], tsquery: stri
         slug: row.slug,
         title: row.title,
         titleHtml: own ? markedHtml(own.title) : row.title_marked ? markedHtml(row.title_marked) : escapeHtml(row.title),
-        snippetHtml: trimSeparators(own ? markedHtml(own.snippet) : row.snippet_marked ? markedHtml(row.snippet_marked) : escapeHtml(symptoms)),
+        snippetHtml: trimSeparators(
+          own ? markedHtml(own.snippet) : row.snippet_marked ? markedHtml(row.snippet_marked) : escapeHtml(symptoms),
+        ),
         machines: (row.machines ?? []).map((m) => {
           const [slug = '', label = ''] = m.split('|');
           return { slug, label };

@@ -24,13 +24,29 @@ export async function recordSearchMiss(knex: Knex, query: string, machineId: num
 }
 
 /** Most asked first, then most recent; for editors deciding what to write up next. */
-export async function listWantedFixes(knex: Knex, options: { limit: number; offset: number }): Promise<{ items: WantedFix[]; total: number }> {
+export async function listWantedFixes(
+  knex: Knex,
+  options: { limit: number; offset: number },
+): Promise<{ items: WantedFix[]; total: number }> {
   const [rows, counted] = await Promise.all([
     knex('search_misses as sm')
       .leftJoin('machines as m', 'm.id', 'sm.machine_id')
       .leftJoin('makers as mk', 'mk.id', 'm.maker_id')
-      .select('sm.query_text', 'sm.count', 'sm.first_at', 'sm.last_at', 'm.slug as machine_slug', 'm.model_number', 'm.region', 'mk.name as maker_name')
-      .orderBy([{ column: 'sm.count', order: 'desc' }, { column: 'sm.last_at', order: 'desc' }, { column: 'sm.id', order: 'asc' }])
+      .select(
+        'sm.query_text',
+        'sm.count',
+        'sm.first_at',
+        'sm.last_at',
+        'm.slug as machine_slug',
+        'm.model_number',
+        'm.region',
+        'mk.name as maker_name',
+      )
+      .orderBy([
+        { column: 'sm.count', order: 'desc' },
+        { column: 'sm.last_at', order: 'desc' },
+        { column: 'sm.id', order: 'asc' },
+      ])
       .limit(options.limit)
       .offset(options.offset),
     knex('search_misses').count<{ n: string }[]>('* as n').first(),

@@ -15,7 +15,9 @@ export interface NearMatch {
 const NEAR_THRESHOLD = 0.12;
 
 export async function nearMatches(knex: Knex, text: string, machine: ResolvedMachine | null, limit = 5): Promise<NearMatch[]> {
-  const folded = foldText(text).replace(/[^\p{L}\p{N}\s]+/gu, ' ').trim();
+  const folded = foldText(text)
+    .replace(/[^\p{L}\p{N}\s]+/gu, ' ')
+    .trim();
   if (folded.length < 3) return [];
   const chassisId = machine?.chassisId ?? null;
   return knex.transaction(async (trx) => {

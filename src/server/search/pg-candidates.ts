@@ -23,28 +23,36 @@ export interface CandidateRow {
 
 /**
  * Two ways to read the best-scored matches. `walk` follows the bench-score index and tests each fix: quick
- * when matches are dense (a broad word), slow when they are rare, so it stops after WALK_BUDGET fixes.
+ * when matches are dense (a broad word), slow when they are rare, so it reads a bounded number of fixes.
  * `collect` gathers the matches through the text index and sorts them: quick when they are few. The
  * expression in collect's order only keeps PostgreSQL from walking the index.
  */
 export type ReadWay = 'walk' | 'collect';
 const WALK_ORDER = 'ORDER BY s.bench_score DESC NULLS LAST, s.fix_id';
 const COLLECT_ORDER = 'ORDER BY coalesce(s.bench_score, -1) DESC, s.fix_id';
-/** A walk reads at most this many fixes (some 15 ms on a 2-core machine); a walk that runs out is redone by collecting. */
-export const WALK_BUDGET = 4000;
+/** A first walk reads this many fixes: enough to finish a broad query, and a sample of how dense the matches are. */
+export const PROBE = 400;
+/** No walk reads more than this (some 40 ms on a 2-core machine): past it, collecting is cheaper. */
+export const MAX_WALK = 8000;
+/** Partial matches are a courtesy after the full ones: their walks stop early. */
+const PARTIAL_WALK = 1500;
 const SUMMARY_STAGE = 0;
 /** The stage whose size tells how many fixes match in all: every match, best bench score first. */
 const ANYWHERE_STAGE = 1;
 const NEAR_STAGE = 2;
 
-function stage(filter: Fragment, match: Fragment, limit: number, way: ReadWay, number = NEAR_STAGE): Fragment {
+function stage(filter: Fragment, match: Fragment, limit: number, way: ReadWay, number = NEAR_STAGE, budget = PROBE): Fragment {
   if (way === 'collect') {
-    return frag(`(SELECT s.fix_id, ${number} AS stage FROM fix_search s WHERE (${filter.sql}) AND (${match.sql}) ${COLLECT_ORDER} LIMIT ${limit})`, ...filter.bindings, ...match.bindings);
+    return frag(
+      `(SELECT s.fix_id, ${number} AS stage FROM fix_search s WHERE (${filter.sql}) AND (${match.sql}) ${COLLECT_ORDER} LIMIT ${limit})`,
+      ...filter.bindings,
+      ...match.bindings,
+    );
   }
   // The match is a column of the bounded walk, tested row by row as the outer LIMIT pulls; rows come
   // out in the walk's order.
   return frag(
-    `(SELECT w.fix_id, ${number} AS stage FROM (SELECT s.fix_id, (${match.sql}) AS hit FROM fix_search s WHERE (${filter.sql}) ${WALK_ORDER} LIMIT ${WALK_BUDGET}) AS w WHERE w.hit LIMIT ${limit})`,
+    `(SELECT w.fix_id, ${number} AS stage FROM (SELECT s.fix_id, (${match.sql}) AS hit FROM fix_search s WHERE (${filter.sql}) ${WALK_ORDER} LIMIT ${budget}) AS w WHERE w.hit LIMIT ${limit})`,
     ...match.bindings,
     ...filter.bindings,
   );
@@ -59,6 +67,13 @@ export interface ReadPlan {
   anyClause: ReadWay;
   /** Fixes in the search table (an estimate), to tell a walk that ran out from one that saw everything. */
   tableRows: number;
+  /** Shares of matching fixes from which walking beats collecting, for the two main stages. */
+  summaryWalkShare: number;
+  anywhereWalkShare: number;
+  /** The text clauses alone may match a large share of all fixes. */
+  textBroad: boolean;
+  /** The scope or a filter already narrows the search to few fixes (one machine, one chassis family). */
+  narrowed: boolean;
 }
 
 /**
@@ -67,16 +82,27 @@ export interface ReadPlan {
  * machine itself. (A fix found only in the remedy of a sibling machine ranks below those anyway.) A
  * machine holds few fixes, so its stages are collected; a family's or maker's share may be large.
  */
-function nearStages(filter: Fragment, inSummary: Fragment, anywhere: Fragment, near: NearMachine | null, limit: number, plan: ReadPlan): Fragment[] {
+function nearStages(
+  filter: Fragment,
+  inSummary: Fragment,
+  anywhere: Fragment,
+  near: NearMachine | null,
+  limit: number,
+  plan: ReadPlan,
+): Fragment[] {
   // Scoped to the machine, every candidate is already its own or its family-wide fix: nothing to add.
   if (!near || near.scope === 'machine') return [];
   const { machine } = near;
-  const within = (match: Fragment, level: Fragment, way: ReadWay) => stage(filter, frag(`(${match.sql}) AND (${level.sql})`, ...match.bindings, ...level.bindings), limit, way);
+  const within = (match: Fragment, level: Fragment, way: ReadWay) =>
+    stage(filter, frag(`(${match.sql}) AND (${level.sql})`, ...match.bindings, ...level.bindings), limit, way);
   const onMachine = frag('s.machine_ids @> ARRAY[?]::int[]', machine.id);
   // Against a broad text, the machine's few fixes are read through its own index and tested one by one:
   // "IS TRUE" keeps PostgreSQL from also scanning the text index for tens of thousands of matches.
   const tested = (match: Fragment, way: ReadWay) => (way === 'walk' ? frag(`(${match.sql}) IS TRUE`, ...match.bindings) : match);
-  const stages = [within(tested(inSummary, plan.summary), onMachine, 'collect'), within(tested(anywhere, plan.anywhere), onMachine, 'collect')];
+  const stages = [
+    within(tested(inSummary, plan.summary), onMachine, 'collect'),
+    within(tested(anywhere, plan.anywhere), onMachine, 'collect'),
+  ];
   if (near.scope === 'family') return stages;
   stages.push(within(inSummary, frag('s.maker_ids @> ARRAY[?]::int[]', machine.makerId), plan.summary));
   if (machine.chassisId !== null) stages.push(within(inSummary, frag('s.chassis_ids @> ARRAY[?]::int[]', machine.chassisId), plan.summary));
@@ -90,7 +116,12 @@ export interface NearMachine {
 }
 
 /** The stages' rows with their features, and how many rows each stage gave. */
-async function featuresOf(knex: Knex, analysed: AnalysedQuery, stages: Fragment[], known: string): Promise<{ rows: CandidateRow[]; byStage: Map<number, number> }> {
+async function featuresOf(
+  knex: Knex,
+  analysed: AnalysedQuery,
+  stages: Fragment[],
+  known: string,
+): Promise<{ rows: CandidateRow[]; byStage: Map<number, number> }> {
   const union = joinFragments(stages, '\nUNION ALL\n');
   const levels = levelsExpression(analysed, known);
   const sql = frag(
@@ -120,9 +151,19 @@ export interface FullMatches {
 }
 
 /** Fixes matching every hard clause: in the title and symptoms, anywhere, and near the named machine. */
-export async function fullMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, near: NearMachine | null, limit: number, plan: ReadPlan): Promise<FullMatches> {
-  const inSummary = allClauses(analysed, 'doc_a');
-  const anywhere = allClauses(analysed, 'document');
+export async function fullMatches(
+  knex: Knex,
+  analysed: AnalysedQuery,
+  filter: Fragment,
+  near: NearMachine | null,
+  limit: number,
+  plan: ReadPlan,
+): Promise<FullMatches> {
+  // A code or a narrow scope picks few fixes through its own index; a broad text is then only tested.
+  const narrowed = plan.narrowed || analysed.codes.length > 0;
+  const inSummary = allClauses(analysed, 'doc_a', analysed.hardText, analysed.codes, narrowed && plan.textBroad);
+  const anywhere = allClauses(analysed, 'document', analysed.hardText, analysed.codes, narrowed && plan.textBroad);
+  if (narrowed) plan = { ...plan, summary: 'collect', anywhere: 'collect' };
   const stages = [
     stage(filter, inSummary, limit, plan.summary, SUMMARY_STAGE),
     stage(filter, anywhere, limit, plan.anywhere, ANYWHERE_STAGE),
@@ -130,11 +171,19 @@ export async function fullMatches(knex: Knex, analysed: AnalysedQuery, filter: F
   ];
   // Every row here matched all hard clauses, so "found in the body" needs no second look at the document.
   const first = await featuresOf(knex, analysed, stages, 'TRUE');
-  // A walk that came back short may have run out of budget before it ran out of matches: collect instead.
-  const ranOut = (number: number, way: ReadWay) => way === 'walk' && (first.byStage.get(number) ?? 0) < limit && plan.tableRows > WALK_BUDGET;
+  // A probe that came back short ran out of fixes to read, not of matches. Its hits tell how dense the
+  // matches are: dense enough, walk on as far as the page needs; otherwise collect.
+  const ranOut = (number: number, way: ReadWay) => way === 'walk' && (first.byStage.get(number) ?? 0) < limit && plan.tableRows > PROBE;
+  const again = (number: number, match: Fragment, walkShare: number): Fragment => {
+    const share = (first.byStage.get(number) ?? 0) / PROBE;
+    const budget = share > 0 ? Math.ceil((1.5 * limit) / share) : Number.POSITIVE_INFINITY;
+    return share >= walkShare && budget <= MAX_WALK
+      ? stage(filter, match, limit, 'walk', number, budget)
+      : stage(filter, match, limit, 'collect', number);
+  };
   const redo: Fragment[] = [];
-  if (ranOut(SUMMARY_STAGE, plan.summary)) redo.push(stage(filter, inSummary, limit, 'collect', SUMMARY_STAGE));
-  if (ranOut(ANYWHERE_STAGE, plan.anywhere)) redo.push(stage(filter, anywhere, limit, 'collect', ANYWHERE_STAGE));
+  if (ranOut(SUMMARY_STAGE, plan.summary)) redo.push(again(SUMMARY_STAGE, inSummary, plan.summaryWalkShare));
+  if (ranOut(ANYWHERE_STAGE, plan.anywhere)) redo.push(again(ANYWHERE_STAGE, anywhere, plan.anywhereWalkShare));
   let rows = first.rows;
   let counted = first.byStage.get(ANYWHERE_STAGE) ?? 0;
   if (redo.length) {
@@ -147,18 +196,29 @@ export async function fullMatches(knex: Knex, analysed: AnalysedQuery, filter: F
 }
 
 /** Fixes matching all hard clauses but one, then any clause at all: shown after the full matches. */
-export async function partialMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, limit: number, plan: Pick<ReadPlan, 'allButOne' | 'anyClause'>): Promise<CandidateRow[]> {
-  const clauses: ({ text: CompiledTextClause } | { code: CodeClause })[] = [...analysed.hardText.map((text) => ({ text })), ...analysed.codes.map((code) => ({ code }))];
+export async function partialMatches(
+  knex: Knex,
+  analysed: AnalysedQuery,
+  filter: Fragment,
+  limit: number,
+  plan: Pick<ReadPlan, 'allButOne' | 'anyClause'>,
+): Promise<CandidateRow[]> {
+  const clauses: ({ text: CompiledTextClause } | { code: CodeClause })[] = [
+    ...analysed.hardText.map((text) => ({ text })),
+    ...analysed.codes.map((code) => ({ code })),
+  ];
   const stages: Fragment[] = [];
   if (clauses.length >= 2 && clauses.length <= 6) {
     clauses.forEach((_, skip) => {
       const rest = clauses.filter((_c, i) => i !== skip);
       const text = rest.flatMap((c) => ('text' in c ? [c.text] : []));
       const codes = rest.flatMap((c) => ('code' in c ? [c.code] : []));
-      stages.push(stage(filter, allClauses(analysed, 'document', text, codes), limit, plan.allButOne[skip] ?? 'collect'));
+      stages.push(
+        stage(filter, allClauses(analysed, 'document', text, codes), limit, plan.allButOne[skip] ?? 'collect', NEAR_STAGE, PARTIAL_WALK),
+      );
     });
   }
-  stages.push(stage(filter, anyClause(analysed), limit, plan.anyClause));
+  stages.push(stage(filter, anyClause(analysed), limit, plan.anyClause, NEAR_STAGE, PARTIAL_WALK));
   const { rows } = await featuresOf(knex, analysed, stages, 'FALSE');
   return rows;
 }

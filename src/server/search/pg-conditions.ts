@@ -30,15 +30,35 @@ export function filterCondition(query: SearchQuery, context: SearchContext, anal
   return allOf(parts);
 }
 
+/** The same query with every phrase loosened to "all these words": a necessary condition, cheaper to test. */
+export function withoutPhrases(tsquery: string): string {
+  return tsquery.replace(/<\d*-?>/g, '&');
+}
+
 export function codeCondition(code: CodeClause): Fragment {
   return frag('s.code_list && ?::text[]', pgArray([...code.exact, ...code.variants]));
 }
 
 /** Every hard clause, each searched in `column` (the whole document, or doc_a: title and symptoms). */
-export function allClauses(analysed: AnalysedQuery, column: 'document' | 'doc_a', text: CompiledTextClause[] = analysed.hardText, codes: CodeClause[] = analysed.codes): Fragment {
+export function allClauses(
+  analysed: AnalysedQuery,
+  column: 'document' | 'doc_a',
+  text: CompiledTextClause[] = analysed.hardText,
+  codes: CodeClause[] = analysed.codes,
+  testTextOnly = false,
+): Fragment {
   const parts: Fragment[] = [];
   const textQuery = andQuery(text.map((c) => c.any));
-  if (textQuery) parts.push(frag(`s.${column} @@ ?::tsquery`, textQuery));
+  // "IS TRUE" makes the text a test on rows found otherwise (by a code, a machine): scanning the text
+  // index for a broad word would cost more than the rows it is tested on.
+  const test = (q: string) => frag(testTextOnly ? `(s.${column} @@ ?::tsquery) IS TRUE` : `s.${column} @@ ?::tsquery`, q);
+  if (textQuery) {
+    // Phrases need word positions, which costs about twice as much per fix: words-present first, so most
+    // fixes are turned away by the cheaper test.
+    const loose = withoutPhrases(textQuery);
+    if (loose !== textQuery) parts.push(test(loose));
+    parts.push(test(textQuery));
+  }
   parts.push(...codes.map(codeCondition));
   return allOf(parts);
 }
@@ -85,7 +105,11 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     return frag(`CASE ${whens.map((w) => w.sql).join(' ')} ELSE 0 END`, ...whens.flatMap((w) => w.bindings));
   };
   const codeLevel = (c: CodeClause): Fragment =>
-    frag('CASE WHEN s.code_list && ?::text[] THEN 3 WHEN s.code_list && ?::text[] THEN 2 ELSE 0 END', pgArray(c.exact), pgArray(c.variants));
+    frag(
+      'CASE WHEN s.code_list && ?::text[] THEN 3 WHEN s.code_list && ?::text[] THEN 2 ELSE 0 END',
+      pgArray(c.exact),
+      pgArray(c.variants),
+    );
   const levels = [
     ...analysed.hardText.map((c) => textLevel(c, true)),
     ...analysed.codes.map(codeLevel),

@@ -18,7 +18,7 @@ interface Ranked extends Rankable {
   row: CandidateRow;
 }
 
-const CANDIDATES = 50;
+const CANDIDATES = 30;
 
 /** A broad query's facets are counted over its best-ranked candidates only (the page says so). */
 const FACET_SAMPLE = 200;
@@ -76,15 +76,25 @@ export class PostgresSearchProvider implements SearchProvider {
 
     const filter = filterCondition(query, context, analysed);
     const window = query.page * query.perPage;
-    // Candidates per stage: enough for the page and a margin; counts stop here ("50+ fixes").
+    // Candidates per stage: enough for the page and a margin; counts stop here ("30+ fixes").
     const limit = Math.max(CANDIDATES, window + 20);
     const hardCount = analysed.hardText.length + analysed.codes.length;
-    const plan = await readPlan(this.knex, analysed, limit);
-    const full = await fullMatches(this.knex, analysed, filter, context.machine ? { machine: context.machine, scope: query.scope } : null, limit, plan);
+    const narrowed = (context.machine !== null && query.scope !== 'all') || Boolean(context.chassisId);
+    const plan = await readPlan(this.knex, analysed, limit, narrowed);
+    const full = await fullMatches(
+      this.knex,
+      analysed,
+      filter,
+      context.machine ? { machine: context.machine, scope: query.scope } : null,
+      limit,
+      plan,
+    );
     let rows = full.rows;
     let total = full.total;
     if (!full.lowerBound && full.total < window && hardCount > 0) {
-      const partial = (await partialMatches(this.knex, analysed, filter, limit, plan)).filter((r) => !rows.some((f) => f.fix_id === r.fix_id));
+      const partial = (await partialMatches(this.knex, analysed, filter, limit, plan)).filter(
+        (r) => !rows.some((f) => f.fix_id === r.fix_id),
+      );
       rows = [...rows, ...partial];
       total = full.total + partial.length;
     }
@@ -92,8 +102,13 @@ export class PostgresSearchProvider implements SearchProvider {
     const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
     const headline = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
     // Facets are counted over the candidates: every match when the count is exact, the best ones otherwise.
-    const facetRows = full.lowerBound ? ranked.slice(0, FACET_SAMPLE).map((r) => r.row) : rows;
-    const [hits, facets] = await Promise.all([hydrateHits(this.knex, pageRows, headline), total > 0 ? facetsOf(this.knex, facetRows) : Promise.resolve(null)]);
+    // They describe the fixes that match the whole query; partial matches only when nothing matches in full.
+    const described = full.total > 0 ? ranked.filter((r) => r.matchedAll) : ranked;
+    const facetRows = (full.lowerBound ? described.slice(0, FACET_SAMPLE) : described).map((r) => r.row);
+    const [hits, facets] = await Promise.all([
+      hydrateHits(this.knex, pageRows, headline),
+      total > 0 ? facetsOf(this.knex, facetRows) : Promise.resolve(null),
+    ]);
     return {
       ...emptyResult(query, context, analysed),
       hits,

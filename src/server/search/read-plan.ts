@@ -31,7 +31,10 @@ function clauseCounts(analysed: AnalysedQuery, stats: LexemeStats): { summary: n
 const wayFor = (share: number, threshold: number): ReadWay => (share >= threshold ? 'walk' : 'collect');
 
 /** One small query for the counts of the query's lexemes and codes. */
-export async function readPlan(knex: Knex, analysed: AnalysedQuery, limit: number): Promise<ReadPlan> {
+/** A text whose upper-bound share reaches this is tested on rows found by a code or narrow scope, not index-scanned. */
+const BROAD_TEXT_SHARE = 0.01;
+
+export async function readPlan(knex: Knex, analysed: AnalysedQuery, limit: number, narrowed: boolean): Promise<ReadPlan> {
   const lexemes = [...new Set([...analysed.hardText, ...analysed.softText].flatMap((c) => lexemesOf(c.any)))];
   const codes = analysed.codes.flatMap((c) => [...c.exact, ...c.variants]);
   const stats = await lexemeStats(knex, lexemes, codes);
@@ -40,11 +43,24 @@ export async function readPlan(knex: Knex, analysed: AnalysedQuery, limit: numbe
   const phrase = analysed.hardText.some((c) => /<\d*-?>/.test(c.any));
   const summaryAt = walkThreshold(limit, stats.total, COSTS.summary.walk, phrase ? COSTS.summary.collectPhrase : COSTS.summary.collect);
   const anywhereAt = walkThreshold(limit, stats.total, COSTS.anywhere.walk, phrase ? COSTS.anywhere.collectPhrase : COSTS.anywhere.collect);
+  // The estimates are upper bounds: "collect" is certain to be right; "walk" is tried on a short probe first.
   return {
     summary: wayFor(estimateShare(counts.summary, stats.total), summaryAt),
     anywhere: wayFor(estimateShare(counts.anywhere, stats.total), anywhereAt),
-    allButOne: counts.anywhere.map((_, skip) => wayFor(estimateShare(counts.anywhere.filter((_c, i) => i !== skip), stats.total), anywhereAt)),
+    summaryWalkShare: summaryAt,
+    anywhereWalkShare: anywhereAt,
+    allButOne: counts.anywhere.map((_, skip) =>
+      wayFor(
+        estimateShare(
+          counts.anywhere.filter((_c, i) => i !== skip),
+          stats.total,
+        ),
+        anywhereAt,
+      ),
+    ),
     anyClause: wayFor(anyShare, anywhereAt),
     tableRows: stats.total,
+    textBroad: estimateShare(counts.anywhere.slice(0, analysed.hardText.length), stats.total) >= BROAD_TEXT_SHARE,
+    narrowed,
   };
 }

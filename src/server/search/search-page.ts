@@ -20,7 +20,8 @@ export type SearchPageData =
 export async function searchPage(knex: Knex, provider: SearchProvider, url: URL): Promise<SearchPageData> {
   const raw = Object.fromEntries([...url.searchParams].filter(([, v]) => v !== ''));
   const parsed = searchParamsSchema.safeParse(raw);
-  if (!parsed.success) return { kind: 'invalid', messages: Object.values(fieldErrors(parsed.error)).flat(), text: String(raw.q ?? '').slice(0, 200) };
+  if (!parsed.success)
+    return { kind: 'invalid', messages: Object.values(fieldErrors(parsed.error)).flat(), text: String(raw.q ?? '').slice(0, 200) };
   const query = toSearchQuery(parsed.data);
   const machine = query.machine ? await findNamedMachine(knex, query.machine) : null;
   if (query.machine && !machine) return { kind: 'unknown_machine', query };
@@ -30,7 +31,9 @@ export async function searchPage(knex: Knex, provider: SearchProvider, url: URL)
   const near = query.text ? await nearMatches(knex, query.text, machine) : [];
   if (query.text) {
     // Counting must never cost the reader their answer.
-    await recordSearchMiss(knex, query.text, machine?.id ?? null).catch((error: unknown) => logger().warn({ err: error }, 'search miss not counted'));
+    await recordSearchMiss(knex, query.text, machine?.id ?? null).catch((error: unknown) =>
+      logger().warn({ err: error }, 'search miss not counted'),
+    );
   }
   return { kind: 'results', query, result, wider: widerSearches(query, result.machine), near, writeUp: writeUpHref(query) };
 }

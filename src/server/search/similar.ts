@@ -26,7 +26,10 @@ export interface SimilarFix {
  * cause or remedy counts a quarter.
  */
 function summaryShare(levels: number[], weights: number[]): number {
-  return levels.reduce((sum, level, i) => sum + (weights[i] ?? 1) * (level >= clauseLevel.summaryAlternative ? 1 : level === clauseLevel.body ? 0.25 : 0), 0);
+  return levels.reduce(
+    (sum, level, i) => sum + (weights[i] ?? 1) * (level >= clauseLevel.summaryAlternative ? 1 : level === clauseLevel.body ? 0.25 : 0),
+    0,
+  );
 }
 
 /** Below this a fix is only vaguely like the symptom, and warning about it would be noise. */
@@ -36,15 +39,51 @@ const MAX_SIMILAR = 5;
 export async function similarFixes(knex: Knex, symptom: string, machine: ResolvedMachine): Promise<SimilarFix[]> {
   const analysed = await analyseQuery(knex, symptom);
   if (!analysed.searchable) return [];
-  const query: SearchQuery = { text: symptom, machine: machine.named.slug, scope: machine.chassisId === null ? 'machine' : 'family', filters: {}, page: 1, perPage: MAX_SIMILAR };
+  const query: SearchQuery = {
+    text: symptom,
+    machine: machine.named.slug,
+    scope: machine.chassisId === null ? 'machine' : 'family',
+    filters: {},
+    page: 1,
+    perPage: MAX_SIMILAR,
+  };
   const filter = filterCondition(query, { machine, machineMissing: false, makerId: undefined, chassisId: undefined }, analysed);
-  const full = await fullMatches(knex, analysed, filter, { machine, scope: query.scope }, 50, { summary: 'collect', anywhere: 'collect', allButOne: [], anyClause: 'collect', tableRows: 0 });
-  const rows = full.rows.length >= MAX_SIMILAR ? full.rows : [...full.rows, ...(await partialMatches(knex, analysed, filter, 50, { allButOne: [], anyClause: 'collect' })).filter((r) => !full.rows.some((f) => f.fix_id === r.fix_id))];
+  const full = await fullMatches(knex, analysed, filter, { machine, scope: query.scope }, 50, {
+    summary: 'collect',
+    anywhere: 'collect',
+    allButOne: [],
+    anyClause: 'collect',
+    tableRows: 0,
+    summaryWalkShare: 1,
+    anywhereWalkShare: 1,
+    textBroad: false,
+    narrowed: true,
+  });
+  const rows =
+    full.rows.length >= MAX_SIMILAR
+      ? full.rows
+      : [
+          ...full.rows,
+          ...(await partialMatches(knex, analysed, filter, 50, { allButOne: [], anyClause: 'collect' })).filter(
+            (r) => !full.rows.some((f) => f.fix_id === r.fix_id),
+          ),
+        ];
   if (rows.length === 0) return [];
   const weights = [...analysed.hardText.map(() => WORD_WEIGHT), ...analysed.codes.map(() => CODE_WEIGHT)];
   const fullWeight = weights.reduce((a, b) => a + b, 0) || 1;
   const target = proximityTarget(machine);
-  const details = await knex.raw<{ rows: { fix_id: number; slug: string; title: string; symptoms: string; bench_score: number | null; report_count: number; likeness: number; machines: string[] }[] }>(
+  const details = await knex.raw<{
+    rows: {
+      fix_id: number;
+      slug: string;
+      title: string;
+      symptoms: string;
+      bench_score: number | null;
+      report_count: number;
+      likeness: number;
+      machines: string[];
+    }[];
+  }>(
     `SELECT s.fix_id, f.slug, s.title, s.symptoms, s.bench_score, s.report_count,
        greatest(similarity(s.title, ?), word_similarity(?, s.symptoms)) AS likeness,
        ARRAY(SELECT mk.name || ' ' || m.model_number || ' (' || m.region || ')' FROM machines m JOIN makers mk ON mk.id = m.maker_id
@@ -74,7 +113,10 @@ export async function similarFixes(knex: Knex, symptom: string, machine: Resolve
       ];
     })
     .filter((f) => f.likeness >= LIKENESS_FLOOR)
-    .sort((a, b) => b.likeness - a.likeness || b.bonus - a.bonus || Number(b.sameMachine) - Number(a.sameMachine) || a.slug.localeCompare(b.slug))
+    .sort(
+      (a, b) =>
+        b.likeness - a.likeness || b.bonus - a.bonus || Number(b.sameMachine) - Number(a.sameMachine) || a.slug.localeCompare(b.slug),
+    )
     .slice(0, MAX_SIMILAR)
     .map(({ bonus: _bonus, ...fix }) => fix);
 }

@@ -17,14 +17,20 @@ export function joinFragments(parts: Fragment[], separator: string): Fragment {
 /** AND of the parts; TRUE when there are none. */
 export function allOf(parts: Fragment[]): Fragment {
   if (parts.length === 0) return frag('TRUE');
-  const joined = joinFragments(parts.map((p) => frag(`(${p.sql})`, ...p.bindings)), ' AND ');
+  const joined = joinFragments(
+    parts.map((p) => frag(`(${p.sql})`, ...p.bindings)),
+    ' AND ',
+  );
   return joined;
 }
 
 /** OR of the parts; FALSE when there are none. */
 export function anyOf(parts: Fragment[]): Fragment {
   if (parts.length === 0) return frag('FALSE');
-  return joinFragments(parts.map((p) => frag(`(${p.sql})`, ...p.bindings)), ' OR ');
+  return joinFragments(
+    parts.map((p) => frag(`(${p.sql})`, ...p.bindings)),
+    ' OR ',
+  );
 }
 
 export function raw(knex: Knex, fragment: Fragment): Knex.Raw {

@@ -41,20 +41,24 @@ export async function startSearchSyncWorker(knex: Knex, meili: MeiliIndex, optio
   boss.on('error', (error) => logger().warn({ err: error }, 'search sync queue'));
   await boss.start();
   const prepared = { done: false };
-  await boss.work<SearchSyncJob>(SEARCH_SYNC_QUEUE, { batchSize: 50, pollingIntervalSeconds: options.pollingIntervalSeconds ?? 2 }, async (jobs) => {
-    try {
-      await applySyncJobs(
-        knex,
-        meili,
-        jobs.map((j) => j.data),
-        prepared,
-      );
-    } catch (error) {
-      prepared.done = false;
-      logger().warn({ err: error, jobs: jobs.length }, 'search sync failed; pg-boss will retry');
-      throw error;
-    }
-  });
+  await boss.work<SearchSyncJob>(
+    SEARCH_SYNC_QUEUE,
+    { batchSize: 50, pollingIntervalSeconds: options.pollingIntervalSeconds ?? 2 },
+    async (jobs) => {
+      try {
+        await applySyncJobs(
+          knex,
+          meili,
+          jobs.map((j) => j.data),
+          prepared,
+        );
+      } catch (error) {
+        prepared.done = false;
+        logger().warn({ err: error, jobs: jobs.length }, 'search sync failed; pg-boss will retry');
+        throw error;
+      }
+    },
+  );
   return {
     async stop() {
       await boss.stop({ graceful: true, wait: true, timeout: 10_000 });

@@ -152,13 +152,22 @@ export interface LexemeStats {
 
 /** Counts for the lexemes and codes of a query, for choosing how its candidates are read. */
 export async function lexemeStats(knex: Knex, lexemes: string[], codes: string[]): Promise<LexemeStats> {
-  const [lexemeRows, codeRows, table] = await Promise.all([
-    lexemes.length ? knex('search_lexemes').whereIn('lexeme', lexemes).select('lexeme', 'ndoc', 'ndoc_summary') : Promise.resolve([]),
-    codes.length ? knex('search_codes').whereIn('code', codes).select('code', 'ndoc') : Promise.resolve([]),
-    knex.raw<{ rows: { n: string }[] }>(`SELECT greatest(reltuples, 0)::bigint AS n FROM pg_class WHERE oid = 'fix_search'::regclass`),
-  ]);
+  // One round trip: the lexemes' and codes' counts, and the size of the table.
+  const { rows } = await knex.raw<{ rows: { kind: 'lexeme' | 'code' | 'table'; key: string; ndoc: string; ndoc_summary: string }[] }>(
+    `SELECT 'lexeme' AS kind, lexeme AS key, ndoc, ndoc_summary FROM search_lexemes WHERE lexeme = ANY(?::text[])
+     UNION ALL SELECT 'code', code, ndoc, ndoc FROM search_codes WHERE code = ANY(?::text[])
+     UNION ALL SELECT 'table', '', greatest(reltuples, 0)::bigint, 0 FROM pg_class WHERE oid = 'fix_search'::regclass`,
+    [pgArray(lexemes), pgArray(codes)],
+  );
+  const lexemeRows = rows
+    .filter((r) => r.kind === 'lexeme')
+    .map((r) => ({ lexeme: r.key, ndoc: Number(r.ndoc), ndoc_summary: Number(r.ndoc_summary) }));
+  const codeRows = rows.filter((r) => r.kind === 'code').map((r) => ({ code: r.key, ndoc: Number(r.ndoc) }));
+  const table = { rows: rows.filter((r) => r.kind === 'table').map((r) => ({ n: r.ndoc })) };
   const anywhere = new Map<string, number>(lexemeRows.map((r: { lexeme: string; ndoc: number }) => [r.lexeme, Number(r.ndoc)]));
-  const summary = new Map<string, number>(lexemeRows.map((r: { lexeme: string; ndoc_summary: number }) => [r.lexeme, Number(r.ndoc_summary)]));
+  const summary = new Map<string, number>(
+    lexemeRows.map((r: { lexeme: string; ndoc_summary: number }) => [r.lexeme, Number(r.ndoc_summary)]),
+  );
   const byCode = new Map<string, number>(codeRows.map((r: { code: string; ndoc: number }) => [r.code, Number(r.ndoc)]));
   return {
     total: Number(table.rows[0]?.n ?? 0),

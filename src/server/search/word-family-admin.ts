@@ -16,7 +16,9 @@ export interface WordFamilyRow {
 }
 
 export async function listWordFamilies(knex: Knex): Promise<WordFamilyRow[]> {
-  const rows = await knex('word_families').select('id', 'name', 'terms', 'updated_at', 'retired_at').orderByRaw('retired_at IS NOT NULL, lower(name), id');
+  const rows = await knex('word_families')
+    .select('id', 'name', 'terms', 'updated_at', 'retired_at')
+    .orderByRaw('retired_at IS NOT NULL, lower(name), id');
   return rows.map((r) => ({ id: r.id, name: r.name, terms: r.terms, updatedAt: r.updated_at, retiredAt: r.retired_at }));
 }
 
@@ -33,11 +35,26 @@ async function nameTaken(trx: Knex.Transaction, name: string, exceptId?: number)
 }
 
 /** Applies one form inside a transaction; 'missing' and 'taken' come back as values for the page to explain. */
-async function apply(trx: Knex.Transaction, actor: SessionUser, form: WordFamilyForm): Promise<'missing' | 'taken' | { id: number; notice: string }> {
+async function apply(
+  trx: Knex.Transaction,
+  actor: SessionUser,
+  form: WordFamilyForm,
+): Promise<'missing' | 'taken' | { id: number; notice: string }> {
   if (form.intent === 'create') {
     if (await nameTaken(trx, form.name)) return 'taken';
-    const [row] = await trx('word_families').insert({ name: form.name, terms: form.terms, created_by: actor.id }).returning(['id', 'name', 'terms', 'retired_at']);
-    await writeAudit({ actorId: actor.id, action: 'word_family.create', subjectType: 'word_family', subjectId: row.id, detail: { before: null, after: snapshot(row) } }, trx);
+    const [row] = await trx('word_families')
+      .insert({ name: form.name, terms: form.terms, created_by: actor.id })
+      .returning(['id', 'name', 'terms', 'retired_at']);
+    await writeAudit(
+      {
+        actorId: actor.id,
+        action: 'word_family.create',
+        subjectType: 'word_family',
+        subjectId: row.id,
+        detail: { before: null, after: snapshot(row) },
+      },
+      trx,
+    );
     return { id: row.id, notice: 'added' };
   }
   const before = await trx('word_families').where({ id: form.id }).forUpdate().first('id', 'name', 'terms', 'retired_at');
@@ -53,7 +70,16 @@ async function apply(trx: Knex.Transaction, actor: SessionUser, form: WordFamily
     .where({ id: form.id })
     .update({ ...changes, updated_at: trx.fn.now() })
     .returning(['id', 'name', 'terms', 'retired_at']);
-  await writeAudit({ actorId: actor.id, action: `word_family.${form.intent}`, subjectType: 'word_family', subjectId: form.id, detail: { before: snapshot(before), after: snapshot(after) } }, trx);
+  await writeAudit(
+    {
+      actorId: actor.id,
+      action: `word_family.${form.intent}`,
+      subjectType: 'word_family',
+      subjectId: form.id,
+      detail: { before: snapshot(before), after: snapshot(after) },
+    },
+    trx,
+  );
   return { id: form.id, notice: form.intent === 'update' ? 'saved' : form.intent === 'retire' ? 'retired' : 'restored' };
 }
 

@@ -6,7 +6,12 @@ import { demoFixes } from './demo/fixes';
 import type { SeededIds } from './seed-catalogue';
 
 const notes: Record<string, string[]> = {
-  fixed: ['Worked exactly as described.', 'Took longer than stated, but the fault is gone.', 'Fixed. Also cleaned the rest of the transport while in there.', ''],
+  fixed: [
+    'Worked exactly as described.',
+    'Took longer than stated, but the fault is gone.',
+    'Fixed. Also cleaned the rest of the transport while in there.',
+    '',
+  ],
   partly: ['Better, but an intermittent fault remains.', 'Fault mostly cleared; a second part was also worn.'],
   not_fixed: ['Not the cause on this unit; the fault was elsewhere.', 'Same symptom, different cause here.'],
   came_back: ['Fault returned after a few weeks.', 'Held for a while, then the symptom came back.'],
@@ -19,14 +24,22 @@ export async function seedBenchReports(knex: Knex, ids: SeededIds): Promise<numb
   const rows = await knex('fixes as f')
     .whereNull('f.deleted_at')
     .whereIn('f.slug', [...order.keys()])
-    .select('f.id', 'f.slug', 'f.created_by', 'f.current_revision_id', knex.raw('ARRAY(SELECT id FROM revisions r WHERE r.fix_id = f.id AND r.state = ? ORDER BY number) AS revision_ids', ['proofed']));
+    .select(
+      'f.id',
+      'f.slug',
+      'f.created_by',
+      'f.current_revision_id',
+      knex.raw('ARRAY(SELECT id FROM revisions r WHERE r.fix_id = f.id AND r.state = ? ORDER BY number) AS revision_ids', ['proofed']),
+    );
   const fixes = rows.sort((a, b) => (order.get(a.slug) ?? 0) - (order.get(b.slug) ?? 0));
   let inserted = 0;
   for (const fix of fixes) {
-    const machineIds: number[] = (
-      await knex('fix_machines').where({ fix_id: fix.id }).orderBy('machine_id').pluck('machine_id')
-    ).concat(
-      await knex('fix_chassis as fc').join('machines as m', 'm.chassis_family_id', 'fc.chassis_family_id').where('fc.fix_id', fix.id).orderBy('m.id').pluck('m.id'),
+    const machineIds: number[] = (await knex('fix_machines').where({ fix_id: fix.id }).orderBy('machine_id').pluck('machine_id')).concat(
+      await knex('fix_chassis as fc')
+        .join('machines as m', 'm.chassis_family_id', 'fc.chassis_family_id')
+        .where('fc.fix_id', fix.id)
+        .orderBy('m.id')
+        .pluck('m.id'),
     );
     if (machineIds.length === 0) continue;
     // Each fix draws from its own sequence, so its reports do not depend on what else is in the database.

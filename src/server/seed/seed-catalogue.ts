@@ -31,13 +31,24 @@ export async function seedCatalogue(knex: Knex): Promise<SeededIds> {
       ? existing.id
       : (
           await knex('users')
-            .insert({ email: u.email, name: u.name, shop_name: u.shopName ?? null, role: u.role, password_hash: passwordHash, emailVerified: new Date('2024-01-02T09:00:00Z') })
+            .insert({
+              email: u.email,
+              name: u.name,
+              shop_name: u.shopName ?? null,
+              role: u.role,
+              password_hash: passwordHash,
+              emailVerified: new Date('2024-01-02T09:00:00Z'),
+            })
             .returning('id')
         )[0].id;
     ids.users.set(u.key, id);
   }
   for (const m of demoMakers) {
-    const [row] = await knex('makers').insert({ slug: m.slug, name: m.name, country: m.country, about: m.about }).onConflict('slug').merge(['name', 'country', 'about']).returning('id');
+    const [row] = await knex('makers')
+      .insert({ slug: m.slug, name: m.name, country: m.country, about: m.about })
+      .onConflict('slug')
+      .merge(['name', 'country', 'about'])
+      .returning('id');
     ids.makers.set(m.slug, row.id);
   }
   for (const c of demoChassis) {

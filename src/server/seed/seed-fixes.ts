@@ -65,10 +65,14 @@ async function seedOneFix(trx: Knex.Transaction, ids: SeededIds, fix: DemoFix, i
     const revisionId = inserted[0]?.id;
     if (revisionId === undefined) throw new Error(`Demo fix ${fix.slug}: revision ${n + 1} was not inserted`);
     if (machineIds.length) await trx('revision_machines').insert(machineIds.map((machine_id) => ({ revision_id: revisionId, machine_id })));
-    if (chassisIds.length) await trx('revision_chassis').insert(chassisIds.map((chassis_family_id) => ({ revision_id: revisionId, chassis_family_id })));
+    if (chassisIds.length)
+      await trx('revision_chassis').insert(chassisIds.map((chassis_family_id) => ({ revision_id: revisionId, chassis_family_id })));
     for (const [position, illustration] of (rev.illustrations ?? []).entries()) {
       const photoId = await seedIllustration(trx, required(ids.users, rev.author, 'user'), illustration);
-      await trx('revision_photos').insert({ revision_id: revisionId, photo_id: photoId, position }).onConflict(['revision_id', 'photo_id']).ignore();
+      await trx('revision_photos')
+        .insert({ revision_id: revisionId, photo_id: photoId, position })
+        .onConflict(['revision_id', 'photo_id'])
+        .ignore();
     }
     parentId = revisionId;
   }
@@ -80,7 +84,9 @@ async function seedOneFix(trx: Knex.Transaction, ids: SeededIds, fix: DemoFix, i
 
 /** Draws the illustration, renders it with sharp and stores its renditions; reuses an identical one. */
 async function seedIllustration(trx: Knex.Transaction, ownerId: number, illustration: DemoIllustration): Promise<number> {
-  const png = await sharp(Buffer.from(drawIllustration(illustration.drawing))).png().toBuffer();
+  const png = await sharp(Buffer.from(drawIllustration(illustration.drawing)))
+    .png()
+    .toBuffer();
   const sha256 = createHash('sha256').update(png).digest('hex');
   const existing = await trx('photos').where({ sha256 }).whereNull('deleted_at').first('id');
   if (existing) return existing.id;

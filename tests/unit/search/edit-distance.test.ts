@@ -28,16 +28,16 @@ describe('editDistance', () => {
     expect(editDistance('capacitor', 'tray', 2)).toBe(3);
   });
 
-  test.prop([fc.string({ maxLength: 9, unit: fc.constantFrom('a', 'b', 'c', 'd') }), fc.string({ maxLength: 9, unit: fc.constantFrom('a', 'b', 'c', 'd') })])(
-    'never exceeds Levenshtein, and is at least half of it (a swap replaces two edits)',
-    (a, b) => {
-      const osa = editDistance(a, b);
-      const lev = levenshtein(a, b);
-      expect(osa).toBeLessThanOrEqual(lev);
-      expect(2 * osa).toBeGreaterThanOrEqual(lev);
-      expect(editDistance(b, a)).toBe(osa);
-    },
-  );
+  test.prop([
+    fc.string({ maxLength: 9, unit: fc.constantFrom('a', 'b', 'c', 'd') }),
+    fc.string({ maxLength: 9, unit: fc.constantFrom('a', 'b', 'c', 'd') }),
+  ])('never exceeds Levenshtein, and is at least half of it (a swap replaces two edits)', (a, b) => {
+    const osa = editDistance(a, b);
+    const lev = levenshtein(a, b);
+    expect(osa).toBeLessThanOrEqual(lev);
+    expect(2 * osa).toBeGreaterThanOrEqual(lev);
+    expect(editDistance(b, a)).toBe(osa);
+  });
 });
 
 describe('allowedEdits', () => {

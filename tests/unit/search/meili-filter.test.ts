@@ -20,14 +20,19 @@ describe('quoteFilterValue', () => {
 
 describe('buildFilter', () => {
   it('scopes to the machine and its family-wide fixes by default', () => {
-    expect(buildFilter({ ...base, machine: machine.slug }, machine, [])).toEqual(['(machines = "tamberlyn-dr4120-pal" OR familyChassis = "tamberlyn-tl2-loader")']);
+    expect(buildFilter({ ...base, machine: machine.slug }, machine, [])).toEqual([
+      '(machines = "tamberlyn-dr4120-pal" OR familyChassis = "tamberlyn-tl2-loader")',
+    ]);
   });
   it('scopes to the whole family, or to nothing, as asked', () => {
     expect(buildFilter({ ...base, machine: machine.slug, scope: 'family' }, machine, [])).toEqual(['chassis = "tamberlyn-tl2-loader"']);
     expect(buildFilter({ ...base, machine: machine.slug, scope: 'all' }, machine, [])).toEqual([]);
   });
   it('adds every facet filter and one IN list per code', () => {
-    const query: SearchQuery = { ...base, filters: { maker: 'tamberlyn', deviceType: 'dvd_recorder', format: 'DVD+R', hasPhotos: true, caution: 'laser' } };
+    const query: SearchQuery = {
+      ...base,
+      filters: { maker: 'tamberlyn', deviceType: 'dvd_recorder', format: 'DVD+R', hasPhotos: true, caution: 'laser' },
+    };
     expect(buildFilter(query, null, [{ kind: 'code', label: 'dr4120', exact: ['dr4120'], variants: ['dr4120k'] }])).toEqual([
       'makers = "tamberlyn"',
       'deviceTypes = "dvd_recorder"',
@@ -56,7 +61,9 @@ describe('indexSettings', () => {
   });
   it('filters on every facet, sorts on the bench score, and never typo-matches codes', () => {
     const settings = indexSettings(families);
-    expect(settings.filterableAttributes).toEqual(expect.arrayContaining(['makers', 'machines', 'chassis', 'deviceTypes', 'formats', 'cautions', 'hasPhotos', 'codes']));
+    expect(settings.filterableAttributes).toEqual(
+      expect.arrayContaining(['makers', 'machines', 'chassis', 'deviceTypes', 'formats', 'cautions', 'hasPhotos', 'codes']),
+    );
     expect(settings.rankingRules?.at(-1)).toBe('benchRank:desc');
     expect(settings.typoTolerance?.disableOnAttributes).toEqual(['codes']);
   });

@@ -13,7 +13,15 @@ function vocabulary(extra: Partial<Vocabulary> = {}): Vocabulary {
   return {
     known: new Set(['tray', 'close', 'rewind', 'belt']),
     stopwords: new Set(['will', 'not', 'the', 'on']),
-    candidates: new Map([['tary', [{ word: 'tray', ndoc: 9 }, { word: 'tape', ndoc: 30 }]]]),
+    candidates: new Map([
+      [
+        'tary',
+        [
+          { word: 'tray', ndoc: 9 },
+          { word: 'tape', ndoc: 30 },
+        ],
+      ],
+    ]),
     codes: ['kx44n', 'kx45n', 'dr4120', 'dr4120k'],
     ...extra,
   };
@@ -23,11 +31,30 @@ const texts = (clauses: ReturnType<typeof buildPlan>['clauses']) => clauses.filt
 
 describe('correctWord', () => {
   it('picks the fewest slips, then the most used word', () => {
-    expect(correctWord('tary', [{ word: 'tape', ndoc: 30 }, { word: 'tray', ndoc: 9 }])).toBe('tray');
-    expect(correctWord('bolt', [{ word: 'belt', ndoc: 3 }, { word: 'boot', ndoc: 5 }])).toBe('boot');
+    expect(
+      correctWord('tary', [
+        { word: 'tape', ndoc: 30 },
+        { word: 'tray', ndoc: 9 },
+      ]),
+    ).toBe('tray');
+    expect(
+      correctWord('bolt', [
+        { word: 'belt', ndoc: 3 },
+        { word: 'boot', ndoc: 5 },
+      ]),
+    ).toBe('boot');
   });
   it('prefers a word of a word family when slips are equal', () => {
-    expect(correctWord('drawr', [{ word: 'draw', ndoc: 9 }, { word: 'drawer', ndoc: 1 }], new Set(['drawer']))).toBe('drawer');
+    expect(
+      correctWord(
+        'drawr',
+        [
+          { word: 'draw', ndoc: 9 },
+          { word: 'drawer', ndoc: 1 },
+        ],
+        new Set(['drawer']),
+      ),
+    ).toBe('drawer');
   });
   it('does not correct short words or far-off ones', () => {
     expect(correctWord('ff', [{ word: 'fan', ndoc: 3 }])).toBeNull();
@@ -54,12 +81,19 @@ describe('buildPlan', () => {
 
   it('turns a loosely typed model number into a code clause with its variants', () => {
     const plan = buildPlan(parseQuery('DR 4120 tray'), vocabulary(), families);
-    expect(plan.clauses.find((c) => c.kind === 'code')).toEqual({ kind: 'code', label: 'dr4120', exact: ['dr4120'], variants: ['dr4120k'] });
+    expect(plan.clauses.find((c) => c.kind === 'code')).toEqual({
+      kind: 'code',
+      label: 'dr4120',
+      exact: ['dr4120'],
+      variants: ['dr4120k'],
+    });
   });
 
   it('keeps an unknown code as a literal that must be found as written', () => {
     const plan = buildPlan(parseQuery('KX-46N'), vocabulary(), families);
-    expect(plan.clauses).toEqual([{ kind: 'text', label: 'kx 46n', terms: ['kx46n', '"kx 46n"'], alternatives: [], soft: false, exact: true, position: -1 }]);
+    expect(plan.clauses).toEqual([
+      { kind: 'text', label: 'kx 46n', terms: ['kx46n', '"kx 46n"'], alternatives: [], soft: false, exact: true, position: -1 },
+    ]);
   });
 
   it('leaves a bare number out instead of guessing a code', () => {

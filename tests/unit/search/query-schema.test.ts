@@ -4,7 +4,15 @@ import { searchHref, searchParamsOf, searchParamsSchema, toSearchQuery } from '@
 
 describe('searchParamsSchema', () => {
   it('reads a full address into a query with filters', () => {
-    const parsed = searchParamsSchema.parse({ q: ' tray  ', machine: 'tamberlyn-dr4120-pal', scope: 'family', maker: 'tamberlyn', photos: '1', caution: 'laser', page: '2' });
+    const parsed = searchParamsSchema.parse({
+      q: ' tray  ',
+      machine: 'tamberlyn-dr4120-pal',
+      scope: 'family',
+      maker: 'tamberlyn',
+      photos: '1',
+      caution: 'laser',
+      page: '2',
+    });
     expect(toSearchQuery(parsed)).toEqual({
       text: 'tray',
       machine: 'tamberlyn-dr4120-pal',

@@ -1,13 +1,31 @@
 // Result order: text relevance, then closeness to the named machine, then bench score, then fix id.
 import { describe, expect, it } from 'vitest';
 import { fc, test } from '@fast-check/vitest';
-import { CODE_WEIGHT, clauseLevel, compareRanked, proximityOf, rank, relevanceFromScore, relevanceOf, type Rankable } from '@/lib/search/ranking';
+import {
+  CODE_WEIGHT,
+  clauseLevel,
+  compareRanked,
+  proximityOf,
+  rank,
+  relevanceFromScore,
+  relevanceOf,
+  type Rankable,
+} from '@/lib/search/ranking';
 
-const item = (fixId: number, over: Partial<Rankable> = {}): Rankable => ({ fixId, relevance: { matched: 2, quality: 6 }, proximity: 0, benchScore: null, ...over });
+const item = (fixId: number, over: Partial<Rankable> = {}): Rankable => ({
+  fixId,
+  relevance: { matched: 2, quality: 6 },
+  proximity: 0,
+  benchScore: null,
+  ...over,
+});
 
 describe('relevanceOf', () => {
   it('counts required clauses found, weighted, and sums their levels with the bonuses', () => {
-    expect(relevanceOf([clauseLevel.summary, clauseLevel.none, clauseLevel.body], [1], [1, 1, CODE_WEIGHT])).toEqual({ matched: 1 + CODE_WEIGHT, quality: 5 });
+    expect(relevanceOf([clauseLevel.summary, clauseLevel.none, clauseLevel.body], [1], [1, 1, CODE_WEIGHT])).toEqual({
+      matched: 1 + CODE_WEIGHT,
+      quality: 5,
+    });
   });
 });
 

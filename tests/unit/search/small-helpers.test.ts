@@ -24,7 +24,12 @@ describe('word family form', () => {
     expect(parsed.error?.issues[0]?.path).toEqual(['terms']);
   });
   it('reads an update and a retirement', () => {
-    expect(wordFamilyFormSchema.parse({ intent: 'update', id: '4', name: ' belt ', terms: 'belt\nband' })).toEqual({ intent: 'update', id: 4, name: 'belt', terms: ['belt', 'band'] });
+    expect(wordFamilyFormSchema.parse({ intent: 'update', id: '4', name: ' belt ', terms: 'belt\nband' })).toEqual({
+      intent: 'update',
+      id: 4,
+      name: 'belt',
+      terms: ['belt', 'band'],
+    });
     expect(wordFamilyFormSchema.parse({ intent: 'retire', id: '4' })).toEqual({ intent: 'retire', id: 4 });
     expect(wordFamilyFormSchema.safeParse({ intent: 'delete', id: '4' }).success).toBe(false);
   });

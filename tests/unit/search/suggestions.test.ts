@@ -3,8 +3,19 @@ import { describe, expect, it } from 'vitest';
 import { widerSearches, writeUpHref } from '@/lib/search/suggestions';
 import type { SearchQuery } from '@/lib/search/query-schema';
 
-const query: SearchQuery = { text: 'tray rattles', machine: 'tamberlyn-dr4120-pal', scope: 'machine', filters: { caution: 'laser' }, page: 1, perPage: 10 };
-const machine = { slug: 'tamberlyn-dr4120-pal', label: 'Tamberlyn DR-4120 (PAL)', chassis: { slug: 'tamberlyn-tl2-loader', name: 'TL-2 DVD recorder loader platform' } };
+const query: SearchQuery = {
+  text: 'tray rattles',
+  machine: 'tamberlyn-dr4120-pal',
+  scope: 'machine',
+  filters: { caution: 'laser' },
+  page: 1,
+  perPage: 10,
+};
+const machine = {
+  slug: 'tamberlyn-dr4120-pal',
+  label: 'Tamberlyn DR-4120 (PAL)',
+  chassis: { slug: 'tamberlyn-tl2-loader', name: 'TL-2 DVD recorder loader platform' },
+};
 
 describe('widerSearches', () => {
   it('offers the chassis family, then every machine, then no filters', () => {
@@ -15,7 +26,9 @@ describe('widerSearches', () => {
     ]);
   });
   it('offers no family search for a machine without one, and nothing when already wide', () => {
-    expect(widerSearches({ ...query, filters: {} }, { ...machine, chassis: null }).map((s) => s.label)).toEqual(['Search every machine (fixes for the Tamberlyn DR-4120 (PAL) first)']);
+    expect(widerSearches({ ...query, filters: {} }, { ...machine, chassis: null }).map((s) => s.label)).toEqual([
+      'Search every machine (fixes for the Tamberlyn DR-4120 (PAL) first)',
+    ]);
     expect(widerSearches({ ...query, scope: 'all', filters: {} }, machine)).toEqual([]);
   });
 });

@@ -41,6 +41,8 @@ describe('matchFamilies', () => {
 
 describe('familyVocabulary', () => {
   it('holds every word of every term', () => {
-    expect([...familyVocabulary(families)].sort()).toEqual(['disc', 'does', 'drawer', 'error', 'loader', 'no', 'not', 'read', 'tray', 'will', 'wont'].sort());
+    expect([...familyVocabulary(families)].sort()).toEqual(
+      ['disc', 'does', 'drawer', 'error', 'loader', 'no', 'not', 'read', 'tray', 'will', 'wont'].sort(),
+    );
   });
 });

@@ -16,7 +16,8 @@ export const GET: APIRoute = async ({ url }) => {
   const params = parseSearchParams(searchParamsSchema, url);
   if (!params.ok) return params.response;
   const query = toSearchQuery(params.data);
-  if (query.machine && !(await findNamedMachine(db(), query.machine))) return apiError('not_found', `No machine "${query.machine}" in the catalogue.`);
+  if (query.machine && !(await findNamedMachine(db(), query.machine)))
+    return apiError('not_found', `No machine "${query.machine}" in the catalogue.`);
   const result = await searchProvider().search(query);
   return json(result, { cache: 'public' });
 };

@@ -41,7 +41,8 @@ export class MeiliIndex {
 
   /** Upserts the documents and deletes the ids, waiting until Meilisearch has applied both. */
   async apply(documents: MeiliFixDocument[], removedIds: number[]): Promise<void> {
-    if (documents.length) expectSucceeded(await this.index.addDocuments(documents, { primaryKey: 'id' }).waitTask({ timeout: TASK_TIMEOUT_MS }));
+    if (documents.length)
+      expectSucceeded(await this.index.addDocuments(documents, { primaryKey: 'id' }).waitTask({ timeout: TASK_TIMEOUT_MS }));
     if (removedIds.length) expectSucceeded(await this.index.deleteDocuments(removedIds).waitTask({ timeout: TASK_TIMEOUT_MS }));
   }
 

@@ -29,7 +29,9 @@ export function meiliQueryText(analysed: AnalysedQuery): string {
 type Hit = MeiliFixDocument & { _rankingScore?: number; _formatted?: Partial<Record<keyof MeiliFixDocument, unknown>> };
 
 function proximityFor(hit: Hit, machine: ResolvedMachine | null) {
-  const target = machine ? { machineId: machine.named.slug, chassisId: machine.named.chassis?.slug ?? null, makerId: machine.makerSlug } : null;
+  const target = machine
+    ? { machineId: machine.named.slug, chassisId: machine.named.chassis?.slug ?? null, makerId: machine.makerSlug }
+    : null;
   return proximityOf({ machineIds: hit.machines, chassisIds: hit.chassis, makerIds: hit.makers }, target);
 }
 
@@ -74,9 +76,17 @@ export class MeiliSearchProvider implements SearchProvider {
       }))
       .sort((a: Rankable, b: Rankable) => compareRanked(a, b));
     const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
-    const marks = new Map(pageRows.map((r) => [r.fixId, { title: String(r.hit._formatted?.title ?? ''), snippet: String(r.hit._formatted?.symptoms ?? '').replace(/ \. /g, ' · ') }]));
+    const marks = new Map(
+      pageRows.map((r) => [
+        r.fixId,
+        { title: String(r.hit._formatted?.title ?? ''), snippet: String(r.hit._formatted?.symptoms ?? '').replace(/ \. /g, ' · ') },
+      ]),
+    );
     const total = response.estimatedTotalHits ?? response.hits.length;
-    const [hits, facets] = await Promise.all([hydrateHits(this.knex, pageRows, '', marks), facetsFromDistribution(this.knex, response.facetDistribution ?? {})]);
+    const [hits, facets] = await Promise.all([
+      hydrateHits(this.knex, pageRows, '', marks),
+      facetsFromDistribution(this.knex, response.facetDistribution ?? {}),
+    ]);
     return {
       ...base,
       hits,

@@ -17,7 +17,17 @@ export function synonymsFrom(families: readonly WordFamily[]): Record<string, st
   return synonyms;
 }
 
-export const filterableAttributes = ['makers', 'machines', 'chassis', 'familyChassis', 'deviceTypes', 'formats', 'cautions', 'hasPhotos', 'codes'] as const;
+export const filterableAttributes = [
+  'makers',
+  'machines',
+  'chassis',
+  'familyChassis',
+  'deviceTypes',
+  'formats',
+  'cautions',
+  'hasPhotos',
+  'codes',
+] as const;
 
 export function indexSettings(families: readonly WordFamily[]): Settings {
   return {

@@ -14,7 +14,10 @@ export const GET: APIRoute = async ({ params, url }) => {
   if (!query.ok) return query.response;
   const fix = await getFix(slug.data, query.data.revision);
   if (!fix) {
-    return apiError('not_found', query.data.revision ? `Fix "${slug.data}" has no proofed revision r${query.data.revision}.` : `No fix "${slug.data}".`);
+    return apiError(
+      'not_found',
+      query.data.revision ? `Fix "${slug.data}" has no proofed revision r${query.data.revision}.` : `No fix "${slug.data}".`,
+    );
   }
   const { id: _id, createdBy: _createdBy, ...publicFix } = fix;
   return json(publicFix, { cache: query.data.revision ? 'immutable' : 'public' });
