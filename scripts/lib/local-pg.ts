@@ -5,6 +5,7 @@ import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readdirSync, readlinkSync, lstatSync, symlinkSync, writeFileSync, appendFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import net from 'node:net';
+import { installDebianPackage, isRoot } from './debian-packages.ts';
 
 export interface LocalPg {
   binDir: string;
@@ -14,8 +15,6 @@ export interface LocalPg {
   port: number;
   asRoot: boolean;
 }
-
-const isRoot = () => typeof process.getuid === 'function' && process.getuid() === 0;
 
 function findBinDir(): string | undefined {
   const base = '/usr/lib/postgresql';
@@ -30,20 +29,7 @@ function findBinDir(): string | undefined {
 export function ensureServerBinaries(): string {
   let bin = findBinDir();
   if (bin) return bin;
-  if (!isRoot()) {
-    console.error(
-      'PostgreSQL server binaries are missing. Install them once with:\n\n' +
-        '  sudo apt-get update && sudo apt-get install -y postgresql\n\n' +
-        'or set DATABASE_URL to a PostgreSQL server you already run.',
-    );
-    process.exit(1);
-  }
-  console.log("Installing Debian's postgresql package (first run only)...");
-  execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit' });
-  execFileSync('apt-get', ['install', '-y', '-qq', 'postgresql'], {
-    stdio: 'inherit',
-    env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
-  });
+  installDebianPackage('postgresql', 'The local database', 'or set DATABASE_URL to a PostgreSQL server you already run.');
   bin = findBinDir();
   if (!bin) throw new Error('postgresql was installed but no initdb was found under /usr/lib/postgresql');
   return bin;

@@ -8,7 +8,10 @@ const schema = z.object({
   /** Overrides the local cluster entirely (managed PostgreSQL in production). */
   DATABASE_URL: z.url().optional(),
   BENCHLORE_PG_PORT: port.default(54329),
-  BENCHLORE_DB_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('benchlore'),
+  BENCHLORE_DB_NAME: z
+    .string()
+    .regex(/^[a-z_][a-z0-9_]*$/)
+    .default('benchlore'),
   BENCHLORE_DATA_DIR: z.string().default('.data'),
   /** Where local-disk storage keeps photos; defaults to <data>/media. */
   BENCHLORE_MEDIA_DIR: z.string().optional(),
