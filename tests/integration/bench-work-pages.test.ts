@@ -57,7 +57,7 @@ describe('fix page bench report form', () => {
 
   it('shows the counts on this and older revisions, the author’s own apart', async () => {
     const page = await html(await anonymous.get(`/fixes/${fix.slug}`));
-    expect(page).toMatch(/2 on this revision, 1 on older revisions/);
+    expect(page).toMatch(/2 on the live revision, 1 on older revisions/);
     expect(page).toMatch(/1 by the fix(&#39;|')s author, shown but not counted/);
     expect(page).toContain('from 3 bench reports');
   });

@@ -175,6 +175,7 @@ export function as(base: string, cookie: string) {
     get: (path: string, headers?: Record<string, string>) => send('GET', path, undefined, headers),
     post: (path: string, body?: unknown) => send('POST', path, body),
     patch: (path: string, body: unknown) => send('PATCH', path, body),
+    put: (path: string, body: unknown) => send('PUT', path, body),
     delete: (path: string) => send('DELETE', path),
     form: (path: string, fields: Record<string, string> | [string, string][]) => send('POST', path, new URLSearchParams(fields)),
     /** A POST with a body and content type exactly as given (for malformed input). */

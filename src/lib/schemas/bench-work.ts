@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { readingSchema } from './revision';
 import { slugSchema } from './slug';
 import { orderLineInputSchema } from '@/lib/bench/order-list';
+import { MAX_JOB_PARTS } from '@/lib/bench/job-parts';
 
 export const benchOutcomes = ['fixed', 'partly', 'not_fixed', 'came_back'] as const;
 export const benchOutcomeSchema = z.enum(benchOutcomes, { error: 'Choose an outcome: fixed, partly, not fixed or fault came back.' });
@@ -95,7 +96,7 @@ const jobSheetFields = {
   serialNumber: z.string().trim().max(80, 'Keep the serial number under 80 characters.'),
   reportedSymptom: z.string().trim().max(2000, 'Keep the reported symptom under 2000 characters.'),
   findings: z.string().trim().max(4000, 'Keep the findings under 4000 characters.'),
-  partsUsed: z.array(jobPartSchema).max(200, 'A job sheet holds at most 200 part lines.'),
+  partsUsed: z.array(jobPartSchema).max(MAX_JOB_PARTS, `A job sheet holds at most ${MAX_JOB_PARTS} part lines.`),
   labourMinutes: z
     .number({ error: 'Give labour in whole minutes.' })
     .int('Give labour in whole minutes.')

@@ -1,6 +1,7 @@
 // Reads the job sheet forms and carries out their buttons (save, apply or remove a fix, delete) for the pages.
 import { fieldErrors } from '@/server/http';
 import { applyFixToJob, deleteJobSheet, removeFixFromJob, updateJobSheet } from '@/server/job-sheets';
+import { putJobPartsOnOrderList, takePartsFromOrderList } from '@/server/job-sheet-parts';
 import {
   fixRefFromText,
   formNumber,
@@ -79,6 +80,16 @@ export async function handleJobSheetPost(ownerId: number, id: number, form: Form
   if (intent === 'remove_fix') {
     await removeFixFromJob(ownerId, id, formText(form, 'fix') ?? '');
     return { kind: 'redirect', location: `${here}?job=fix_removed#applied-fixes` };
+  }
+  if (intent === 'take_order_list') {
+    const taken = await takePartsFromOrderList(ownerId, id, { clear: formText(form, 'clear') === 'yes' });
+    if (!taken.ok) return problem(taken.message, { orderList: [taken.message] });
+    return { kind: 'redirect', location: `${here}?job=parts_taken#parts-used` };
+  }
+  if (intent === 'to_order_list') {
+    const listed = await putJobPartsOnOrderList(ownerId, id);
+    if (!listed.ok) return problem(listed.message, { orderList: [listed.message] });
+    return { kind: 'redirect', location: `${here}?job=parts_listed#order-list-heading` };
   }
   if (intent === 'delete') {
     if (formText(form, 'confirm') !== 'yes')
