@@ -130,8 +130,10 @@ describe('suspending', () => {
     const [lifted] = await auditFor(member.id, 'user.unsuspend');
     expect(lifted.actor_id).toBe(admin.id);
     expect(lifted.detail).toEqual({ before: { suspended: true, reason: 'Posting spam links' }, after: { suspended: false } });
-    // Signed out for good: a new sign-in is needed, and works.
-    await signIn(base, member.email, member.password);
+    // Signed out for good: the cookie kept from before the suspension stays refused; a new sign-in works.
+    expect((await fetch(`${base}/api/v1/account`, { headers: { cookie } })).status).toBe(401);
+    const fresh = await signIn(base, member.email, member.password);
+    expect((await fetch(`${base}/api/v1/account`, { headers: { cookie: fresh } })).status).toBe(200);
   });
 
   it('keeps moderators from suspending admins or other moderators', async () => {

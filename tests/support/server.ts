@@ -4,13 +4,14 @@ import { rmSync } from 'node:fs';
 import { startMailSink } from '../../src/server/mail/sink-process';
 import { DIST_DIR, mailDirFor, sinkPortFor, testEnv } from './test-env';
 
-export async function startServer(port: number): Promise<() => Promise<void>> {
+/** `env` overrides the server's environment, e.g. an https PUBLIC_ORIGIN for the cookie tests. */
+export async function startServer(port: number, env: NodeJS.ProcessEnv = {}): Promise<() => Promise<void>> {
   // The server's mail goes to a sink of its own; tests read its folder (tests/support/mail.ts).
   const mail = { SMTP_SINK_PORT: String(sinkPortFor(port)), BENCHLORE_MAIL_DIR: mailDirFor(port) };
   rmSync(mail.BENCHLORE_MAIL_DIR, { recursive: true, force: true });
   const sink = await startMailSink({ port: sinkPortFor(port), dir: mail.BENCHLORE_MAIL_DIR, env: testEnv(), stdio: 'pipe' });
   const child: ChildProcess = spawn(process.execPath, [`${DIST_DIR}/server/entry.mjs`], {
-    env: { ...testEnv(), ...mail, HOST: '127.0.0.1', PORT: String(port), PUBLIC_ORIGIN: `http://127.0.0.1:${port}` },
+    env: { ...testEnv(), ...mail, HOST: '127.0.0.1', PORT: String(port), PUBLIC_ORIGIN: `http://127.0.0.1:${port}`, ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

@@ -86,7 +86,10 @@ async function suspend(actor: SessionUser, fields: Record<string, string>): Prom
     if (!subject) return refused(404, 'That member was not found.');
     if (!can(actor, 'suspend_user', { subject })) return refused(403, 'You cannot suspend this account.');
     if (subject.suspended_at) return redirectTo(back(fields, 'unchanged'));
-    await trx('users').where({ id: userId }).update({ suspended_at: trx.fn.now(), suspended_reason: reason });
+    // Ending the sessions too means a cookie kept from before cannot come back to life when it is lifted.
+    await trx('users')
+      .where({ id: userId })
+      .update({ suspended_at: trx.fn.now(), suspended_reason: reason, sessions_valid_after: new Date() });
     await writeAudit(
       {
         actorId: actor.id,
