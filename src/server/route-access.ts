@@ -91,6 +91,8 @@ export const routeAccess: Record<string, RouteRule> = {
   '/account': { methods: { GET: 'manage_account', POST: 'manage_account' }, noStore: true },
   '/account/sign-out': { methods: { POST: 'public' }, noStore: true },
   '/account/deleted': accountRead,
+  // The link mailed to a new address: the token is the authority, signed in or not.
+  '/account/email': accountForm,
   '/api/v1/account': { methods: { GET: 'manage_account', PATCH: 'manage_account' }, noStore: true },
 
   // Members and roles: moderators suspend; only admins change roles (checked again per form).

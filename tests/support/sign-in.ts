@@ -28,9 +28,9 @@ export interface TestUser {
 
 export async function createUser(
   knex: Knex,
-  options: { role?: Role; verified?: boolean; suspended?: boolean; tag?: string; password?: string } = {},
+  options: { role?: Role; verified?: boolean; suspended?: boolean; tag?: string; password?: string; email?: string } = {},
 ): Promise<TestUser> {
-  const email = uniqueEmail(options.tag ?? options.role ?? 'member');
+  const email = options.email ?? uniqueEmail(options.tag ?? options.role ?? 'member');
   const password = options.password ?? STRONG_PASSWORD;
   const name = `Test ${options.tag ?? options.role ?? 'member'} ${email.slice(4, 14)}`;
   const [row] = await knex('users')

@@ -87,6 +87,13 @@ export const passwordChangeSchema = z.object({
 });
 export type PasswordChangeInput = z.infer<typeof passwordChangeSchema>;
 
+/** A new address for the account; the change waits for the link mailed to it. */
+export const emailChangeSchema = z.object({
+  newEmail: emailSchema,
+  currentPassword: currentPasswordSchema.optional(),
+});
+export type EmailChangeInput = z.infer<typeof emailChangeSchema>;
+
 export const deleteAccountSchema = z.object({
   password: currentPasswordSchema.optional(),
   confirm: z.literal('delete', { error: 'Type the word delete to confirm.' }),

@@ -1,9 +1,11 @@
-// The account page's forms: profile, password, confirmation mail, signing out everywhere, deleting the account.
-import { deleteAccountSchema, passwordChangeSchema, profileSchema } from '@/lib/schemas/account';
+// The account page's forms: profile, e-mail address, password, confirmation mail, signing out everywhere,
+// deleting the account.
+import { deleteAccountSchema, emailChangeSchema, passwordChangeSchema, profileSchema } from '@/lib/schemas/account';
 import type { SessionUser } from '@/lib/permissions';
 import { fieldErrors } from '../http';
 import { check, consume } from '../rate-limit';
 import { resendConfirmation } from './email-verification';
+import { requestEmailChange } from './email-change';
 import { withoutEmpty } from './form-data';
 import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';
 import { anonymiseAccount } from './delete-account';
@@ -11,7 +13,7 @@ import { passwordWeaknesses } from './password-strength';
 import { hashPassword, verifyPassword } from './passwords';
 import { endAllSessions, findUserById, setPassword, updateProfile } from './users';
 
-export const accountIntents = ['profile', 'password', 'resend-confirmation', 'sign-out-everywhere', 'delete'] as const;
+export const accountIntents = ['profile', 'email', 'password', 'resend-confirmation', 'sign-out-everywhere', 'delete'] as const;
 export type AccountIntent = (typeof accountIntents)[number];
 
 /** A form that asks for the current password counts a wrong one like a failed sign-in. */
@@ -49,6 +51,14 @@ async function changePassword(user: SessionUser, fields: Record<string, string>,
   return redirectTo('/sign-in?notice=password-changed');
 }
 
+async function changeEmail(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
+  const parsed = emailChangeSchema.safeParse(withoutEmpty(fields, ['currentPassword']));
+  if (!parsed.success) return invalid(fieldErrors(parsed.error));
+  const wrong = await currentPasswordMatches(user.id, user.email, parsed.data.currentPassword, clientKey);
+  if (wrong) return wrong;
+  return requestEmailChange(user, parsed.data.newEmail, clientKey);
+}
+
 async function deleteAccount(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
   const parsed = deleteAccountSchema.safeParse(withoutEmpty(fields, ['password']));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
@@ -63,6 +73,8 @@ export async function handleAccountForm(user: SessionUser, fields: Record<string
   switch (fields.intent) {
     case 'profile':
       return changeProfile(user, fields);
+    case 'email':
+      return changeEmail(user, fields, clientKey);
     case 'password':
       return changePassword(user, fields, clientKey);
     case 'resend-confirmation':

@@ -1,12 +1,17 @@
-// Our single-use, expiring tokens for confirming an address and resetting a password (stored only as a hash).
+// Our single-use, expiring tokens for confirming an address, changing it and resetting a password (stored
+// only as a hash).
 import { createHash, randomBytes } from 'node:crypto';
 import type { Knex } from 'knex';
 import { db } from '../db';
 
-export type TokenPurpose = 'verify_email' | 'reset_password';
+export type TokenPurpose = 'verify_email' | 'reset_password' | 'change_email';
 
 /** Confirming an address: 24 hours. Resetting a password: one hour (OWASP Forgot Password Cheat Sheet: short-lived). */
-export const tokenLifetimeSeconds: Record<TokenPurpose, number> = { verify_email: 24 * 60 * 60, reset_password: 60 * 60 };
+export const tokenLifetimeSeconds: Record<TokenPurpose, number> = {
+  verify_email: 24 * 60 * 60,
+  reset_password: 60 * 60,
+  change_email: 24 * 60 * 60,
+};
 
 export function hashToken(token: string): string {
   return createHash('sha256').update(token).digest('hex');
@@ -16,9 +21,9 @@ export function hashToken(token: string): string {
 export async function issueToken(
   userId: number,
   purpose: TokenPurpose,
-  lifetimeSeconds = tokenLifetimeSeconds[purpose],
-  knex: Knex = db(),
+  options: { newEmail?: string; lifetimeSeconds?: number; knex?: Knex } = {},
 ): Promise<string> {
+  const { newEmail = null, lifetimeSeconds = tokenLifetimeSeconds[purpose], knex = db() } = options;
   const token = randomBytes(32).toString('base64url');
   await knex.transaction(async (trx) => {
     await trx('user_tokens').where({ user_id: userId, purpose }).whereNull('used_at').update({ used_at: trx.fn.now() });
@@ -26,13 +31,14 @@ export async function issueToken(
       user_id: userId,
       purpose,
       token_hash: hashToken(token),
+      new_email: newEmail,
       expires_at: trx.raw(`now() + make_interval(secs => ?)`, [lifetimeSeconds]),
     });
   });
   return token;
 }
 
-export type TokenCheck = { ok: true; userId: number } | { ok: false; problem: 'unknown' | 'used' | 'expired' };
+export type TokenCheck = { ok: true; userId: number; newEmail: string | null } | { ok: false; problem: 'unknown' | 'used' | 'expired' };
 
 async function explain(token: string, purpose: TokenPurpose, knex: Knex): Promise<TokenCheck> {
   const row = await knex('user_tokens')
@@ -49,8 +55,8 @@ export async function peekToken(token: string, purpose: TokenPurpose, knex: Knex
     .where({ token_hash: hashToken(token), purpose })
     .whereNull('used_at')
     .where('expires_at', '>', knex.fn.now())
-    .first<{ user_id: number } | undefined>('user_id');
-  return row ? { ok: true, userId: row.user_id } : explain(token, purpose, knex);
+    .first<{ user_id: number; new_email: string | null } | undefined>('user_id', 'new_email');
+  return row ? { ok: true, userId: row.user_id, newEmail: row.new_email } : explain(token, purpose, knex);
 }
 
 /** Uses a token up in one statement, so two clicks at once cannot both succeed. */
@@ -60,6 +66,6 @@ export async function consumeToken(token: string, purpose: TokenPurpose, knex: K
     .whereNull('used_at')
     .where('expires_at', '>', knex.fn.now())
     .update({ used_at: knex.fn.now() })
-    .returning<{ user_id: number }[]>('user_id');
-  return row ? { ok: true, userId: row.user_id } : explain(token, purpose, knex);
+    .returning<{ user_id: number; new_email: string | null }[]>(['user_id', 'new_email']);
+  return row ? { ok: true, userId: row.user_id, newEmail: row.new_email } : explain(token, purpose, knex);
 }

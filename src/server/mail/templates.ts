@@ -53,6 +53,27 @@ export function confirmAddressMail(to: string, name: string, url: string): Outgo
   });
 }
 
+export function confirmNewAddressMail(to: string, name: string, url: string): OutgoingMail {
+  return compose(to, 'Confirm your new e-mail address for Benchlore', {
+    greeting: `Hello ${name},`,
+    before: [
+      'You asked to use this address for your Benchlore account. Please confirm that it is yours; until you do, the old address stays.',
+    ],
+    action: { label: 'Use this address', url },
+    after: ['The link works once and for 24 hours. If you did not ask for this, ignore this message: nothing changes without the link.'],
+  });
+}
+
+export function addressChangedMail(to: string, name: string, newEmail: string, resetUrl: string): OutgoingMail {
+  return compose(to, 'Your Benchlore account has a new e-mail address', {
+    greeting: `Hello ${name},`,
+    before: [`Your Benchlore account now uses ${newEmail}; mail for it no longer comes to this address.`],
+    after: [
+      `If you did not make this change, someone may know your password: choose a new one at ${resetUrl} with the new address, or write to the site's administrators.`,
+    ],
+  });
+}
+
 export function alreadyJoinedMail(to: string, signInUrl: string, resetUrl: string): OutgoingMail {
   return compose(to, 'Someone tried to join Benchlore with your address', {
     greeting: 'Hello,',
