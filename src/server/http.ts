@@ -1,5 +1,9 @@
 // The one JSON response and error shape of the API: { error: { code, message, fields? } }.
 import type { z } from 'zod';
+import { fieldErrors } from '@/lib/schemas/field-errors';
+
+// Pages and endpoints take the field messages from here, beside the rest of the error shape.
+export { fieldErrors };
 
 export type ErrorCode =
   | 'bad_request'
@@ -49,16 +53,6 @@ export function json(
 export function apiError(code: ErrorCode, message: string, fields?: Record<string, string[]>): Response {
   const body: ApiError = { error: { code, message, ...(fields ? { fields } : {}) } };
   return json(body, { status: statusOf[code], cache: 'private' });
-}
-
-/** Field-level messages from a zod error: `{ "page": ["Too small: expected number to be >=1"] }`. */
-export function fieldErrors(error: z.ZodError): Record<string, string[]> {
-  const fields: Record<string, string[]> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.length ? issue.path.join('.') : '_';
-    (fields[key] ??= []).push(issue.message);
-  }
-  return fields;
 }
 
 /** Parses URL search parameters with a schema; a failure is a ready 400 response. */

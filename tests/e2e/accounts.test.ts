@@ -113,3 +113,35 @@ describe('suspension', () => {
     await moderatorPage.context().close();
   });
 });
+
+describe('checking account forms in the browser', () => {
+  it('shows the server’s messages beside the fields before sending, and sends a form that passes', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    const posts: string[] = [];
+    page.on('request', (request) => {
+      if (request.method() === 'POST') posts.push(new URL(request.url()).pathname);
+    });
+    await page.goto(`${base}/sign-up`);
+    await page.fill('#name', 'X');
+    await page.fill('#email', 'not-an-address');
+    await page.fill('#password', 'short');
+    await page.click('form[data-check="sign-up"] button[type="submit"]');
+    await expect(page.locator('#name-error').textContent()).resolves.toBe('Use at least 2 characters for your name.');
+    await expect(page.locator('#password-error').textContent()).resolves.toBe('Use at least 10 characters.');
+    await expect(page.locator('#email').getAttribute('aria-invalid')).resolves.toBe('true');
+    await expect(page.evaluate(() => document.activeElement?.id)).resolves.toBe('name');
+    expect(posts).toEqual([]);
+
+    // Corrected, the form goes to the server as before, and the browser's messages are gone.
+    await page.fill('#name', 'Wren Calloway');
+    await page.fill('#email', uniqueEmail('browser-check'));
+    await page.fill('#password', STRONG_PASSWORD);
+    await Promise.all([
+      page.waitForURL((url) => url.pathname === '/sign-up/check-email'),
+      page.click('form[data-check="sign-up"] button[type="submit"]'),
+    ]);
+    expect(posts).toEqual(['/sign-up']);
+    await context.close();
+  });
+});

@@ -6,7 +6,7 @@ import { fieldErrors } from '../http';
 import { check, consume } from '../rate-limit';
 import { resendConfirmation } from './email-verification';
 import { requestEmailChange } from './email-change';
-import { withoutEmpty } from './form-data';
+import { formInput } from '@/lib/schemas/account-forms';
 import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';
 import { anonymiseAccount } from './delete-account';
 import { passwordWeaknesses } from './password-strength';
@@ -33,14 +33,14 @@ async function currentPasswordMatches(
 }
 
 async function changeProfile(user: SessionUser, fields: Record<string, string>): Promise<FormOutcome> {
-  const parsed = profileSchema.safeParse(withoutEmpty(fields, ['shopName']));
+  const parsed = profileSchema.safeParse(formInput('profile', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   await updateProfile(user.id, parsed.data);
   return redirectTo('/account?notice=profile-saved');
 }
 
 async function changePassword(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
-  const parsed = passwordChangeSchema.safeParse(withoutEmpty(fields, ['currentPassword']));
+  const parsed = passwordChangeSchema.safeParse(formInput('password-change', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const wrong = await currentPasswordMatches(user.id, user.email, parsed.data.currentPassword, clientKey);
   if (wrong) return wrong;
@@ -52,7 +52,7 @@ async function changePassword(user: SessionUser, fields: Record<string, string>,
 }
 
 async function changeEmail(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
-  const parsed = emailChangeSchema.safeParse(withoutEmpty(fields, ['currentPassword']));
+  const parsed = emailChangeSchema.safeParse(formInput('email-change', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const wrong = await currentPasswordMatches(user.id, user.email, parsed.data.currentPassword, clientKey);
   if (wrong) return wrong;
@@ -60,7 +60,7 @@ async function changeEmail(user: SessionUser, fields: Record<string, string>, cl
 }
 
 async function deleteAccount(user: SessionUser, fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
-  const parsed = deleteAccountSchema.safeParse(withoutEmpty(fields, ['password']));
+  const parsed = deleteAccountSchema.safeParse(formInput('delete-account', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const wrong = await currentPasswordMatches(user.id, user.email, parsed.data.password, clientKey);
   if (wrong) return wrong.kind === 'form' && wrong.fields.currentPassword ? invalid({ password: wrong.fields.currentPassword }) : wrong;

@@ -36,13 +36,6 @@ export async function readForm(request: Request): Promise<FormRead> {
   return { ok: true, fields };
 }
 
-/** Empty optional fields are left out, so zod applies "optional" rather than "too short". */
-export function withoutEmpty(fields: Record<string, string>, keys: string[]): Record<string, string> {
-  const copy = { ...fields };
-  for (const key of keys) if (copy[key]?.trim() === '') delete copy[key];
-  return copy;
-}
-
 export type JsonRead = { ok: true; body: unknown } | { ok: false; reason: 'too_large' | 'not_json' };
 
 /** A small JSON body, parsed; never throws on bad input. */

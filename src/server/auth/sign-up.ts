@@ -5,7 +5,7 @@ import { fieldErrors } from '../http';
 import { consume } from '../rate-limit';
 import { sendInBackground } from '../mail/send';
 import { alreadyJoinedMail, confirmAddressMail } from '../mail/templates';
-import { withoutEmpty } from './form-data';
+import { formInput } from '@/lib/schemas/account-forms';
 import { invalid, redirectTo, tooMany, type FormOutcome } from './form-outcome';
 import { passwordWeaknesses } from './password-strength';
 import { hashPassword } from './passwords';
@@ -17,7 +17,7 @@ export function siteUrl(path: string): string {
 }
 
 export async function signUp(fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
-  const parsed = signUpSchema.safeParse(withoutEmpty(fields, ['shopName']));
+  const parsed = signUpSchema.safeParse(formInput('sign-up', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const { name, email, password, shopName } = parsed.data;
   const limit = await consume('sign_up', clientKey, email);
