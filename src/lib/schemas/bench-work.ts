@@ -188,6 +188,31 @@ export function withNotice(path: string, key: string, code: string): string {
   return `${base}${joiner}${encodeURIComponent(key)}=${encodeURIComponent(code)}${fragment !== undefined ? `#${fragment}` : ''}`;
 }
 
+/** The fix page's bench report fields sent back after a refused post, so nothing typed is lost. */
+export const benchFormEchoKeys = [
+  'machine',
+  'outcome',
+  'heldDays',
+  'note',
+  ...[0, 1].flatMap((i) => ['testPoint', 'expected', 'measured'].map((f) => `readings.${i}.${f}`)),
+] as const;
+
+/** Which field a refused bench report's message belongs beside. */
+export const benchNoticeFields: Record<string, string> = { need_days: 'heldDays', bad_machine: 'machine' };
+
+/** `path` with the typed bench report fields as `typed.<name>` parameters, each cut to its form's limit. */
+export function withBenchEcho(path: string, form: FormFields): string {
+  const [base = '/', fragment] = path.split('#', 2);
+  const params = new URLSearchParams();
+  for (const key of benchFormEchoKeys) {
+    const value = form.get(key);
+    if (typeof value === 'string' && value.trim() !== '') params.set(`typed.${key}`, value.slice(0, 2000));
+  }
+  const query = params.toString();
+  if (query === '') return path;
+  return `${base}${base.includes('?') ? '&' : '?'}${query}${fragment !== undefined ? `#${fragment}` : ''}`;
+}
+
 /** The answer to a form post: 303 so the browser follows with GET, never cached. */
 export function seeOther(location: string): Response {
   return new Response(null, { status: 303, headers: { Location: location, 'Cache-Control': 'private, no-store' } });

@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors, json, parseSearchParams, type ErrorCode } from '@/server/http';
 import { benchReportFromForm, consumeLimit, listOwnBenchReports, readBenchBody, saveBenchReport } from '@/server/bench-reports';
-import { benchReportInputSchema, safeBackPath, seeOther, withNotice } from '@/lib/schemas/bench-work';
+import { benchReportInputSchema, safeBackPath, seeOther, withBenchEcho, withNotice } from '@/lib/schemas/bench-work';
 import { slugSchema } from '@/lib/schemas/slug';
 
 const listQuery = z.object({ fix: slugSchema.optional() });
@@ -35,7 +35,7 @@ export const POST: APIRoute = async ({ locals, request }) => {
   const back = fromForm ? safeBackPath(body.form.get('back'), '/') : '/';
   // A form goes back to its page with a message code; the API answers in the one error shape.
   const refuse = (code: ErrorCode, message: string, fields: Record<string, string[]> | undefined, notice: string): Response =>
-    fromForm ? seeOther(withNotice(back, 'bench', notice)) : apiError(code, message, fields);
+    body.kind === 'form' ? seeOther(withBenchEcho(withNotice(back, 'bench', notice), body.form)) : apiError(code, message, fields);
 
   const limit = await consumeLimit('bench_report', String(user.id));
   if (!limit.ok) {
