@@ -1,10 +1,11 @@
-// Request pipeline: security headers on every response, no 500 page leaking a stack trace, who is asking, and the route guard.
+// Request pipeline: background work started once, security headers, no 500 page leaking a stack trace, who is asking, the route guard.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/security-headers';
 import { logger } from '@/server/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/auth/route-guard';
 import { routeAccess } from '@/server/route-access';
+import { startBackgroundWork } from '@/server/background';
 
 /** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
 function editable(response: Response): Response {
@@ -66,4 +67,10 @@ const privateWhenSignedIn = defineMiddleware(async (context, next) => {
 
 const guard = defineMiddleware((context, next) => guardRequest(context, context.locals.user) ?? next());
 
-export const onRequest = sequence(securityHeaders, errorBoundary, identify, privateWhenSignedIn, guard);
+/** Photo work and search sync start with the server's first request of any kind, not with the first that needs them. */
+const background = defineMiddleware((_context, next) => {
+  startBackgroundWork();
+  return next();
+});
+
+export const onRequest = sequence(securityHeaders, errorBoundary, background, identify, privateWhenSignedIn, guard);

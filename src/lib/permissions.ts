@@ -21,6 +21,7 @@ export const actions = [
   'read',
   'manage_account',
   'view_dev_mail',
+  'read_unproofed_revision',
   'write_fix',
   'report_fix',
   'bench_report',
@@ -62,6 +63,8 @@ const opensAt: Record<Action, Level> = {
   // their confirmation mail before they can sign in.
   view_dev_mail: 'anyone',
   manage_account: 'account',
+  // Checked per revision: its author, or a moderator (see resourceAllows).
+  read_unproofed_revision: 'account',
   write_fix: 'verified',
   report_fix: 'verified',
   bench_report: 'verified',
@@ -104,6 +107,9 @@ function resourceAllows(user: Exclude<Actor, null | undefined>, action: Action, 
   switch (action) {
     case 'proof':
       return resource.authorId === undefined || resource.authorId !== user.id;
+    case 'read_unproofed_revision':
+      // A revision on its way (submitted, returned, withdrawn) is its author's and the moderators' business.
+      return resource.authorId === undefined || resource.authorId === user.id || reachesLevel(user, 'moderator');
     case 'write_fix':
       return !resource.locked || roleRank[user.role] >= roleRank.moderator;
     case 'own_job_sheets':

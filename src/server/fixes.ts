@@ -30,6 +30,8 @@ export interface FixView {
   id: number;
   slug: string;
   lockedAt: Date | null;
+  /** Always null unless the fix was read with `includeHidden`. */
+  hiddenAt: Date | null;
   createdBy: number;
   revision: RevisionView;
   /** True when `revision` is the fix's current live revision. */
@@ -104,15 +106,26 @@ function toRevision(row: RevisionRow): RevisionView {
   };
 }
 
-/** The fix with its live revision, or (with `revisionNumber`) an older proofed revision for a permalink. */
-export async function getFix(slug: string, revisionNumber?: number): Promise<FixView | null> {
+/**
+ * The fix with its live revision, or (with `revisionNumber`) an older proofed revision for a permalink. A hidden
+ * fix is "not found" unless `includeHidden` is set (moderators' pages, so they can show it again).
+ */
+export async function getFix(slug: string, revisionNumber?: number, options: { includeHidden?: boolean } = {}): Promise<FixView | null> {
   const knex = db();
-  const fix = await knex('fixes as f')
+  const fixQuery = knex('fixes as f')
     .join('revisions as cur', 'cur.id', 'f.current_revision_id')
     .where('f.slug', slug)
-    .whereNull('f.deleted_at')
-    .whereNull('f.hidden_at')
-    .first('f.id', 'f.slug', 'f.locked_at', 'f.created_by', 'f.current_revision_id', 'cur.number as live_number');
+    .whereNull('f.deleted_at');
+  if (!options.includeHidden) fixQuery.whereNull('f.hidden_at');
+  const fix = await fixQuery.first(
+    'f.id',
+    'f.slug',
+    'f.locked_at',
+    'f.hidden_at',
+    'f.created_by',
+    'f.current_revision_id',
+    'cur.number as live_number',
+  );
   if (!fix) return null;
   const revQuery = revisionQuery(knex).where('r.fix_id', fix.id).where('r.state', 'proofed');
   if (revisionNumber === undefined) revQuery.where('r.id', fix.current_revision_id);
@@ -140,6 +153,7 @@ export async function getFix(slug: string, revisionNumber?: number): Promise<Fix
     id: fix.id,
     slug: fix.slug,
     lockedAt: fix.locked_at,
+    hiddenAt: fix.hidden_at,
     createdBy: fix.created_by,
     revision: toRevision(row),
     isLive: row.id === fix.current_revision_id,
@@ -149,12 +163,6 @@ export async function getFix(slug: string, revisionNumber?: number): Promise<Fix
     photos: photos.get(row.id) ?? [],
     benchScore: scores.get(fix.id) ?? emptyBenchScore(),
   };
-}
-
-/** Every proofed revision of a fix, newest first: the public history. */
-export async function proofedRevisions(fixId: number): Promise<RevisionView[]> {
-  const rows: RevisionRow[] = await revisionQuery(db()).where('r.fix_id', fixId).where('r.state', 'proofed').orderBy('r.number', 'desc');
-  return rows.map(toRevision);
 }
 
 interface SummaryFilter {

@@ -1,5 +1,7 @@
-// Comparisons of revisions: a waiting revision against the live one (the desk), any two proofed ones (the compare page).
+// Comparisons of revisions: a waiting revision against the live one (the desk), any two past draft (the compare page).
 import { comparableFrom, diffRevisions, emptyComparable, type ComparableRevision, type RevisionDiff } from '@/lib/diff';
+import type { Actor } from '@/lib/permissions';
+import { mayReadRevision } from '@/lib/revision-visibility';
 import { db } from './db';
 import { loadRevision, revisionIdByNumber, type RevisionRecord } from './revisions';
 
@@ -29,12 +31,15 @@ export interface Comparison {
   diff: RevisionDiff;
 }
 
-/** Two proofed revisions of one fix by number, in the order given; null when either is not a proofed revision. */
-export async function compareProofed(fixId: number, numberA: number, numberB: number): Promise<Comparison | null> {
+/**
+ * Two revisions of one fix by number, in the order given; null when either is a draft, is not there, or is not
+ * proofed and the viewer is neither its author nor a moderator (the page answers 404 alike, so nothing leaks).
+ */
+export async function compareRevisions(fixId: number, numberA: number, numberB: number, viewer: Actor): Promise<Comparison | null> {
   const knex = db();
   const [idA, idB] = await Promise.all([revisionIdByNumber(knex, fixId, numberA), revisionIdByNumber(knex, fixId, numberB)]);
   if (!idA || !idB) return null;
   const [a, b] = await Promise.all([loadRevision(knex, idA), loadRevision(knex, idB)]);
-  if (!a || !b || a.state !== 'proofed' || b.state !== 'proofed') return null;
+  if (!a || !b || !mayReadRevision(viewer, a) || !mayReadRevision(viewer, b)) return null;
   return { a, b, diff: diffRevisions(comparableOf(a), comparableOf(b)) };
 }

@@ -19,6 +19,7 @@ const expected: Record<Action, Who[]> = {
   read: ['anonymous', 'unverified', 'suspended', 'member', 'editor', 'moderator', 'admin'],
   view_dev_mail: ['anonymous', 'unverified', 'suspended', 'member', 'editor', 'moderator', 'admin'],
   manage_account: ['unverified', 'member', 'editor', 'moderator', 'admin'],
+  read_unproofed_revision: ['unverified', 'member', 'editor', 'moderator', 'admin'],
   write_fix: ['member', 'editor', 'moderator', 'admin'],
   report_fix: ['member', 'editor', 'moderator', 'admin'],
   bench_report: ['member', 'editor', 'moderator', 'admin'],
@@ -105,6 +106,18 @@ describe('can with a resource', () => {
   it('keeps an admin from changing their own role', () => {
     expect(can(admin, 'manage_users', { subject: { id: 7, role: 'admin' } })).toBe(false);
     expect(can(admin, 'manage_users', { subject: { id: 4, role: 'member' } })).toBe(true);
+  });
+
+  it('shows a revision that is not proofed to its author and to moderators only', () => {
+    expect(can(people.member, 'read_unproofed_revision', { authorId: 4 })).toBe(true);
+    expect(can(people.member, 'read_unproofed_revision', { authorId: 5 })).toBe(false);
+    expect(can(people.editor, 'read_unproofed_revision', { authorId: 4 })).toBe(false);
+    expect(can(moderator, 'read_unproofed_revision', { authorId: 4 })).toBe(true);
+    expect(can(admin, 'read_unproofed_revision', { authorId: 4 })).toBe(true);
+    expect(can(null, 'read_unproofed_revision', { authorId: 4 })).toBe(false);
+    // A moderator whose address is unconfirmed has no moderator's reach yet.
+    expect(can({ id: 10, role: 'moderator', verified: false }, 'read_unproofed_revision', { authorId: 4 })).toBe(false);
+    expect(can(people.suspended, 'read_unproofed_revision', { authorId: 3 })).toBe(false);
   });
 
   it('refuses a suspended account even with a matching resource', () => {

@@ -34,14 +34,22 @@ export function kickPhotoWork(): Promise<void> {
   return running;
 }
 
-/** Starts the periodic sweep and cleanup once per process; timers never keep the process alive. */
+function cleanUp(): void {
+  cleanupAbandonedPhotos(db())
+    .then(({ removed }) => removed.length && logger().info({ count: removed.length, photoIds: removed }, 'abandoned photos removed'))
+    .catch((error: unknown) => logger().error({ err: error }, 'photo cleanup failed'));
+}
+
+/**
+ * Starts the periodic sweep and cleanup once per process (the middleware calls it when the server answers its
+ * first request). Both run at once too, so a restart never leaves photos waiting a full interval; timers never
+ * keep the process alive.
+ */
 export function ensurePhotoWorker(): void {
   if (started) return;
   started = true;
+  void kickPhotoWork();
+  cleanUp();
   setInterval(() => void kickPhotoWork(), SWEEP_MS).unref();
-  setInterval(() => {
-    cleanupAbandonedPhotos(db())
-      .then(({ removed }) => removed.length && logger().info({ count: removed.length }, 'abandoned photos removed'))
-      .catch((error: unknown) => logger().error({ err: error }, 'photo cleanup failed'));
-  }, CLEANUP_MS).unref();
+  setInterval(cleanUp, CLEANUP_MS).unref();
 }

@@ -9,17 +9,28 @@ import type { SearchProvider } from './provider-types';
 import { startSearchSyncWorker, type SyncWorker } from './sync-worker';
 
 let provider: SearchProvider | undefined;
+let meili: MeiliIndex | undefined;
 let worker: Promise<SyncWorker | null> | undefined;
+
+function meiliIndex(url: string, key: string | undefined): MeiliIndex {
+  meili ??= new MeiliIndex({ url, key });
+  return meili;
+}
+
+/** Starts the app's own sync worker once when Meilisearch is configured (so a single `npm start` keeps it current). */
+export function ensureSearchSyncWorker(): void {
+  const { MEILI_URL, MEILI_KEY } = config();
+  if (!MEILI_URL || worker) return;
+  worker = startSearchSyncWorker(db(), meiliIndex(MEILI_URL, MEILI_KEY)).catch((error: unknown) => {
+    logger().error({ err: error }, 'search sync worker did not start');
+    return null;
+  });
+}
 
 export function searchProvider(): SearchProvider {
   if (provider) return provider;
   const { MEILI_URL, MEILI_KEY } = config();
   if (!MEILI_URL) return (provider = new PostgresSearchProvider(db()));
-  const meili = new MeiliIndex({ url: MEILI_URL, key: MEILI_KEY });
-  // The app process works the sync queue too, so a single `npm start` keeps Meilisearch current.
-  worker ??= startSearchSyncWorker(db(), meili).catch((error: unknown) => {
-    logger().error({ err: error }, 'search sync worker did not start');
-    return null;
-  });
-  return (provider = new MeiliSearchProvider(db(), meili));
+  ensureSearchSyncWorker();
+  return (provider = new MeiliSearchProvider(db(), meiliIndex(MEILI_URL, MEILI_KEY)));
 }

@@ -4,7 +4,7 @@ import { apiError, fieldErrors, json } from '@/server/http';
 import { db } from '@/server/db';
 import { updatePhotoText } from '@/server/photos/photo-text';
 import { photoRef } from '@/server/photos/photo-refs';
-import { ensurePhotoWorker, kickPhotoWork } from '@/server/photos/worker';
+import { kickPhotoWork } from '@/server/photos/worker';
 import { photoTextSchema } from '@/server/photos/intake';
 import { idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
 import { failureResponse } from '@/server/proofing-types';
@@ -16,8 +16,7 @@ export const GET: APIRoute = async ({ params, locals }) => {
   const photo = id ? await photoRef(db(), id) : null;
   if (!photo || photo.ownerId !== user.id) return apiError('not_found', 'There is no such photo among yours.');
   if (photo.state === 'pending') {
-    // A poll is also a nudge: if this instance restarted since the upload, the work starts again here.
-    ensurePhotoWorker();
+    // A poll is also a nudge: if this instance restarted since the upload, the work is done now, not at the next sweep.
     void kickPhotoWork();
   }
   return json({ photo }, { cache: 'private' });

@@ -5,7 +5,7 @@ import { apiError, json } from '@/server/http';
 import { db } from '@/server/db';
 import { takeInPhoto } from '@/server/photos/intake';
 import { readPhotoUpload } from '@/server/photos/multipart';
-import { ensurePhotoWorker, kickPhotoWork } from '@/server/photos/worker';
+import { kickPhotoWork } from '@/server/photos/worker';
 import { requireUser } from '@/server/proofing-http';
 import { failureResponse } from '@/server/proofing-types';
 
@@ -17,7 +17,6 @@ export const POST: APIRoute = async ({ request, locals }) => {
   if (!upload.ok) return failureResponse(upload);
   const outcome = await takeInPhoto(db(), user, upload.value.bytes, upload.value.fields);
   if (!outcome.ok) return failureResponse(outcome);
-  ensurePhotoWorker();
   // Renditions are made after the answer: a large photo takes seconds to resize, the writer should not wait for it.
   setImmediate(() => void kickPhotoWork());
   return json({ photo: outcome.value }, { status: 202, cache: 'private', headers: { Location: `/api/v1/photos/${outcome.value.id}` } });

@@ -16,7 +16,11 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   const input = await readInput(request);
   if (isFailure(input)) return failureResponse(input);
   const body = fixFlagSchema.safeParse(input.data);
-  const back = '/proofing#fixes';
+  // A plain form comes back to where it was sent from: the desk, or the moderation panel on the fix's history.
+  const fromHistory = (input.data as { from?: unknown } | null)?.from === 'history';
+  const page = fromHistory ? `/fixes/${slug.data}/history` : '/proofing';
+  const anchor = fromHistory ? '#moderation' : '#fixes';
+  const back = `${page}${anchor}`;
   if (!body.success) return answer(refuse('bad_request', 'Choose what to do with the fix.', fieldErrors(body.error)), input, { back });
-  return answer(await setFixFlag(user, slug.data, body.data), input, { back, done: `/proofing?fix=${body.data.action}#fixes` });
+  return answer(await setFixFlag(user, slug.data, body.data), input, { back, done: `${page}?fix=${body.data.action}${anchor}` });
 };
