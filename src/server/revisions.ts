@@ -7,6 +7,8 @@ import { photoRefsOf, type PhotoRef } from './photos/photo-refs';
 
 export interface LabelledRef {
   id: number;
+  /** The catalogue address, so the editor can ask about the machine or family (e.g. for similar fixes). */
+  slug: string;
   label: string;
 }
 
@@ -53,14 +55,14 @@ export async function revisionTargets(
     .join('makers as mk', 'mk.id', 'm.maker_id')
     .whereIn('rm.revision_id', revisionIds)
     .orderBy(['mk.name', 'm.model_number', 'm.region'])
-    .select('rm.revision_id', 'm.id', knex.raw(`mk.name || ' ' || m.model_number || ' (' || m.region || ')' AS label`));
+    .select('rm.revision_id', 'm.id', 'm.slug', knex.raw(`mk.name || ' ' || m.model_number || ' (' || m.region || ')' AS label`));
   const chassis = await knex('revision_chassis as rc')
     .join('chassis_families as c', 'c.id', 'rc.chassis_family_id')
     .whereIn('rc.revision_id', revisionIds)
     .orderBy('c.name')
-    .select('rc.revision_id', 'c.id', knex.raw(`c.name || ' ' || c.code AS label`));
-  for (const m of machines) out.get(m.revision_id)?.machines.push({ id: m.id, label: m.label });
-  for (const c of chassis) out.get(c.revision_id)?.chassis.push({ id: c.id, label: c.label });
+    .select('rc.revision_id', 'c.id', 'c.slug', knex.raw(`c.name || ' ' || c.code AS label`));
+  for (const m of machines) out.get(m.revision_id)?.machines.push({ id: m.id, slug: m.slug, label: m.label });
+  for (const c of chassis) out.get(c.revision_id)?.chassis.push({ id: c.id, slug: c.slug, label: c.label });
   return out;
 }
 

@@ -139,6 +139,7 @@ describe('GET /api/v1/search/similar', () => {
       label: 'Tamberlyn DR-4120K (PAL)',
       chassis: { slug: 'tamberlyn-tl2-loader', name: 'TL-2 DVD recorder loader platform' },
     });
+    expect(body.chassis).toBeNull();
     expect(body.items[0]).toEqual({
       slug: 'tl2-tray-will-not-open-e21',
       title: 'Tray will not open, display shows E-21',
@@ -155,6 +156,23 @@ describe('GET /api/v1/search/similar', () => {
     expect(missing.status).toBe(400);
     expect(Object.keys(missing.body.error.fields)).toEqual(['symptom']);
     expect((await api('/api/v1/search/similar?symptom=tray&machine=no-such-machine')).status).toBe(404);
+  });
+
+  it('answers for a chassis family on its own, as a family-wide fix is written', async () => {
+    const { status, body } = await api('/api/v1/search/similar?symptom=tray+will+not+open&chassis=tamberlyn-tl2-loader');
+    expect(status).toBe(200);
+    expect(body.machine).toBeNull();
+    expect(body.chassis).toEqual({ slug: 'tamberlyn-tl2-loader', name: 'TL-2 DVD recorder loader platform' });
+    expect(body.items[0]).toMatchObject({ slug: 'tl2-tray-will-not-open-e21', sameMachine: false });
+    expect((await api('/api/v1/search/similar?symptom=tray&chassis=no-such-family')).status).toBe(404);
+  });
+
+  it('asks for exactly one of a machine and a chassis family', async () => {
+    for (const target of ['', '&machine=tamberlyn-dr4120k-pal&chassis=tamberlyn-tl2-loader']) {
+      const { status, body } = await api(`/api/v1/search/similar?symptom=tray${target}`);
+      expect(status).toBe(400);
+      expect(Object.keys(body.error.fields)).toEqual(['machine']);
+    }
   });
 });
 

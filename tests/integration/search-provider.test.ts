@@ -5,7 +5,7 @@ import { PostgresSearchProvider } from '@/server/search/pg-provider';
 import { recordSearchMiss, listWantedFixes } from '@/server/search/misses';
 import { nearMatches } from '@/server/search/near-matches';
 import { similarFixes } from '@/server/search/similar';
-import { findNamedMachine } from '@/server/search/context';
+import { findNamedChassis, findNamedMachine } from '@/server/search/context';
 import type { SearchQuery } from '@/lib/search/query-schema';
 import type { SearchResult } from '@/lib/search/result-types';
 
@@ -265,5 +265,15 @@ describe('misses, near matches and similar fixes', () => {
     expect(similar.every((s) => s.likeness >= 0.5 && s.likeness <= 1)).toBe(true);
     const other = await findNamedMachine(knex, 'brindlecote-td550-multi');
     expect((await similarFixes(knex, 'tray will not open', other!)).map((s) => s.slug)).not.toContain('tl2-tray-will-not-open-e21');
+  });
+
+  it('warns of fixes anywhere in a chassis family when the fix being written names only the family', async () => {
+    const family = await findNamedChassis(knex, 'tamberlyn-tl2-loader');
+    const similar = await similarFixes(knex, 'tray will not open', family!);
+    expect(similar[0]?.slug).toBe('tl2-tray-will-not-open-e21');
+    expect(similar.every((s) => !s.sameMachine)).toBe(true);
+    const elsewhere = await knex('chassis_families').whereNot({ slug: 'tamberlyn-tl2-loader' }).orderBy('id').first('slug');
+    const otherFamily = await findNamedChassis(knex, elsewhere.slug);
+    expect((await similarFixes(knex, 'tray will not open', otherFamily!)).map((s) => s.slug)).not.toContain('tl2-tray-will-not-open-e21');
   });
 });

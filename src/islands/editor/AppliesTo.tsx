@@ -30,7 +30,7 @@ function Chips({ title, items, onRemove }: { title: string; items: LabelledRefDa
 
 export function AppliesTo({ machines, chassis, onChange, error }: AppliesToProps) {
   const pick = (hit: LookupHit) => {
-    const ref = { id: hit.id, label: hit.label };
+    const ref = { id: hit.id, slug: hit.slug, label: hit.label };
     if (hit.kind === 'machine') onChange({ machines: [...machines, ref], chassis });
     else onChange({ machines, chassis: [...chassis, ref] });
   };

@@ -19,6 +19,7 @@ import { PartsEditor } from './PartsEditor';
 import { PhotoList } from './PhotoList';
 import { ReadingsEditor } from './ReadingsEditor';
 import { SaveIndicator } from './SaveIndicator';
+import { SimilarFixes } from './SimilarFixes';
 import { StaleBasePanel } from './StaleBasePanel';
 import { useAutosave } from './useAutosave';
 import { useRestoredStart } from './useRestoredStart';
@@ -168,23 +169,26 @@ export function FixForm(props: FixEditorProps) {
         onChange={setTargets}
         error={errors.machineIds?.message ?? errors.chassisIds?.message}
       />
-      <Controller
-        control={control}
-        name="symptoms"
-        render={({ field }) => (
-          <ListField
-            id="field-symptoms"
-            legend="Symptoms"
-            itemLabel="symptom"
-            hint="What the owner sees or hears, one per line."
-            values={field.value ?? []}
-            onChange={field.onChange}
-            maxItems={fixDraftLimits.symptoms}
-            maxLength={fixDraftLimits.symptom}
-            error={errors.symptoms?.message}
-          />
-        )}
-      />
+      <div>
+        <Controller
+          control={control}
+          name="symptoms"
+          render={({ field }) => (
+            <ListField
+              id="field-symptoms"
+              legend="Symptoms"
+              itemLabel="symptom"
+              hint="What the owner sees or hears, one per line."
+              values={field.value ?? []}
+              onChange={field.onChange}
+              maxItems={fixDraftLimits.symptoms}
+              maxLength={fixDraftLimits.symptom}
+              error={errors.symptoms?.message}
+            />
+          )}
+        />
+        <SimilarFixes control={control} machines={machines} chassis={chassis} editingSlug={props.fixSlug} />
+      </div>
       <Controller
         control={control}
         name="errorCodes"

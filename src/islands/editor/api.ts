@@ -15,7 +15,7 @@ export type ApiResult<T> = { ok: true; data: T } | { ok: false; failure: ApiFail
 
 const offline: ApiFailure = { status: 0, code: 'network', message: 'the server could not be reached (offline?)', fields: {}, extra: {} };
 
-export async function callApi<T>(path: string, init: { method: string; body?: unknown }): Promise<ApiResult<T>> {
+export async function callApi<T>(path: string, init: { method: string; body?: unknown; signal?: AbortSignal }): Promise<ApiResult<T>> {
   let response: Response;
   try {
     response = await fetch(path, {
@@ -24,6 +24,7 @@ export async function callApi<T>(path: string, init: { method: string; body?: un
         init.body === undefined ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
       body: init.body === undefined ? undefined : JSON.stringify(init.body),
       credentials: 'same-origin',
+      ...(init.signal ? { signal: init.signal } : {}),
     });
   } catch {
     return { ok: false, failure: offline };

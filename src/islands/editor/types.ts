@@ -4,6 +4,8 @@ import type { RevisionState } from '@/lib/schemas/revision';
 
 export interface LabelledRefData {
   id: number;
+  /** Missing on refs restored from a browser journal written before slugs were kept. */
+  slug?: string;
   label: string;
 }
 

@@ -34,6 +34,19 @@ export interface SearchHit {
   matchedAll: boolean;
 }
 
+/** A live fix that looks like a symptom being written up (GET /api/v1/search/similar). */
+export interface SimilarFix {
+  slug: string;
+  title: string;
+  symptoms: string[];
+  machines: string[];
+  /** True when the fix names this very machine; false when it comes from the chassis family. */
+  sameMachine: boolean;
+  /** 0 to 1: the larger of the share of the symptom's words found and the title's trigram likeness. */
+  likeness: number;
+  benchScore: { score: number | null; reports: number };
+}
+
 export interface FacetValue {
   value: string;
   label: string;

@@ -55,6 +55,17 @@ export async function findNamedMachine(knex: Knex, slug: string): Promise<Resolv
   };
 }
 
+/** A chassis family on its own, as a fix written for the whole family names it. */
+export interface ResolvedChassis {
+  chassisId: number;
+  family: { slug: string; name: string };
+}
+
+export async function findNamedChassis(knex: Knex, slug: string): Promise<ResolvedChassis | null> {
+  const row = await knex('chassis_families').where({ slug }).whereNull('deleted_at').first('id', 'slug', 'name');
+  return row ? { chassisId: row.id, family: { slug: row.slug, name: row.name } } : null;
+}
+
 async function idOf(knex: Knex, table: 'makers' | 'chassis_families', slug: string | undefined): Promise<number | null | undefined> {
   if (slug === undefined) return undefined;
   const row = await knex(table).where({ slug }).whereNull('deleted_at').first('id');

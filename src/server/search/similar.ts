@@ -3,23 +3,12 @@ import type { Knex } from 'knex';
 import { clauseLevel, relevanceOf, proximityOf, CODE_WEIGHT, WORD_WEIGHT } from '@/lib/search/ranking';
 import { foldText } from '@/lib/search/tokens';
 import type { SearchQuery } from '@/lib/search/query-schema';
+import type { SimilarFix } from '@/lib/search/result-types';
 import { analyseQuery } from './analyse';
-import { proximityTarget, type ResolvedMachine } from './context';
+import { proximityTarget, type ResolvedChassis, type ResolvedMachine } from './context';
 import { fullMatches, partialMatches } from './pg-candidates';
 import { filterCondition } from './pg-conditions';
 import { pgArray } from './sql-fragment';
-
-export interface SimilarFix {
-  slug: string;
-  title: string;
-  symptoms: string[];
-  machines: string[];
-  /** True when the fix names this very machine; false when it comes from the chassis family. */
-  sameMachine: boolean;
-  /** 0 to 1: the larger of the share of the symptom's words found and the title's trigram likeness. */
-  likeness: number;
-  benchScore: { score: number | null; reports: number };
-}
 
 /**
  * A duplicate shows in the title and symptoms: a clause found there counts fully, one found only in the
@@ -36,19 +25,22 @@ function summaryShare(levels: number[], weights: number[]): number {
 const LIKENESS_FLOOR = 0.5;
 const MAX_SIMILAR = 5;
 
-export async function similarFixes(knex: Knex, symptom: string, machine: ResolvedMachine): Promise<SimilarFix[]> {
+/** Like fixes for a machine (its own and its family's), or for a chassis family (any fix in the family). */
+export async function similarFixes(knex: Knex, symptom: string, about: ResolvedMachine | ResolvedChassis): Promise<SimilarFix[]> {
   const analysed = await analyseQuery(knex, symptom);
   if (!analysed.searchable) return [];
+  const machine = 'named' in about ? about : null;
   const query: SearchQuery = {
     text: symptom,
-    machine: machine.named.slug,
-    scope: machine.chassisId === null ? 'machine' : 'family',
+    ...(machine ? { machine: machine.named.slug } : {}),
+    scope: machine?.chassisId === null ? 'machine' : 'family',
     filters: {},
     page: 1,
     perPage: MAX_SIMILAR,
   };
-  const filter = filterCondition(query, { machine, machineMissing: false, makerId: undefined, chassisId: undefined }, analysed);
-  const full = await fullMatches(knex, analysed, filter, { machine, scope: query.scope }, 50, {
+  const chassisId = 'named' in about ? undefined : about.chassisId;
+  const filter = filterCondition(query, { machine, machineMissing: false, makerId: undefined, chassisId }, analysed);
+  const full = await fullMatches(knex, analysed, filter, machine ? { machine, scope: query.scope } : null, 50, {
     summary: 'collect',
     anywhere: 'collect',
     allButOne: [],
