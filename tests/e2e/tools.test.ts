@@ -1,7 +1,7 @@
-// Bench tools in Chromium: the bleed-down tool answers as you type and draws its chart; a reader adds a fix's parts to the order list and downloads the CSV.
+// Bench tools in Chromium: the bleed-down tool answers as you type and draws its chart; a reader adds a fix's parts to the order list and downloads the CSV; a failed save never loses the browser copy.
 import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, Page, Route } from 'playwright-core';
 import { launchBrowser } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
@@ -39,6 +39,16 @@ async function addAllParts(page: Page, slug: string): Promise<void> {
   await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
   await page.waitForURL((url) => url.pathname === '/order-list' && !url.searchParams.has('add') && !url.searchParams.has('added'));
   await hydrated(page);
+}
+
+async function signIn(page: Page, member: { email: string; password: string }): Promise<void> {
+  await page.goto(`${base}/sign-in`);
+  await page.fill('#pw-email', member.email);
+  await page.fill('#pw-password', member.password);
+  await Promise.all([
+    page.waitForURL((url) => url.pathname !== '/sign-in'),
+    page.click('form:has(input[value="password"]) button[type="submit"]'),
+  ]);
 }
 
 /** Astro drops the ssr attribute once an island has hydrated. */
@@ -136,13 +146,7 @@ describe('order list', () => {
     await addAllParts(page, slug);
     const rows = await page.locator('table.order-table tbody tr').count();
 
-    await page.goto(`${base}/sign-in`);
-    await page.fill('#pw-email', member.email);
-    await page.fill('#pw-password', member.password);
-    await Promise.all([
-      page.waitForURL((url) => url.pathname !== '/sign-in'),
-      page.click('form:has(input[value="password"]) button[type="submit"]'),
-    ]);
+    await signIn(page, member);
     await page.goto(`${base}/order-list`);
     await hydrated(page);
     await page.getByText(`Merged ${rows} ${rows === 1 ? 'line' : 'lines'} kept in this browser into your saved list.`).waitFor();
@@ -168,6 +172,57 @@ describe('order list', () => {
         .first()
         .inputValue(),
     ).resolves.toBe('7');
+    await context.close();
+  });
+
+  it('keeps the browser copy and says so when the first save signed in fails, and clears it once a save succeeds', async () => {
+    const { slug, partCount } = await fixWithCapacitors();
+    const knex = testDb();
+    const member = await createUser(knex, { tag: 'order-list-fail' });
+    await knex.destroy();
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await addAllParts(page, slug);
+    const rows = await page.locator('table.order-table tbody tr').count();
+    const readBrowserCopy = async (): Promise<unknown> =>
+      JSON.parse((await page.evaluate(() => window.localStorage.getItem('benchlore.order-list.v1'))) ?? 'null');
+    const browserCopy = await readBrowserCopy();
+    expect(browserCopy).toMatchObject({ lines: expect.arrayContaining([expect.objectContaining({ kind: 'capacitor' })]) });
+
+    await signIn(page, member);
+    // The server fails every save of the list until the route is removed.
+    const failSaves = (route: Route) =>
+      route.request().method() === 'PUT'
+        ? route.fulfill({
+            status: 500,
+            contentType: 'application/json',
+            body: JSON.stringify({ error: { code: 'internal', message: 'down' } }),
+          })
+        : route.continue();
+    await page.route(`${base}/api/v1/order-list`, failSaves);
+    await page.goto(`${base}/order-list`);
+    await hydrated(page);
+    await page.getByText('Could not save the last change; it is still on this page.').waitFor();
+    expect(await readBrowserCopy()).toEqual(browserCopy);
+    await page.getByText(`Could not add ${rows} ${rows === 1 ? 'line' : 'lines'} to your saved list; this browser still keeps`).waitFor();
+    const unsaved = await (await page.request.get(`${base}/api/v1/order-list`)).json();
+    expect(unsaved.lines).toEqual([]);
+
+    // A reload while saves still fail merges the same copy again: nothing lost, nothing doubled.
+    await page.reload();
+    await hydrated(page);
+    await page.getByText('Could not save the last change; it is still on this page.').waitFor();
+    await expect(page.locator('table.order-table tbody tr').count()).resolves.toBe(rows);
+    expect(await readBrowserCopy()).toEqual(browserCopy);
+
+    // Once the server answers again, "Save again" stores the list and only then clears the browser copy.
+    await page.unroute(`${base}/api/v1/order-list`, failSaves);
+    await page.getByRole('button', { name: 'Save again' }).click();
+    await page.getByText('Saved with your account.', { exact: true }).waitFor();
+    await page.getByText(`Merged ${rows} ${rows === 1 ? 'line' : 'lines'} kept in this browser into your saved list.`).waitFor();
+    expect(await page.evaluate(() => window.localStorage.getItem('benchlore.order-list.v1'))).toBeNull();
+    const saved = await (await page.request.get(`${base}/api/v1/order-list`)).json();
+    expect(saved.lines.reduce((sum: number, l: { quantity: number }) => sum + l.quantity, 0)).toBe(partCount);
     await context.close();
   });
 });

@@ -37,7 +37,15 @@ describe('the tools index', () => {
     for (const slug of ['value-decoder', 'preferred-values', 'substitute-check', 'esr', 'life-estimate', 'bleed-down']) {
       expect(html).toContain(`href="/tools/${slug}"`);
     }
-    for (const source of ['IEC 60062', 'IEC 60063', 'IEC 62368-1', '10-kelvin rule', 'tan δ', 'common practice'])
+    for (const source of [
+      'IEC 60062',
+      'IEC 60063',
+      'IEC 62368-1',
+      '10-kelvin rule',
+      'tan δ',
+      'common practice',
+      'from memory, not one named datasheet',
+    ])
       expect(text).toContain(source);
     expect(html).toContain('href="/order-list"');
   });
@@ -156,16 +164,34 @@ describe('bad input on the pages', () => {
     expect(text).toContain('For example: 16V 105C low-ESR');
   });
 
+  it('the life estimate works the self-heating out from ripple current, ESR and thermal resistance', async () => {
+    // ΔT = I² × ESR × Rth = 1² × 0.1 × 50 = 5 K, so 80 °C + 5 K = 85 °C; 10-kelvin rule: 2000 h × 2² = 8000 h.
+    const query = { ratedLife: '2000', ratedTemperature: '105', ambient: '80', rippleCurrent: '1A', esr: '0.1', thermalResistance: '50' };
+    const { text } = await page('/tools/life-estimate', query);
+    expect(text).toContain('ΔT = I² × ESR × R th');
+    expect(text).toContain('Self-heating, I² × ESR × Rth 5 K');
+    expect(text).toContain('Part runs at 85 °C');
+    expect(text).toContain('Expected life 8,000 h');
+    expectNoBrokenFigures(text);
+  });
+
   it('the life estimate refuses a part run above its rating instead of extrapolating', async () => {
     const { text } = await page('/tools/life-estimate', { ratedLife: '2000', ratedTemperature: '85', ambient: '95' });
     expect(text).toContain('above its 85 °C rating');
     expect(text).not.toContain('Expected life');
   });
 
-  it('the ESR tool answers a voltage outside the table with the voltages it has', async () => {
+  it('the ESR tool answers a voltage outside the table with the voltages it has and an example', async () => {
     const { text } = await page('/tools/esr', { capacitance: '1000uF', ratedVoltage: '20V' });
-    expect(text).toContain('The table has no row for 20 V');
-    expect(text).toContain('6.3 V, 10 V, 16 V');
+    expect(text).toContain('covers only parts rated 6.3, 10, 16, 25, 35, 50, 63 and 100 V; 20 V is not one of them');
+    expect(text).toContain('For example: 16V or 25V');
+    expect(text).not.toContain('Largest ESR of a new part');
+  });
+
+  it('the ESR page says its tan δ limits are from memory and which rated voltages they cover', async () => {
+    const { text } = await page('/tools/esr', {});
+    expect(text).toContain('from memory, not one named datasheet');
+    expect(text).toContain('The table covers parts rated 6.3, 10, 16, 25, 35, 50, 63 and 100 V only');
   });
 
   it('a form sent with nothing filled in lists what is needed, with examples', async () => {

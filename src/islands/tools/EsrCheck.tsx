@@ -1,7 +1,7 @@
 // Bench tool island: the ESR a new general-purpose electrolytic may have, and a measured ESR judged against it.
 import type { ReactElement } from 'react';
 import { esrOutcome, type EsrField, type EsrResult } from './model/esr';
-import type { EsrReference } from '@/lib/bench/esr';
+import { tableVoltagesText, type EsrReference } from '@/lib/bench/esr';
 import { quantityText, significant } from './model/format';
 import { Field } from './ui/Field';
 import { NotYet, PrintedInputs } from './ui/ResultStates';
@@ -99,7 +99,7 @@ export default function EsrCheck({ initialFields, submitted }: EsrCheckProps): R
       }
     >
       <Field {...field('capacitance')} hint="As marked: 1000uF, 1000 µF" placeholder="1000uF" />
-      <Field {...field('ratedVoltage')} hint="One of 6.3, 10, 16, 25, 35, 50, 63 or 100 V" placeholder="16V" />
+      <Field {...field('ratedVoltage')} hint={`The table covers ${tableVoltagesText()}`} placeholder="16V" />
       <Field {...field('measured')} optional hint="The meter's reading in ohms: 0.4, 0.4 ohm, 400m" placeholder="0.4" />
       <Field {...field('frequency')} optional hint="Blank for 120 Hz; many bench ESR meters test near 100 kHz" placeholder="100 kHz" />
     </ToolShell>

@@ -17,6 +17,9 @@ const labels: Record<LifeField, string> = {
   ratedTemperature: 'Rated temperature',
   ambient: 'Temperature beside the part',
   selfHeating: 'Self-heating',
+  rippleCurrent: 'Ripple current',
+  esr: 'ESR',
+  thermalResistance: 'Thermal resistance',
 };
 
 export interface LifeEstimateProps {
@@ -31,7 +34,10 @@ function LifeResult({ result }: { result: LifeOutcomeResult }): ReactElement {
         rows={[
           { label: 'Expected life', value: `${hours(result.lifeH)} (${years(result.lifeYears)} running day and night)`, strong: true },
           { label: 'Part runs at', value: celsius(result.coreTemperatureC) },
-          { label: 'Self-heating', value: `${significant(result.selfHeatingK)} K` },
+          {
+            label: result.fromRipple ? 'Self-heating, I² × ESR × Rth' : 'Self-heating',
+            value: `${significant(result.selfHeatingK)} K`,
+          },
           { label: 'Factor over the rated life', value: `× ${significant(result.factor)}` },
         ]}
       />
@@ -111,7 +117,23 @@ export default function LifeEstimate({ initialFields, submitted }: LifeEstimateP
         hint="Air beside the part in °C; beside a regulator's heatsink this is well above room"
         placeholder="55"
       />
-      <Field {...field('selfHeating')} optional hint="Kelvin the ripple current adds inside the can; blank for none" placeholder="5" />
+      <Field
+        {...field('selfHeating')}
+        optional
+        hint="Kelvin the ripple current adds inside the can, if you know it; blank for none, or work it out below"
+        placeholder="5"
+      />
+      <fieldset className="space-y-3">
+        <legend className="font-semibold">Or self-heating from the ripple current (all three, optional)</legend>
+        <Field {...field('rippleCurrent')} optional hint="RMS ripple current through the part: 1 A, 850 mA" placeholder="1 A" />
+        <Field {...field('esr')} optional hint="The part's ESR at the ripple frequency, in ohms: 0.1, 100m" placeholder="0.1" />
+        <Field
+          {...field('thermalResistance')}
+          optional
+          hint="Can to surrounding air, in K/W, from the datasheet; small cans are higher"
+          placeholder="50 K/W"
+        />
+      </fieldset>
     </ToolShell>
   );
 }

@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { canonicalMagnitude } from '@/lib/values/decimal';
 import { fail, ok, type Result } from '@/lib/values/result';
+import { refuseNonFinite } from './finite';
 import { readInput } from './input';
 import { positiveNumber } from './numbers';
 
@@ -45,19 +46,39 @@ export function bleedDown(input: BleedDownInput): Result<BleedDownResult> {
   if (!read.ok) return read;
   const { capacitanceF: c, resistanceOhm: r, initialVoltageV: v0, safeVoltageV: vSafe } = read.value;
   const timeConstantS = r * c;
+  // Both finite and above zero, yet their product can underflow to zero: the decay would have no time scale.
+  if (timeConstantS === 0) {
+    return fail(
+      'The time constant R × C comes out too small to work with: the inputs are far outside any real part. Check their units.',
+      EXAMPLE,
+    );
+  }
   const alreadySafe = v0 <= vSafe;
+  const timeToSafeS = alreadySafe ? 0 : canonicalMagnitude(timeConstantS * Math.log(v0 / vSafe));
+  const figures = {
+    'time constant': canonicalMagnitude(timeConstantS),
+    'time to the safe voltage': timeToSafeS,
+    'stored energy': canonicalMagnitude(0.5 * c * v0 * v0),
+    'energy left at the safe voltage': canonicalMagnitude(0.5 * c * Math.min(v0, vSafe) ** 2),
+    'energy the resistor takes': alreadySafe ? 0 : canonicalMagnitude(0.5 * c * (v0 * v0 - vSafe * vSafe)),
+    'resistor power at the start': canonicalMagnitude((v0 * v0) / r),
+    // The chart's time axis (see bleedDownCurve) must stay a number too.
+    'chart length': chartEndS(timeConstantS, timeToSafeS),
+  };
+  const tooLarge = refuseNonFinite(figures, EXAMPLE);
+  if (tooLarge) return tooLarge;
   const notes = ['Use a resistor rated for the full starting voltage as well as the power.'];
   if (alreadySafe) notes.push(`The starting voltage is already at or below ${vSafe} V; measure it all the same.`);
   return ok({
     caution: BLEED_DOWN_CAUTION,
     initialVoltageV: v0,
-    timeConstantS: canonicalMagnitude(timeConstantS),
-    timeToSafeS: alreadySafe ? 0 : canonicalMagnitude(timeConstantS * Math.log(v0 / vSafe)),
+    timeConstantS: figures['time constant'],
+    timeToSafeS: figures['time to the safe voltage'],
     safeVoltageV: vSafe,
-    storedEnergyJ: canonicalMagnitude(0.5 * c * v0 * v0),
-    energyLeftJ: canonicalMagnitude(0.5 * c * Math.min(v0, vSafe) ** 2),
-    resistorEnergyJ: alreadySafe ? 0 : canonicalMagnitude(0.5 * c * (v0 * v0 - vSafe * vSafe)),
-    initialResistorPowerW: canonicalMagnitude((v0 * v0) / r),
+    storedEnergyJ: figures['stored energy'],
+    energyLeftJ: figures['energy left at the safe voltage'],
+    resistorEnergyJ: figures['energy the resistor takes'],
+    initialResistorPowerW: figures['resistor power at the start'],
     notes,
   });
 }
@@ -65,6 +86,11 @@ export function bleedDown(input: BleedDownInput): Result<BleedDownResult> {
 /** V(t) = V0 · e^(−t/RC). */
 export function voltageAfter(initialVoltageV: number, timeS: number, timeConstantS: number): number {
   return initialVoltageV * Math.exp(-timeS / timeConstantS);
+}
+
+/** The chart runs to five time constants, or a little past the safe time when that is later. */
+function chartEndS(timeConstantS: number, timeToSafeS: number): number {
+  return Math.max(5 * timeConstantS, 1.2 * timeToSafeS);
 }
 
 export interface BleedDownCurve {
@@ -80,9 +106,10 @@ export function bleedDownCurve(input: BleedDownInput, pointCount = 61): Result<B
     return fail('The number of points must be a whole number from 2 to 1000.', '61');
   }
   const { timeConstantS, timeToSafeS, initialVoltageV: v0 } = result.value;
-  const endS = Math.max(5 * timeConstantS, 1.2 * timeToSafeS);
+  const endS = chartEndS(timeConstantS, timeToSafeS);
   const points = Array.from({ length: pointCount }, (_, i) => {
-    const timeS = canonicalMagnitude((endS * i) / (pointCount - 1));
+    // The fraction first, so a long but finite chart cannot overflow on the way.
+    const timeS = canonicalMagnitude(endS * (i / (pointCount - 1)));
     return { timeS, voltageV: canonicalMagnitude(voltageAfter(v0, timeS, timeConstantS)) };
   });
   return ok({ caution: BLEED_DOWN_CAUTION, points });

@@ -6,7 +6,7 @@ import { esrFromTanDelta, maxTanDelta, typicalTanDeltaTable } from './esr-table'
 import { readInput } from './input';
 import { positiveNumber } from './numbers';
 
-export { esrFromTanDelta, maxTanDelta, tanDeltaFromEsr, typicalTanDeltaTable } from './esr-table';
+export { esrFromTanDelta, maxTanDelta, tableVoltagesText, tanDeltaFromEsr, typicalTanDeltaTable } from './esr-table';
 
 export const esrReferenceInputSchema = z.object({
   capacitanceF: positiveNumber('Capacitance'),
@@ -24,7 +24,7 @@ export interface EsrReference {
 }
 
 const REFERENCE_ASSUMPTIONS = [
-  'Maximum ESR of a new general-purpose 85 °C part, from its tan δ limit at 120 Hz and 20 °C.',
+  'Maximum ESR of a new general-purpose 85 °C part, from a typical tan δ limit at 120 Hz and 20 °C (values from memory, not one named datasheet; the part’s own datasheet comes first).',
   'Low-ESR and 105 °C series have lower limits; a healthy part of those series reads well below this.',
 ];
 
@@ -44,7 +44,7 @@ export function referenceEsr(input: EsrReferenceInput): Result<EsrReference> {
 }
 
 /**
- * Up to the new part's limit is good. Up to twice it is marginal: datasheet endurance tests pass a part
+ * Up to the new part's limit is good. Up to twice it is marginal: endurance tests typically pass a part
  * whose tan δ stays within 200 % of the initial limit (from memory of general-purpose series tables),
  * so beyond twice the limit the part is past its own end-of-life criterion.
  */

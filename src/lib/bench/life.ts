@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { canonicalMagnitude } from '@/lib/values/decimal';
 import { fail, ok, type Result } from '@/lib/values/result';
+import { refuseNonFinite } from './finite';
 import { readInput } from './input';
 import { nonNegativeNumber, positiveNumber, temperatureC } from './numbers';
 
@@ -45,6 +46,7 @@ export interface LifeEstimate {
 }
 
 const EXAMPLE = '{ ratedLifeH: 2000, ratedTemperatureC: 105, ambientTemperatureC: 85 }';
+const RIPPLE_EXAMPLE = 'ripple: { currentA: 1, esrOhm: 0.1, thermalResistanceKPerW: 50 } (5 K)';
 
 /** ΔT = I² · ESR · Rth: ripple power in the ESR through the can's thermal resistance. */
 export function rippleSelfHeatingK(currentA: number, esrOhm: number, thermalResistanceKPerW: number): number {
@@ -59,6 +61,8 @@ export function estimateLife(input: LifeInput): Result<LifeEstimate> {
   const selfHeatingK = canonicalMagnitude(
     ripple ? rippleSelfHeatingK(ripple.currentA, ripple.esrOhm, ripple.thermalResistanceKPerW) : (read.value.selfHeatingK ?? 0),
   );
+  const tooLargeHeating = refuseNonFinite({ 'self-heating': selfHeatingK }, RIPPLE_EXAMPLE);
+  if (tooLargeHeating) return tooLargeHeating;
   const coreTemperatureC = canonicalMagnitude(ambientTemperatureC + selfHeatingK);
   if (coreTemperatureC > ratedTemperatureC) {
     return fail(
@@ -68,9 +72,12 @@ export function estimateLife(input: LifeInput): Result<LifeEstimate> {
   }
   const factor = 2 ** ((ratedTemperatureC - coreTemperatureC) / 10);
   const lifeH = canonicalMagnitude(ratedLifeH * factor);
+  const lifeYears = canonicalMagnitude(lifeH / HOURS_PER_YEAR);
+  const tooLarge = refuseNonFinite({ 'expected life': lifeH }, EXAMPLE);
+  if (tooLarge) return tooLarge;
   return ok({
     lifeH,
-    lifeYears: canonicalMagnitude(lifeH / HOURS_PER_YEAR),
+    lifeYears,
     coreTemperatureC,
     selfHeatingK,
     factor: canonicalMagnitude(factor),
@@ -116,5 +123,11 @@ export function lifeCurve(input: LifeCurveInput): Result<LifePoint[]> {
     points.push({ temperatureC: t, lifeH: canonicalMagnitude(ratedLifeH * 2 ** ((ratedTemperatureC - t) / 10)) });
   }
   points.push({ temperatureC: ratedTemperatureC, lifeH: ratedLifeH });
+  // The coolest point has the longest life, so it is the one that can overflow.
+  const tooLarge = refuseNonFinite(
+    { 'life at the lowest temperature': points[0]?.lifeH ?? ratedLifeH },
+    '{ ratedLifeH: 2000, ratedTemperatureC: 105, fromC: 40 }',
+  );
+  if (tooLarge) return tooLarge;
   return ok(points);
 }

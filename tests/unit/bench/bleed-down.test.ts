@@ -43,6 +43,35 @@ describe('bleedDown', () => {
     const result = bleedDown({ ...primary, safeVoltageV: 0 });
     expect(result.ok || result.error.message).toBe('Safe voltage must be above zero.');
   });
+
+  it('refuses finite inputs whose figures would overflow, naming the figure and giving an example', () => {
+    // 1e200 F × 1e200 Ω overflows the time constant; 1e200 V squared overflows the energy and the power.
+    const longDecay = bleedDown({ ...primary, capacitanceF: 1e200, resistanceOhm: 1e200 });
+    expect(longDecay.ok).toBe(false);
+    if (!longDecay.ok) {
+      expect(longDecay.error.message).toMatch(/^The time constant comes out beyond the numbers this tool can work with/);
+      expect(longDecay.error.example).toBe('{ capacitanceF: 0.00015, resistanceOhm: 470000, initialVoltageV: 340 }');
+    }
+    const hugeVoltage = bleedDown({ ...primary, initialVoltageV: 1e200, safeVoltageV: 1e199 });
+    expect(hugeVoltage.ok || hugeVoltage.error.message).toMatch(/^The stored energy comes out beyond/);
+    // Only the chart's time axis overflows here: 5 × 1e308 s.
+    expect(bleedDown({ ...primary, capacitanceF: 1e154, resistanceOhm: 1e154 }).ok).toBe(false);
+  });
+
+  it('refuses a time constant that underflows to zero', () => {
+    const result = bleedDown({ ...primary, capacitanceF: 1e-200, resistanceOhm: 1e-200 });
+    expect(result.ok || result.error.message).toMatch(/R × C comes out too small/);
+  });
+
+  it('still answers extreme inputs whose figures stay finite', () => {
+    const result = bleedDown({ ...primary, capacitanceF: 1e100, resistanceOhm: 1e100 });
+    expect(
+      result.ok &&
+        Object.values(result.value)
+          .filter((v) => typeof v === 'number')
+          .every(Number.isFinite),
+    ).toBe(true);
+  });
 });
 
 describe('voltageAfter', () => {
@@ -68,6 +97,14 @@ describe('bleedDownCurve', () => {
   it('reaches past the safe time when that is later than five time constants', () => {
     const result = bleedDownCurve({ ...primary, initialVoltageV: 40000, safeVoltageV: 1 }, 5);
     expect(result.ok && result.value.points.at(-1)?.voltageV).toBeLessThan(1);
+  });
+
+  it('gives only finite points for the longest decay bleedDown accepts', () => {
+    // τ = 1e307 s: the chart ends at 5 × τ = 5e307 s, still a number; i × end would overflow before dividing.
+    const result = bleedDownCurve({ ...primary, capacitanceF: 1e154, resistanceOhm: 1e153 }, 1000);
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.value.points.every((p) => Number.isFinite(p.timeS) && Number.isFinite(p.voltageV))).toBe(true);
   });
 
   it('refuses a point count outside 2 to 1000', () => {

@@ -6,6 +6,7 @@ import {
   judgeEsr,
   maxTanDelta,
   referenceEsr,
+  tableVoltagesText,
   tanDeltaFromEsr,
   typicalTanDeltaTable,
 } from '@/lib/bench/esr';
@@ -24,11 +25,19 @@ describe('maxTanDelta', () => {
     expect(maxTanDelta(25, 4700e-6)).toEqual({ ok: true, value: 0.24 });
   });
 
-  it('refuses a voltage the table has no row for', () => {
+  it('refuses a voltage the table has no row for, naming the voltages it covers and an example', () => {
     const result = maxTanDelta(400, 47e-6);
     expect(result.ok).toBe(false);
-    if (!result.ok) expect(result.error.example).toMatch(/6.3 V, 10 V, 16 V/);
+    if (!result.ok) {
+      expect(result.error.message).toContain('covers only parts rated 6.3, 10, 16, 25, 35, 50, 63 and 100 V');
+      expect(result.error.message).toContain('400 V is not one of them');
+      expect(result.error.example).toBe('16V or 25V');
+    }
     expect(maxTanDelta(16, 0).ok).toBe(false);
+  });
+
+  it('lists the covered voltages from the table itself', () => {
+    expect(tableVoltagesText()).toBe('6.3, 10, 16, 25, 35, 50, 63 and 100 V');
   });
 });
 

@@ -60,6 +60,31 @@ describe('estimateLife', () => {
     });
     expect(both.ok || both.error.message).toMatch(/not both/);
   });
+
+  it('refuses a life that overflows to Infinity, naming the figure and giving an example', () => {
+    // 1e308 h × 2^((200 − (−55)) / 10) is beyond the largest double.
+    const result = estimateLife({ ratedLifeH: 1e308, ratedTemperatureC: 200, ambientTemperatureC: -55 });
+    expect(result.ok).toBe(false);
+    if (!result.ok) {
+      expect(result.error.message).toMatch(/^The expected life comes out beyond the numbers this tool can work with/);
+      expect(result.error.example).toBe('{ ratedLifeH: 2000, ratedTemperatureC: 105, ambientTemperatureC: 85 }');
+    }
+  });
+
+  it('refuses ripple self-heating that overflows instead of calling the part Infinity °C hot', () => {
+    const result = estimateLife({
+      ratedLifeH: 2000,
+      ratedTemperatureC: 105,
+      ambientTemperatureC: 20,
+      ripple: { currentA: 1e200, esrOhm: 1, thermalResistanceKPerW: 1 },
+    });
+    expect(result.ok).toBe(false);
+    if (!result.ok) {
+      expect(result.error.message).toMatch(/^The self-heating comes out beyond/);
+      expect(result.error.message).not.toContain('Infinity');
+      expect(result.error.example).toMatch(/currentA: 1, esrOhm: 0.1, thermalResistanceKPerW: 50/);
+    }
+  });
 });
 
 describe('lifeCurve', () => {
@@ -80,6 +105,10 @@ describe('lifeCurve', () => {
   it('ends exactly at the rating when the step does not divide the range', () => {
     const result = lifeCurve({ ratedLifeH: 2000, ratedTemperatureC: 105, fromC: 40, stepC: 30 });
     expect(result.ok && result.value.map((p) => p.temperatureC)).toEqual([40, 70, 100, 105]);
+  });
+
+  it('refuses a curve whose coolest point overflows', () => {
+    expect(lifeCurve({ ratedLifeH: 1e308, ratedTemperatureC: 200, fromC: -55 }).ok).toBe(false);
   });
 
   it('refuses a start at or above the rating', () => {

@@ -17,6 +17,8 @@ export interface OrderListState {
 
 const SAVE_DELAY_MS = 400;
 
+const plural = (n: number, one: string, many: string): string => `${n} ${n === 1 ? one : many}`;
+
 function countParts(lines: readonly StoredLine[]): number {
   return lines.reduce((sum, l) => sum + l.quantity, 0);
 }
@@ -28,23 +30,42 @@ export function useOrderList(mode: ListMode, initialLines: StoredLine[], incomin
   const [saveState, setSaveState] = useState<SaveState>('idle');
   const [message, setMessage] = useState<string | null>(null);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  /** Lines kept in this browser that the account does not hold yet: cleared only once a save has succeeded. */
+  const browserCopyPending = useRef(false);
+  /** What to say once that save succeeds (the merge message, or nothing in place of the failure). */
+  const mergedMessage = useRef<string | null>(null);
+  /** Numbers each account save, so an older answer arriving late does not overwrite a newer one's state. */
+  const lastSave = useRef(0);
+
+  const sendToAccount = useCallback(async (next: StoredLine[]): Promise<boolean> => {
+    const thisSave = ++lastSave.current;
+    try {
+      await saveAccountLines(next);
+    } catch {
+      if (thisSave === lastSave.current) setSaveState('failed');
+      return false;
+    }
+    // Every list sent after the merge still holds the browser lines (or the member removed them), so any success will do.
+    if (browserCopyPending.current) {
+      browserCopyPending.current = false;
+      clearBrowserLines();
+      setMessage(mergedMessage.current);
+    }
+    if (thisSave === lastSave.current) setSaveState('saved');
+    return true;
+  }, []);
 
   const persist = useCallback(
-    (next: StoredLine[], immediately = false) => {
+    (next: StoredLine[]) => {
       if (mode === 'browser') {
         setSaveState(saveBrowserLines(next) ? 'saved' : 'failed');
         return;
       }
       if (timer.current) clearTimeout(timer.current);
       setSaveState('saving');
-      const send = () =>
-        saveAccountLines(next)
-          .then(() => setSaveState('saved'))
-          .catch(() => setSaveState('failed'));
-      if (immediately) void send();
-      else timer.current = setTimeout(() => void send(), SAVE_DELAY_MS);
+      timer.current = setTimeout(() => void sendToAccount(next), SAVE_DELAY_MS);
     },
-    [mode],
+    [mode, sendToAccount],
   );
 
   useEffect(() => {
@@ -57,15 +78,25 @@ export function useOrderList(mode: ListMode, initialLines: StoredLine[], incomin
         setMessage(`Added ${countParts(incoming)} ${countParts(incoming) === 1 ? 'part' : 'parts'} to the list kept in this browser.`);
       }
     } else if (browserCopy.length > 0 || incoming.length > 0) {
-      // First visit signed in: the list kept in this browser joins the saved one, once.
+      // First visit signed in: the list kept in this browser joins the saved one, once, and is cleared only once saved.
       const merged = mergeLists(mergeLists(initialLines, incoming), browserCopy);
       setLines(merged);
-      persist(merged, true);
-      clearBrowserLines();
-      if (browserCopy.length > 0)
+      browserCopyPending.current = true;
+      mergedMessage.current =
+        browserCopy.length > 0 ? `Merged ${plural(browserCopy.length, 'line', 'lines')} kept in this browser into your saved list.` : null;
+      setSaveState('saving');
+      void sendToAccount(merged).then((saved) => {
+        // A later save (an edit, "Save again") may have succeeded first and cleared the copy already.
+        if (saved || !browserCopyPending.current) return;
+        // The parts that just arrived are only in the address, which is cleaned below: keep them with the browser copy.
+        const kept = mergeLists(browserCopy, incoming);
+        const them = kept.length === 1 ? 'it' : 'them';
         setMessage(
-          `Merged ${browserCopy.length} ${browserCopy.length === 1 ? 'line' : 'lines'} kept in this browser into your saved list.`,
+          saveBrowserLines(kept)
+            ? `Could not add ${plural(kept.length, 'line', 'lines')} to your saved list; this browser still keeps ${them} and ${them === 'it' ? 'it is' : 'they are'} on this page. Save again, or come back later.`
+            : `Could not add ${plural(kept.length, 'line', 'lines')} to your saved list, and this browser would not keep ${them}: ${them === 'it' ? 'it is' : 'they are'} on this page only. Save again, or download the CSV.`,
         );
+      });
     }
     cleanAddress();
     setLoaded(true);
