@@ -5,7 +5,8 @@ import { bodyExtensions } from '@/lib/tiptap/extensions';
 import type { BodyDoc } from '@/lib/tiptap/allowlist';
 import { BodyToolbar } from './BodyToolbar';
 import { CautionPanel, FigurePanel, LinkPanel, ReadingPanel, type PanelName } from './body-panels';
-import { imageFilesOf } from './paste';
+import { officeListsToHtmlLists } from './office-lists';
+import { imageFilesOf, pastedImageFiles } from './paste';
 import type { PhotoRefData } from './types';
 
 interface BodyEditorProps {
@@ -40,8 +41,10 @@ export function BodyEditor({ initial, onChange, photos, onImageFiles, onReady, e
         'aria-describedby': errorId,
         class: 'prose-fix min-h-[14rem] max-w-none p-3 focus:outline-none',
       },
+      // Office suites paste lists as marked-up paragraphs; real lists must exist before ProseMirror parses them.
+      transformPastedHTML: officeListsToHtmlLists,
       handlePaste: (_view, event) => {
-        const files = imageFilesOf(event.clipboardData);
+        const files = pastedImageFiles(event.clipboardData);
         if (files.length === 0) return false;
         onImageFilesRef.current(files);
         return true;
