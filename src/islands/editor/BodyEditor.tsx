@@ -49,6 +49,19 @@ export function BodyEditor({ initial, onChange, photos, onImageFiles, onReady, e
         onImageFilesRef.current(files);
         return true;
       },
+      // Alt+F10 goes to the toolbar from anywhere in the body: inside a table Tab moves between cells,
+      // so without it a keyboard user would have to leave the table to reach the table buttons.
+      handleKeyDown: (_view, event) => {
+        if (!event.altKey || event.key !== 'F10') return false;
+        const toolbar = document.querySelector<HTMLElement>(`[role="toolbar"][aria-controls="${CSS.escape(editorId)}"]`);
+        const target =
+          toolbar?.querySelector<HTMLElement>('[data-toolbar-item]:not([disabled])[tabindex="0"]') ??
+          toolbar?.querySelector<HTMLElement>('[data-toolbar-item]:not([disabled])');
+        if (!target) return false;
+        event.preventDefault();
+        target.focus();
+        return true;
+      },
       handleDrop: (_view, event) => {
         const files = imageFilesOf((event as DragEvent).dataTransfer);
         if (files.length === 0) return false;

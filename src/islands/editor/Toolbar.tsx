@@ -46,6 +46,8 @@ export function Toolbar({ label, controls, children }: ToolbarProps) {
       role="toolbar"
       aria-label={label}
       aria-controls={controls}
+      // The body editor moves focus here on Alt+F10 (see BodyEditor).
+      aria-keyshortcuts="Alt+F10"
       className="flex flex-wrap gap-1 border-b border-rule bg-paper-deep p-1"
       onKeyDown={onKeyDown}
       onFocus={onFocus}
