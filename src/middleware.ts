@@ -68,8 +68,9 @@ const privateWhenSignedIn = defineMiddleware(async (context, next) => {
 const guard = defineMiddleware((context, next) => guardRequest(context, context.locals.user) ?? next());
 
 /** Photo work and search sync start with the server's first request of any kind, not with the first that needs them. */
-const background = defineMiddleware((_context, next) => {
-  startBackgroundWork();
+const background = defineMiddleware((context, next) => {
+  // A page prerendered at build time is no server start.
+  if (!context.isPrerendered) startBackgroundWork();
   return next();
 });
 

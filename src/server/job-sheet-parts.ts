@@ -2,23 +2,33 @@
 // put the job's parts on the list to order them. Both lock the rows they change, so a save on the order
 // list page at the same moment cannot lose lines.
 import { db } from './db';
-import { addToOrderList } from './order-lists';
+import { addToOrderList, lockedList, writeLines } from './order-lists';
 import type { WriteResult } from './job-sheets';
 import { appendUsedParts, usedPartsFromList, type UsedPart } from '@/lib/bench/job-parts';
 import { jobPartSchema } from '@/lib/schemas/bench-work';
-import { readStoredLines } from '@/islands/tools/model/order-list';
 import { z } from 'zod';
 
 const notFound = { ok: false as const, code: 'not_found' as const, message: 'No job sheet with that number.' };
 const storedParts = z.array(jobPartSchema);
+const unreadableParts = {
+  ok: false as const,
+  code: 'bad_request' as const,
+  message: 'The parts on this job sheet could not be read; save the job sheet once to tidy them, then try again.',
+};
+
+/** The stored parts rows, or null when the column holds something else (never a 500). */
+function usedPartsOf(raw: unknown): UsedPart[] | null {
+  const parsed = storedParts.safeParse(raw ?? []);
+  return parsed.success ? parsed.data : null;
+}
 
 /** Appends the member's order-list lines to the job's parts used; `clear` empties the list afterwards. */
 export async function takePartsFromOrderList(ownerId: number, jobId: number, options: { clear: boolean }): Promise<WriteResult<number>> {
   return db().transaction(async (trx) => {
     const job = await trx('job_sheets').where({ id: jobId, owner_id: ownerId }).forUpdate().first('id', 'parts_used');
     if (!job) return notFound;
-    const list = await trx('order_lists').where('owner_id', ownerId).orderBy('id').forUpdate().first('id', 'lines');
-    const lines = readStoredLines(list?.lines);
+    const list = await lockedList(trx, ownerId);
+    const lines = list.lines;
     if (lines.length === 0)
       return {
         ok: false,
@@ -27,13 +37,14 @@ export async function takePartsFromOrderList(ownerId: number, jobId: number, opt
       };
     const added = usedPartsFromList(lines);
     if (!added.ok) return { ok: false, code: 'bad_request', message: added.error.message };
-    const existing: UsedPart[] = storedParts.parse(job.parts_used ?? []);
+    const existing = usedPartsOf(job.parts_used);
+    if (!existing) return unreadableParts;
     const parts = appendUsedParts(existing, added.value);
     if (!parts.ok) return { ok: false, code: 'bad_request', message: parts.error.message };
     await trx('job_sheets')
       .where({ id: jobId, owner_id: ownerId })
       .update({ parts_used: JSON.stringify(parts.value), updated_at: trx.fn.now() });
-    if (options.clear && list) await trx('order_lists').where({ id: list.id }).update({ lines: '[]', updated_at: trx.fn.now() });
+    if (options.clear) await writeLines(trx, ownerId, list.id, []);
     return { ok: true, value: added.value.length };
   });
 }
@@ -42,7 +53,8 @@ export async function takePartsFromOrderList(ownerId: number, jobId: number, opt
 export async function putJobPartsOnOrderList(ownerId: number, jobId: number): Promise<WriteResult<number>> {
   const job = await db()('job_sheets').where({ id: jobId, owner_id: ownerId }).first('customer_ref', 'parts_used');
   if (!job) return notFound;
-  const parts: UsedPart[] = storedParts.parse(job.parts_used ?? []);
+  const parts = usedPartsOf(job.parts_used);
+  if (!parts) return unreadableParts;
   if (parts.length === 0) return { ok: false, code: 'bad_request', message: 'This job sheet lists no parts yet.' };
   // The order list outlives the job sheet, so it names the sheet by number, never by the customer's
   // reference (deleting a sheet must take the customer data with it).

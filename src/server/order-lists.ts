@@ -34,7 +34,13 @@ export async function getOrderList(ownerId: number): Promise<SavedOrderList> {
   return toSaved(row);
 }
 
-async function writeLines(trx: Knex.Transaction, ownerId: number, existingId: number | null, lines: StoredLine[]): Promise<SavedOrderList> {
+/** Writes the member's lines (inserting their list row on the first save), inside the caller's transaction. */
+export async function writeLines(
+  trx: Knex.Transaction,
+  ownerId: number,
+  existingId: number | null,
+  lines: StoredLine[],
+): Promise<SavedOrderList> {
   const payload = { lines: JSON.stringify(lines), updated_at: trx.fn.now() };
   const [row] = existingId
     ? await trx('order_lists').where({ id: existingId, owner_id: ownerId }).update(payload).returning(['id', 'name', 'lines', 'updated_at'])
@@ -45,7 +51,7 @@ async function writeLines(trx: Knex.Transaction, ownerId: number, existingId: nu
 }
 
 /** Locks the member's list row (if any) so two saves at once do not lose lines. */
-async function lockedList(trx: Knex.Transaction, ownerId: number): Promise<SavedOrderList> {
+export async function lockedList(trx: Knex.Transaction, ownerId: number): Promise<SavedOrderList> {
   const row: OrderListRow | undefined = await trx('order_lists')
     .where('owner_id', ownerId)
     .orderBy('id')

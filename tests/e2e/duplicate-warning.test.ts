@@ -1,11 +1,11 @@
 // In Chromium: while a member writes a symptom for a machine, live fixes for it that look the same are named,
 // with links that open in a new tab; nothing shows when nothing is alike, nor for the fix being edited itself.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext, Page, Response } from 'playwright-core';
-import { launchBrowser } from '../support/browser';
+import type { Browser, Page, Response } from 'playwright-core';
+import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
-import { DEMO_PASSWORD, createUser, signIn } from '../support/sign-in';
+import { DEMO_PASSWORD, createUser } from '../support/sign-in';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;
 const knex = testDb();
@@ -14,18 +14,6 @@ let browser: Browser;
 /** A seeded fix for the seeded machine below, whose symptoms include "tray won't open". */
 const SEEDED_FIX = 'tl2-tray-will-not-open-e21';
 const MACHINE = { model: 'DR-4120K', label: 'DR-4120K (PAL)' };
-
-async function contextSignedInAs(email: string, password: string): Promise<BrowserContext> {
-  const cookie = await signIn(base, email, password);
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  await context.addCookies(
-    cookie.split('; ').map((pair) => {
-      const [name, ...value] = pair.split('=');
-      return { name: name!, value: value.join('='), url: base };
-    }),
-  );
-  return context;
-}
 
 /** The next answer of the similar-fixes endpoint whose symptom contains `words`. */
 function similarAnswer(page: Page, words: string): Promise<Response> {
@@ -52,7 +40,7 @@ describe('the duplicate warning on the writing page', () => {
       .where('f.slug', SEEDED_FIX)
       .first('r.title');
     expect(fix?.title).toBeTruthy();
-    const context = await contextSignedInAs('member@example.test', DEMO_PASSWORD);
+    const context = await signedInContext(browser, base, 'member@example.test', DEMO_PASSWORD);
     const page = await context.newPage();
     await page.goto(`${base}/write`);
     await page.getByRole('combobox', { name: 'Add a machine or chassis family' }).fill(MACHINE.model);
@@ -83,7 +71,7 @@ describe('the duplicate warning on the writing page', () => {
 
   it('never offers the fix being edited as a duplicate of itself', async () => {
     const user = await createUser(knex, { role: 'member', tag: 'e2e-duplicate-editor' });
-    const context = await contextSignedInAs(user.email, user.password);
+    const context = await signedInContext(browser, base, user.email, user.password);
     const page = await context.newPage();
     // The live fix's own symptom and machines fill the form, so the endpoint finds the fix itself.
     const answered = similarAnswer(page, '');

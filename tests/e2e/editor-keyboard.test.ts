@@ -2,10 +2,10 @@
 // between cells with Tab, get back to the toolbar from inside the table with Alt+F10, add a row.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
-import { createUser, signIn } from '../support/sign-in';
+import { createUser } from '../support/sign-in';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;
 const knex = testDb();
@@ -30,14 +30,7 @@ async function arrowTo(page: Page, label: string): Promise<void> {
 describe('tables in the remedy editor from the keyboard', () => {
   it('inserts a table, fills cells with Tab, returns to the toolbar with Alt+F10 and adds a row', async () => {
     const user = await createUser(knex, { tag: 'e2e-keyboard-tables' });
-    const cookie = await signIn(base, user.email, user.password);
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies(
-      cookie.split('; ').map((pair) => {
-        const [name, ...value] = pair.split('=');
-        return { name: name!, value: value.join('='), url: base };
-      }),
-    );
+    const context = await signedInContext(browser, base, user.email, user.password);
     const page = await context.newPage();
     await page.goto(`${base}/write`);
     const remedy = page.getByRole('textbox', { name: /Remedy/ });

@@ -5,7 +5,7 @@ import type { Browser, BrowserContext } from 'playwright-core';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { createUser, signIn } from '../support/sign-in';
@@ -15,17 +15,9 @@ const base = `http://127.0.0.1:${E2E_PORT}`;
 const knex = testDb();
 let browser: Browser;
 
-async function signedInContext(role: 'member' | 'moderator', tag: string): Promise<BrowserContext> {
+async function signedInAs(role: 'member' | 'moderator', tag: string): Promise<BrowserContext> {
   const user = await createUser(knex, { role, tag: `e2e-writing-${tag}` });
-  const cookie = await signIn(base, user.email, user.password);
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  await context.addCookies(
-    cookie.split('; ').map((pair) => {
-      const [name, ...value] = pair.split('=');
-      return { name: name!, value: value.join('='), url: base };
-    }),
-  );
-  return context;
+  return signedInContext(browser, base, user.email, user.password);
 }
 
 beforeAll(async () => {
@@ -46,7 +38,7 @@ describe('writing, proofing and reading a fix', () => {
     const title = `Tray will not close after a cold start ${Date.now()}`;
 
     // The member writes.
-    const writer = await signedInContext('member', 'writer');
+    const writer = await signedInAs('member', 'writer');
     const page = await writer.newPage();
     await page.goto(`${base}/write`);
     await page.getByLabel('Title', { exact: true }).fill(title);
@@ -94,7 +86,7 @@ describe('writing, proofing and reading a fix', () => {
     expect(revision.parts).toHaveLength(2);
 
     // A moderator proofs it from the desk.
-    const desk = await signedInContext('moderator', 'proofer');
+    const desk = await signedInAs('moderator', 'proofer');
     const deskPage = await desk.newPage();
     await deskPage.goto(`${base}/proofing`);
     await deskPage.getByRole('link', { name: new RegExp(title) }).click();
@@ -138,7 +130,7 @@ describe('writing, proofing and reading a fix', () => {
   });
 
   it('never claims a save that failed, warns before leaving, and offers the browser’s copy back', async () => {
-    const writer = await signedInContext('member', 'offline');
+    const writer = await signedInAs('member', 'offline');
     const page = await writer.newPage();
     await page.goto(`${base}/write`);
     await page.getByLabel('Title', { exact: true }).fill('Counter runs, picture freezes');
@@ -209,7 +201,7 @@ describe('writing, proofing and reading a fix', () => {
     };
     const { slug } = await publish({ values });
 
-    const writer = await signedInContext('member', 'stale');
+    const writer = await signedInAs('member', 'stale');
     const page = await writer.newPage();
     await page.goto(`${base}/fixes/${slug}/edit`);
     await page.getByLabel('Cause', { exact: true }).fill('The cassette-up spring has slipped; check the post for a burr first.');
@@ -230,7 +222,7 @@ describe('writing, proofing and reading a fix', () => {
   });
 
   it('takes a pasted picture as a photo (asking for its alt text) and keeps pasted lists and tables', async () => {
-    const writer = await signedInContext('member', 'paste');
+    const writer = await signedInAs('member', 'paste');
     const page = await writer.newPage();
     await page.goto(`${base}/write`);
     const remedy = page.getByRole('textbox', { name: /Remedy/ });

@@ -7,6 +7,7 @@ import { storage } from '@/server/storage';
 import { testDb } from '../support/db';
 import { testEnv } from '../support/test-env';
 import { createUser } from '../support/sign-in';
+import { storedPhotoRow } from '../support/photo-rows';
 
 const knex = testDb();
 const HOUR = 3_600_000;
@@ -19,23 +20,7 @@ afterAll(() => knex.destroy());
 
 /** A photo row (created `hoursAgo`) with one stored rendition, optionally on a revision in `state`. */
 async function photo(hoursAgo: number, onRevision?: 'draft' | 'submitted', draftTouchedHoursAgo = 0): Promise<{ id: number; key: string }> {
-  const sha = randomBytes(32).toString('hex');
-  const key = `photos/${sha.slice(0, 2)}/${sha.slice(0, 16)}-cleanup-480.jpg`;
-  await storage().put(key, Buffer.from([0xff, 0xd8, 0xff, 0xd9]), 'image/jpeg');
-  const [{ id }] = await knex('photos')
-    .insert({
-      owner_id: ownerId,
-      storage_key: key,
-      mime_type: 'image/jpeg',
-      byte_size: 4,
-      width: 480,
-      height: 320,
-      sha256: sha,
-      renditions: JSON.stringify([{ width: 480, height: 320, format: 'jpeg', key, bytes: 4 }]),
-      alt_text: 'A test photo',
-      created_at: new Date(Date.now() - hoursAgo * HOUR),
-    })
-    .returning('id');
+  const { id, key } = await storedPhotoRow(knex, ownerId, { hoursAgo, tag: 'cleanup', altText: 'A test photo' });
   if (onRevision) {
     // A fix of its own each time: a writer keeps one draft per fix.
     const [{ id: fixId }] = await knex('fixes')

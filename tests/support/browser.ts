@@ -1,5 +1,6 @@
 // Debian's Chromium through playwright-core, started with the flags this machine needs.
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext } from 'playwright-core';
+import { signIn } from './sign-in';
 import { defaultChromiumPath } from '../../scripts/lib/chromium.ts';
 
 export async function launchBrowser(): Promise<Browser> {
@@ -17,4 +18,17 @@ export async function launchBrowser(): Promise<Browser> {
       '--disable-quic',
     ],
   });
+}
+
+/** A browser context of its own, signed in as `email` through the real sign-in form (the session cookie copied in). */
+export async function signedInContext(browser: Browser, base: string, email: string, password: string): Promise<BrowserContext> {
+  const cookie = await signIn(base, email, password);
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  await context.addCookies(
+    cookie.split('; ').map((pair) => {
+      const [name, ...value] = pair.split('=');
+      return { name: name!, value: value.join('='), url: base };
+    }),
+  );
+  return context;
 }

@@ -6,7 +6,7 @@ import { db } from '../db';
 import { writeAudit } from '../audit';
 import { fieldErrors } from '../http';
 import { invalid, redirectTo, refused, type FormOutcome } from './form-outcome';
-import { publicUserColumns, roleOf, type UserRow } from './users';
+import { endAllSessions, publicUserColumns, roleOf, type UserRow } from './users';
 
 export const USERS_PER_PAGE = 50;
 
@@ -86,10 +86,9 @@ async function suspend(actor: SessionUser, fields: Record<string, string>): Prom
     if (!subject) return refused(404, 'That member was not found.');
     if (!can(actor, 'suspend_user', { subject })) return refused(403, 'You cannot suspend this account.');
     if (subject.suspended_at) return redirectTo(back(fields, 'unchanged'));
+    await trx('users').where({ id: userId }).update({ suspended_at: trx.fn.now(), suspended_reason: reason });
     // Ending the sessions too means a cookie kept from before cannot come back to life when it is lifted.
-    await trx('users')
-      .where({ id: userId })
-      .update({ suspended_at: trx.fn.now(), suspended_reason: reason, sessions_valid_after: new Date() });
+    await endAllSessions(userId, trx);
     await writeAudit(
       {
         actorId: actor.id,

@@ -10,6 +10,7 @@ import { tokenSchema } from '@/lib/schemas/account';
 import { redirectTo, tooMany, type FormOutcome } from './form-outcome';
 import { siteUrl } from './sign-up';
 import { consumeToken, issueToken, peekToken } from './user-tokens';
+import { endAllSessions } from './users';
 
 /** Mails the confirmation link to the new address (rate-limited like every mailed link). */
 export async function requestEmailChange(user: SessionUser, newEmail: string, clientKey: string): Promise<FormOutcome> {
@@ -47,7 +48,8 @@ export async function confirmEmailChange(rawToken: string | null): Promise<Email
     if (!user) return { ok: false as const, problem: 'unknown' as const };
     const taken = await trx('users').where({ email: newEmail }).whereNot({ id: user.id }).first('id');
     if (taken) return { ok: false as const, problem: 'taken' as const };
-    await trx('users').where({ id: user.id }).update({ email: newEmail, emailVerified: trx.fn.now(), sessions_valid_after: new Date() });
+    await trx('users').where({ id: user.id }).update({ email: newEmail, emailVerified: trx.fn.now() });
+    await endAllSessions(user.id, trx);
     // The addresses themselves stay out of the log: it outlives a deleted account.
     await writeAudit(
       { actorId: user.id, action: 'user.email_change', subjectType: 'user', subjectId: user.id, detail: { changed: 'email' } },
