@@ -33,8 +33,8 @@ async function publicCounts(knex: Knex): Promise<Record<string, number>> {
   const tables: { tablename: string }[] = await knex('pg_tables').select('tablename').where('schemaname', 'public');
   const out: Record<string, number> = {};
   for (const { tablename } of tables) {
-    const [{ n }] = await knex(tablename).count({ n: '*' });
-    out[tablename] = Number(n);
+    const [row] = await knex(tablename).count({ n: '*' });
+    out[tablename] = Number(row?.n);
   }
   return out;
 }

@@ -104,18 +104,18 @@ describe('npm run export', () => {
         .where('fc.fix_id', row.id)
         .pluck('c.slug');
       expect(record.chassisFamilies.map((c) => c.slug).sort()).toEqual(chassis.sort());
-      const [{ n }] = await knex('bench_reports as b')
+      const [reports] = await knex('bench_reports as b')
         .join('fixes as f', 'f.id', 'b.fix_id')
         .where('f.id', row.id)
         .whereRaw('b.member_id <> f.created_by')
         .count({ n: '*' });
-      expect(record.benchReports.counted).toBe(Number(n));
+      expect(record.benchReports.counted).toBe(Number(reports?.n));
       const photoCount = await knex('revision_photos as rp')
         .join('photos as p', 'p.id', 'rp.photo_id')
         .where('rp.revision_id', row.revision_id)
         .whereNull('p.deleted_at')
         .count({ n: '*' });
-      expect(record.photos.length).toBe(Number(photoCount[0].n));
+      expect(record.photos.length).toBe(Number(photoCount[0]?.n));
       expect(record.url).toBe(`https://bench.example.test/fixes/${record.slug}`);
     }
   });

@@ -25,7 +25,7 @@ export async function tableChecksums(knex: Knex | Knex.Transaction): Promise<Rec
   await knex.raw(`SET LOCAL "TimeZone" = 'UTC'`).catch(() => knex.raw(`SET "TimeZone" = 'UTC'`));
   const out: Record<string, TableChecksum> = {};
   for (const table of await appTables(knex)) {
-    const [schema, name] = table.split('.');
+    const [schema = '', name = ''] = table.split('.');
     const res = await knex.raw(
       `SELECT count(*)::bigint AS rows, coalesce(md5(string_agg(md5(t::text), '' ORDER BY md5(t::text))), '') AS md5 FROM ??.?? t`,
       [schema, name],
