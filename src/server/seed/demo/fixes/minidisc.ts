@@ -25,7 +25,7 @@ const overwriteHead = rev({
     reading({
       testPoint: 'Overwrite head coil, at its flexible lead',
       expected: '4-8 Ω',
-      measured: '5.6 Ω on a good head',
+      measured: 'open (no reading) on a failed head',
       note: 'Deck unplugged, lead unplugged from the main board.',
     }),
     p('A head whose slider is chipped or scratched will also scratch the cartridge tops; replace it rather than refit it.'),
