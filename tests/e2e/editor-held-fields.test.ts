@@ -76,6 +76,14 @@ describe('a draft with invalid fields', () => {
     await expect(page.locator('#part-0-quantity-error').textContent()).resolves.toMatch(/from 1 to 999/);
     await expect(page.locator('[data-held-count]').getAttribute('data-held-count')).resolves.toBe('2');
 
+    // On a phone the parts and readings tables scroll inside their own boxes; the page does not scroll sideways.
+    await page.setViewportSize({ width: 360, height: 800 });
+    await page.getByRole('button', { name: 'Add a reading' }).click();
+    await expect(page.evaluate(() => document.documentElement.scrollWidth)).resolves.toBeLessThanOrEqual(360);
+    await page.screenshot({ path: '/tmp/writer-held-360.png', fullPage: true });
+    await page.getByRole('button', { name: 'Remove reading 1' }).click();
+    await page.setViewportSize({ width: 1280, height: 900 });
+
     // Submission waits for them, and says what to change; the page stays.
     await page.getByRole('button', { name: 'Submit for proofing' }).click();
     await expect(page.getByRole('alert').first().textContent()).resolves.toMatch(/not ready to submit/);

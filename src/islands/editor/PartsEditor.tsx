@@ -25,7 +25,8 @@ export function PartsEditor({ control, register, errors }: PartsEditorProps) {
   const { fields, append, remove, move } = useFieldArray({ control, name: 'parts' });
   const rows = useWatch({ control, name: 'parts' }) ?? [];
   return (
-    <div id="field-parts" className="overflow-x-auto">
+    // Positioned, so the visually hidden header text stays inside the scrolling box instead of widening a phone's page.
+    <div id="field-parts" className="relative overflow-x-auto">
       <table className="w-full border-collapse font-sans text-sm">
         <caption className="text-left font-semibold">Parts list</caption>
         <thead>
