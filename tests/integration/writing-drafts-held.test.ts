@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { emptyDraft } from '@/lib/schemas/fix-draft';
 import { testDb } from '../support/db';
 import { INTEGRATION_PORT } from '../support/test-env';
+import { postForm } from '../support/sign-in';
 import { call, completeValues, session, someMachineId, type Session } from '../fixtures/writing';
 
 const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
@@ -155,6 +156,21 @@ describe('discarding a draft', () => {
     const discarded = await call(base, `/api/v1/drafts/${id}`, { method: 'DELETE', cookie: writer.cookie });
     expect(discarded.status).toBeLessThan(300);
     expect(await knex('revisions').where({ id }).first('state', 'title')).toEqual({ state: 'withdrawn', title: '' });
+  });
+
+  it('discards a draft from the writer’s list of revisions with a plain form', async () => {
+    const created = await call(base, '/api/v1/drafts', { body: { values: emptyDraft() }, cookie: writer.cookie });
+    const id = created.body.revision.id as number;
+    const list = await call(base, '/write/mine', { cookie: writer.cookie });
+    expect(list.body).toContain(`action="/api/v1/drafts/${id}/discard"`);
+    const discarded = await postForm(base, `/api/v1/drafts/${id}/discard`, {}, { cookie: writer.cookie });
+    expect(discarded.status).toBe(303);
+    expect(discarded.headers.get('location')).toBe('/write/mine?discarded=1');
+    expect((await knex('revisions').where({ id }).first('state')).state).toBe('withdrawn');
+    const after = await call(base, '/write/mine?discarded=1', { cookie: writer.cookie });
+    expect(after.body).toMatch(/Discarded\. The draft stays in this list as withdrawn\./);
+    expect(after.body).toContain(`data-revision="${id}" data-state="withdrawn"`);
+    expect(after.body).not.toContain(`action="/api/v1/drafts/${id}/discard"`);
   });
 
   it('discards a draft that still holds an invalid field', async () => {
