@@ -2,9 +2,9 @@
 import { randomBytes } from 'node:crypto';
 import type { Knex } from 'knex';
 import { can } from '@/lib/permissions';
-import { fixDraftSchema, type FixDraft } from '@/lib/schemas/fix-draft';
+import { splitDraft, type FixDraft, type HeldFields } from '@/lib/schemas/fix-draft';
 import { db } from './db';
-import { issuesToFields, refuse, succeed, type Outcome, type Writer } from './proofing-types';
+import { refuse, succeed, type Outcome, type Writer } from './proofing-types';
 import { loadRevision, type RevisionRecord } from './revisions';
 
 export interface DraftSaved {
@@ -13,11 +13,17 @@ export interface DraftSaved {
   baseIsStale: boolean;
 }
 
-export function parseDraftValues(raw: unknown): Outcome<FixDraft> {
-  const parsed = fixDraftSchema.safeParse(raw);
-  if (!parsed.success)
-    return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', issuesToFields(parsed.error.issues));
-  return succeed(parsed.data);
+/** What a draft save stores: the values that pass their checks, and the fields held as typed until they are fixed. */
+export interface DraftContent {
+  values: FixDraft;
+  held: HeldFields;
+}
+
+/** A draft keeps whatever the writer typed; only what no person types (the remedy's structure) can refuse a save. */
+export function parseDraftValues(raw: unknown): Outcome<DraftContent> {
+  const split = splitDraft(raw);
+  if (!split.ok) return refuse('bad_request', `Nothing was saved: ${split.message}`, split.fields);
+  return succeed({ values: split.values, held: split.held });
 }
 
 /** Machines, chassis families and photos named by a draft must exist; photos must be the writer's or already public. */
@@ -68,8 +74,13 @@ async function checkReferences(knex: Knex, writer: Writer, values: FixDraft): Pr
   return Object.keys(fields).length ? fields : null;
 }
 
-/** Writes a draft's content and what it applies to. */
-export async function writeRevisionContent(trx: Knex.Transaction, revisionId: number, values: FixDraft): Promise<void> {
+/** Writes a draft's content, the fields it holds as typed, and what it applies to. */
+export async function writeRevisionContent(
+  trx: Knex.Transaction,
+  revisionId: number,
+  values: FixDraft,
+  held: HeldFields = {},
+): Promise<void> {
   await trx('revisions')
     .where({ id: revisionId })
     .update({
@@ -84,6 +95,7 @@ export async function writeRevisionContent(trx: Knex.Transaction, revisionId: nu
       difficulty: values.difficulty,
       time_minutes: values.timeMinutes,
       edit_summary: values.editSummary,
+      held_fields: JSON.stringify(held),
       updated_at: trx.fn.now(),
     });
   await trx('revision_machines').where({ revision_id: revisionId }).delete();
@@ -140,7 +152,7 @@ export async function createDraft(writer: Writer, input: CreateDraftInput): Prom
   const values = parseDraftValues(input.values);
   if (!values.ok) return values;
   const knex = db();
-  const refs = await checkReferences(knex, writer, values.value);
+  const refs = await checkReferences(knex, writer, values.value.values);
   if (refs) return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', refs);
   let revisionId: number;
   try {
@@ -160,7 +172,7 @@ export async function createDraft(writer: Writer, input: CreateDraftInput): Prom
         fixId = row.id as number;
       }
       const id = await insertDraftRow(trx, { fixId, authorId: writer.id, baseRevisionId, amendsRevisionId: null });
-      await writeRevisionContent(trx, id, values.value);
+      await writeRevisionContent(trx, id, values.value.values, values.value.held);
       return succeed(id);
     });
     if (!created.ok) return created;
@@ -207,7 +219,7 @@ export async function saveDraft(
   const values = parseDraftValues(input.values);
   if (!values.ok) return values;
   const knex = db();
-  const refs = await checkReferences(knex, writer, values.value);
+  const refs = await checkReferences(knex, writer, values.value.values);
   if (refs) return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', refs);
   const outcome = await knex.transaction(async (trx): Promise<Outcome<null>> => {
     await trx('revisions').where({ id: revisionId }).forUpdate().first('id');
@@ -219,14 +231,14 @@ export async function saveDraft(
         return refuse('conflict', 'A draft can only be moved onto the live revision of its fix.');
       await trx('revisions').where({ id: revisionId }).update({ parent_revision_id: input.baseRevisionId });
     }
-    await writeRevisionContent(trx, revisionId, values.value);
+    await writeRevisionContent(trx, revisionId, values.value.values, values.value.held);
     return succeed(null);
   });
   if (!outcome.ok) return outcome;
   return saved(knex, revisionId);
 }
 
-/** Gives up a draft: it is kept, withdrawn, so nothing is ever deleted. */
+/** Gives up a draft, however empty: it is kept, withdrawn, so nothing is ever deleted. */
 export async function discardDraft(writer: Writer, revisionId: number): Promise<Outcome<null>> {
   const knex = db();
   const draft = await ownDraft(knex, writer, revisionId);

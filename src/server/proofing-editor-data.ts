@@ -26,6 +26,7 @@ export function editorRevision(record: RevisionRecord): EditorRevisionData {
     authorName: record.authorName,
     updatedAt: record.updatedAt,
     values: record.values,
+    held: record.held,
     machines: record.machines,
     chassis: record.chassis,
     photos: record.photos,

@@ -60,6 +60,12 @@ export async function submitDraft(writer: Writer, revisionId: number, input: { v
     const mine = await loadRevision(trx, revisionId);
     if (!mine) return refuse('not_found', 'There is no such draft among yours.');
     const issues = submissionIssues(mine.values);
+    // Fields the draft holds as typed are stored empty; their own message says what to fix, and replaces any other.
+    for (const [path, field] of Object.entries(mine.held)) {
+      const held = issues.filter((issue) => issue.path.join('.') === path);
+      for (const issue of held) issues.splice(issues.indexOf(issue), 1);
+      issues.push({ path: [path], message: field.message });
+    }
     // Readers are shown renditions: a photo still being made (or that failed) cannot go to the desk yet.
     for (const photo of mine.photos.filter((p) => p.state !== 'ready')) {
       const message =

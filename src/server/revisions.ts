@@ -1,6 +1,6 @@
 // Revisions as the writing side reads them: full content with labels, for the editor, the desk and comparisons.
 import type { Knex } from 'knex';
-import type { FixDraft } from '@/lib/schemas/fix-draft';
+import type { FixDraft, HeldFields } from '@/lib/schemas/fix-draft';
 import type { RevisionState } from '@/lib/schemas/revision';
 import type { BodyDoc } from '@/lib/tiptap/allowlist';
 import { photoRefsOf, type PhotoRef } from './photos/photo-refs';
@@ -35,6 +35,8 @@ export interface RevisionRecord {
   submittedAt: string | null;
   proofedAt: string | null;
   values: FixDraft;
+  /** Fields a draft holds as typed until they pass their checks (always empty past draft). */
+  held: HeldFields;
   machines: LabelledRef[];
   chassis: LabelledRef[];
   photos: PhotoRef[];
@@ -134,6 +136,7 @@ export async function loadRevision(knex: Knex, revisionId: number): Promise<Revi
       chassis.map((c) => c.id),
       photos.map((p) => p.id),
     ),
+    held: (row.held_fields ?? {}) as HeldFields,
     machines,
     chassis,
     photos,

@@ -109,6 +109,7 @@ export const routeAccess: Record<string, RouteRule> = {
   '/api/v1/drafts': { methods: { POST: 'write_fix' } },
   '/api/v1/drafts/[id]': { methods: { GET: 'write_fix', PUT: 'write_fix', DELETE: 'write_fix' } },
   '/api/v1/drafts/[id]/submit': { methods: { POST: 'write_fix' } },
+  '/api/v1/drafts/[id]/discard': { methods: { POST: 'write_fix' } },
   '/api/v1/revisions/[id]/amend': { methods: { POST: 'write_fix' } },
   '/api/v1/revisions/[id]/withdraw': { methods: { POST: 'write_fix' } },
   '/api/v1/photos': { methods: { POST: 'upload_photo' } },

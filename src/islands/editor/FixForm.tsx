@@ -1,9 +1,9 @@
 // The fix form: every field of a revision, autosaved; submission with field messages and the stale-base comparison.
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { Editor } from '@tiptap/react';
-import { fixDraftLimits, fixSubmissionSchema, type FixDraft, type FixDraftInput } from '@/lib/schemas/fix-draft';
+import { fixDraftLimits, fixSubmissionSchema, type FixDraft, type FixDraftInput, type HeldFields } from '@/lib/schemas/fix-draft';
 import { difficulties, difficultyLabels } from '@/lib/schemas/revision';
 import type { BodyDoc } from '@/lib/tiptap/allowlist';
 import PhotoUploader, { type IncomingFiles } from '../PhotoUploader';
@@ -25,6 +25,13 @@ import { useAutosave } from './useAutosave';
 import { useRestoredStart } from './useRestoredStart';
 import { useSubmission } from './useSubmission';
 import type { EditorRevisionData, FixEditorProps, LabelledRefData, PhotoRefData } from './types';
+
+/** Enter in a one-line field never sends the revision to the desk: only the submit button does. */
+function keepEnterFromSubmitting(event: KeyboardEvent<HTMLFormElement>): void {
+  const target = event.target;
+  if (event.key !== 'Enter' || event.defaultPrevented || !(target instanceof HTMLInputElement)) return;
+  if (!['submit', 'button', 'file'].includes(target.type)) event.preventDefault();
+}
 
 export function FixForm(props: FixEditorProps) {
   const start = useRestoredStart(props);
@@ -49,6 +56,20 @@ export function FixForm(props: FixEditorProps) {
   const refsRef = useRef({ machines, chassis, photos });
   refsRef.current = { machines, chassis, photos };
 
+  // Fields the server holds as typed are marked where they stand until a save answers without them.
+  const [heldCount, setHeldCount] = useState(Object.keys(start.held).length);
+  const heldPaths = useRef<string[]>([]);
+  const markHeld = useCallback(
+    (held: HeldFields) => {
+      for (const path of heldPaths.current) if (!(path in held)) form.clearErrors(path as never);
+      for (const [path, field] of Object.entries(held)) form.setError(path as never, { type: 'held', message: field.message });
+      heldPaths.current = Object.keys(held);
+      setHeldCount(heldPaths.current.length);
+    },
+    [form],
+  );
+  useEffect(() => markHeld(start.held), [markHeld, start.held]);
+
   const autosave = useAutosave({
     initialDraftId: props.draft?.id ?? null,
     fixSlug: props.fixSlug,
@@ -58,6 +79,7 @@ export function FixForm(props: FixEditorProps) {
       if (!props.fixSlug && !new URLSearchParams(window.location.search).has('draft'))
         window.history.replaceState(null, '', `/write?draft=${saved.revision.id}`);
       setBaseNote(saved.baseIsStale ? 'The live fix changed since this draft was started; submitting will show both versions.' : null);
+      markHeld(saved.revision.held ?? {});
     },
     onRefused: (failure) => {
       for (const [path, messages] of Object.entries(failure.fields)) form.setError(path as never, { type: 'server', message: messages[0] });
@@ -129,9 +151,9 @@ export function FixForm(props: FixEditorProps) {
 
   const errors = formState.errors;
   return (
-    <form className="grid gap-8" noValidate onSubmit={submission.submit}>
+    <form className="grid gap-8" noValidate onSubmit={submission.submit} onKeyDown={keepEnterFromSubmitting}>
       <div className="sticky top-0 z-20 flex flex-wrap items-center justify-between gap-3 border-b border-rule bg-paper py-2">
-        <SaveIndicator state={autosave.state} journalFailed={autosave.journalFailed} />
+        <SaveIndicator state={autosave.state} journalFailed={autosave.journalFailed} heldCount={heldCount} />
         <button type="submit" className="btn" disabled={submission.busy}>
           {submission.busy ? 'Submitting…' : 'Submit for proofing'}
         </button>

@@ -1,5 +1,7 @@
-// A small form that opens under the toolbar (insert a link, a reading, a caution, a picture); Escape closes it.
-import { useEffect, useId, useRef, type FormEvent, type ReactNode } from 'react';
+// A small panel of fields that opens under the toolbar (insert a link, a reading, a caution, a picture).
+// It is not a <form>: it sits inside the fix form, and a form inside a form is invalid HTML whose Enter or button
+// would submit the fix form instead. The panel handles its own Enter, button and Escape.
+import { useEffect, useId, useRef, type KeyboardEvent, type ReactNode } from 'react';
 
 interface PanelProps {
   title: string;
@@ -10,29 +12,37 @@ interface PanelProps {
   children: ReactNode;
 }
 
+/** Enter in a one-line field or a choice applies the panel, as it would submit a form of its own. */
+function appliesOnEnter(target: EventTarget): boolean {
+  if (target instanceof HTMLSelectElement) return true;
+  return target instanceof HTMLInputElement && !['button', 'submit', 'reset', 'file', 'checkbox'].includes(target.type);
+}
+
 export function Panel({ title, submitLabel, onSubmit, onClose, error, children }: PanelProps) {
   const titleId = useId();
-  const ref = useRef<HTMLFormElement>(null);
+  const ref = useRef<HTMLDivElement>(null);
   useEffect(() => {
-    ref.current?.querySelector<HTMLElement>('input, select, textarea')?.focus();
+    // The first field takes focus; a panel without fields focuses its button, so Enter still answers it.
+    (ref.current?.querySelector<HTMLElement>('input, select, textarea') ?? ref.current?.querySelector<HTMLElement>('button'))?.focus();
   }, []);
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    event.stopPropagation();
-    onSubmit();
+  const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
+    if (event.key === 'Escape') {
+      event.preventDefault();
+      event.stopPropagation();
+      onClose();
+    } else if (event.key === 'Enter' && !event.nativeEvent.isComposing && appliesOnEnter(event.target)) {
+      // Also keeps the browser from submitting the fix form around the panel (implicit submission).
+      event.preventDefault();
+      event.stopPropagation();
+      onSubmit();
+    }
   };
   return (
-    <form
+    <div
       ref={ref}
       role="group"
       aria-labelledby={titleId}
-      onSubmit={submit}
-      onKeyDown={(event) => {
-        if (event.key === 'Escape') {
-          event.preventDefault();
-          onClose();
-        }
-      }}
+      onKeyDown={onKeyDown}
       className="panel m-2 grid gap-2 border border-rule-strong bg-paper p-3 font-sans text-sm"
     >
       <p id={titleId} className="font-semibold text-teal">
@@ -45,14 +55,14 @@ export function Panel({ title, submitLabel, onSubmit, onClose, error, children }
         </p>
       )}
       <div className="flex gap-2">
-        <button type="submit" className="btn">
+        <button type="button" className="btn" onClick={onSubmit}>
           {submitLabel}
         </button>
         <button type="button" className="btn-quiet" onClick={onClose}>
           Cancel
         </button>
       </div>
-    </form>
+    </div>
   );
 }
 

@@ -25,7 +25,8 @@ export function PartsEditor({ control, register, errors }: PartsEditorProps) {
   const { fields, append, remove, move } = useFieldArray({ control, name: 'parts' });
   const rows = useWatch({ control, name: 'parts' }) ?? [];
   return (
-    <div id="field-parts" className="overflow-x-auto">
+    // Positioned, so the visually hidden header text stays inside the scrolling box instead of widening a phone's page.
+    <div id="field-parts" className="relative overflow-x-auto">
       <table className="w-full border-collapse font-sans text-sm">
         <caption className="text-left font-semibold">Parts list</caption>
         <thead>
@@ -57,7 +58,8 @@ export function PartsEditor({ control, register, errors }: PartsEditorProps) {
           {fields.map((field, i) => {
             const row = rows[i] ?? field;
             const check = decoded(row.value ?? '', row.rating ?? '', row.kind);
-            const serverError = errors.parts?.[i]?.value?.message ?? errors.parts?.[i]?.quantity?.message;
+            const serverError = errors.parts?.[i]?.value?.message;
+            const quantityError = errors.parts?.[i]?.quantity?.message;
             const n = i + 1;
             return (
               <tr key={field.id} className="border-b border-rule align-top">
@@ -105,12 +107,17 @@ export function PartsEditor({ control, register, errors }: PartsEditorProps) {
                 <td className="px-1 py-1">
                   <input
                     aria-label={`Quantity of part ${n}`}
+                    aria-describedby={`part-${i}-quantity-error`}
+                    aria-invalid={quantityError ? true : undefined}
                     type="number"
                     min={1}
                     max={999}
                     className="input w-16"
                     {...register(`parts.${i}.quantity`, { valueAsNumber: true })}
                   />
+                  <p id={`part-${i}-quantity-error`} className="mt-1 max-w-[10rem] text-brick empty:hidden">
+                    {quantityError}
+                  </p>
                 </td>
                 <td className="px-1 py-1">
                   <input aria-label={`Notes on part ${n}`} className="input w-40" maxLength={500} {...register(`parts.${i}.notes`)} />

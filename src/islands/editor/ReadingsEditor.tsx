@@ -11,7 +11,8 @@ interface ReadingsEditorProps {
 export function ReadingsEditor({ control, register, errors }: ReadingsEditorProps) {
   const { fields, append, remove } = useFieldArray({ control, name: 'readings' });
   return (
-    <div id="field-readings" className="overflow-x-auto">
+    // Positioned, so the visually hidden header text stays inside the scrolling box instead of widening a phone's page.
+    <div id="field-readings" className="relative overflow-x-auto">
       <table className="w-full border-collapse font-sans text-sm">
         <caption className="text-left font-semibold">Readings</caption>
         <thead>

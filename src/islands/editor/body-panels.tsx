@@ -1,6 +1,7 @@
 // The remedy's insert forms: link, reading, caution and picture, each writing one node or mark into the editor.
 import { useState } from 'react';
-import type { Editor } from '@tiptap/react';
+import type { Editor, JSONContent } from '@tiptap/react';
+import { NodeSelection, TextSelection } from '@tiptap/pm/state';
 import { cautionKinds, cautionLabels, type CautionKind } from '@/lib/schemas/revision';
 import { isSafeLinkHref } from '@/lib/tiptap/urls';
 import { readingAttrsOf } from '@/lib/tiptap/nodes/reading';
@@ -42,7 +43,7 @@ export function ReadingPanel({ editor, onClose }: PanelProps) {
     if (!reading.testPoint.trim() || !reading.expected.trim())
       return setError('A reading needs a test point and the value a good unit shows.');
     if (selected) editor.chain().focus().updateAttributes('reading', reading).run();
-    else editor.chain().focus().insertContent({ type: 'reading', attrs: reading }).run();
+    else insertBlock(editor, { type: 'reading', attrs: reading });
     onClose();
   };
   return (
@@ -144,12 +145,27 @@ export function FigurePanel({ editor, onClose, photos }: PanelProps & { photos: 
   );
 }
 
-/** A figure node for an uploaded photo: its ~960 px JPEG, its alt text, its caption (kept apart from the alt text). */
-export function insertFigure(editor: Editor, photo: PhotoRefData): void {
-  if (!photo.figureSrc) return;
+/**
+ * Inserts a block that cannot hold the caret (a reading, a picture) and puts the caret on the line after it, so
+ * typing carries on below it and the next insert lands after it rather than replacing it.
+ */
+function insertBlock(editor: Editor, content: JSONContent): void {
   editor
     .chain()
     .focus()
-    .insertContent({ type: 'figure', attrs: { src: photo.figureSrc, alt: photo.alt, caption: photo.caption } })
+    .insertContent(content)
+    .command(({ tr }) => {
+      if (!(tr.selection instanceof NodeSelection)) return true;
+      const after = tr.selection.to;
+      if (!tr.doc.resolve(after).nodeAfter?.isTextblock) tr.insert(after, tr.doc.type.schema.nodes.paragraph!.create());
+      tr.setSelection(TextSelection.create(tr.doc, after + 1));
+      return true;
+    })
     .run();
+}
+
+/** A figure node for an uploaded photo: its ~960 px JPEG, its alt text, its caption (kept apart from the alt text). */
+export function insertFigure(editor: Editor, photo: PhotoRefData): void {
+  if (!photo.figureSrc) return;
+  insertBlock(editor, { type: 'figure', attrs: { src: photo.figureSrc, alt: photo.alt, caption: photo.caption } });
 }

@@ -1,5 +1,5 @@
 // Shapes the writing pages hand to the editor island (plain JSON: they cross from server to browser).
-import type { FixDraftInput } from '@/lib/schemas/fix-draft';
+import type { FixDraftInput, HeldFields } from '@/lib/schemas/fix-draft';
 import type { RevisionState } from '@/lib/schemas/revision';
 
 export interface LabelledRefData {
@@ -34,6 +34,8 @@ export interface EditorRevisionData {
   authorName: string;
   updatedAt: string;
   values: FixDraftInput;
+  /** Fields the server holds as typed because they fail their checks; absent on older answers. */
+  held?: HeldFields;
   machines: LabelledRefData[];
   chassis: LabelledRefData[];
   photos: PhotoRefData[];

@@ -1,6 +1,6 @@
 // Where the form starts: the server's draft (or the live text), unless this browser holds newer unsaved edits.
 import { useState } from 'react';
-import type { FixDraftInput } from '@/lib/schemas/fix-draft';
+import { withHeldFields, type FixDraftInput, type HeldFields } from '@/lib/schemas/fix-draft';
 import { journalScope, readJournal, shouldRestore } from './journal';
 import type { FixEditorProps, LabelledRefData, PhotoRefData } from './types';
 
@@ -11,17 +11,22 @@ export interface FormStart {
   photos: PhotoRefData[];
   /** When the restored journal entry was edited; null when the server's copy is used. */
   restored: string | null;
+  /** Fields the server holds as typed, to mark from the start (the next save answers anew for restored edits). */
+  held: HeldFields;
 }
 
 export function useRestoredStart(props: FixEditorProps): FormStart {
   const [start] = useState<FormStart>(() => {
     const server = props.draft ?? { ...props.start, updatedAt: null };
+    const held = props.draft?.held ?? {};
     const base: FormStart = {
-      values: server.values,
+      // A field the server holds comes back as it was typed, to be fixed where it stands.
+      values: withHeldFields(server.values, held),
       machines: server.machines,
       chassis: server.chassis,
       photos: server.photos,
       restored: null,
+      held,
     };
     let store: Storage | null = null;
     try {
@@ -30,7 +35,7 @@ export function useRestoredStart(props: FixEditorProps): FormStart {
       return base;
     }
     const entry = readJournal(store, journalScope({ draftId: props.draft?.id ?? null, fixSlug: props.fixSlug }));
-    if (!shouldRestore(entry, { updatedAt: props.draft?.updatedAt ?? null, values: server.values })) return base;
+    if (!shouldRestore(entry, { updatedAt: props.draft?.updatedAt ?? null, values: base.values })) return base;
     // Ids come back with their labels; an id whose label was not journalled is dropped rather than shown blank.
     const known = {
       machines: [...(entry.refs?.machines ?? []), ...server.machines],
@@ -53,6 +58,7 @@ export function useRestoredStart(props: FixEditorProps): FormStart {
       chassis,
       photos,
       restored: entry.editedAt,
+      held: {},
     };
   });
   return start;

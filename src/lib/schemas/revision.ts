@@ -2,7 +2,7 @@
 import { z } from 'zod';
 
 export const cautionKinds = ['mains', 'stored_charge', 'laser', 'heat', 'sharp_edges', 'spring'] as const;
-export const cautionKindSchema = z.enum(cautionKinds);
+export const cautionKindSchema = z.enum(cautionKinds, { error: 'Pick the hazard from the list, e.g. mains voltage.' });
 export type CautionKind = z.infer<typeof cautionKindSchema>;
 
 export const cautionLabels: Record<CautionKind, string> = {
@@ -15,7 +15,7 @@ export const cautionLabels: Record<CautionKind, string> = {
 };
 
 export const difficulties = ['routine', 'careful', 'skilled', 'specialist'] as const;
-export const difficultySchema = z.enum(difficulties);
+export const difficultySchema = z.enum(difficulties, { error: 'Pick a difficulty from the list, e.g. “Careful: some disassembly”.' });
 export type Difficulty = z.infer<typeof difficultySchema>;
 
 export const difficultyLabels: Record<Difficulty, string> = {
@@ -43,7 +43,7 @@ export const partKinds = [
   'mechanical',
   'other',
 ] as const;
-export const partKindSchema = z.enum(partKinds);
+export const partKindSchema = z.enum(partKinds, { error: 'Pick the kind of part from the list, e.g. capacitor or belt.' });
 export type PartKind = z.infer<typeof partKindSchema>;
 
 export const partRowSchema = z.object({
@@ -71,7 +71,11 @@ export type Reading = z.infer<typeof readingSchema>;
 export const cautionSchema = z.object({
   kind: cautionKindSchema,
   /** What this fix in particular asks the reader to watch for. */
-  detail: z.string().trim().max(600).default(''),
+  detail: z
+    .string({ error: 'Describe the hazard in words, e.g. “The primary capacitor holds 320 V after unplugging”.' })
+    .trim()
+    .max(600, 'A caution’s detail is at most 600 characters, e.g. “The primary capacitor holds 320 V after unplugging”.')
+    .default(''),
 });
 export type Caution = z.infer<typeof cautionSchema>;
 
