@@ -100,6 +100,13 @@ describe('the proofing desk in a browser', () => {
     await expect(deskPage.locator('#changes-since + div [data-changed-sections]').getAttribute('data-changed-sections')).resolves.toBe(
       'Cause',
     );
+    // On a phone the desk and the revision page do not scroll sideways; their tables scroll in their own boxes.
+    await deskPage.setViewportSize({ width: 360, height: 800 });
+    for (const path of ['/proofing', `/proofing/${draftId}`]) {
+      await deskPage.goto(`${base}${path}`);
+      const overflow = await deskPage.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+      expect(overflow, path).toBe(0);
+    }
     await desk.close();
     expect(deskErrors).toEqual([]);
     expect(writerErrors).toEqual([]);
