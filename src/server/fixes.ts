@@ -191,7 +191,18 @@ function liveFixes(knex: Knex, filter: SummaryFilter): Knex.QueryBuilder {
     q.whereExists(knex('fix_machines').whereRaw('fix_id = f.id').where('machine_id', filter.machineId));
   }
   if (filter.chassisId !== undefined) {
-    q.whereExists(knex('fix_chassis').whereRaw('fix_id = f.id').where('chassis_family_id', filter.chassisId));
+    // A fix belongs to a family when it names the family, or any machine built on it.
+    const chassisId = filter.chassisId;
+    q.where((w) =>
+      w
+        .whereExists(knex('fix_chassis').whereRaw('fix_id = f.id').where('chassis_family_id', chassisId))
+        .orWhereExists(
+          knex('fix_machines as fm')
+            .join('machines as m', 'm.id', 'fm.machine_id')
+            .whereRaw('fm.fix_id = f.id')
+            .where('m.chassis_family_id', chassisId),
+        ),
+    );
   }
   if (filter.excludeMachineId !== undefined) {
     q.whereNotExists(knex('fix_machines').whereRaw('fix_id = f.id').where('machine_id', filter.excludeMachineId));

@@ -14,15 +14,28 @@ export interface Review {
   /** The live revision it is compared with; null for a new fix. */
   live: RevisionRecord | null;
   diff: RevisionDiff;
+  /**
+   * The revision this one continues (a returned one its author answers, or a waiting one amended) with the diff from
+   * it, so the moderator sees whether the changes asked for were made; null when it continues none.
+   */
+  answers: { revision: RevisionRecord; diff: RevisionDiff } | null;
 }
 
-/** A revision on the desk with its diff against the fix's live revision. */
+/** A revision on the desk with its diff against the fix's live revision and against the revision it answers. */
 export async function reviewOf(revisionId: number): Promise<Review | null> {
   const knex = db();
   const revision = await loadRevision(knex, revisionId);
   if (!revision) return null;
-  const live = revision.liveRevisionId ? await loadRevision(knex, revision.liveRevisionId) : null;
-  return { revision, live, diff: diffRevisions(live ? comparableOf(live) : emptyComparable, comparableOf(revision)) };
+  const [live, earlier] = await Promise.all([
+    revision.liveRevisionId ? loadRevision(knex, revision.liveRevisionId) : null,
+    revision.amendsRevisionId ? loadRevision(knex, revision.amendsRevisionId) : null,
+  ]);
+  return {
+    revision,
+    live,
+    diff: diffRevisions(live ? comparableOf(live) : emptyComparable, comparableOf(revision)),
+    answers: earlier ? { revision: earlier, diff: diffRevisions(comparableOf(earlier), comparableOf(revision)) } : null,
+  };
 }
 
 export interface Comparison {

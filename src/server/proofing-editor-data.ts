@@ -35,6 +35,18 @@ export function editorRevision(record: RevisionRecord): EditorRevisionData {
 
 const yours = { href: '/write/mine', label: 'Your revisions' };
 
+/**
+ * While a writer amends a returned revision, the moderator's note stays in view above the form: the line says who
+ * returned which revision and quotes the note. Null for any other draft.
+ */
+export async function returnNoteFor(draft: Pick<RevisionRecord, 'amendsRevisionId' | 'authorId'>): Promise<string | null> {
+  if (!draft.amendsRevisionId) return null;
+  const returned = await loadRevision(db(), draft.amendsRevisionId);
+  if (!returned || returned.state !== 'returned' || returned.authorId !== draft.authorId || !returned.note) return null;
+  const who = returned.prooferName ?? 'A moderator';
+  return `${who} returned r${returned.number} with this note: “${returned.note}” Your changes here become a new revision that answers it.`;
+}
+
 /** `/write`: a new fix, or (`?draft=`) the writer's draft of one; `?symptom=` and `?machine=` prefill a new one. */
 export async function newFixEditor(user: SessionUser, url: URL): Promise<EditorPage> {
   const draftParam = url.searchParams.get('draft');
@@ -60,7 +72,7 @@ export async function newFixEditor(user: SessionUser, url: URL): Promise<EditorP
         draft: editorRevision(record),
         start: { values: record.values, machines: record.machines, chassis: record.chassis, photos: record.photos },
         liveRevisionNumber: null,
-        notice: null,
+        notice: await returnNoteFor(record),
         doneHref: '/write/mine',
       },
     };
@@ -121,7 +133,7 @@ export async function liveFixEditor(user: SessionUser, slug: string, url: URL): 
         ...base,
         draft: editorRevision(draft),
         start: { values: draft.values, machines: draft.machines, chassis: draft.chassis, photos: draft.photos },
-        notice: null,
+        notice: await returnNoteFor(draft),
       },
     };
   const fromParam = Number(url.searchParams.get('from') ?? '');

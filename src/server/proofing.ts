@@ -1,4 +1,4 @@
-// The proofing desk: revisions waiting for a moderator, and proofing (it goes live) or returning (with a note).
+// Deciding on a waiting revision: proofing it (it goes live) or returning it to its author (with a note).
 import type { Knex } from 'knex';
 import { z } from 'zod';
 import { can } from '@/lib/permissions';
@@ -7,71 +7,17 @@ import { db } from './db';
 import { writeAudit } from './proofing-audit';
 import { notifyAuthorOf } from './proofing-mail';
 import { publishRevision } from './proofing-publish';
-import { issuesToFields, refuse, succeed, type Outcome, type Writer } from './proofing-types';
+import { failureResponse, issuesToFields, refuse, succeed, type Outcome, type Writer } from './proofing-types';
 import { loadRevision, type RevisionRecord } from './revisions';
-
-export interface DeskEntry {
-  revisionId: number;
-  number: number;
-  title: string;
-  /** True for the first revision of a fix that has never been live. */
-  isNewFix: boolean;
-  fixSlug: string | null;
-  machines: string[];
-  authorId: number;
-  authorName: string;
-  submittedAt: Date;
-  /** The fix went live with another revision after this one was written: it cannot be proofed as it is. */
-  staleBase: boolean;
-  /** The waiting revision this one amends, when a moderator amended it. */
-  amendsNumber: number | null;
-}
-
-/** Every revision waiting for proofing, oldest first. */
-export async function listWaitingRevisions(): Promise<DeskEntry[]> {
-  const knex = db();
-  const rows = await knex('revisions as r')
-    .join('fixes as f', 'f.id', 'r.fix_id')
-    .join('users as a', 'a.id', 'r.author_id')
-    .leftJoin('revisions as am', 'am.id', 'r.amends_revision_id')
-    .where('r.state', 'submitted')
-    .whereNull('f.deleted_at')
-    .orderBy('r.submitted_at', 'asc')
-    .limit(500)
-    .select(
-      'r.id',
-      'r.number',
-      'r.title',
-      'r.author_id',
-      'r.submitted_at',
-      'r.parent_revision_id',
-      'f.slug',
-      'f.current_revision_id',
-      'a.name as author_name',
-      'am.number as amends_number',
-      knex.raw(
-        `ARRAY(SELECT mk.name || ' ' || m.model_number || ' (' || m.region || ')' FROM revision_machines rm JOIN machines m ON m.id = rm.machine_id
-           JOIN makers mk ON mk.id = m.maker_id WHERE rm.revision_id = r.id ORDER BY 1) AS machines`,
-      ),
-    );
-  return rows.map((r) => ({
-    revisionId: r.id,
-    number: r.number,
-    title: r.title,
-    isNewFix: r.current_revision_id === null,
-    fixSlug: r.current_revision_id ? r.slug : null,
-    machines: r.machines,
-    authorId: r.author_id,
-    authorName: r.author_name ?? 'a former member',
-    submittedAt: r.submitted_at,
-    staleBase: r.parent_revision_id !== r.current_revision_id,
-    amendsNumber: r.amends_number ?? null,
-  }));
-}
 
 export const proofNoteSchema = z.string().trim().max(2000, 'The note is at most 2000 characters.');
 export const returnNoteSchema = proofNoteSchema.pipe(
-  z.string().min(1, 'Say what the author should change: a returned revision always carries a note.'),
+  z
+    .string()
+    .min(
+      1,
+      'Say what the author should change, for example “Give the polarity of C512 and the reading at TP12.” A returned revision always carries a note.',
+    ),
 );
 
 type Decision = 'proof' | 'return';
@@ -182,4 +128,23 @@ export async function returnRevision(moderator: Writer, revisionId: number, rawN
     });
   }
   return outcome;
+}
+
+export type DeskDecision = { ok: true; location: string } | { ok: false; status: number; message: string; note: string };
+
+/**
+ * The revision page's one decision form: a note and two buttons, proof or return. A refusal comes back with the note
+ * as typed, so the page shows it again with the message and nothing is lost.
+ */
+export async function decideFromDesk(moderator: Writer, revisionId: number, fields: Record<string, unknown>): Promise<DeskDecision> {
+  const note = typeof fields.note === 'string' ? fields.note : '';
+  const decision = fields.decision;
+  if (decision !== 'proof' && decision !== 'return')
+    return { ok: false, status: 400, message: 'Choose “Proof: make it live” or “Return it with this note”.', note };
+  const outcome =
+    decision === 'proof' ? await proofRevision(moderator, revisionId, note) : await returnRevision(moderator, revisionId, note);
+  if (outcome.ok) return { ok: true, location: decision === 'proof' ? '/proofing?proofed=1' : '/proofing?returned=1' };
+  const detail = outcome.fields ? Object.values(outcome.fields).flat() : [];
+  const message = [outcome.message, ...detail.filter((line) => line !== outcome.message)].join(' ');
+  return { ok: false, status: failureResponse(outcome).status, message, note };
 }

@@ -104,7 +104,8 @@ export const routeAccess: Record<string, RouteRule> = {
   '/fixes/[slug]/edit': { methods: { GET: 'write_fix' } },
   '/fixes/[slug]/compare': read,
   '/proofing': { methods: { GET: 'proof' } },
-  '/proofing/[id]': { methods: { GET: 'proof' } },
+  // The decision form posts to its own page, which shows a refusal with the note as typed.
+  '/proofing/[id]': { methods: { GET: 'proof', POST: 'proof' }, noStore: true },
   '/api/v1/catalogue-lookup': read,
   '/api/v1/drafts': { methods: { POST: 'write_fix' } },
   '/api/v1/drafts/[id]': { methods: { GET: 'write_fix', PUT: 'write_fix', DELETE: 'write_fix' } },

@@ -35,8 +35,9 @@ async function signInWithPassword(page: Page, email: string, password: string): 
   ]);
 }
 
+/** The header's links: the main row and, for editors, moderators and admins, their own row. */
 function nav(page: Page) {
-  return page.locator('nav.site-nav');
+  return page.locator('header.site-header');
 }
 
 describe('joining and signing in', () => {
@@ -53,6 +54,9 @@ describe('joining and signing in', () => {
     await Promise.all([page.waitForURL((url) => url.pathname === '/sign-up/check-email'), page.click('button:has-text("Join")')]);
     expect(new URL(page.url()).pathname).toBe('/sign-up/check-email');
     await expect(page.locator('h1').textContent()).resolves.toContain('check your inbox');
+    // Joining signs the new member in: their name is in the header before the address is confirmed.
+    await expect(nav(page).locator('a[href="/account"]').textContent()).resolves.toContain('Petra Vollmer-Sand');
+    await expect(page.locator('main').textContent()).resolves.toContain(email);
 
     const mail = await waitForMail(E2E_PORT, email, { subject: 'Confirm your e-mail address' });
     await page.goto(linkIn(mail, '/verify').href);

@@ -169,11 +169,14 @@ describe('sign-in link', () => {
     expect(minutes).toBeLessThanOrEqual(15);
   });
 
-  it('sends nothing to a suspended account', async () => {
+  it('sends a suspended account no link, only the suspension and its reason', async () => {
     const suspended = await createUser(knex, { suspended: true, tag: 'suspended-link' });
     expect((await linkForm(suspended.email)).status).toBe(303);
+    const mail = await waitForMail(INTEGRATION_PORT, suspended.email, { subject: 'suspended' });
+    expect(mail.text).toContain('The reason they gave: test suspension');
+    expect(mail.text).not.toContain('/sign-in/link');
     await new Promise((resolve) => setTimeout(resolve, 600));
-    expect(await mailsTo(INTEGRATION_PORT, suspended.email)).toHaveLength(0);
+    expect(await mailsTo(INTEGRATION_PORT, suspended.email)).toHaveLength(1);
   });
 
   it('answers 429 after 4 link requests for one address in an hour', async () => {

@@ -3,7 +3,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { INTEGRATION_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { countAfterPause, linkIn, waitForMail } from '../support/mail';
-import { STRONG_PASSWORD, postForm, signIn, uniqueClientIp, uniqueEmail } from '../support/sign-in';
+import { STRONG_PASSWORD, cookiesFrom, postForm, signIn, uniqueClientIp, uniqueEmail } from '../support/sign-in';
 
 const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
 const knex = testDb();
@@ -68,15 +68,25 @@ describe('sign-up form', () => {
 });
 
 describe('joining with an address', () => {
-  it('gives the same answer for a new address and one that already has an account', async () => {
+  it('signs a new member in at once, and never signs anyone in to an address that already has an account', async () => {
     const fresh = uniqueEmail('fresh');
     const first = await signUp({ name: 'Fresh Member', email: fresh, password: STRONG_PASSWORD });
     const again = await signUp({ name: 'Someone Else', email: fresh, password: STRONG_PASSWORD });
     expect(first.status).toBe(303);
     expect(again.status).toBe(303);
-    expect(first.headers.get('location')).toBe(again.headers.get('location'));
-    expect(first.headers.get('set-cookie')).toBeNull();
+    // The same page either way, and the address typed never travels in it.
+    expect(first.headers.get('location')).toBe('/sign-up/check-email');
+    expect(again.headers.get('location')).toBe('/sign-up/check-email');
+    const cookie = cookiesFrom(first);
+    expect(cookie).toContain('authjs.session-token=');
     expect(again.headers.get('set-cookie')).toBeNull();
+    const landing = await (await fetch(`${base}/sign-up/check-email`, { headers: { cookie } })).text();
+    expect(landing).toContain('Welcome, Fresh Member: you are signed in.');
+    expect(landing).toContain(fresh);
+    const account = await fetch(`${base}/account`, { headers: { cookie }, redirect: 'manual' });
+    expect(account.status).toBe(200);
+    const signedOut = await (await fetch(`${base}/sign-up/check-email`)).text();
+    expect(signedOut).not.toContain('you are signed in');
     // The owner hears about the second attempt; no second account exists.
     await waitForMail(INTEGRATION_PORT, fresh, { subject: 'Someone tried to join' });
     const rows = await knex('users').where({ email: fresh });

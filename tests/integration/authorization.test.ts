@@ -208,18 +208,21 @@ describe('navigation by role', () => {
   const signOut = />\s*Sign out\s*</;
   const write = link('/write', 'Write a fix');
   const proofing = link('/proofing', 'Proofing desk');
-  const adminLink = link('/admin/users', 'Admin');
+  const adminLink = link('/admin/users', 'Members and roles');
   const membersLink = link('/admin/users', 'Members');
+  const wordFamilies = link('/admin/word-families', 'Word families');
+  const wantedFixes = link('/admin/wanted-fixes', 'Wanted fixes');
+  const staffNav = /<nav[^>]*aria-label="Editing and moderation"/;
 
-  it('shows each kind of user what they may do, with no script on the page', async () => {
+  it('shows each kind of user what they may do, editors and admins their own pages, with no script on the page', async () => {
     const expectations: Record<Persona, { shows: RegExp[]; hides: RegExp[] }> = {
-      anonymous: { shows: [signInLink, joinLink], hides: [write, proofing, signOut, adminLink] },
-      unverified: { shows: [signOut], hides: [write, proofing, adminLink, signInLink] },
-      member: { shows: [write, signOut], hides: [proofing, adminLink, membersLink, signInLink] },
-      editor: { shows: [write, signOut], hides: [proofing, adminLink, membersLink] },
-      moderator: { shows: [write, proofing, membersLink], hides: [adminLink] },
-      admin: { shows: [write, proofing, adminLink], hides: [membersLink, signInLink] },
-      suspended: { shows: [signInLink, joinLink], hides: [signOut, write] },
+      anonymous: { shows: [signInLink, joinLink], hides: [write, proofing, signOut, adminLink, wordFamilies, wantedFixes, staffNav] },
+      unverified: { shows: [signOut], hides: [write, proofing, adminLink, signInLink, wordFamilies, staffNav] },
+      member: { shows: [write, signOut], hides: [proofing, adminLink, membersLink, signInLink, wordFamilies, wantedFixes, staffNav] },
+      editor: { shows: [write, signOut, staffNav, wordFamilies, wantedFixes], hides: [proofing, adminLink, membersLink] },
+      moderator: { shows: [write, proofing, membersLink, staffNav, wordFamilies, wantedFixes], hides: [adminLink] },
+      admin: { shows: [write, proofing, adminLink, staffNav, wordFamilies, wantedFixes], hides: [membersLink, signInLink] },
+      suspended: { shows: [signInLink, joinLink], hides: [signOut, write, staffNav] },
     };
     for (const persona of personas) {
       const cookie = cookies[persona];
@@ -231,6 +234,19 @@ describe('navigation by role', () => {
       const signedIn = persona !== 'anonymous' && persona !== 'suspended';
       if (signedIn) expect(res.headers.get('cache-control'), persona).toBe('private, no-store');
       else if (persona === 'anonymous') expect(res.headers.get('cache-control'), persona).toContain('public');
+    }
+  });
+
+  it('leads editors, moderators and admins from the header to pages that open for them', async () => {
+    for (const persona of ['editor', 'moderator', 'admin'] as const) {
+      const html = await (await fetch(`${base}/machines`, { headers: { cookie: cookies[persona]! } })).text();
+      const row = html.match(/<nav[^>]*aria-label="Editing and moderation"[\s\S]*?<\/nav>/)?.[0] ?? '';
+      const hrefs = [...row.matchAll(/href="([^"]+)"/g)].map((m) => m[1]!);
+      expect(hrefs.length, persona).toBeGreaterThanOrEqual(2);
+      for (const href of hrefs) {
+        const page = await fetch(`${base}${href}`, { headers: { cookie: cookies[persona]! }, redirect: 'manual' });
+        expect(page.status, `${persona} opens ${href}`).toBe(200);
+      }
     }
   });
 });

@@ -81,7 +81,8 @@ describe('proofing', () => {
     expect(review.status).toBe(200);
     const html = await review.text();
     expect(html).toContain('Everything in this new fix');
-    expect(html).toContain(`/api/v1/proofing/${id}/proof`);
+    expect(html).toContain(`action="/proofing/${id}"`);
+    expect(html).toContain('name="decision" value="proof"');
   });
 
   it('lets a moderator proof with a plain form post and comes back to the desk', async () => {

@@ -5,6 +5,9 @@ import { roleChangeSchema, suspendSchema, unsuspendSchema } from '@/lib/schemas/
 import { db } from '../db';
 import { writeAudit } from '../audit';
 import { fieldErrors } from '../http';
+import { sendInBackground } from '../mail/send';
+import { suspendedMail } from '../mail/templates';
+import { siteUrl } from './sign-up';
 import { invalid, redirectTo, refused, type FormOutcome } from './form-outcome';
 import { endAllSessions, publicUserColumns, roleOf, type UserRow } from './users';
 
@@ -42,14 +45,14 @@ function back(fields: Record<string, string>, notice: string): string {
   return `/admin/users?${params}`;
 }
 
-type Subject = { id: number; role: Role; suspended_at: Date | null; suspended_reason: string | null };
+type Subject = { id: number; role: Role; email: string; name: string | null; suspended_at: Date | null; suspended_reason: string | null };
 
 async function subjectFor(trx: Knex, userId: number): Promise<Subject | null> {
   const row = await trx('users')
     .where({ id: userId })
     .whereNull('deleted_at')
     .forUpdate()
-    .first('id', 'role', 'suspended_at', 'suspended_reason');
+    .first('id', 'role', 'email', 'name', 'suspended_at', 'suspended_reason');
   return row ? { ...row, role: roleOf(row) } : null;
 }
 
@@ -81,11 +84,13 @@ async function suspend(actor: SessionUser, fields: Record<string, string>): Prom
   const parsed = suspendSchema.safeParse(fields);
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const { userId, reason } = parsed.data;
-  return db().transaction(async (trx) => {
+  let told: Subject | null = null;
+  const outcome = await db().transaction(async (trx) => {
     const subject = await subjectFor(trx, userId);
     if (!subject) return refused(404, 'That member was not found.');
     if (!can(actor, 'suspend_user', { subject })) return refused(403, 'You cannot suspend this account.');
     if (subject.suspended_at) return redirectTo(back(fields, 'unchanged'));
+    told = subject;
     await trx('users').where({ id: userId }).update({ suspended_at: trx.fn.now(), suspended_reason: reason });
     // Ending the sessions too means a cookie kept from before cannot come back to life when it is lifted.
     await endAllSessions(userId, trx);
@@ -101,6 +106,12 @@ async function suspend(actor: SessionUser, fields: Record<string, string>): Prom
     );
     return redirectTo(back(fields, 'suspended'));
   });
+  // As the form promises: the member is told why, once the suspension is stored.
+  if (told) {
+    const member: Subject = told;
+    sendInBackground(suspendedMail(member.email, member.name, reason, siteUrl('/help/house-rules')));
+  }
+  return outcome;
 }
 
 async function unsuspend(actor: SessionUser, fields: Record<string, string>): Promise<FormOutcome> {

@@ -1,7 +1,7 @@
 // The e-mailed sign-in link (Auth.js's Nodemailer provider): what to send, and where the link lands.
 import { config } from '../config';
 import { sendInBackground } from '../mail/send';
-import { noAccountMail, signInLinkMail } from '../mail/templates';
+import { noAccountMail, signInLinkMail, suspendedMail } from '../mail/templates';
 import { findUserByEmail } from './users';
 
 /** A sign-in link works once and for 15 minutes. */
@@ -24,13 +24,17 @@ export function landingUrl(authUrl: string, origin: string = config().PUBLIC_ORI
   return landing.href;
 }
 
-/** Sends a link to an active account, a short note to an address with no account, nothing to a suspended one. */
+/** Sends a link to an active account, a short note to an address with no account, the suspension's reason to a suspended one. */
 export async function sendSignInLink(params: { identifier: string; url: string }): Promise<void> {
   const user = await findUserByEmail(params.identifier);
   if (!user) {
     sendInBackground(noAccountMail(params.identifier, 'a sign-in link', new URL('/sign-up', config().PUBLIC_ORIGIN).href));
     return;
   }
-  if (user.suspended_at) return;
+  if (user.suspended_at) {
+    const rules = new URL('/help/house-rules', config().PUBLIC_ORIGIN).href;
+    sendInBackground(suspendedMail(user.email, user.name, user.suspended_reason ?? '(none was recorded)', rules));
+    return;
+  }
   sendInBackground(signInLinkMail(user.email, landingUrl(params.url)));
 }

@@ -4,10 +4,17 @@ import { fieldErrors } from '../http';
 import { check, consume, forgive } from '../rate-limit';
 import { signInWithPassword, requestSignInLink } from './auth-js';
 import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';
+import { findUserByEmail } from './users';
 
 interface Asker {
   origin: string;
   clientKey: string;
+}
+
+/** What a suspended member reads when they sign in: the moderator's reason, in their words. */
+export function suspendedMessage(reason: string | null): string {
+  const why = reason ? ` The reason the moderator gave: “${reason}”` : '';
+  return `This account is suspended and cannot sign in.${why} If you think this is a mistake, the house rules say how to ask the moderators to look again.`;
 }
 
 export async function passwordSignIn(fields: Record<string, string>, asker: Asker): Promise<FormOutcome> {
@@ -23,10 +30,9 @@ export async function passwordSignIn(fields: Record<string, string>, asker: Aske
     return redirectTo(outcome.location, outcome.setCookies);
   }
   if (outcome.code === 'suspended') {
-    return refused(
-      403,
-      'This account is suspended and cannot sign in. If you think this is a mistake, the house rules say how to ask the moderators to look again.',
-    );
+    // Only the right password gets this far, so the owner is told the moderator's reason.
+    const reason = (await findUserByEmail(email))?.suspended_reason;
+    return refused(403, suspendedMessage(reason ?? null));
   }
   await consume('sign_in_failure', asker.clientKey, email);
   // One message for an unknown address and a wrong password alike.

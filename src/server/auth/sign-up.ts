@@ -1,4 +1,4 @@
-// Joining: a new member with a hashed password and a confirmation mail; an address already in use gets a note instead.
+// Joining: a new member with a hashed password, signed in at once, and a confirmation mail; an address already in use gets a note instead.
 import { signUpSchema } from '@/lib/schemas/account';
 import { config } from '../config';
 import { fieldErrors } from '../http';
@@ -6,6 +6,7 @@ import { consume } from '../rate-limit';
 import { sendInBackground } from '../mail/send';
 import { alreadyJoinedMail, confirmAddressMail } from '../mail/templates';
 import { formInput } from '@/lib/schemas/account-forms';
+import { signInWithPassword } from './auth-js';
 import { invalid, redirectTo, tooMany, type FormOutcome } from './form-outcome';
 import { passwordWeaknesses } from './password-strength';
 import { hashPassword } from './passwords';
@@ -16,11 +17,14 @@ export function siteUrl(path: string): string {
   return new URL(path, config().PUBLIC_ORIGIN).href;
 }
 
-export async function signUp(fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
+/** Where joining lands: the same address whether or not the e-mail address was new. */
+export const JOINED_PATH = '/sign-up/check-email';
+
+export async function signUp(fields: Record<string, string>, asker: { clientKey: string; origin: string }): Promise<FormOutcome> {
   const parsed = signUpSchema.safeParse(formInput('sign-up', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const { name, email, password, shopName } = parsed.data;
-  const limit = await consume('sign_up', clientKey, email);
+  const limit = await consume('sign_up', asker.clientKey, email);
   if (!limit.ok) return tooMany(limit.retryAfterSeconds);
   const weaknesses = passwordWeaknesses(password, [name, email, shopName ?? '']);
   if (weaknesses.length > 0) return invalid({ password: weaknesses });
@@ -31,10 +35,12 @@ export async function signUp(fields: Record<string, string>, clientKey: string):
   const newId = existing ? null : await createMember({ name, email, passwordHash, shopName });
   if (newId === null) {
     sendInBackground(alreadyJoinedMail(email, siteUrl('/sign-in'), siteUrl('/reset')));
-  } else {
-    const token = await issueToken(newId, 'verify_email');
-    sendInBackground(confirmAddressMail(email, name, siteUrl(`/verify?token=${token}`)));
+    // The same page; the owner of the address hears of the attempt by mail, and nobody is signed in to their account.
+    return redirectTo(JOINED_PATH);
   }
-  // The same page either way: whether an address has an account is never shown.
-  return redirectTo(`/sign-up/check-email?email=${encodeURIComponent(email)}`);
+  const token = await issueToken(newId, 'verify_email');
+  sendInBackground(confirmAddressMail(email, name, siteUrl(`/verify?token=${token}`)));
+  // Joining signs the new member in, through the same Auth.js step as the sign-in form.
+  const signedIn = await signInWithPassword(asker.origin, email, password, JOINED_PATH);
+  return signedIn.ok ? redirectTo(JOINED_PATH, signedIn.setCookies) : redirectTo(JOINED_PATH);
 }

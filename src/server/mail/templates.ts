@@ -112,3 +112,18 @@ export function noAccountMail(to: string, asked: 'a password reset' | 'a sign-in
     after: ['If you did not ask, ignore this message: nothing has been set up for this address.'],
   });
 }
+
+/** Sent when a moderator suspends an account, and again when a suspended account asks for a sign-in link. */
+export function suspendedMail(to: string, name: string | null, reason: string, rulesUrl: string): OutgoingMail {
+  return compose(to, 'Your Benchlore account is suspended', {
+    greeting: name ? `Hello ${name},` : 'Hello,',
+    before: [
+      'A moderator has suspended your Benchlore account, so it cannot sign in for now. Everyone can still read the site without an account.',
+      `The reason they gave: ${reason}`,
+    ],
+    action: { label: 'Read the house rules', url: rulesUrl },
+    after: [
+      'If you think this is a mistake, the house rules say how to ask the moderators to look again. Everything you wrote is kept as it was.',
+    ],
+  });
+}
