@@ -80,7 +80,12 @@ beforeAll(async () => {
       machine_id: world.machines[i % world.machines.length]!.id,
       member_id: r.id,
       outcome: 'fixed',
-      note: i === 0 ? 'Oldest note: the sense resistor read 0.62 V before the swap.' : i === 4 ? 'Newest note: pickup swapped, 0.41 V after.' : '',
+      note:
+        i === 0
+          ? 'Oldest note: the sense resistor read 0.62 V before the swap.'
+          : i === 4
+            ? 'Newest note: pickup swapped, 0.41 V after.'
+            : '',
       readings: JSON.stringify(i === 4 ? [{ testPoint: 'R612', expected: '0.35-0.50 V', measured: '0.41 V', note: '' }] : []),
       updated_at: new Date(Date.now() - (10 - i) * day),
       created_at: new Date(Date.now() - (10 - i) * day),

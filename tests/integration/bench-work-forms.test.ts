@@ -18,7 +18,8 @@ let cookie: string;
 /** A technician's long write-up: over 20 kB, with indented lines, blank lines and characters HTML escapes. */
 const longNote = Array.from(
   { length: 330 },
-  (_, i) => `${i % 7 === 0 ? '    ' : ''}Step ${i + 1}: checked the <reel> motor & idler, 11.8 V at TP${i % 9}; "fine".${i % 5 === 0 ? '\n' : ''}`,
+  (_, i) =>
+    `${i % 7 === 0 ? '    ' : ''}Step ${i + 1}: checked the <reel> motor & idler, 11.8 V at TP${i % 9}; "fine".${i % 5 === 0 ? '\n' : ''}`,
 ).join('\n');
 
 beforeAll(async () => {
