@@ -181,3 +181,15 @@ describe('messages from the address', () => {
     }
   });
 });
+
+describe('messages from the address on the history page', () => {
+  it('shows a moderator a fixed sentence for a refused change, never the text given in the address', async () => {
+    const moderator = await signIn(base, 'moderator@example.test', PASSWORD);
+    const planted = 'this fix was withdrawn';
+    const html = await (
+      await fetch(`${base}/fixes/${fix.slug}/history?error=${encodeURIComponent(planted)}`, { headers: { Cookie: moderator } })
+    ).text();
+    expect(html.toLowerCase()).not.toContain(planted);
+    expect(html).toContain('That change was not made');
+  });
+});
