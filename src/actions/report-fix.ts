@@ -23,7 +23,13 @@ export async function submitReportFixForm(form: FormData, { locals }: Pick<Actio
   if (!can(user, 'report_fix')) return refuse(403, 'The report was not sent: confirm your e-mail address first (see your account).');
   const slug = formText(form, 'fix') ?? '';
   const parsed = reportInputSchema.safeParse({ reason: formText(form, 'reason'), detail: formText(form, 'detail') ?? '' });
-  if (!parsed.success) return refuse(400, 'The report was not sent: please correct the field marked below.', fieldErrors(parsed.error));
+  if (!parsed.success) {
+    const fields = fieldErrors(parsed.error);
+    const message = fields.detail
+      ? 'The report was not sent: say in a sentence what is wrong, e.g. “Parts lists a 1 A fuse; the board is marked T2A.”'
+      : 'The report was not sent: choose why you are reporting the fix.';
+    return refuse(400, message, fields);
+  }
   const created = await createReport(user, slug, parsed.data);
   if (!created.ok) return refuse(statusOf[created.code] ?? 400, `The report was not sent: ${created.message}`, created.fields);
   return { saved: true, fix: slug };

@@ -193,3 +193,20 @@ describe('messages from the address on the history page', () => {
     expect(html).toContain('That change was not made');
   });
 });
+
+describe('a form sent after the session ended', () => {
+  it('answers 401 and keeps the bench report note on the page to copy, never in the address', async () => {
+    const note = `Written while the session ran out: ${'belt and idler, '.repeat(50)}`;
+    const res = await fetch(`${base}/fixes/${fix.slug}?_action=benchReport`, {
+      method: 'POST',
+      redirect: 'manual',
+      headers: { Origin: base, 'Content-Type': 'application/x-www-form-urlencoded' },
+      body: new URLSearchParams({ fix: fix.slug, machine: world.machines[0]!.slug, outcome: 'fixed', note }),
+    });
+    expect(res.status).toBe(401);
+    expect(res.headers.get('location')).toBeNull();
+    const doc = documentOf(await res.text());
+    expect((doc.querySelector('#bench-note-kept') as HTMLTextAreaElement).value).toBe(note);
+    expect(doc.querySelector('[role="alert"]')?.textContent).toMatch(/signed out/);
+  });
+});
