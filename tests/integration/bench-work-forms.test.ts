@@ -210,3 +210,13 @@ describe('a form sent after the session ended', () => {
     expect(doc.querySelector('[role="alert"]')?.textContent).toMatch(/signed out/);
   });
 });
+
+describe('messages from the address on the order list', () => {
+  it('never lists part text that a link carries, only parts read from the fix it names', async () => {
+    const planted = 'this fix was withdrawn';
+    // A link made by hand, in the shape the add button once used: rows of parts as base64url JSON.
+    const rows = Buffer.from(JSON.stringify([{ kind: 'other', value: planted, quantity: 1, source: planted }])).toString('base64url');
+    const html = await (await fetch(`${base}/order-list?add=${rows}&from=${fix.slug}`)).text();
+    expect(html.toLowerCase()).not.toContain(planted);
+  });
+});
