@@ -191,6 +191,62 @@ export async function listOwnBenchReports(memberId: number, fixSlug?: string): P
   }));
 }
 
+export interface FixBenchReport {
+  id: number;
+  machineLabel: string;
+  outcome: BenchOutcome;
+  heldDays: number | null;
+  note: string;
+  readings: Reading[];
+  revisionNumber: number;
+  /** By the fix's author: shown, not counted. */
+  byAuthor: boolean;
+  /** By the member reading the page. */
+  own: boolean;
+  updatedAt: Date;
+}
+
+/** A fix's bench reports for its page, newest first, without who wrote them (the reader's own are marked). */
+export async function listFixBenchReports(fixId: number, readerId: number | null, limit = 50): Promise<FixBenchReport[]> {
+  const rows = await db()('bench_reports as b')
+    .join('fixes as f', 'f.id', 'b.fix_id')
+    .join('revisions as r', 'r.id', 'b.revision_id')
+    .join('machines as m', 'm.id', 'b.machine_id')
+    .join('makers as mk', 'mk.id', 'm.maker_id')
+    .where('b.fix_id', fixId)
+    .orderBy([
+      { column: 'b.updated_at', order: 'desc' },
+      { column: 'b.id', order: 'desc' },
+    ])
+    .limit(limit)
+    .select(
+      'b.id',
+      'b.outcome',
+      'b.held_days',
+      'b.note',
+      'b.readings',
+      'b.member_id',
+      'b.updated_at',
+      'f.created_by',
+      'r.number as revision_number',
+      'm.model_number',
+      'm.region',
+      'mk.name as maker_name',
+    );
+  return rows.map((r) => ({
+    id: r.id,
+    machineLabel: `${r.maker_name} ${r.model_number} (${r.region})`,
+    outcome: r.outcome,
+    heldDays: r.held_days,
+    note: r.note,
+    readings: Array.isArray(r.readings) ? r.readings : [],
+    revisionNumber: r.revision_number,
+    byAuthor: r.member_id === r.created_by,
+    own: readerId !== null && r.member_id === readerId,
+    updatedAt: r.updated_at,
+  }));
+}
+
 /** Reads the bench report form of a fix page or job sheet into the shape the schema checks. */
 export function benchReportFromForm(form: FormFields): Record<string, unknown> {
   const readings = formRows(form, 'readings', ['testPoint', 'expected', 'measured', 'note']);

@@ -37,7 +37,8 @@ export const routeAccess: Record<string, RouteRule> = {
   '/makers': read,
   '/makers/[slug]': read,
   '/chassis/[slug]': read,
-  '/fixes/[slug]': read,
+  // POST: the page's form Actions (bench report, report a fix), which check who may send them.
+  '/fixes/[slug]': { methods: { GET: 'public', POST: 'public' } },
   '/fixes/[slug]/history': read,
   '/fixes/[slug]/r/[number]': read,
   '/help': read,

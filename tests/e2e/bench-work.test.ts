@@ -1,7 +1,7 @@
 // A technician in Chromium: sign in, book in a demo machine, apply a fix, write a hand-over note; the customer reads it.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, PASSWORD } from '../integration/bench-work-support';
@@ -45,6 +45,49 @@ async function demoTarget(): Promise<{ machineSlug: string; fixSlug: string; rev
 function pdfPages(pdf: Buffer): number {
   return (pdf.toString('latin1').match(/\/Type\s*\/Page(?!s)/g) ?? []).length;
 }
+
+describe('a bench report in the browser', () => {
+  it('keeps a 20 kB note when a field is refused, marks the field, then saves it and lists it first', async () => {
+    const target = await demoTarget();
+    for (const width of [1280, 360]) {
+      const context = await signedInContext(browser, base, target.email, PASSWORD);
+      const page = await context.newPage();
+      await page.setViewportSize({ width, height: 900 });
+      const statuses: number[] = [];
+      page.on('response', (r) => statuses.push(r.status()));
+      await page.goto(`${base}/fixes/${target.fixSlug}`);
+      // By keyboard: from the machine list, Tab to the outcome and arrow across to "Fault came back".
+      await page.focus('#bench-machine');
+      await page.keyboard.press('Tab');
+      for (let i = 0; i < 3; i++) await page.keyboard.press('ArrowRight');
+      expect(await page.isChecked('input[name="outcome"][value="came_back"]')).toBe(true);
+      const note = Array.from({ length: 700 }, (_, i) => `Step ${i}: 11.8 V at TP${i % 9} <ok> & "fine"`).join('\n');
+      expect(note.length).toBeGreaterThan(20_000);
+      await page.fill('#bench-note', note);
+      await page.fill('input[name="readings.0.testPoint"]', 'TP3');
+      await page.fill('input[name="readings.0.expected"]', '12 V');
+      await page.click('#bench-report-form button[type="submit"]');
+      await page.waitForLoadState();
+      expect(statuses).not.toContain(431);
+      expect(page.url().length).toBeLessThan(200);
+      expect(await page.inputValue('#bench-note')).toBe(note);
+      expect(await page.inputValue('input[name="readings.0.testPoint"]')).toBe('TP3');
+      expect(await page.getAttribute('#bench-held', 'aria-invalid')).toBe('true');
+      await expect(page.locator('#bench-problem').textContent()).resolves.toMatch(/how many days/);
+      // Nothing on the page is wider than the screen, the long note included.
+      expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBe(0);
+      await page.fill('#bench-held', '30');
+      await page.focus('#bench-held');
+      await page.keyboard.press('Enter');
+      await page.waitForURL(/bench=saved/);
+      const first = page.locator('#bench-notes-section li').first();
+      await expect(first.textContent()).resolves.toMatch(/Fault came back after 30 days[\s\S]*your report/);
+      await expect(first.locator('.bench-note__text').textContent()).resolves.toBe(note);
+      expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBe(0);
+      await context.close();
+    }
+  });
+});
 
 describe('bench work in the browser', () => {
   it('signs in, opens a job sheet, applies a fix, writes a note; signed out, the note shows the pinned revision and cautions', async () => {

@@ -74,51 +74,16 @@ describe('/api/v1/bench-reports', () => {
     expect(res.status).toBe(403);
   });
 
-  it('takes the plain form of the fix page and sends the reader back with a message', async () => {
+  it('refuses plain form posts, which the fix page sends to its own Action instead', async () => {
     const res = await me.form('/api/v1/bench-reports', {
       fix: fix.slug,
       machine: world.machines[0]!.slug,
-      outcome: 'partly',
-      heldDays: '9',
-      back: `/fixes/${fix.slug}#bench-report`,
-    });
-    expect(res.status).toBe(303);
-    expect(res.headers.get('location')).toBe(`/fixes/${fix.slug}?bench=saved#bench-report`);
-    const missingDays = await me.form('/api/v1/bench-reports', {
-      fix: fix.slug,
-      machine: world.machines[0]!.slug,
       outcome: 'came_back',
-      back: `/fixes/${fix.slug}`,
+      note: 'A note that must never travel through an address',
     });
-    // Refused, the reader goes back with the message and what they typed, so the note is not lost.
-    expect(missingDays.headers.get('location')).toBe(
-      `/fixes/${fix.slug}?bench=need_days&typed.machine=${world.machines[0]!.slug}&typed.outcome=came_back`,
-    );
-    const typedNote = await me.form('/api/v1/bench-reports', {
-      fix: fix.slug,
-      machine: world.machines[0]!.slug,
-      outcome: 'came_back',
-      note: 'Held until the <belt> slipped again',
-      'readings.0.testPoint': 'TP3',
-      'readings.0.measured': '11.8 V',
-      back: `/fixes/${fix.slug}#bench-report`,
-    });
-    const page = await (await me.get(typedNote.headers.get('location') ?? '/')).text();
-    expect(page).toMatch(/<input[^>]*id="bench-held"[^>]*aria-invalid="true"[^>]*aria-describedby="bench-problem"/);
-    expect(page).toContain('id="bench-problem"');
-    expect(page).toContain(
-      'id="bench-note" name="note" rows="2" maxlength="2000" class="input mb-3">Held until the &lt;belt&gt; slipped again</textarea>',
-    );
-    expect(page).toMatch(/<input[^>]*value="came_back"[^>]*checked/);
-    expect(page).toContain('value="TP3"');
-    expect(page).toContain('value="11.8 V"');
-    const offSite = await me.form('/api/v1/bench-reports', {
-      fix: fix.slug,
-      machine: world.machines[0]!.slug,
-      outcome: 'fixed',
-      back: 'https://elsewhere.example/',
-    });
-    expect(offSite.headers.get('location')).toBe('/?bench=saved');
+    expect(res.status).toBe(415);
+    expect(res.headers.get('location')).toBeNull();
+    expect((await res.json()).error.message).toMatch(/JSON/);
   });
 
   it('limits each member to 30 reports an hour, then answers 429 with Retry-After', async () => {

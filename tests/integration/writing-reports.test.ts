@@ -27,12 +27,12 @@ describe('the fix page', () => {
   it('offers the edit link and the report form to a verified member, and stays free of script for everyone', async () => {
     const signedIn = await (await fetch(`${base}/fixes/${slug}`, { headers: { cookie: member.cookie } })).text();
     expect(signedIn).toContain(`href="/fixes/${slug}/edit"`);
-    expect(signedIn).toContain(`action="/api/v1/fixes/${slug}/reports"`);
+    expect(signedIn).toContain(`action="/fixes/${slug}?_action=reportFix"`);
     expect(signedIn).not.toMatch(/<script/i);
     const anonymous = await fetch(`${base}/fixes/${slug}`);
     const html = await anonymous.text();
     expect(html).not.toContain(`href="/fixes/${slug}/edit"`);
-    expect(html).not.toContain(`action="/api/v1/fixes/${slug}/reports"`);
+    expect(html).not.toContain(`action="/fixes/${slug}?_action=reportFix"`);
     expect(html).toContain('to report a fix');
     expect(html).not.toMatch(/<script/i);
     const unconfirmed = await (await fetch(`${base}/fixes/${slug}`, { headers: { cookie: unverified.cookie } })).text();

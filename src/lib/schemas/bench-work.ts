@@ -16,6 +16,9 @@ export const benchOutcomeLabels: Record<BenchOutcome, string> = {
   came_back: 'Fault came back',
 };
 
+/** A bench report's note may carry a technician's whole write-up: readings, steps, what came back. */
+export const MAX_BENCH_NOTE = 30_000;
+
 const fixSlug = z.string({ error: 'Name the fix by its address.' }).pipe(slugSchema);
 const machineSlug = z.string({ error: 'Choose the machine you repaired.' }).pipe(slugSchema);
 
@@ -34,7 +37,11 @@ export const benchReportInputSchema = z
       .max(36_500, 'That is more than a hundred years.')
       .nullable()
       .default(null),
-    note: z.string().trim().max(2000, 'Keep the note under 2000 characters.').default(''),
+    note: z
+      .string()
+      .trim()
+      .max(MAX_BENCH_NOTE, `Keep the note under ${MAX_BENCH_NOTE} characters, e.g. the readings and what you changed.`)
+      .default(''),
     readings: z.array(readingSchema).max(20, 'Record at most 20 readings.').default([]),
   })
   .superRefine((report, ctx) => {
@@ -175,44 +182,6 @@ export function formRows(form: FormFields, prefix: string, fields: readonly stri
   return rows;
 }
 
-/** A path on this site to send a form back to: anything else (another host, "//evil") gives the fallback. */
-export function safeBackPath(value: string | null | undefined, fallback: string): string {
-  if (!value || !value.startsWith('/') || value.startsWith('//') || value.startsWith('/\\') || /[\r\n]/.test(value)) return fallback;
-  return value;
-}
-
-/** Adds a message code to a path for the page to show after a form post, keeping any #fragment last. */
-export function withNotice(path: string, key: string, code: string): string {
-  const [base = '/', fragment] = path.split('#', 2);
-  const joiner = base.includes('?') ? '&' : '?';
-  return `${base}${joiner}${encodeURIComponent(key)}=${encodeURIComponent(code)}${fragment !== undefined ? `#${fragment}` : ''}`;
-}
-
-/** The fix page's bench report fields sent back after a refused post, so nothing typed is lost. */
-export const benchFormEchoKeys = [
-  'machine',
-  'outcome',
-  'heldDays',
-  'note',
-  ...[0, 1].flatMap((i) => ['testPoint', 'expected', 'measured'].map((f) => `readings.${i}.${f}`)),
-] as const;
-
-/** Which field a refused bench report's message belongs beside. */
-export const benchNoticeFields: Record<string, string> = { need_days: 'heldDays', bad_machine: 'machine' };
-
-/** `path` with the typed bench report fields as `typed.<name>` parameters, each cut to its form's limit. */
-export function withBenchEcho(path: string, form: FormFields): string {
-  const [base = '/', fragment] = path.split('#', 2);
-  const params = new URLSearchParams();
-  for (const key of benchFormEchoKeys) {
-    const value = form.get(key);
-    if (typeof value === 'string' && value.trim() !== '') params.set(`typed.${key}`, value.slice(0, 2000));
-  }
-  const query = params.toString();
-  if (query === '') return path;
-  return `${base}${base.includes('?') ? '&' : '?'}${query}${fragment !== undefined ? `#${fragment}` : ''}`;
-}
-
 /** The answer to a form post: 303 so the browser follows with GET, never cached. */
 export function seeOther(location: string): Response {
   return new Response(null, { status: 303, headers: { Location: location, 'Cache-Control': 'private, no-store' } });
@@ -230,20 +199,48 @@ export function fixRefFromText(text: string | undefined): { slug: string; revisi
   return slugSchema.safeParse(trimmed).success ? { slug: trimmed } : null;
 }
 
-/** What the page says after a bench report form post, by the code in `?bench=`; problems are marked. */
-export const benchNotices: Record<string, { text: string; problem: boolean }> = {
-  saved: { text: 'Your bench report is saved. Thank you: it counts towards the bench score.', problem: false },
-  saved_own: {
-    text: 'Your bench report is saved. As the author of this fix, your report is shown but not counted in its score.',
-    problem: false,
-  },
-  need_days: { text: 'The report was not saved: when the fault came back, say how many days the repair held.', problem: true },
-  bad_machine: { text: 'The report was not saved: choose a machine this fix applies to, or one of its chassis family.', problem: true },
-  bad_revision: { text: 'The report was not saved: that revision of the fix cannot take reports.', problem: true },
-  not_found: { text: 'The report was not saved: the fix is no longer available.', problem: true },
-  rate_limited: {
-    text: 'The report was not saved: you have saved many bench reports in a short time. Please try again later.',
-    problem: true,
-  },
-  invalid: { text: 'The report was not saved: some fields were not valid. Check the outcome, days held and note.', problem: true },
+/** The fields of a bench report form, kept exactly as typed so a refused form can show them again. */
+export const benchFormFields = [
+  'fix',
+  'revision',
+  'machine',
+  'outcome',
+  'heldDays',
+  'note',
+  ...[0, 1].flatMap((i) => ['testPoint', 'expected', 'measured'].map((f) => `readings.${i}.${f}`)),
+] as const;
+
+/** What a member typed into a bench report form, field by field, untrimmed. */
+export type TypedForm = Record<string, string>;
+
+/** The named fields of a posted form as typed (files and missing fields left out). */
+export function typedFields(form: FormFields, names: readonly string[]): TypedForm {
+  const typed: TypedForm = {};
+  for (const name of names) {
+    const value = form.get(name);
+    if (typeof value === 'string') typed[name] = value;
+  }
+  return typed;
+}
+
+/**
+ * The answer of a form Action, rendered by the page that posted it: saved, or refused with the message,
+ * the messages by field and everything typed, so nothing travels through the address and nothing is lost.
+ */
+export type FormActionResult<Saved> =
+  ({ saved: true } & Saved) | { saved: false; status: number; message: string; fields: Record<string, string[]>; typed: TypedForm };
+
+/** What the page says after a saved bench report, by the fixed code in `?bench=`; nothing else is shown. */
+export const benchSavedNotices: Record<string, string> = {
+  saved: 'Your bench report is saved. Thank you: it counts towards the bench score.',
+  saved_own: 'Your bench report is saved. As the author of this fix, your report is shown but not counted in its score.',
 };
+
+/** The sentence above a refused bench report form, by the field that was refused first. */
+export function benchRefusal(fields: Record<string, string[]>): string {
+  if (fields.heldDays) return 'The report was not saved: when the fault came back, say how many days the repair held, e.g. 30.';
+  if (fields.machine) return 'The report was not saved: choose a machine this fix applies to, or one of its chassis family.';
+  if (fields.revision) return 'The report was not saved: that revision of the fix cannot take reports.';
+  if (fields.note) return `The report was not saved: the note is longer than ${MAX_BENCH_NOTE} characters.`;
+  return 'The report was not saved: check the fields marked below.';
+}

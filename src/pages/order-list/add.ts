@@ -1,13 +1,14 @@
 // POST /order-list/add: the fix page's plain HTML "add to order list" forms (one part or all parts of a revision).
 /*
   Signed-in members: the rows are merged into their saved list, then 303 to /order-list?added=n.
-  Everyone else: 303 to /order-list?add=<rows as base64url JSON>; the order-list page merges them into the
-  list kept in the browser and cleans the address. Problems answer 303 to /order-list?problem=<code>.
+  Everyone else: 303 to /order-list?add=<revision>.<row or "all">&from=<fix>: only a reference, never part
+  text, so no address can put words of its own on the page. The order-list page reads those parts from the
+  fix, merges them into the list kept in the browser and cleans the address. Problems answer 303 to
+  /order-list?problem=<code>.
 */
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { slugSchema } from '@/lib/schemas/slug';
-import { encodeAddRows, MAX_ADD_PAYLOAD } from '@/islands/tools/model/order-list';
 import { addToOrderList, fixPartsForOrder } from '@/server/order-lists';
 import { orderListOwner } from '@/server/tools/member';
 import { readFormBody } from '@/server/tools/request-body';
@@ -41,7 +42,5 @@ export const POST: APIRoute = async ({ request, locals }) => {
     const saved = await addToOrderList(owner.id, parts.rows);
     return saved.ok ? to(`/order-list?added=${parts.rows.length}&${from}`) : back('not-decoded');
   }
-  const payload = encodeAddRows(parts.rows);
-  if (payload.length > MAX_ADD_PAYLOAD) return back('too-many');
-  return to(`/order-list?add=${payload}&${from}`);
+  return to(`/order-list?add=${parts.revisionNumber}.${form.data.row}&${from}`);
 };

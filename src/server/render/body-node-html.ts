@@ -27,6 +27,16 @@ export function cautionHtml({ node, children }: NodeHtmlProps): string {
   );
 }
 
+/** Where the remedy had a caution that the page already shows in full before it: a link back to it. */
+export function cautionPointerHtml({ node }: NodeHtmlProps): string {
+  const kind: unknown = node.attrs.kind;
+  if (!isCautionKind(kind)) throw new Error('caution node without a known kind');
+  return (
+    `<p class="caution-pointer"><a href="#caution-${kind}">${escapeHtml(cautionHeading(kind))}</a>: ` +
+    'read it in Before you start, above, before this step.</p>'
+  );
+}
+
 function readingRow(reading: ReadingAttrs, field: 'testPoint' | 'expected' | 'measured'): string {
   const modifier = field === 'testPoint' ? 'test-point' : field;
   return (

@@ -4,7 +4,7 @@ import type { Schema } from '@tiptap/pm/model';
 import { renderToHTMLString } from '@tiptap/static-renderer/pm/html-string';
 import { sanitiseBody } from '@/lib/tiptap/allowlist';
 import { bodyExtensions } from '@/lib/tiptap/extensions';
-import { cautionHtml, figureHtml, imageHtml, readingHtml } from './body-node-html';
+import { cautionHtml, cautionPointerHtml, figureHtml, imageHtml, readingHtml } from './body-node-html';
 import { linkHtml, textHtml } from './inline-html';
 import { tableCellHtml, tableHeaderHtml, tableHtml, tableRowHtml } from './table-html';
 
@@ -17,6 +17,8 @@ export interface FixBodyHtml {
 export interface RenderFixBodyOptions {
   /** Told why a body fell back to the placeholder, so the caller can log it. */
   onFailure?: (reason: string) => void;
+  /** The page shows every caution in full before the remedy: the remedy's own cautions become links to them. */
+  cautionsShownAbove?: boolean;
 }
 
 export const renderFailedHtml = '<div class="render-failed" role="note">This section could not be shown.</div>';
@@ -61,7 +63,8 @@ export function renderFixBody(json: unknown, options?: RenderFixBodyOptions): Fi
     const doc = schema.nodeFromJSON(sanitised.doc);
     // The sanitiser shapes bodies to the schema; if one still does not fit, show nothing rather than guess.
     doc.check();
-    const html = renderToHTMLString({ content: doc, extensions, options: { nodeMapping, markMapping } });
+    const mapping = options?.cautionsShownAbove ? { ...nodeMapping, caution: cautionPointerHtml } : nodeMapping;
+    const html = renderToHTMLString({ content: doc, extensions, options: { nodeMapping: mapping, markMapping } });
     return { ok: true, html };
   } catch (error) {
     return failed(error instanceof Error ? error.message : 'the renderer failed', options);

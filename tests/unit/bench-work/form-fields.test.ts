@@ -1,6 +1,6 @@
-// Unit tests of the plain-form readers: repeated rows, blank rows dropped, numbers, safe redirect paths.
+// Unit tests of the plain-form readers: repeated rows, blank rows dropped, numbers, fields kept as typed.
 import { describe, expect, it } from 'vitest';
-import { fixRefFromText, formNumber, formRows, formText, safeBackPath, withNotice } from '@/lib/schemas/bench-work';
+import { fixRefFromText, formNumber, formRows, formText, typedFields } from '@/lib/schemas/bench-work';
 
 describe('formText and formNumber', () => {
   it('trims text and treats a blank field as missing', () => {
@@ -32,20 +32,14 @@ describe('formRows', () => {
   });
 });
 
-describe('safeBackPath', () => {
-  it('keeps paths on this site and refuses other hosts', () => {
-    expect(safeBackPath('/fixes/a-fix#bench-report', '/')).toBe('/fixes/a-fix#bench-report');
-    expect(safeBackPath('https://elsewhere.example/', '/jobs')).toBe('/jobs');
-    expect(safeBackPath('//elsewhere.example/', '/jobs')).toBe('/jobs');
-    expect(safeBackPath('/\\elsewhere.example', '/jobs')).toBe('/jobs');
-    expect(safeBackPath(null, '/jobs')).toBe('/jobs');
-  });
-});
-
-describe('withNotice', () => {
-  it('adds the message code before the fragment', () => {
-    expect(withNotice('/fixes/a#bench-report', 'bench', 'saved')).toBe('/fixes/a?bench=saved#bench-report');
-    expect(withNotice('/jobs/4?x=1', 'job', 'saved')).toBe('/jobs/4?x=1&job=saved');
+describe('typedFields', () => {
+  it('keeps the named fields exactly as typed, spaces and line breaks included', () => {
+    const form = new URLSearchParams([
+      ['note', '  indented first line\n\nlast line  '],
+      ['heldDays', ''],
+      ['other', 'not asked for'],
+    ]);
+    expect(typedFields(form, ['note', 'heldDays', 'missing'])).toEqual({ note: '  indented first line\n\nlast line  ', heldDays: '' });
   });
 });
 
