@@ -24,18 +24,21 @@ export const decoderSources: ReadonlyArray<{ written: '' | 'part'; label: string
   { written: 'part', label: 'The part itself (printed code)' },
 ];
 
-export const decodeQuerySchema = z.object({
-  value: z.string({ error: 'Give the value as text.' }).max(400, 'The value is longer than 400 characters.').default(''),
-  rating: z.string({ error: 'Give the rating as text.' }).max(400, 'The rating is longer than 400 characters.').default(''),
-  kind: z
-    .union([z.literal(''), partKindSchema], { error: `Give one of: ${partKinds.join(', ')}.` })
-    .optional()
-    .transform((k) => (k === '' ? undefined : k)),
-  written: z
-    .enum(['', 'list', 'part'], { error: 'Say where the value was written: list (a parts list) or part (printed on the part).' })
-    .optional()
-    .transform((w) => w === 'part'),
-});
+export const decodeQuerySchema = z.object(
+  {
+    value: z.string({ error: 'Give the value as text.' }).max(400, 'The value is longer than 400 characters.').default(''),
+    rating: z.string({ error: 'Give the rating as text.' }).max(400, 'The rating is longer than 400 characters.').default(''),
+    kind: z
+      .union([z.literal(''), partKindSchema], { error: `Give one of: ${partKinds.join(', ')}.` })
+      .optional()
+      .transform((k) => (k === '' ? undefined : k)),
+    written: z
+      .enum(['', 'list', 'part'], { error: 'Say where the value was written: list (a parts list) or part (printed on the part).' })
+      .optional()
+      .transform((w) => w === 'part'),
+  },
+  { error: 'Give the value and, if you have them, the rating and kind, e.g. value 470uF, rating 16V 105C, kind capacitor.' },
+);
 export type DecodeQuery = z.output<typeof decodeQuerySchema>;
 
 export type DecodeResult = { ok: true; spec: PartSpec } | { ok: false; field: 'value' | 'rating'; error: InputError };
