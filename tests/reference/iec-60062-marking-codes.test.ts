@@ -146,7 +146,7 @@ describe('voltage notations', () => {
 
   it('refuses a voltage code that is also a plain value', () => {
     // "1V" is the EIA-198 code for 35 V (from memory) and also 1 volt
-    expect(refusal('1V', { expect: 'voltage', marking: true }).message).toMatch(/code for 35 V .*also reads as 1 volt/);
+    expect(refusal('1V', { expect: 'voltage', marking: true }).message).toMatch(/code for 35 V .*also reads as 1 V/);
     expect(describePart('100n', '2A', { kind: 'capacitor', marking: true }).ok).toBe(false); // 2A: 100 V or 2 A
   });
 

@@ -1,5 +1,6 @@
 // IEC 60062 marking codes: RKM codes (4R7, 4K7, 4u7), the three-digit capacitance code in pF (104, 475) and,
 // on a part's marking, the three- and four-digit resistance codes (472, 4702).
+import { formatMagnitude } from './format-value';
 import { allowedPrefixes, exampleOf, withArticle, type PrefixSymbol, type Quantity } from './quantities';
 import { fail, ok, type Result } from './result';
 import { TOLERANCE_LETTER_CLASS, toleranceFromLetter } from './tolerance';
@@ -81,9 +82,10 @@ export function readThreeDigitCode(compact: string, options: CodeOptions = {}): 
   if (expect === 'resistance' && marking) return resistorCode(`${first}${second}`, multiplier, toleranceLetter, compact);
   if (expect && expect !== 'capacitance') return undefined;
   if (!expect && marking) {
+    const ohms = formatMagnitude({ quantity: 'resistance', magnitude: Number(`${first}${second}e${multiplier}`), unit: 'Ω' });
     return fail(
-      `"${compact}" is printed on both resistors (${first}${second} × 10^${multiplier} Ω) and capacitors (in pF); say which part it is.`,
-      `${compact} on a capacitor, or ${compact} on a resistor`,
+      `"${compact}" is printed on resistors (${ohms}) and on capacitors (a value in pF); say which part it is.`,
+      `${compact} with the part set to resistor or capacitor`,
     );
   }
   if (!expect && (toleranceLetter === 'K' || toleranceLetter === 'M')) {

@@ -1,7 +1,7 @@
 // Refuses values that mix notations ("4k7Ω", "1k5R", "4.7k7", "4u7 100nF") instead of guessing what was meant.
 import { readRkm, rkmHeadPattern, rkmLetters } from './codes';
 import { formatValue } from './format-value';
-import type { Quantity } from './quantities';
+import { exampleOf, type Quantity } from './quantities';
 import { finishReading } from './reading';
 import { fail, type Result } from './result';
 import { parseTolerance, toleranceFromLetter } from './tolerance';
@@ -36,8 +36,9 @@ export function refuseMixedNotation(input: string, expect?: Quantity): Result<ne
   if (!head) return undefined;
   const code = head[0];
   const tail = first.slice(code.length);
-  const example = `${code} or ${siFormOf(code, expect)}`;
   const implies = rkmLetters[head[2] ?? '']?.implies;
+  // A code of another quantity than the one expected ("4k7Ω" where a capacitance is asked) gets that quantity's example.
+  const example = expect && implies && implies !== expect ? exampleOf[expect] : `${code} or ${siFormOf(code, expect)}`;
   if (tail === 'F' && implies === 'capacitance' && rest === '') {
     return fail(
       `"${input}" could end in F for farads or in F, the tolerance letter for ±1 %; write the code alone, or the tolerance as ±1 %.`,

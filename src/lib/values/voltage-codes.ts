@@ -28,7 +28,7 @@ export const voltageCodes: Readonly<Record<string, number>> = {
 };
 
 /** Code letters that are also unit symbols, so "1A" could be a code or a plain value. */
-const unitLetters: Readonly<Record<string, string>> = { A: 'ampere', V: 'volt', H: 'henry', W: 'watts' };
+const unitLetters: Readonly<Record<string, string>> = { A: 'A', V: 'V', H: 'H', W: 'W' };
 
 const VOLTAGE_CODE_EXAMPLE = '1C (16 V), 1E (25 V) or 2G (400 V)';
 

@@ -54,6 +54,15 @@ describe('refuseMixedNotation', () => {
   });
 });
 
+describe('refuseMixedNotation examples', () => {
+  it("gives the expected quantity's example when the code is of another quantity", () => {
+    const refused = refuseMixedNotation('4k7Ω5', 'capacitance');
+    expect(refused?.ok === false && refused.error.example).toBe('4.7 µF, 4u7, 100nF or 104');
+    const own = refuseMixedNotation('4k7Ω5', 'resistance');
+    expect(own?.ok === false && own.error.example).toBe('4k7 or 4.7 kΩ');
+  });
+});
+
 describe('describePart with a marking', () => {
   it('reads a resistor code and a capacitor voltage code as printed on the part', () => {
     const resistor = describePart('4702', '', { kind: 'resistor', marking: true });
