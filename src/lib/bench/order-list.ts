@@ -79,7 +79,11 @@ function addUnique(list: string[], item: string): void {
 }
 
 export function buildOrderList(input: OrderListInput): Result<OrderLine[]> {
-  const read = readInput(orderListInputSchema, input, 'a row from a fix: C512, capacitor, 470uF, 16V 105C, quantity 1');
+  const read = readInput(
+    orderListInputSchema,
+    input,
+    'a row from the fix "Tray will not close": C512, capacitor, 470uF, 16V 105C, quantity 1',
+  );
   if (!read.ok) return read;
   const grouped = new Map<string, OrderLine>();
   const undecodable: OrderLine[] = [];
