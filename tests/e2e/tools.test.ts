@@ -105,6 +105,59 @@ describe('bleed-down tool', () => {
   });
 });
 
+describe('substitute check from a fix', () => {
+  it('shows no error before anything is typed, then checks the candidate typed by keyboard', async () => {
+    const { slug } = await fixWithCapacitors();
+    const page = await browser.newPage();
+    await page.goto(`${base}/fixes/${slug}`);
+    await Promise.all([
+      page.waitForURL((url) => url.pathname === '/tools/substitute-check'),
+      page.getByRole('link', { name: 'Check a substitute' }).first().click(),
+    ]);
+    // Nothing marked wrong on the page as served, nor once it has hydrated.
+    const served = (await page.content()).toString();
+    expect(served).not.toContain('tool-error');
+    await hydrated(page);
+    expect(await page.locator('.tool-error, .tool-invalid, [aria-invalid="true"]').count()).toBe(0);
+    await page.getByText('Still needed: Candidate value').waitFor();
+    await page.getByLabel('Candidate value').focus();
+    await page.keyboard.type('470u');
+    await page.keyboard.press('Tab');
+    await page.keyboard.type('25V 105C');
+    await page.locator('.tool-result table').waitFor();
+    expect(await page.locator('.tool-result').textContent()).toMatch(/Rated voltage/);
+    await page.close();
+  });
+
+  it('has no placeholder in any tool field: examples are in the hint', async () => {
+    const page = await browser.newPage();
+    for (const tool of ['value-decoder', 'preferred-values', 'substitute-check', 'esr', 'life-estimate', 'bleed-down']) {
+      await page.goto(`${base}/tools/${tool}`);
+      await hydrated(page);
+      expect(await page.locator('.tool-form [placeholder]').count(), tool).toBe(0);
+      expect(await page.locator('.tool-form').textContent(), tool).toMatch(/e\.g\. /);
+    }
+    await page.close();
+  });
+});
+
+describe('value decoder', () => {
+  it('reads a decimal comma and refuses mixed notations with the reason and an example, keeping what was typed', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${base}/tools/value-decoder`);
+    await hydrated(page);
+    await page.getByLabel('Value').fill('4,7µF');
+    await page.locator('.tool-result').getByText('4.7 µF').first().waitFor();
+    await page.getByLabel('Value').fill('4k7Ω5');
+    await page.getByText('mixes an RKM code with a unit').waitFor();
+    expect(await page.locator('.tool-error').textContent()).toContain('For example: 4k7 or 4.7 kΩ');
+    expect(await page.getByLabel('Value').inputValue()).toBe('4k7Ω5');
+    await page.getByLabel('Value').fill('100uF/16V 105°C');
+    await page.getByText('100 µF 16 V 105 °C').first().waitFor();
+    await page.close();
+  });
+});
+
 describe('order list', () => {
   it('adds all parts of a fix as an anonymous reader, keeps them in the browser and downloads the CSV', async () => {
     const { slug, partCount } = await fixWithCapacitors();

@@ -150,7 +150,8 @@ describe('bad input on the pages', () => {
     [{ capacitance: '47uF 16k', resistance: '470k', voltage: '340V' }, 'holds more than one value'],
     [{ capacitance: '16V', resistance: '470k', voltage: '340V' }, 'is a voltage, but a capacitance is expected here'],
   ])('bleed-down answers %j with a message and an example', async (query, message) => {
-    const { status, text } = await page('/tools/bleed-down', query);
+    // A form sends every field, the optional safe voltage too (left empty).
+    const { status, text } = await page('/tools/bleed-down', { safeVoltage: '', ...query });
     expect(status).toBe(200);
     expect(text).toContain(message);
     expect(text).toContain('For example: 4.7 µF, 4u7, 100nF or 104');
@@ -195,7 +196,8 @@ describe('bad input on the pages', () => {
   });
 
   it('a form sent with nothing filled in lists what is needed, with examples', async () => {
-    const { text } = await page('/tools/substitute-check', { value: '', rating: '', candidateValue: '', candidateRating: '' });
+    const empty = { value: '', rating: '', candidateValue: '', candidateRating: '', workingVoltage: '', roomDiameter: '', roomHeight: '' };
+    const { text } = await page('/tools/substitute-check', empty);
     expect(text).toContain('Check the fields marked above');
     expect(text).toContain('For example:');
     expectNoBrokenFigures(text);

@@ -97,7 +97,7 @@ describe('saving a draft with bad input', () => {
   it('refuses a submission with a reading that has no value, and one whose part value does not decode', async () => {
     const values = completeValues(1, {
       readings: [{ testPoint: 'TP4', expected: '', measured: '', note: '' }],
-      parts: [{ ref: 'C7', kind: 'capacitor', value: '4,7uF', rating: '', quantity: 1, notes: '' }],
+      parts: [{ ref: 'C7', kind: 'capacitor', value: '4,700uF', rating: '', quantity: 1, notes: '' }],
     });
     const answer = await call(base, `/api/v1/drafts/${draftId}/submit`, { body: { values }, cookie: writer.cookie });
     expect(answer.status).toBe(400);

@@ -106,14 +106,10 @@ export default function BleedDown({ initialFields, submitted }: BleedDownProps):
         </>
       }
     >
-      <Field {...field('capacitance')} hint="As marked on the can: 150uF, 150 µF or 150 mfd" placeholder="150uF" />
-      <Field {...field('resistance')} hint="The bleed resistor across it: 470k, 470 kΩ, 100k" placeholder="470k" />
-      <Field
-        {...field('voltage')}
-        hint="Measured or expected across the capacitor: mains peak is about 325–340 V on 230 V"
-        placeholder="340V"
-      />
-      <Field {...field('safeVoltage')} optional hint="Blank means 60 V, the ES1 limit for DC in IEC 62368-1" placeholder="60V" />
+      <Field {...field('capacitance')} hint="As marked on the can, e.g. 150uF, 150 µF or 150 mfd" />
+      <Field {...field('resistance')} hint="The bleed resistor across it, e.g. 470k or 470 kΩ" />
+      <Field {...field('voltage')} hint="Measured or expected across the capacitor; mains peak is about 325–340 V on 230 V, e.g. 340V" />
+      <Field {...field('safeVoltage')} optional hint="Blank means 60 V, the ES1 limit for DC in IEC 62368-1; e.g. 42V for a lower limit" />
     </ToolShell>
   );
 }

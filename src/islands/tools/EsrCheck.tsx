@@ -98,10 +98,10 @@ export default function EsrCheck({ initialFields, submitted }: EsrCheckProps): R
         </>
       }
     >
-      <Field {...field('capacitance')} hint="As marked: 1000uF, 1000 µF" placeholder="1000uF" />
-      <Field {...field('ratedVoltage')} hint={`The table covers ${tableVoltagesText()}`} placeholder="16V" />
-      <Field {...field('measured')} optional hint="The meter's reading in ohms: 0.4, 0.4 ohm, 400m" placeholder="0.4" />
-      <Field {...field('frequency')} optional hint="Blank for 120 Hz; many bench ESR meters test near 100 kHz" placeholder="100 kHz" />
+      <Field {...field('capacitance')} hint="As marked, e.g. 1000uF or 1000 µF" />
+      <Field {...field('ratedVoltage')} hint={`The table covers ${tableVoltagesText()}; e.g. 16V`} />
+      <Field {...field('measured')} optional hint="The meter's reading in ohms, e.g. 0.4, 0.4 ohm or 400m" />
+      <Field {...field('frequency')} optional hint="Blank for 120 Hz; many bench ESR meters test near 100 kHz, e.g. 100 kHz" />
     </ToolShell>
   );
 }

@@ -110,28 +110,22 @@ export default function LifeEstimate({ initialFields, submitted }: LifeEstimateP
         </>
       }
     >
-      <Field {...field('ratedLife')} hint="From the datasheet or the sleeve, in hours: 1000, 2000, 5000" placeholder="2000" />
-      <Field {...field('ratedTemperature')} hint="The part's class in °C: 85 or 105" placeholder="105" />
-      <Field
-        {...field('ambient')}
-        hint="Air beside the part in °C; beside a regulator's heatsink this is well above room"
-        placeholder="55"
-      />
+      <Field {...field('ratedLife')} hint="From the datasheet or the sleeve, in hours, e.g. 2000" />
+      <Field {...field('ratedTemperature')} hint="The part's class in °C, e.g. 85 or 105" />
+      <Field {...field('ambient')} hint="Air beside the part in °C, e.g. 55; beside a regulator's heatsink this is well above room" />
       <Field
         {...field('selfHeating')}
         optional
-        hint="Kelvin the ripple current adds inside the can, if you know it; blank for none, or work it out below"
-        placeholder="5"
+        hint="Kelvin the ripple current adds inside the can, e.g. 5, if you know it; blank for none, or work it out below"
       />
       <fieldset className="space-y-3">
         <legend className="font-semibold">Or self-heating from the ripple current (all three, optional)</legend>
-        <Field {...field('rippleCurrent')} optional hint="RMS ripple current through the part: 1 A, 850 mA" placeholder="1 A" />
-        <Field {...field('esr')} optional hint="The part's ESR at the ripple frequency, in ohms: 0.1, 100m" placeholder="0.1" />
+        <Field {...field('rippleCurrent')} optional hint="RMS ripple current through the part, e.g. 1 A or 850 mA" />
+        <Field {...field('esr')} optional hint="The part's ESR at the ripple frequency in ohms, e.g. 0.1 or 100m" />
         <Field
           {...field('thermalResistance')}
           optional
-          hint="Can to surrounding air, in K/W, from the datasheet; small cans are higher"
-          placeholder="50 K/W"
+          hint="Can to surrounding air in K/W from the datasheet, e.g. 50 K/W; small cans are higher"
         />
       </fieldset>
     </ToolShell>

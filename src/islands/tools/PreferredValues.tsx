@@ -83,8 +83,7 @@ export default function PreferredValues({ initialFields, submitted }: PreferredV
         value={form.fields.value}
         onChange={(v) => form.setField('value', v)}
         error={errors.value}
-        hint="A measured or calculated value: 5k, 4.3 kΩ, 3300, 0.33uF"
-        placeholder="5k"
+        hint="A measured or calculated value, e.g. 5k, 4.3 kΩ, 3300 or 0.33uF"
       />
       <SelectField
         name="series"

@@ -109,19 +109,19 @@ export default function SubstituteCheck({ initialFields, submitted }: Substitute
     >
       <fieldset className="space-y-3">
         <legend className="font-serif text-lg font-semibold text-teal">The original</legend>
-        <Field {...field('value')} hint="As on the parts list or the can: 470uF, 470 µF" placeholder="470uF" />
-        <Field {...field('rating')} hint="Voltage, class, ESR, size: 16V 105C low-ESR Ø8x12mm" placeholder="16V 105C low-ESR" />
+        <Field {...field('value')} hint="As on the parts list or the can, e.g. 470u or 470 µF" />
+        <Field {...field('rating')} hint="Voltage, class, ESR, size, e.g. 16V 105C low-ESR Ø8x12mm" />
       </fieldset>
       <fieldset className="space-y-3">
         <legend className="font-serif text-lg font-semibold text-teal">The candidate</legend>
-        <Field {...field('candidateValue')} hint="The part you mean to fit" placeholder="470uF" />
-        <Field {...field('candidateRating')} hint="From its datasheet: 25V 105C low-ESR Ø8x16mm" placeholder="25V 105C low-ESR" />
+        <Field {...field('candidateValue')} hint="The part you mean to fit, e.g. 470u" />
+        <Field {...field('candidateRating')} hint="From its datasheet, e.g. 25V 105C low-ESR Ø8x16mm" />
       </fieldset>
       <fieldset className="space-y-3">
         <legend className="font-serif text-lg font-semibold text-teal">The circuit</legend>
-        <Field {...field('workingVoltage')} optional hint="DC across the part in use, measured or from the schematic" placeholder="12V" />
-        <Field {...field('roomDiameter')} optional hint="Measured room on the board, in mm" placeholder="10" />
-        <Field {...field('roomHeight')} optional hint="Measured room above the board, in mm" placeholder="20" />
+        <Field {...field('workingVoltage')} optional hint="DC across the part in use, measured or from the schematic, e.g. 12V" />
+        <Field {...field('roomDiameter')} optional hint="Measured room on the board in mm, e.g. 10" />
+        <Field {...field('roomHeight')} optional hint="Measured room above the board in mm, e.g. 20" />
       </fieldset>
     </ToolShell>
   );

@@ -4,7 +4,7 @@ import type { PartSpec } from '@/lib/values/part-spec';
 import { formatValue } from '@/lib/values/format-value';
 import { formatTolerance } from '@/lib/values/tolerance';
 import { scaledDecimal } from '@/lib/values/decimal';
-import { decoderKinds, decoderOutcome, type DecoderField } from './model/value-decoder';
+import { decoderKinds, decoderOutcome, decoderSources, type DecoderField } from './model/value-decoder';
 import { quantityText, significant } from './model/format';
 import { Field, SelectField } from './ui/Field';
 import { NotYet, PrintedInputs } from './ui/ResultStates';
@@ -13,7 +13,7 @@ import { useToolForm } from './ui/use-tool-form';
 
 const PATH = '/tools/value-decoder';
 
-const labels: Record<DecoderField, string> = { value: 'Value', rating: 'Rating', kind: 'Part' };
+const labels: Record<DecoderField, string> = { value: 'Value', rating: 'Rating', kind: 'Part', written: 'Written on' };
 
 export interface ValueDecoderProps {
   initialFields: Record<DecoderField, string>;
@@ -94,14 +94,21 @@ export default function ValueDecoder({ initialFields, submitted }: ValueDecoderP
         onChange={(v) => form.setField('kind', v)}
         error={errors.kind}
       />
+      <SelectField
+        name="written"
+        label={labels.written}
+        value={form.fields.written}
+        options={decoderSources.map((w) => ({ value: w.written, label: w.label }))}
+        onChange={(v) => form.setField('written', v)}
+        error={errors.written}
+      />
       <Field
         name="value"
         label={labels.value}
         value={form.fields.value}
         onChange={(v) => form.setField('value', v)}
         error={errors.value}
-        hint="As written or marked: 4.7 µF, 4u7, 104, 2k2, 4R7, 470 ohm"
-        placeholder="4u7"
+        hint="As written or printed, with a comma or a point, e.g. 4.7 µF, 4,7 µF, 4u7, 104, 2k2, 4R7 or 100uF/16V"
       />
       <Field
         name="rating"
@@ -110,8 +117,7 @@ export default function ValueDecoder({ initialFields, submitted }: ValueDecoderP
         onChange={(v) => form.setField('rating', v)}
         error={errors.rating}
         optional
-        hint="Voltage, class, tolerance, size: 16V 105C low-ESR, 0.25W 1%, Ø10x16mm"
-        placeholder="50V 105C"
+        hint="Voltage, class, tolerance, size, e.g. 16V 105C low-ESR, 0.25W 1% or Ø10x16mm"
       />
     </ToolShell>
   );

@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { fail, ok, type Result } from '@/lib/values/result';
 import { readInput } from './input';
+import { figures } from './numbers';
 
 /** The standard normal quantile for a two-sided 95 % interval, rounded as usual: Φ⁻¹(0.975) ≈ 1.95996. */
 export const Z_95 = 1.96;
@@ -34,22 +35,32 @@ const count = (what: string) =>
     .nonnegative(`${what} cannot be negative.`)
     .default(0);
 
-export const outcomeCountsSchema = z.object({
-  fixed: count('Fixed'),
-  partly: count('Partly'),
-  notFixed: count('Not fixed'),
-  /** Reported fixed, then the fault came back: counts as not fixed. */
-  cameBack: count('Came back'),
-});
+export const outcomeCountsSchema = figures(
+  {
+    fixed: count('Fixed'),
+    partly: count('Partly'),
+    notFixed: count('Not fixed'),
+    /** Reported fixed, then the fault came back: counts as not fixed. */
+    cameBack: count('Came back'),
+  },
+  'fixed 8, partly 1, not fixed 1',
+);
 export type OutcomeCounts = z.input<typeof outcomeCountsSchema>;
 
-export const benchScoreInputSchema = z.object({
-  /** Reports on the fix's current revision. */
-  current: outcomeCountsSchema.default({ fixed: 0, partly: 0, notFixed: 0, cameBack: 0 }),
-  /** Reports on older revisions: the fix may have changed since. */
-  older: outcomeCountsSchema.default({ fixed: 0, partly: 0, notFixed: 0, cameBack: 0 }),
-  olderWeight: z.number().min(0, 'The weight of older reports is 0 to 1.').max(1, 'The weight of older reports is 0 to 1.').default(0.5),
-});
+export const benchScoreInputSchema = figures(
+  {
+    /** Reports on the fix's current revision. */
+    current: outcomeCountsSchema.default({ fixed: 0, partly: 0, notFixed: 0, cameBack: 0 }),
+    /** Reports on older revisions: the fix may have changed since. */
+    older: outcomeCountsSchema.default({ fixed: 0, partly: 0, notFixed: 0, cameBack: 0 }),
+    olderWeight: z
+      .number({ error: 'The weight of older reports is a number from 0 to 1, e.g. 0.5.' })
+      .min(0, 'The weight of older reports is 0 to 1, e.g. 0.5.')
+      .max(1, 'The weight of older reports is 0 to 1, e.g. 0.5.')
+      .default(0.5),
+  },
+  'current reports: fixed 8, partly 1, not fixed 1',
+);
 export type BenchScoreInput = z.input<typeof benchScoreInputSchema>;
 
 export interface BenchScore {
@@ -64,7 +75,7 @@ export interface BenchScore {
 }
 
 export function benchScore(input: BenchScoreInput): Result<BenchScore> {
-  const read = readInput(benchScoreInputSchema, input, '{ current: { fixed: 8, partly: 1, notFixed: 1, cameBack: 0 } }');
+  const read = readInput(benchScoreInputSchema, input, '8 fixed, 1 partly, 1 not fixed on the current revision');
   if (!read.ok) return read;
   const { current, older, olderWeight } = read.value;
   const totalOf = (c: typeof current): number => c.fixed + c.partly + c.notFixed + c.cameBack;

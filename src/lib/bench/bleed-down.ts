@@ -4,7 +4,7 @@ import { canonicalMagnitude } from '@/lib/values/decimal';
 import { fail, ok, type Result } from '@/lib/values/result';
 import { refuseNonFinite } from './finite';
 import { readInput } from './input';
-import { positiveNumber } from './numbers';
+import { figures, positiveNumber } from './numbers';
 
 /** ES1 limit for DC voltage in IEC 62368-1 (energy source class 1): 60 V. */
 export const ES1_DC_LIMIT_V = 60;
@@ -13,12 +13,15 @@ export const ES1_DC_LIMIT_V = 60;
 export const BLEED_DOWN_CAUTION =
   'Stored charge can injure. Measure the voltage across the capacitor with a meter rated for it before you touch anything: never assume it is discharged, because a bleed resistor can be open, a lead loose or the value wrong. Follow your local electrical codes and licensed practice.';
 
-export const bleedDownInputSchema = z.object({
-  capacitanceF: positiveNumber('Capacitance'),
-  resistanceOhm: positiveNumber('Resistance'),
-  initialVoltageV: positiveNumber('Starting voltage'),
-  safeVoltageV: positiveNumber('Safe voltage').default(ES1_DC_LIMIT_V),
-});
+export const bleedDownInputSchema = figures(
+  {
+    capacitanceF: positiveNumber('Capacitance'),
+    resistanceOhm: positiveNumber('Resistance'),
+    initialVoltageV: positiveNumber('Starting voltage'),
+    safeVoltageV: positiveNumber('Safe voltage').default(ES1_DC_LIMIT_V),
+  },
+  'capacitance 150 µF, resistance 470 kΩ and starting voltage 340 V',
+);
 export type BleedDownInput = z.input<typeof bleedDownInputSchema>;
 
 export interface BleedDownResult {
@@ -39,7 +42,7 @@ export interface BleedDownResult {
   notes: string[];
 }
 
-const EXAMPLE = '{ capacitanceF: 0.00015, resistanceOhm: 470000, initialVoltageV: 340 }';
+const EXAMPLE = 'capacitance 150 µF, bleed resistor 470 kΩ, starting voltage 340 V';
 
 export function bleedDown(input: BleedDownInput): Result<BleedDownResult> {
   const read = readInput(bleedDownInputSchema, input, EXAMPLE);

@@ -4,14 +4,17 @@ import { canonicalMagnitude } from '@/lib/values/decimal';
 import { ok, type Result } from '@/lib/values/result';
 import { esrFromTanDelta, maxTanDelta, typicalTanDeltaTable } from './esr-table';
 import { readInput } from './input';
-import { positiveNumber } from './numbers';
+import { figures, positiveNumber } from './numbers';
 
 export { esrFromTanDelta, maxTanDelta, tableVoltagesText, tanDeltaFromEsr, typicalTanDeltaTable } from './esr-table';
 
-export const esrReferenceInputSchema = z.object({
-  capacitanceF: positiveNumber('Capacitance'),
-  ratedVoltageV: positiveNumber('Rated voltage'),
-});
+export const esrReferenceInputSchema = figures(
+  {
+    capacitanceF: positiveNumber('Capacitance'),
+    ratedVoltageV: positiveNumber('Rated voltage'),
+  },
+  'capacitance 1000 µF and rated voltage 16 V',
+);
 export type EsrReferenceInput = z.input<typeof esrReferenceInputSchema>;
 
 export interface EsrReference {
@@ -29,7 +32,7 @@ const REFERENCE_ASSUMPTIONS = [
 ];
 
 export function referenceEsr(input: EsrReferenceInput): Result<EsrReference> {
-  const read = readInput(esrReferenceInputSchema, input, '{ capacitanceF: 0.001, ratedVoltageV: 16 }');
+  const read = readInput(esrReferenceInputSchema, input, 'capacitance 1000 µF, rated voltage 16 V');
   if (!read.ok) return read;
   const tanDelta = maxTanDelta(read.value.ratedVoltageV, read.value.capacitanceF);
   if (!tanDelta.ok) return tanDelta;
@@ -52,13 +55,16 @@ export const esrThresholds = { goodUpTo: 1, marginalUpTo: 2 } as const;
 
 export type EsrVerdict = 'good' | 'marginal' | 'replace';
 
-export const esrJudgeInputSchema = z.object({
-  measuredOhm: positiveNumber('Measured ESR'),
-  capacitanceF: positiveNumber('Capacitance'),
-  ratedVoltageV: positiveNumber('Rated voltage'),
-  /** The meter's test frequency; many bench ESR meters test near 100 kHz. */
-  meterFrequencyHz: positiveNumber('Meter frequency').max(10_000_000, 'Meter frequency above 10 MHz is not an ESR test.').default(120),
-});
+export const esrJudgeInputSchema = figures(
+  {
+    measuredOhm: positiveNumber('Measured ESR'),
+    capacitanceF: positiveNumber('Capacitance'),
+    ratedVoltageV: positiveNumber('Rated voltage'),
+    /** The meter's test frequency; many bench ESR meters test near 100 kHz. */
+    meterFrequencyHz: positiveNumber('Meter frequency').max(10_000_000, 'Meter frequency above 10 MHz is not an ESR test.').default(120),
+  },
+  'measured ESR 0.4 Ω, capacitance 1000 µF and rated voltage 16 V',
+);
 export type EsrJudgeInput = z.input<typeof esrJudgeInputSchema>;
 
 export interface EsrJudgement {
@@ -88,7 +94,7 @@ function assumptionsFor(meterFrequencyHz: number): string[] {
 }
 
 export function judgeEsr(input: EsrJudgeInput): Result<EsrJudgement> {
-  const read = readInput(esrJudgeInputSchema, input, '{ measuredOhm: 0.4, capacitanceF: 0.001, ratedVoltageV: 16 }');
+  const read = readInput(esrJudgeInputSchema, input, 'measured ESR 0.4 Ω on 1000 µF 16 V');
   if (!read.ok) return read;
   const { measuredOhm, capacitanceF, ratedVoltageV, meterFrequencyHz } = read.value;
   const reference = referenceEsr({ capacitanceF, ratedVoltageV });

@@ -1,5 +1,6 @@
 // Checks a bench tool's input against its zod schema and turns the first problem into a readable error.
 import type { z } from 'zod';
+import { readableMessage } from '@/lib/schemas/field-errors';
 import { fail, ok, type Result } from '@/lib/values/result';
 
 export function readInput<S extends z.ZodType>(schema: S, input: unknown, example: string): Result<z.output<S>> {
@@ -9,5 +10,5 @@ export function readInput<S extends z.ZodType>(schema: S, input: unknown, exampl
   const path = issue?.path.map(String).join('.') ?? '';
   // Field messages already name the field; the path only helps when a nested list item is wrong.
   const where = path.includes('.') ? `${path}: ` : '';
-  return fail(`${where}${issue?.message ?? 'The input could not be read.'}`, example);
+  return fail(`${where}${issue ? readableMessage(issue) : 'The input could not be read.'}`, example);
 }

@@ -4,7 +4,7 @@ import { canonicalMagnitude } from '@/lib/values/decimal';
 import { fail, ok, type Result } from '@/lib/values/result';
 import { refuseNonFinite } from './finite';
 import { readInput } from './input';
-import { nonNegativeNumber, positiveNumber, temperatureC } from './numbers';
+import { figures, nonNegativeNumber, positiveNumber, temperatureC } from './numbers';
 
 export const HOURS_PER_YEAR = 8766;
 /** Makers' application guides apply the rule best between these core temperatures. */
@@ -13,25 +13,29 @@ export const RULE_BEST_TO_C = 90;
 /** About 15 years: estimates beyond this outrun seals and electrolyte (common practice, from memory). */
 export const LONGEST_CREDIBLE_HOURS = 15 * HOURS_PER_YEAR;
 
-const rippleSchema = z.object({
-  currentA: positiveNumber('Ripple current'),
-  esrOhm: positiveNumber('ESR'),
-  /** Case-to-ambient thermal resistance of the can, K/W. */
-  thermalResistanceKPerW: positiveNumber('Thermal resistance'),
-});
+const rippleSchema = figures(
+  {
+    currentA: positiveNumber('Ripple current'),
+    esrOhm: positiveNumber('ESR'),
+    /** Case-to-ambient thermal resistance of the can, K/W. */
+    thermalResistanceKPerW: positiveNumber('Thermal resistance'),
+  },
+  'ripple current 1 A, ESR 0.1 Ω and thermal resistance 50 K/W',
+);
 
-export const lifeInputSchema = z
-  .object({
+export const lifeInputSchema = figures(
+  {
     ratedLifeH: positiveNumber('Rated life'),
     ratedTemperatureC: temperatureC('Rated temperature'),
     /** Air temperature beside the part (near a regulator's heatsink this is well above room). */
     ambientTemperatureC: temperatureC('Temperature beside the part'),
     selfHeatingK: nonNegativeNumber('Self-heating').optional(),
     ripple: rippleSchema.optional(),
-  })
-  .refine((i) => i.selfHeatingK === undefined || i.ripple === undefined, {
-    message: 'Give the self-heating either directly or from ripple current, not both.',
-  });
+  },
+  'rated life 2000 h at 105 °C, 85 °C beside the part',
+).refine((i) => i.selfHeatingK === undefined || i.ripple === undefined, {
+  message: 'Give the self-heating either directly or from ripple current, not both.',
+});
 export type LifeInput = z.input<typeof lifeInputSchema>;
 
 export interface LifeEstimate {
@@ -45,8 +49,8 @@ export interface LifeEstimate {
   warnings: string[];
 }
 
-const EXAMPLE = '{ ratedLifeH: 2000, ratedTemperatureC: 105, ambientTemperatureC: 85 }';
-const RIPPLE_EXAMPLE = 'ripple: { currentA: 1, esrOhm: 0.1, thermalResistanceKPerW: 50 } (5 K)';
+const EXAMPLE = 'rated life 2000 h at 105 °C, 85 °C beside the part';
+const RIPPLE_EXAMPLE = 'ripple current 1 A through 0.1 Ω at 50 K/W (5 K)';
 
 /** ΔT = I² · ESR · Rth: ripple power in the ESR through the can's thermal resistance. */
 export function rippleSelfHeatingK(currentA: number, esrOhm: number, thermalResistanceKPerW: number): number {
@@ -98,12 +102,15 @@ function lifeWarnings(coreTemperatureC: number, lifeH: number): string[] {
   return warnings;
 }
 
-export const lifeCurveInputSchema = z.object({
-  ratedLifeH: positiveNumber('Rated life'),
-  ratedTemperatureC: temperatureC('Rated temperature'),
-  fromC: temperatureC('Lowest temperature').default(25),
-  stepC: positiveNumber('Step').min(0.5, 'Step must be at least 0.5 K.').default(5),
-});
+export const lifeCurveInputSchema = figures(
+  {
+    ratedLifeH: positiveNumber('Rated life'),
+    ratedTemperatureC: temperatureC('Rated temperature'),
+    fromC: temperatureC('Lowest temperature').default(25),
+    stepC: positiveNumber('Step').min(0.5, 'Step must be at least 0.5 K.').default(5),
+  },
+  'rated life 2000 h at 105 °C, from 40 °C',
+);
 export type LifeCurveInput = z.input<typeof lifeCurveInputSchema>;
 
 export interface LifePoint {
@@ -113,7 +120,7 @@ export interface LifePoint {
 
 /** Points of life against temperature for a chart, from fromC up to the rated temperature (never past it). */
 export function lifeCurve(input: LifeCurveInput): Result<LifePoint[]> {
-  const read = readInput(lifeCurveInputSchema, input, '{ ratedLifeH: 2000, ratedTemperatureC: 105, fromC: 40 }');
+  const read = readInput(lifeCurveInputSchema, input, 'rated life 2000 h at 105 °C, from 40 °C');
   if (!read.ok) return read;
   const { ratedLifeH, ratedTemperatureC, fromC, stepC } = read.value;
   if (fromC >= ratedTemperatureC) return fail('The lowest temperature must be below the rated temperature.', 'fromC: 40');

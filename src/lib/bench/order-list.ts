@@ -9,20 +9,44 @@ import { readInput } from './input';
 
 export const orderLineInputSchema = partRowSchema.extend({
   /** Where the row came from: a fix's title or a job sheet's name. */
-  source: z.string().trim().min(1, 'Say where the part came from (a fix or a job sheet).').max(200),
+  source: z
+    .string({ error: 'Say where the part came from, e.g. the fix title.' })
+    .trim()
+    .min(1, 'Say where the part came from (a fix or a job sheet), e.g. the fix title.')
+    .max(200, 'Keep where the part came from under 200 characters, e.g. the fix title.'),
 });
 export type OrderLineInput = z.input<typeof orderLineInputSchema>;
 
-export const sparesSchema = z.union([
-  z.object({ count: z.number().int('Spares must be a whole number.').min(0, 'Spares cannot be negative.').max(999) }),
-  z.object({ percent: z.number().min(0, 'Spares cannot be negative.').max(1000, 'Spares above 1000 % are not spares.') }),
-]);
+const SPARES_EXAMPLE = 'e.g. 2 spares per line, or 10 %';
+export const sparesSchema = z.union(
+  [
+    z.object({
+      count: z
+        .number({ error: `Spares are a whole number, ${SPARES_EXAMPLE}.` })
+        .int(`Spares must be a whole number, ${SPARES_EXAMPLE}.`)
+        .min(0, `Spares cannot be negative, ${SPARES_EXAMPLE}.`)
+        .max(999, `Spares are at most 999 per line, ${SPARES_EXAMPLE}.`),
+    }),
+    z.object({
+      percent: z
+        .number({ error: `Spares are a number of percent, ${SPARES_EXAMPLE}.` })
+        .min(0, `Spares cannot be negative, ${SPARES_EXAMPLE}.`)
+        .max(1000, `Spares above 1000 % are not spares, ${SPARES_EXAMPLE}.`),
+    }),
+  ],
+  { error: `Give spares as a count or a percentage, ${SPARES_EXAMPLE}.` },
+);
 export type Spares = z.infer<typeof sparesSchema>;
 
-export const orderListInputSchema = z.object({
-  lines: z.array(orderLineInputSchema).max(2000, 'An order list holds at most 2000 rows.'),
-  spares: sparesSchema.optional(),
-});
+export const orderListInputSchema = z.object(
+  {
+    lines: z
+      .array(orderLineInputSchema, { error: 'The order list needs its parts rows, e.g. 470uF 16V × 2.' })
+      .max(2000, 'An order list holds at most 2000 rows; split it in two.'),
+    spares: sparesSchema.optional(),
+  },
+  { error: 'The order list needs its parts rows, e.g. 470uF 16V × 2.' },
+);
 export type OrderListInput = z.input<typeof orderListInputSchema>;
 
 export interface OrderLine {
@@ -58,7 +82,7 @@ export function buildOrderList(input: OrderListInput): Result<OrderLine[]> {
   const read = readInput(
     orderListInputSchema,
     input,
-    '{ lines: [{ source: "Tray will not close", ref: "C512", kind: "capacitor", value: "470uF", rating: "16V 105C", quantity: 1 }] }',
+    'a row from the fix "Tray will not close": C512, capacitor, 470uF, 16V 105C, quantity 1',
   );
   if (!read.ok) return read;
   const grouped = new Map<string, OrderLine>();

@@ -28,8 +28,7 @@ export function worstStatus(statuses: readonly CheckStatus[]): CheckStatus {
   return statuses.reduce<CheckStatus>((worst, s) => (severity[s] > severity[worst] ? s : worst), 'pass');
 }
 
-const EXAMPLE =
-  '{ original: { capacitanceF: 0.00047, ratedVoltageV: 16, temperatureC: 85 }, candidate: { capacitanceF: 0.00047, ratedVoltageV: 25, temperatureC: 105 }, workingVoltageV: 12 }';
+const EXAMPLE = 'original 470 µF 16 V 85 °C, candidate 470 µF 25 V 105 °C, working voltage 12 V';
 
 /**
  * Each check only judges what is known: a check with no data on either side is left out; data on the

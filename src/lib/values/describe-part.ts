@@ -1,9 +1,9 @@
 // Decodes a parts row (value + rating text) into a canonical spec and a key that groups equal parts.
 import type { PartKind } from '@/lib/schemas/revision';
-import { MAX_TEXT_LENGTH, parseValue } from './parse-value';
+import { MAX_TEXT_LENGTH, parseValue, type ParseOptions } from './parse-value';
 import { electricalLabel, type ElectricalSpec, type PartSpec, type TextSpec } from './part-spec';
 import type { Quantity } from './quantities';
-import { parseRating, type RatingFields } from './rating';
+import { parseRating, splitAtSlashes, type RatingFields } from './rating';
 import type { ParsedValue } from './reading';
 import { fail, ok, type Result } from './result';
 import { sameTolerance } from './tolerance';
@@ -12,6 +12,8 @@ import { normaliseText } from './text-key';
 export interface DescribeOptions {
   /** The row's part kind; it says which quantity the value is and whether it has one at all. */
   kind?: PartKind;
+  /** The value and rating are printed on the part: codes as in parseValue's marking option, voltage codes (1C). */
+  marking?: boolean;
 }
 
 /** Kinds whose value is one electrical quantity; a value that does not decode is an error for them. */
@@ -37,7 +39,7 @@ const textKinds: ReadonlySet<PartKind> = new Set<PartKind>([
 export function describePart(value: string, rating: string, options: DescribeOptions = {}): Result<PartSpec> {
   const kind = options.kind;
   if (kind && textKinds.has(kind)) return textSpec(value, rating, kind);
-  const electrical = electricalSpec(value, rating, kind ? quantityOfKind[kind] : undefined);
+  const electrical = electricalSpec(value, rating, { expect: kind ? quantityOfKind[kind] : undefined, marking: options.marking });
   // "other" parts may carry a value (10 µH) or a part number; the latter falls back to text.
   if (!electrical.ok && kind === 'other') return textSpec(value, rating, kind);
   return electrical;
@@ -61,10 +63,11 @@ export function textSpec(value: string, rating: string, partKind: PartKind): Res
   return ok({ kind: 'text', partKind, label, key: `${partKind}:${normalised}` });
 }
 
-function electricalSpec(valueText: string, ratingText: string, expect?: Quantity): Result<ElectricalSpec> {
-  const leading = readLeadingValue(valueText, expect);
+function electricalSpec(valueText: string, ratingText: string, options: ParseOptions): Result<ElectricalSpec> {
+  const leading = readLeadingValue(splitAtSlashes(valueText), options);
   if (!leading.ok) return leading;
-  const rating = parseRating(`${leading.value.rest} ${ratingText}`);
+  const voltageCodes = options.marking === true && leading.value.value.quantity === 'capacitance';
+  const rating = parseRating(`${leading.value.rest} ${ratingText}`, { voltageCodes });
   if (!rating.ok) return rating;
   const merged = mergeTolerance(leading.value.value, rating.value);
   if (!merged.ok) return merged;
@@ -80,12 +83,12 @@ function electricalSpec(valueText: string, ratingText: string, expect?: Quantity
 }
 
 /** The value may be followed by rating words in the same cell ("470uF 16V"): read the longest leading value. */
-function readLeadingValue(text: string, expect?: Quantity): Result<{ value: ParsedValue; rest: string }> {
-  const whole = parseValue(text, expect ? { expect } : {});
+function readLeadingValue(text: string, options: ParseOptions): Result<{ value: ParsedValue; rest: string }> {
+  const whole = parseValue(text, options);
   if (whole.ok) return ok({ value: whole.value, rest: '' });
   const tokens = text.trim().split(/\s+/);
   for (let end = tokens.length - 1; end >= 1; end--) {
-    const head = parseValue(tokens.slice(0, end).join(' '), expect ? { expect } : {});
+    const head = parseValue(tokens.slice(0, end).join(' '), options);
     if (head.ok) return ok({ value: head.value, rest: tokens.slice(end).join(' ') });
   }
   return whole;

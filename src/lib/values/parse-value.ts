@@ -1,13 +1,21 @@
 // Reads one component value as written on a parts list or a marking: "4.7 µF", "2k2", "104", "16 WV".
-import { readRkm, readThreeDigitCode } from './codes';
+import { readFourDigitCode, readRkm, readThreeDigitCode } from './codes';
+import { readDecimalCommas } from './decimal-comma';
+import { refuseMixedNotation } from './mixed-notation';
 import { exampleFor, finishReading, type ParsedValue, type RawReading } from './reading';
 import type { PrefixSymbol, Quantity, UnitSymbol } from './quantities';
 import { fail, ok, type Result } from './result';
 import { parseTolerance, type Tolerance } from './tolerance';
+import { readVoltageCode } from './voltage-codes';
 
 export interface ParseOptions {
   /** The quantity the caller expects; a value of another quantity is refused, and unit-less input reads as it. */
-  expect?: Quantity;
+  expect?: Quantity | undefined;
+  /**
+   * The text is printed on the part, not written on a parts list: bare digits on a resistor are then its
+   * three- or four-digit code (472 = 4.7 kΩ, not 472 Ω), and a voltage may be a letter-digit code (1C = 16 V).
+   */
+  marking?: boolean | undefined;
 }
 
 const prefixChars: Record<string, PrefixSymbol> = {
@@ -22,6 +30,7 @@ const prefixChars: Record<string, PrefixSymbol> = {
   K: 'k',
   M: 'M',
   G: 'G',
+  T: 'T',
 };
 
 /** Unit words as people type them; "WV" and "VDC" are voltage notations on electrolytic capacitors. */
@@ -40,20 +49,45 @@ const numberPattern = /^(?:(\d+)\/(\d+)|(\d+(?:\.\d*)?|\.\d+)(?:e([+-]?\d+))?)/i
 export const MAX_TEXT_LENGTH = 200;
 
 export function parseValue(text: string, options: ParseOptions = {}): Result<ParsedValue> {
-  const expect = options.expect;
+  const { expect, marking } = options;
   if (text.length > MAX_TEXT_LENGTH) return fail(`The value is longer than ${MAX_TEXT_LENGTH} characters.`, exampleFor(expect));
-  const input = normaliseValueText(text);
-  if (input === '') return fail('Nothing to read: the value is empty.', exampleFor(expect));
-  if (/^-/.test(input)) return fail(`"${input}" is negative; component values are above zero.`, exampleFor(expect));
+  const normalised = normaliseValueText(text);
+  if (normalised === '') return fail('Nothing to read: the value is empty.', exampleFor(expect));
+  if (/^-/.test(normalised)) return fail(`"${normalised}" is negative; component values are above zero.`, exampleFor(expect));
+  const commas = readDecimalCommas(normalised);
+  if (!commas.ok) return commas;
+  const input = commas.value;
   if (input.includes(',')) {
-    return fail(`"${input}" has a comma; write the decimal point as a dot and no thousands separator.`, '4.7 µF or 4700 µF');
+    return fail(`"${normalised}" has a comma that is not a decimal comma; give one value here.`, exampleFor(expect));
   }
-  const compact = input.replace(/\s+/g, '');
-  // Codes are read only when written without spaces: "100F" is code 10 pF ±1 %, "100 F" is 100 farads.
-  const coded = input === compact ? (readThreeDigitCode(compact, expect) ?? readRkm(compact, expect)) : undefined;
+  const mixed = refuseMixedNotation(input, expect);
+  if (mixed) return mixed;
+  if (marking && expect === 'voltage') {
+    const code = readVoltageCode(input);
+    if (code) return code.ok ? ok({ quantity: 'voltage', magnitude: code.value, unit: 'V' }) : code;
+  }
+  // A code is one word: "100F" is code 10 pF ±1 %, "100 F" is 100 farads.
+  const coded = readCode(input, { expect, marking });
   if (coded) return coded.ok ? finishReading(coded.value, input, expect) : coded;
   const reading = readSi(input, expect);
   return reading.ok ? finishReading(reading.value, input, expect) : reading;
+}
+
+/** A code alone ("4K7J", "104") or followed by a written tolerance ("4u7 ±10 %"); undefined when not a code. */
+function readCode(
+  input: string,
+  options: { expect?: Quantity | undefined; marking?: boolean | undefined },
+): Result<RawReading> | undefined {
+  const [code = '', ...rest] = input.split(' ');
+  const codeReading = readThreeDigitCode(code, options) ?? readFourDigitCode(code, options) ?? readRkm(code, options.expect);
+  if (rest.length === 0) return codeReading;
+  // Only a written percentage may follow: "100 F" is 100 farads, not the code 100 with the letter F.
+  if (!codeReading || !rest.join(' ').includes('%')) return undefined;
+  const tolerance = parseTolerance(rest.join(' '));
+  if (!codeReading.ok || !tolerance.ok) return undefined;
+  if (codeReading.value.tolerance)
+    return fail(`"${input}" gives the tolerance twice.`, `${code} or ${code.slice(0, -1)} ${rest.join(' ')}`);
+  return ok({ ...codeReading.value, tolerance: tolerance.value });
 }
 
 /** One spelling per character: micro signs become "u", the ohm sign becomes Ω, the minus sign "-". */
@@ -108,7 +142,7 @@ function readUnit(unitPart: string, reading: RawReading, input: string, expect?:
     if (unit) return ok({ ...reading, prefix, unit });
   }
   if (/\s/.test(unitPart) && /\d/.test(unitPart)) {
-    return fail(`"${input}" holds more than one value; give one value here.`, exampleFor(expect));
+    return fail(`"${input}" holds more than one value; give one value here, and a rating in the rating field.`, exampleFor(expect));
   }
   return fail(`"${unitPart}" in "${input}" is not a unit or prefix this reader knows.`, exampleFor(expect));
 }
@@ -119,7 +153,7 @@ function unitFromWord(word: string): UnitSymbol | undefined {
 
 /** Without a unit, kilo and mega mean ohms and pico, nano, micro mean farads; milli needs a unit. */
 function impliedBy(prefix: PrefixSymbol): { impliedQuantity?: Quantity } {
-  if (prefix === 'k' || prefix === 'M' || prefix === 'G') return { impliedQuantity: 'resistance' };
+  if (prefix === 'k' || prefix === 'M' || prefix === 'G' || prefix === 'T') return { impliedQuantity: 'resistance' };
   if (prefix === 'p' || prefix === 'n' || prefix === 'µ') return { impliedQuantity: 'capacitance' };
   return {};
 }

@@ -6,7 +6,7 @@ export type Quantity = (typeof quantities)[number];
 export type UnitSymbol = 'F' | 'Ω' | 'V' | 'H' | 'W' | 'A';
 
 /** Canonical prefix symbols; micro is written with U+00B5 MICRO SIGN in canonical output. */
-export type PrefixSymbol = 'p' | 'n' | 'µ' | 'm' | '' | 'k' | 'M' | 'G';
+export type PrefixSymbol = 'p' | 'n' | 'µ' | 'm' | '' | 'k' | 'M' | 'G' | 'T';
 
 export const prefixExponents: Record<PrefixSymbol, number> = {
   p: -12,
@@ -17,6 +17,7 @@ export const prefixExponents: Record<PrefixSymbol, number> = {
   k: 3,
   M: 6,
   G: 9,
+  T: 12,
 };
 
 export const unitOf: Record<Quantity, UnitSymbol> = {
@@ -58,7 +59,7 @@ export const exampleOf: Record<Quantity, string> = {
  */
 export const allowedPrefixes: Record<Quantity, readonly PrefixSymbol[]> = {
   capacitance: ['p', 'n', 'µ', 'm', ''],
-  resistance: ['m', '', 'k', 'M', 'G'],
+  resistance: ['m', '', 'k', 'M', 'G', 'T'],
   voltage: ['µ', 'm', '', 'k'],
   inductance: ['n', 'µ', 'm', ''],
   power: ['µ', 'm', '', 'k'],
@@ -84,6 +85,7 @@ export const formatBands: Record<Quantity, ReadonlyArray<{ prefix: PrefixSymbol;
     { prefix: 'k', from: 1e3 },
     { prefix: 'M', from: 1e6 },
     { prefix: 'G', from: 1e9 },
+    { prefix: 'T', from: 1e12 },
   ],
   voltage: [
     { prefix: 'm', from: 0 },

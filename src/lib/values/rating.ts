@@ -5,6 +5,8 @@ import { withArticle } from './quantities';
 import { fail, ok, type Result } from './result';
 import { parseTemperature } from './temperature';
 import { parseTolerance, sameTolerance, type Tolerance } from './tolerance';
+import { readDecimalCommas } from './decimal-comma';
+import { readVoltageCode } from './voltage-codes';
 
 export interface RatingFields {
   /** Rated voltage in V. */
@@ -94,14 +96,32 @@ function readTolerance(text: string, fields: RatingFields): Result<true> {
   return ok(true);
 }
 
-export function parseRating(text: string): Result<RatingFields> {
+export interface RatingOptions {
+  /** Read letter-digit voltage codes (1C = 16 V), as on a capacitor's marking. */
+  voltageCodes?: boolean;
+}
+
+/**
+ * Parts lists join a value and its ratings with slashes ("100uF/16V/105C"): those slashes become spaces.
+ * A slash after a plain integer is a fraction bar (1/4W), and one before a sign belongs to a range (+80/-20%).
+ */
+export function splitAtSlashes(text: string): string {
+  return text.replace(/([^\s/]+)\s*\/\s*(?=[\d.])/g, (whole: string, left: string) => (/^\d+$/.test(left) ? whole : `${left} `));
+}
+
+export function parseRating(text: string, options: RatingOptions = {}): Result<RatingFields> {
   // Twice a value's limit: the reader also gets the words that followed the value in its own cell.
   if (text.length > 2 * MAX_TEXT_LENGTH) return fail(`The rating is longer than ${2 * MAX_TEXT_LENGTH} characters.`, RATING_EXAMPLE);
   const fields: RatingFields = { words: [] };
-  let rest = text
-    .normalize('NFKC')
-    .replace(/[µμ]/g, 'u')
-    .replace(/[\u2212\u2013]/g, '-');
+  const commas = readDecimalCommas(splitAtSlashes(text.normalize('NFKC')));
+  if (!commas.ok) return commas;
+  let rest = commas.value.replace(/[µμ]/g, 'u').replace(/[\u2212\u2013]/g, '-');
+  // Before the other readers, since "1C" (16 V) would otherwise read as a temperature.
+  if (options.voltageCodes) {
+    const codes = readVoltageCodes(rest, fields);
+    if (!codes.ok) return codes;
+    rest = codes.value;
+  }
   for (const extractor of extractors) {
     for (const match of rest.matchAll(extractor.pattern)) {
       const applied = extractor.apply(match as RegExpExecArray, fields);
@@ -111,11 +131,24 @@ export function parseRating(text: string): Result<RatingFields> {
   }
   // "16 V DC" and "16 V" become "16V" so each value is one token.
   rest = rest.replace(/(\d)\s*(v|wv|w\.v\.)\s*\.?\s*dc\b/gi, '$1V').replace(/(\d)\s+(?=[pnumkKMG]?(?:F|Ω|ohms?|V|WV|W|A|H)\b)/g, '$1');
-  for (const token of rest.split(/[\s,;/|@()]+/).filter((t) => t !== '')) {
+  for (const token of rest.split(/[\s,;|@()]+/).filter((t) => t !== '')) {
     const read = readToken(token, fields);
     if (!read.ok) return read;
   }
   return ok(fields);
+}
+
+/** Takes the letter-digit voltage codes out of the text into the voltage field; the rest is returned. */
+function readVoltageCodes(text: string, fields: RatingFields): Result<string> {
+  const codePattern = /(?<![\w.])([0-3][A-Z])(?![\w.])/g;
+  for (const match of text.matchAll(codePattern)) {
+    const volts = readVoltageCode(match[1] ?? '');
+    if (!volts) continue;
+    if (!volts.ok) return volts;
+    const set = setField(fields, 'voltage', volts.value);
+    if (!set.ok) return set;
+  }
+  return ok(text.replace(codePattern, (code: string) => (readVoltageCode(code) ? ' ' : code)));
 }
 
 function readToken(token: string, fields: RatingFields): Result<true> {

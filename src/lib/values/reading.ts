@@ -13,7 +13,7 @@ import {
   type UnitSymbol,
 } from './quantities';
 import { fail, ok, type Result } from './result';
-import type { Tolerance } from './tolerance';
+import { formatTolerance, picofaradToleranceLetters, type Tolerance } from './tolerance';
 
 export interface ComponentValue {
   quantity: Quantity;
@@ -35,6 +35,8 @@ export interface RawReading {
   unit?: UnitSymbol;
   impliedQuantity?: Quantity;
   tolerance?: Tolerance;
+  /** The tolerance letter as marked, when the tolerance came from one. */
+  toleranceLetter?: string;
 }
 
 export function exampleFor(expect: Quantity | undefined): string {
@@ -56,6 +58,8 @@ export function finishReading(reading: RawReading, original: string, expect?: Qu
   const writtenZero = !/[1-9]/.test(reading.digits);
   const checked = checkMagnitude(magnitude, writtenZero, quantity, original);
   if (!checked.ok) return checked;
+  const picofaradLetter = picofaradTolerance(reading, quantity, magnitude, original);
+  if (picofaradLetter) return picofaradLetter;
   const value: ParsedValue = { quantity, magnitude, unit: unitOf[quantity] };
   if (reading.tolerance) value.tolerance = reading.tolerance;
   return ok(value);
@@ -75,4 +79,15 @@ function checkMagnitude(magnitude: number, writtenZero: boolean, quantity: Quant
   if (magnitude < range.min || magnitude === 0) return fail(`"${original}" is too small to be a component value.`, exampleOf[quantity]);
   if (magnitude > range.max) return fail(`"${original}" is too large to be a component value.`, exampleOf[quantity]);
   return ok(true);
+}
+
+/** Below 10 pF, IEC 60062 letters B to G give the tolerance in pF, which a percentage cannot carry. */
+function picofaradTolerance(reading: RawReading, quantity: Quantity, magnitude: number, original: string): Result<never> | undefined {
+  const letter = reading.toleranceLetter;
+  if (quantity !== 'capacitance' || !letter || !picofaradToleranceLetters.has(letter) || magnitude >= 10e-12) return undefined;
+  const percent = reading.tolerance ? formatTolerance(reading.tolerance) : '';
+  return fail(
+    `On a capacitor below 10 pF the letter ${letter} in "${original}" is a tolerance in picofarads, not ${percent}; write the value and its tolerance in pF.`,
+    '4.7 pF ±0.25 pF is 4.7 pF ±5 %: write 4.7 pF ±5 %',
+  );
 }

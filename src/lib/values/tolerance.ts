@@ -8,15 +8,25 @@ export interface Tolerance {
 
 /** IEC 60062 tolerance letters used on resistors and capacitors (percent forms only). */
 export const toleranceLetters: Record<string, Tolerance> = {
+  B: { minusPercent: 0.1, plusPercent: 0.1 },
+  C: { minusPercent: 0.25, plusPercent: 0.25 },
+  D: { minusPercent: 0.5, plusPercent: 0.5 },
   F: { minusPercent: 1, plusPercent: 1 },
   G: { minusPercent: 2, plusPercent: 2 },
   J: { minusPercent: 5, plusPercent: 5 },
   K: { minusPercent: 10, plusPercent: 10 },
   M: { minusPercent: 20, plusPercent: 20 },
+  N: { minusPercent: 30, plusPercent: 30 },
   Z: { minusPercent: 20, plusPercent: 80 },
 };
 
-const TOLERANCE_EXAMPLE = '±10 %, 10%, +80/-20 % or a letter F G J K M Z';
+/** On capacitors below 10 pF these letters give the tolerance in picofarads (B ±0.1 pF … G ±2 pF), not in percent. */
+export const picofaradToleranceLetters: ReadonlySet<string> = new Set(['B', 'C', 'D', 'F', 'G']);
+
+/** The letters a code may end with, for the readers' patterns. */
+export const TOLERANCE_LETTER_CLASS = `[${Object.keys(toleranceLetters).join('')}]`;
+
+const TOLERANCE_EXAMPLE = '±10 %, 10%, +80/-20 % or a letter B C D F G J K M N Z';
 const NUMBER = String.raw`(\d+(?:\.\d+)?)`;
 const symmetricPattern = new RegExp(String.raw`^(?:±|\+/-|\+-)?\s*${NUMBER}\s*%$`);
 const plusMinusPattern = new RegExp(String.raw`^\+\s*${NUMBER}\s*%?\s*/?\s*-\s*${NUMBER}\s*%$`);

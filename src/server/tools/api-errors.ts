@@ -1,6 +1,7 @@
 // Bench tool failures in the API's one error shape, with the example of good input in the field's message.
 import type { z } from 'zod';
 import type { InputError } from '@/lib/values/result';
+import { readableMessage } from '@/lib/schemas/field-errors';
 import { apiError, fieldErrors } from '@/server/http';
 
 /** "… For example: 4.7 µF, 4u7, 100nF or 104": the one sentence a field message carries. */
@@ -18,5 +19,5 @@ export function schemaError(error: z.ZodError, example: string): Response {
   const fields = fieldErrors(error);
   const first = error.issues[0];
   const where = first && first.path.length > 0 ? `${first.path.join('.')}: ` : '';
-  return apiError('bad_request', `${where}${first?.message ?? 'The input is not valid.'} For example: ${example}`, fields);
+  return apiError('bad_request', `${where}${first ? readableMessage(first) : 'The input is not valid.'} For example: ${example}`, fields);
 }

@@ -50,7 +50,7 @@ describe('bleedDown', () => {
     expect(longDecay.ok).toBe(false);
     if (!longDecay.ok) {
       expect(longDecay.error.message).toMatch(/^The time constant comes out beyond the numbers this tool can work with/);
-      expect(longDecay.error.example).toBe('{ capacitanceF: 0.00015, resistanceOhm: 470000, initialVoltageV: 340 }');
+      expect(longDecay.error.example).toBe('capacitance 150 µF, bleed resistor 470 kΩ, starting voltage 340 V');
     }
     const hugeVoltage = bleedDown({ ...primary, initialVoltageV: 1e200, safeVoltageV: 1e199 });
     expect(hugeVoltage.ok || hugeVoltage.error.message).toMatch(/^The stored energy comes out beyond/);

@@ -36,4 +36,12 @@ describe('readInput', () => {
     expect(readInput(t, { at: -60 }, 'x').ok).toBe(false);
     expect(readInput(t, { at: 250 }, 'x').ok).toBe(false);
   });
+
+  it('writes a sentence where a schema has only the validator wording', () => {
+    const bare = z.object({ ratedVoltageV: z.number() });
+    expect(readInput(bare, { ratedVoltageV: Number.NaN }, '16 V')).toEqual({
+      ok: false,
+      error: { message: 'Rated voltage needs a number, e.g. 12.', example: '16 V' },
+    });
+  });
 });

@@ -67,7 +67,7 @@ describe('estimateLife', () => {
     expect(result.ok).toBe(false);
     if (!result.ok) {
       expect(result.error.message).toMatch(/^The expected life comes out beyond the numbers this tool can work with/);
-      expect(result.error.example).toBe('{ ratedLifeH: 2000, ratedTemperatureC: 105, ambientTemperatureC: 85 }');
+      expect(result.error.example).toBe('rated life 2000 h at 105 °C, 85 °C beside the part');
     }
   });
 
@@ -82,7 +82,7 @@ describe('estimateLife', () => {
     if (!result.ok) {
       expect(result.error.message).toMatch(/^The self-heating comes out beyond/);
       expect(result.error.message).not.toContain('Infinity');
-      expect(result.error.example).toMatch(/currentA: 1, esrOhm: 0.1, thermalResistanceKPerW: 50/);
+      expect(result.error.example).toBe('ripple current 1 A through 0.1 Ω at 50 K/W (5 K)');
     }
   });
 });

@@ -5,7 +5,7 @@ import { allowedPrefixes, formatBands, magnitudeRange, quantities, withArticle }
 describe('quantities', () => {
   it('accepts from a thousandth of the smallest canonical prefix to a million of the largest', () => {
     expect(magnitudeRange('capacitance')).toEqual({ min: 1e-15, max: 1e6 });
-    expect(magnitudeRange('resistance')).toEqual({ min: 1e-6, max: 1e15 });
+    expect(magnitudeRange('resistance')).toEqual({ min: 1e-6, max: 1e18 }); // up to teraohms, the RKM letter T
   });
 
   it('writes every quantity only with prefixes it also reads', () => {

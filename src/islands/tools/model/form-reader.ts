@@ -78,19 +78,18 @@ export class FormReader<F extends string> {
   }
 }
 
-/** The fields a tool knows, read from a query string; unknown parameters are ignored, long ones cut. */
+/**
+ * The fields a tool knows, read from a query string; unknown parameters are ignored, long ones cut.
+ * submitted: the tool's own form sent the query. A form sends every field, empty ones too; a link (from a
+ * fix's parts table, a shared address) carries only some, so its empty fields are still to be typed, not errors.
+ */
 export function fieldsFromQuery<F extends string>(
   names: readonly F[],
   query: URLSearchParams,
 ): { fields: Record<F, string>; submitted: boolean } {
   const fields = {} as Record<F, string>;
-  let submitted = false;
-  for (const name of names) {
-    const value = query.get(name);
-    if (value !== null) submitted = true;
-    fields[name] = (value ?? '').slice(0, MAX_FIELD_LENGTH);
-  }
-  return { fields, submitted };
+  for (const name of names) fields[name] = (query.get(name) ?? '').slice(0, MAX_FIELD_LENGTH);
+  return { fields, submitted: names.every((name) => query.has(name)) };
 }
 
 /** The query string for the current fields, leaving out empty ones, for sharing and printing. */

@@ -2,33 +2,59 @@
 import { z } from 'zod';
 import { buildOrderList, orderLineInputSchema, sparesFor, type OrderLine, type OrderLineInput, type Spares } from '@/lib/bench/order-list';
 import { orderListCsv } from '@/lib/bench/order-list-csv';
-import { partKindSchema } from '@/lib/schemas/revision';
+import { readableMessage } from '@/lib/schemas/field-errors';
+import { partKinds } from '@/lib/schemas/revision';
 import { normaliseText } from '@/lib/values/text-key';
 import { fail, ok, type Result } from '@/lib/values/result';
 
 export const MAX_LIST_LINES = 2000;
 export const MAX_LINE_QUANTITY = 99_999;
 
-export const storedLineSchema = z.object({
-  key: z.string().min(1).max(600),
-  label: z.string().min(1, 'A line needs its part.').max(600),
-  kind: partKindSchema,
-  quantity: z.number().int('Quantity must be a whole number.').min(1, 'Quantity is at least 1.').max(MAX_LINE_QUANTITY),
-  spares: z.number().int('Spares must be a whole number.').min(0, 'Spares cannot be negative.').max(MAX_LINE_QUANTITY).default(0),
-  refs: z.array(z.string().max(40)).max(1000).default([]),
-  sources: z.array(z.string().max(200)).max(200).default([]),
-  notes: z.array(z.string().max(500)).max(200).default([]),
-  undecodable: z.boolean().default(false),
-  problem: z.string().max(600).optional(),
-});
+/** Text of a stored line, at most max characters; the message names the field and an example. */
+const storedText = (what: string, max: number, example: string) =>
+  z.string({ error: `${what} is text, e.g. ${example}.` }).max(max, `${what} is longer than ${max} characters; e.g. ${example}.`);
+const storedTexts = (what: string, max: number, count: number, example: string) =>
+  z
+    .array(storedText(what, max, example), { error: `${what} is a list, e.g. ${example}.` })
+    .max(count, `At most ${count} ${what.toLowerCase()} per line.`);
+const wholeCount = (what: string, min: number) =>
+  z
+    .number({ error: `${what} is a whole number, e.g. 2.` })
+    .int(`${what} must be a whole number, e.g. 2.`)
+    .min(min, min === 0 ? `${what} cannot be negative, e.g. 0 or 2.` : `${what} is at least ${min}, e.g. 2.`)
+    .max(MAX_LINE_QUANTITY, `${what} is at most ${MAX_LINE_QUANTITY}, e.g. 2.`);
+
+export const storedLineSchema = z.object(
+  {
+    key: storedText('The line key', 600, 'capacitance:470 µF 16 V').min(1, 'A line needs its key, e.g. capacitance:470 µF 16 V.'),
+    label: storedText('The part', 600, '470 µF 16 V').min(1, 'A line needs its part, e.g. 470 µF 16 V.'),
+    kind: z.enum(partKinds, { error: 'The kind of part is one from the list, e.g. capacitor or belt.' }),
+    quantity: wholeCount('Quantity', 1),
+    spares: wholeCount('Spares', 0).default(0),
+    refs: storedTexts('References', 40, 1000, 'C512').default([]),
+    sources: storedTexts('Sources', 200, 200, 'a fix title').default([]),
+    notes: storedTexts('Notes', 500, 200, 'fit a 105 °C part').default([]),
+    undecodable: z.boolean({ error: 'Whether the value was read is yes or no (true or false).' }).default(false),
+    problem: storedText('The problem', 600, 'the value has no unit').optional(),
+  },
+  { error: 'An order line is the part, its kind and quantity, e.g. 470 µF 16 V, capacitor, 2.' },
+);
 export type StoredLine = z.output<typeof storedLineSchema>;
 
-export const storedListSchema = z.object({
-  lines: z.array(storedLineSchema).max(MAX_LIST_LINES, `An order list holds at most ${MAX_LIST_LINES} lines.`),
-});
+export const storedListSchema = z.object(
+  {
+    lines: z
+      .array(storedLineSchema, { error: 'The order list holds a list of lines, e.g. 470 µF 16 V × 2.' })
+      .max(MAX_LIST_LINES, `An order list holds at most ${MAX_LIST_LINES} lines.`),
+  },
+  { error: 'The order list holds a list of lines, e.g. 470 µF 16 V × 2.' },
+);
 
 /** Rows to add, as carried from a fix page in the address (?add=...). */
-export const addRowsSchema = z.array(orderLineInputSchema).min(1, 'No parts to add.').max(500, 'At most 500 parts at a time.');
+export const addRowsSchema = z
+  .array(orderLineInputSchema, { error: 'The parts to add are a list of parts rows, e.g. 470uF 16V × 2.' })
+  .min(1, 'No parts to add; add them from a fix page, e.g. with "Add all parts to the order list".')
+  .max(500, 'At most 500 parts at a time; add the rest from a second fix.');
 
 /** Undecodable lines group by their text, so the same unreadable row from two fixes is one line. */
 function storedKey(line: OrderLine): string {
@@ -170,6 +196,9 @@ export function decodeAddRows(payload: string): Result<OrderLineInput[]> {
   }
   const parsed = addRowsSchema.safeParse(json);
   if (!parsed.success)
-    return fail(`The parts in the address are not valid: ${parsed.error.issues[0]?.message ?? 'unknown problem'}`, example);
+    return fail(
+      `The parts in the address are not valid: ${parsed.error.issues[0] ? readableMessage(parsed.error.issues[0]) : 'unknown problem.'}`,
+      example,
+    );
   return ok(parsed.data);
 }

@@ -7,15 +7,15 @@ export interface FieldProps {
   label: string;
   value: string;
   onChange: (value: string) => void;
+  /** What to type, with "e.g." examples; there is no placeholder, since greyed text in a field reads as a value typed. */
   hint?: string;
-  placeholder?: string;
   error?: InputError | undefined;
   optional?: boolean;
   /** Values and codes are set in the monospace so 2k2 and 22k never blur together. */
   mono?: boolean;
 }
 
-export function Field({ name, label, value, onChange, hint, placeholder, error, optional, mono = true }: FieldProps): ReactElement {
+export function Field({ name, label, value, onChange, hint, error, optional, mono = true }: FieldProps): ReactElement {
   const id = useId();
   const hintId = `${id}-hint`;
   const errorId = `${id}-error`;
@@ -40,7 +40,6 @@ export function Field({ name, label, value, onChange, hint, placeholder, error, 
         spellCheck={false}
         className={`input mt-1 ${mono ? 'value' : ''} ${error ? 'border-brick' : ''}`}
         value={value}
-        placeholder={placeholder}
         onChange={(event) => onChange(event.target.value)}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy === '' ? undefined : describedBy}

@@ -10,8 +10,8 @@ const EXAMPLE = '{ "value": "470uF", "rating": "16V 105C low-ESR", "kind": "capa
 function decode(input: unknown, cache: 'public' | 'private'): Response {
   const parsed = decodeQuerySchema.safeParse(input);
   if (!parsed.success) return schemaError(parsed.error, EXAMPLE);
-  const { value, rating, kind } = parsed.data;
-  const decoded = decodePart(value, rating, kind);
+  const { value, rating, kind, written } = parsed.data;
+  const decoded = decodePart(value, rating, kind, written);
   if (!decoded.ok) return toolInputError(decoded.field, decoded.error);
   return json({ value, rating, kind: kind ?? null, canonical: decoded.spec.label, key: decoded.spec.key, spec: decoded.spec }, { cache });
 }
