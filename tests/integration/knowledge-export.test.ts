@@ -67,7 +67,7 @@ describe('npm run export', () => {
     expect(manifest.counts.photos).toBe(records.reduce((n, r) => n + r.photos.length, 0));
   });
 
-  it("gives each fix its live revision's fields and body, its machines and chassis families, as the database has them", async () => {
+  it("gives each fix its live revision's fields and body, and that revision's machines and chassis families, as the database has them", async () => {
     for (const record of records) {
       const row = await knex('fixes as f')
         .join('revisions as r', 'r.id', 'f.current_revision_id')
@@ -94,14 +94,14 @@ describe('npm run export', () => {
         parts: row.parts,
         cautions: row.cautions,
       });
-      const machines = await knex('fix_machines as fm')
-        .join('machines as m', 'm.id', 'fm.machine_id')
-        .where('fm.fix_id', row.id)
+      const machines = await knex('revision_machines as rm')
+        .join('machines as m', 'm.id', 'rm.machine_id')
+        .where('rm.revision_id', row.revision_id)
         .pluck('m.slug');
       expect(record.machines.map((m) => m.slug).sort()).toEqual(machines.sort());
-      const chassis = await knex('fix_chassis as fc')
-        .join('chassis_families as c', 'c.id', 'fc.chassis_family_id')
-        .where('fc.fix_id', row.id)
+      const chassis = await knex('revision_chassis as rc')
+        .join('chassis_families as c', 'c.id', 'rc.chassis_family_id')
+        .where('rc.revision_id', row.revision_id)
         .pluck('c.slug');
       expect(record.chassisFamilies.map((c) => c.slug).sort()).toEqual(chassis.sort());
       const [reports] = await knex('bench_reports as b')
