@@ -68,7 +68,8 @@ export function idParam(value: string | undefined): number | null {
 
 /**
  * Answers a JSON caller with the outcome (or the error shape), and a form post with a 303 back to a page, carrying
- * the message in the query so the page can show it without JavaScript.
+ * only the error code in the query: the page shows a fixed sentence for it (src/lib/form-answers.ts), never text
+ * from the address.
  */
 export function answer<T>(
   outcome: Outcome<T>,
@@ -77,7 +78,7 @@ export function answer<T>(
 ): Response {
   if (input.form) {
     const target = new URL(outcome.ok ? (options.done ?? options.back) : options.back, 'http://local');
-    if (!outcome.ok) target.searchParams.set(options.errorParam ?? 'error', fieldSummary(outcome));
+    if (!outcome.ok) target.searchParams.set(options.errorParam ?? 'error', outcome.code);
     return new Response(null, {
       status: 303,
       headers: { Location: `${target.pathname}${target.search}${target.hash}`, 'Cache-Control': 'private, no-store' },
@@ -85,9 +86,4 @@ export function answer<T>(
   }
   if (!outcome.ok) return failureResponse(outcome);
   return json(outcome.value ?? { ok: true }, { status: options.status ?? 200, cache: 'private' });
-}
-
-function fieldSummary(failure: Failure): string {
-  const first = failure.fields ? Object.values(failure.fields)[0]?.[0] : undefined;
-  return first && first !== failure.message ? `${failure.message} ${first}` : failure.message;
 }
