@@ -1,7 +1,7 @@
 // At 360 px wide, no main page scrolls sideways, signed out or signed in: wide tables scroll inside their own box.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext } from 'playwright-core';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { createUser, signIn, type TestUser } from '../support/sign-in';
@@ -89,18 +89,8 @@ afterAll(async () => {
   await closeDb();
 });
 
-async function phoneContext(user?: TestUser): Promise<BrowserContext> {
-  const context = await browser.newContext({ viewport: PHONE });
-  if (user) {
-    const cookie = await signIn(base, user.email, user.password);
-    await context.addCookies(
-      cookie.split('; ').map((pair) => {
-        const [name, ...value] = pair.split('=');
-        return { name: name!, value: value.join('='), url: base };
-      }),
-    );
-  }
-  return context;
+function phoneContext(user?: TestUser): Promise<BrowserContext> {
+  return user ? signedInContext(browser, base, user.email, user.password, { viewport: PHONE }) : browser.newContext({ viewport: PHONE });
 }
 
 /** Opens each path at 360 px; answers the pages that scroll sideways (with their widest element) or did not open. */

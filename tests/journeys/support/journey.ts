@@ -3,7 +3,7 @@
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Browser, BrowserContext, Locator, Page, Request, Response } from 'playwright-core';
-import { signIn } from '../../support/sign-in';
+import { signedInContext } from '../../support/browser';
 import { describeOverflow, horizontalOverflow } from '../../support/overflow';
 import { JOURNEYS_PORT } from '../../support/test-env';
 
@@ -15,7 +15,7 @@ const survey = process.env.JOURNEYS_SURVEY === '1';
 // Assets a page loads on its own; a 4xx for one of them is a broken page. A 4xx for fetch is the API refusing input.
 const assetTypes = new Set(['document', 'stylesheet', 'script', 'image', 'font']);
 // Chromium logs every 4xx/5xx answer as "Failed to load resource"; those answers are judged by the response listener.
-const networkLog = /^Failed to load resource: the server responded with a status of (\d{3})/;
+const networkLog = /^Failed to load resource: the server responded with a status of \d{3}/;
 
 export interface ContextOptions {
   /** Sign in as this account (through the real sign-in form) before the first page opens. */
@@ -37,19 +37,13 @@ export class Journey {
 
   /** A browser context whose every page is watched. */
   async context(options: ContextOptions = {}): Promise<BrowserContext> {
-    const context = await this.browser.newContext({
+    const contextOptions = {
       viewport: { width: options.width ?? 1280, height: 900 },
       javaScriptEnabled: options.javaScriptEnabled ?? true,
-    });
-    if (options.as) {
-      const cookie = await signIn(base, options.as.email, options.as.password);
-      await context.addCookies(
-        cookie.split('; ').map((pair) => {
-          const [name, ...value] = pair.split('=');
-          return { name: name!, value: value.join('='), url: base };
-        }),
-      );
-    }
+    };
+    const context = options.as
+      ? await signedInContext(this.browser, base, options.as.email, options.as.password, contextOptions)
+      : await this.browser.newContext(contextOptions);
     // A person notices within seconds; a long wait only slows down the report of what they saw.
     context.setDefaultTimeout(10_000);
     context.on('page', (page) => this.watch(page));
@@ -65,8 +59,7 @@ export class Journey {
   private watch(page: Page): void {
     page.on('console', (message) => {
       if (message.type() !== 'error') return;
-      const network = networkLog.exec(message.text());
-      if (network) return;
+      if (networkLog.test(message.text())) return;
       this.problems.push(`console error on ${page.url()}: ${message.text()}`);
     });
     page.on('pageerror', (error) => this.problems.push(`page error on ${page.url()}: ${error.message}`));
@@ -94,11 +87,20 @@ export class Journey {
     }
   }
 
-  /** An action the person takes expecting a new page (a link, a submit button); waits for `url`. */
+  /**
+   * An action the person takes expecting a new page (a link, a submit button): waits for the new page to load, even
+   * when it has the address of the old one, and checks it arrived at `url`.
+   */
   async navigates(page: Page, url: RegExp | string, action: () => Promise<unknown>): Promise<void> {
     this.expectedNavigations += 1;
     try {
-      await Promise.all([page.waitForURL(url, { waitUntil: 'load' }), action()]);
+      const committed = page.waitForEvent('framenavigated', { predicate: (frame) => frame === page.mainFrame() });
+      // When the action itself fails (no such link), that is the failure to report, not the wait.
+      committed.catch(() => undefined);
+      await action();
+      await committed;
+      await page.waitForLoadState('load');
+      await page.waitForURL(url);
     } finally {
       this.expectedNavigations = 0;
     }
