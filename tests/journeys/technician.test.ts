@@ -28,8 +28,8 @@ const longNote = [
   'Cleaned the idler hub and both reel tables with isopropyl alcohol before fitting a new tyre, then checked that the idler swings freely between the reels.',
   'Back-tension on the supply reel was low as well; the felt on the brake band had hardened, so I roughened it lightly and it held.',
   'Rewind of a full E-180 tape now takes just under three minutes, fast forward the same.',
-  'Three weeks later the customer brought it back: rewind slowed again on long tapes.',
-  'This time the idler spring had lost its tension; it is worth replacing the spring along with the tyre from the start.',
+  'On an earlier deck of this family the rewind slowed again three weeks later: the idler spring had lost its tension.',
+  'It is worth replacing the idler spring along with the tyre from the start.',
   'Check the reel table heights too: one of them sat half a millimetre low and rubbed on its bearing.',
   'After the spring and a shim washer under the take-up table, it rewound a full tape twelve times in a row without slowing.',
   'I would expect the same on any deck of this family that has stood unused in a loft.',
@@ -76,30 +76,35 @@ describe('a bench technician', () => {
       await sees(page.getByText(/idler|tyre|tire/i));
     });
 
-    await journey.step('files a bench report that came back, forgets the days, and keeps the long note', async () => {
+    await journey.step('files a bench report with a reading the form refuses, and keeps the long note', async () => {
       await journey.goto(page, fixUrl);
-      await page.getByRole('radio', { name: 'Fault came back' }).check();
+      await page.getByRole('radio', { name: 'Fixed', exact: true }).check();
       await page.getByLabel('Note for other technicians').fill(longNote);
+      // A reading without the value a good unit shows.
+      await page.getByLabel('Reading 1: test point').fill('Rewind torque at the take-up reel');
+      await page.getByLabel('Reading 1: measured').fill('15 g·cm');
       await journey.navigates(page, /\/fixes\/qm7-no-rewind-glazed-idler/, () =>
         page.getByRole('button', { name: 'Save the bench report' }).click(),
       );
-      // The refusal is a sentence; what was typed stays, and none of it travels through the address.
-      await expect(page.getByRole('alert').first().textContent()).resolves.toContain('how many days the repair held');
+      // The refusal is a sentence with an example; what was typed stays, and none of it travels through the address.
+      await sees(page.getByRole('alert'));
+      await sees(page.getByText(/expected value, e\.g\./i));
       await expect(page.getByLabel('Note for other technicians').inputValue()).resolves.toBe(longNote);
-      await expect(page.getByRole('radio', { name: 'Fault came back' }).isChecked()).resolves.toBe(true);
+      await expect(page.getByLabel('Reading 1: test point').inputValue()).resolves.toBe('Rewind torque at the take-up reel');
+      await expect(page.getByLabel('Reading 1: measured').inputValue()).resolves.toBe('15 g·cm');
       expect(page.url().length).toBeLessThan(300);
       expect(decodeURIComponent(page.url())).not.toContain('idler tyre was glazed');
     });
 
-    await journey.step('gives the days and sees the report saved with its note', async () => {
-      await page.getByLabel(/Days the repair held/).fill('21');
+    await journey.step('gives the expected value and sees the report saved with its note and reading', async () => {
+      await page.getByLabel('Reading 1: expected').fill('40 to 60 g·cm');
       await journey.navigates(page, /\/fixes\/qm7-no-rewind-glazed-idler/, () =>
         page.getByRole('button', { name: 'Save the bench report' }).click(),
       );
-      await sees(page.getByText(/Your report on the .*Fault came back/));
-      await sees(page.getByText('after 21 days'));
-      // Other technicians' notes are what a bench needs: the note shows on the fix page.
-      await sees(page.getByText('the idler spring had lost its tension'));
+      await sees(page.getByText(/Your report on the .*: Fixed/));
+      // Other technicians' notes and readings are what a bench needs: both show on the fix page.
+      await sees(page.getByText('worth replacing the idler spring along with the tyre'));
+      await sees(page.getByText('Rewind torque at the take-up reel'));
     });
 
     await journey.step('books the unit in on a new job sheet from the header', async () => {
