@@ -86,7 +86,9 @@ describe('a writer', () => {
     });
 
     await journey.step('links a word through the Link panel, pressing Enter in it', async () => {
+      // Out of the code mark first, as a writer toggles it off before going on in plain text.
       await page.keyboard.press('End');
+      await tool(page, 'Code or value').click();
       await page.keyboard.type(' (see ');
       await typeSelected(page, 'the safety page');
       await tool(page, 'Link').click();
