@@ -1,4 +1,5 @@
-// Three test projects: unit (pure code, fast), integration (real PostgreSQL), e2e (real Chromium).
+// Four test projects: unit (pure code, fast), integration (real PostgreSQL), e2e (real Chromium), and journeys (a
+// person's whole errand in Chromium, each step checked for errors and for sideways scrolling at 360 px).
 import { defineConfig } from 'vitest/config';
 import { fileURLToPath } from 'node:url';
 import { testEnv } from './tests/support/test-env';
@@ -38,6 +39,19 @@ export default defineConfig({
           // One worker: these files share one database and one server.
           poolOptions: { forks: { singleFork: true } },
           testTimeout: 60_000,
+          hookTimeout: 120_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'journeys',
+          include: ['tests/journeys/**/*.test.ts'],
+          globalSetup: ['tests/journeys/global-setup.ts'],
+          env,
+          // One worker: one browser at a time on a shared machine, one server.
+          poolOptions: { forks: { singleFork: true } },
+          testTimeout: 90_000,
           hookTimeout: 120_000,
         },
       },

@@ -8,8 +8,8 @@ import { testEnv } from '../tests/support/test-env.ts';
 
 const env = testEnv();
 const args = process.argv.slice(2);
-// Only a run that names other projects and not e2e can do without the browser.
-const runsBrowserTests = !args.some((a) => a.startsWith('--project')) || args.some((a) => a.includes('e2e'));
+// Only a run that names other projects and neither e2e nor journeys can do without the browser.
+const runsBrowserTests = !args.some((a) => a.startsWith('--project')) || args.some((a) => /e2e|journeys/.test(a));
 if (runsBrowserTests) ensureChromium(env);
 rmSync(env.BENCHLORE_MEDIA_DIR ?? '', { recursive: true, force: true });
 await ensureDatabase(env, { fresh: true });

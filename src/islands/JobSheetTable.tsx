@@ -80,47 +80,49 @@ export default function JobSheetTable({ rows }: Props) {
           />
         </p>
       )}
-      <table className="w-full">
-        <caption className="sr-only">Your job sheets</caption>
-        <thead className="bg-paper-deep text-left">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => {
-                const label = flexRender(header.column.columnDef.header, header.getContext());
-                const sorted = header.column.getIsSorted();
-                return (
-                  <th
-                    key={header.id}
-                    scope="col"
-                    className="p-2"
-                    aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                  >
-                    {hydrated ? (
-                      <button type="button" className="font-semibold text-teal" onClick={header.column.getToggleSortingHandler()}>
-                        {label}
-                        {sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}
-                      </button>
-                    ) : (
-                      label
-                    )}
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {shown.map((row) => (
-            <tr key={row.id} className="border-b border-rule">
-              {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="p-2">
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <div className="table-scroll" role="region" aria-label="Your job sheets" tabIndex={0}>
+        <table className="w-full">
+          <caption className="sr-only">Your job sheets</caption>
+          <thead className="bg-paper-deep text-left">
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => {
+                  const label = flexRender(header.column.columnDef.header, header.getContext());
+                  const sorted = header.column.getIsSorted();
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      className="p-2"
+                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                    >
+                      {hydrated ? (
+                        <button type="button" className="font-semibold text-teal" onClick={header.column.getToggleSortingHandler()}>
+                          {label}
+                          {sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}
+                        </button>
+                      ) : (
+                        label
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {shown.map((row) => (
+              <tr key={row.id} className="border-b border-rule">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="p-2">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
       {shown.length === 0 && <p className="mt-3 text-ink-soft">No job sheet matches.</p>}
     </div>
   );

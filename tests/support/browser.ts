@@ -1,5 +1,5 @@
 // Debian's Chromium through playwright-core, started with the flags this machine needs.
-import { chromium, type Browser, type BrowserContext } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions } from 'playwright-core';
 import { signIn } from './sign-in';
 import { defaultChromiumPath } from '../../scripts/lib/chromium.ts';
 
@@ -20,10 +20,19 @@ export async function launchBrowser(): Promise<Browser> {
   });
 }
 
-/** A browser context of its own, signed in as `email` through the real sign-in form (the session cookie copied in). */
-export async function signedInContext(browser: Browser, base: string, email: string, password: string): Promise<BrowserContext> {
+/**
+ * A browser context of its own, signed in as `email` through the real sign-in form (the session cookie copied in).
+ * `options` go to the new context (e.g. a phone's viewport instead of 1280 by 900).
+ */
+export async function signedInContext(
+  browser: Browser,
+  base: string,
+  email: string,
+  password: string,
+  options: BrowserContextOptions = {},
+): Promise<BrowserContext> {
   const cookie = await signIn(base, email, password);
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, ...options });
   await context.addCookies(
     cookie.split('; ').map((pair) => {
       const [name, ...value] = pair.split('=');

@@ -3,6 +3,8 @@
 export const TEST_DB = process.env.BENCHLORE_TEST_DB ?? 'benchlore_test';
 export const INTEGRATION_PORT = Number(process.env.BENCHLORE_TEST_PORT ?? 4392);
 export const E2E_PORT = INTEGRATION_PORT - 1;
+/** The journeys (tests/journeys) run against a server of their own. */
+export const JOURNEYS_PORT = INTEGRATION_PORT - 2;
 export const DIST_DIR = process.env.BENCHLORE_DIST ?? 'dist';
 
 /** Each test server sends its mail to a sink of its own, 1000 ports above it, with its own folder. */
