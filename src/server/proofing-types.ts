@@ -1,5 +1,7 @@
 // Outcomes of the writing and proofing services: a value, or an error the endpoint turns into the one error shape.
 import type { SessionUser } from '@/lib/permissions';
+import type { z } from 'zod';
+import { readableMessage } from '@/lib/schemas/field-errors';
 import { apiError, type ErrorCode } from './http';
 
 /** Who is writing or proofing: the signed-in user as the middleware loads it. */
@@ -40,12 +42,16 @@ export function failureResponse(failure: Failure): Response {
   );
 }
 
-/** Groups zod-style issues into field messages keyed by dotted path. */
-export function issuesToFields(issues: { path: PropertyKey[]; message: string }[]): Record<string, string[]> {
+/**
+ * Groups zod issues and our own rule checks into field messages keyed by dotted path. A zod issue still in the
+ * validator's own wording is rewritten by the one readable-message function, so none reaches a person raw.
+ */
+export function issuesToFields(issues: { path: PropertyKey[]; message: string; code?: string }[]): Record<string, string[]> {
   const fields: Record<string, string[]> = {};
   for (const issue of issues) {
     const key = issue.path.length ? issue.path.map(String).join('.') : '_';
-    (fields[key] ??= []).push(issue.message);
+    const message = issue.code ? readableMessage(issue as z.core.$ZodIssue) : issue.message;
+    (fields[key] ??= []).push(message);
   }
   return fields;
 }

@@ -56,7 +56,8 @@ async function decidable(
 /** Proofs a waiting revision: it becomes the live text of its fix, the author is told. */
 export async function proofRevision(moderator: Writer, revisionId: number, rawNote: unknown = ''): Promise<Outcome<{ slug: string }>> {
   const note = proofNoteSchema.safeParse(rawNote ?? '');
-  if (!note.success) return refuse('bad_request', 'The note is not valid.', { note: note.error.issues.map((i) => i.message) });
+  if (!note.success)
+    return refuse('bad_request', 'The note is not valid.', issuesToFields(note.error.issues.map((i) => ({ ...i, path: ['note'] }))));
   const knex = db();
   let record: RevisionRecord | null = null;
   const outcome = await knex.transaction(async (trx): Promise<Outcome<{ slug: string }>> => {
