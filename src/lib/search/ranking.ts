@@ -1,14 +1,16 @@
-// The order of search results: text relevance, then closeness to the machine named, then bench score, then fix id.
+// The order of search results: concepts matched (the named machine's fixes boosted), wording, closeness, bench score, fix id.
 
-/** How well one clause of the query matched a fix. */
+/** How well one clause of the query matched a fix (in steps of two, so the dictionary's step fits between). */
 export const clauseLevel = {
   none: 0,
   /** Found in the cause, remedy, parts or machine names. */
-  body: 1,
+  body: 2,
+  /** Found in the title or symptoms through a dictionary synonym or broader word of a word no fix uses. */
+  summaryDictionary: 3,
   /** Found in the title or symptoms through another term of its word family, or a code variant. */
-  summaryAlternative: 2,
+  summaryAlternative: 4,
   /** Found in the title or symptoms as typed, or the exact code. */
-  summary: 3,
+  summary: 6,
 } as const;
 export type ClauseLevel = (typeof clauseLevel)[keyof typeof clauseLevel];
 
@@ -69,17 +71,37 @@ export interface Rankable {
   fixId: number;
   relevance: Relevance;
   proximity: Proximity;
-  /** Wilson lower bound; null when no bench report counts yet (ranks below any score, even 0). */
+  /** Wilson lower bound; null when no bench report counts yet. */
   benchScore: number | null;
+  /** How many bench reports the score rests on; when left out, the score is taken as it is. */
+  benchReports?: number;
+}
+
+/**
+ * A fix on the machine named, or on its chassis family, is worth this much of one matched clause: the
+ * fix written for the unit on the bench wins over a closer wording on a stranger, in any scope, but a
+ * stranger matching two more of the query's concepts still comes first.
+ */
+export const PROXIMITY_BOOST: Record<Proximity, number> = { 0: 0, 1: 0, 2: 0.5, 3: 1 };
+
+/** Below this many bench reports a score says little, so the fix ranks as neutral rather than low. */
+export const FEW_REPORTS = 3;
+/** Where a new fix stands among scored ones: above a fix most technicians could not fix with, below a proven one. */
+export const NEUTRAL_BENCH_SCORE = 0.5;
+
+/** The bench score as a tie-breaker: few or no reports count as neutral, so new fixes are not buried. */
+export function benchKey(score: number | null, reports?: number): number {
+  if (score === null || (reports !== undefined && reports < FEW_REPORTS)) return NEUTRAL_BENCH_SCORE;
+  return score;
 }
 
 /** Negative when `a` ranks first. Total and deterministic: equal keys fall back to the fix id. */
 export function compareRanked(a: Rankable, b: Rankable): number {
   return (
-    b.relevance.matched - a.relevance.matched ||
+    b.relevance.matched + PROXIMITY_BOOST[b.proximity] - (a.relevance.matched + PROXIMITY_BOOST[a.proximity]) ||
     b.relevance.quality - a.relevance.quality ||
     b.proximity - a.proximity ||
-    (b.benchScore ?? -1) - (a.benchScore ?? -1) ||
+    benchKey(b.benchScore, b.benchReports) - benchKey(a.benchScore, a.benchReports) ||
     a.fixId - b.fixId
   );
 }

@@ -5,6 +5,8 @@ import { buildPlan, planTerms, type CodeClause, type SearchPlan, type TextClause
 import { compiledWordFamilies } from './word-families';
 import { lookupVocabulary } from './vocabulary';
 import { lexemeQuery, phraseQuery } from '@/lib/search/tsquery-text';
+import { familyVocabulary, termWords } from '@/lib/search/word-families';
+import type { HighlightQuery } from './hydrate';
 
 export interface CompiledTextClause {
   clause: TextClause;
@@ -70,10 +72,21 @@ function compileTerms(plan: SearchPlan, termQueries: Map<string, string>, stems:
   return compiled;
 }
 
+/** Negations the English dictionary drops from the index: a term holding one cannot be searched as meant. */
+const UNINDEXED_NEGATIONS = new Set(['no', 'not', 'nor']);
+
+/**
+ * An alternative term that loses its negation when compiled ("no power" → power, "will not turn on" → turn)
+ * would find the opposite of what its family means: it is left out of other terms' alternatives.
+ */
+const keepsItsMeaning = (term: string) => !termWords(term.replace(/"/g, '')).some((w) => UNINDEXED_NEGATIONS.has(w));
+
 function compileClause(clause: TextClause, compiled: Map<string, string>): CompiledTextClause {
   const typedQueries = [...new Set(clause.terms.map((t) => compiled.get(t) ?? ''))];
   // "rewinds" and "rewinding" stem to the typed "rewind": search each distinct query once.
-  const alternativeQueries = [...new Set(clause.alternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !typedQueries.includes(q));
+  const alternativeQueries = [...new Set(clause.alternatives.filter(keepsItsMeaning).map((t) => compiled.get(t) ?? ''))].filter(
+    (q) => !typedQueries.includes(q),
+  );
   const typed = orQuery(typedQueries);
   const alternatives = orQuery(alternativeQueries);
   return { clause, typed, alternatives, any: orQuery([typed, alternatives]) };
@@ -81,11 +94,19 @@ function compileClause(clause: TextClause, compiled: Map<string, string>): Compi
 
 export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQuery> {
   const parsed = parseQuery(text);
-  const [{ vocabulary, stems }, { families, termQueries }] = await Promise.all([
+  const [{ vocabulary, stems, relatedCandidates }, { families, termQueries }] = await Promise.all([
     lookupVocabulary(knex, parsed),
     compiledWordFamilies(knex),
   ]);
-  const plan = buildPlan(parsed, vocabulary, families);
+  // Dictionary relatives count only where they are the trade's words: used in some fix, or in a word family.
+  const familyWords = familyVocabulary(families);
+  const related = new Map(
+    [...relatedCandidates].map(([word, list]) => [
+      word,
+      list.filter((r) => r.stored || r.word.split(' ').every((part) => familyWords.has(part))).map((r) => r.word),
+    ]),
+  );
+  const plan = buildPlan(parsed, { ...vocabulary, related }, families);
   const compiled = compileTerms(plan, termQueries, stems);
   const textClauses = plan.clauses.filter((c): c is TextClause => c.kind === 'text').map((c) => compileClause(c, compiled));
   const hardText = textClauses.filter((c) => c.any !== '' && !(c.clause.soft || c.typed === ''));
@@ -93,4 +114,20 @@ export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQu
   const codes = plan.clauses.filter((c): c is CodeClause => c.kind === 'code');
   const excluded = orQuery(plan.excluded.map((w) => compiled.get(w) ?? ''));
   return { plan, hardText, softText, codes, excluded, searchable: hardText.length + codes.length > 0 };
+}
+
+/** What the hits highlight: all matches in titles; typed terms and each clause's family terms apart in symptoms. */
+export function highlightQuery(analysed: AnalysedQuery): HighlightQuery {
+  const clauses = [...analysed.hardText, ...analysed.softText];
+  return {
+    any: orQuery(clauses.map((c) => c.any)),
+    typed: orQuery(clauses.map((c) => c.typed)),
+    concepts: clauses
+      .filter((c) => c.alternatives !== '')
+      .map((c) => ({
+        label: c.clause.label,
+        query: c.alternatives,
+        terms: c.clause.alternatives.map((t) => termWords(t.replace(/"/g, ''))),
+      })),
+  };
 }

@@ -10,6 +10,7 @@ import { frag, joinFragments, raw, type Fragment } from './sql-fragment';
 export interface CandidateRow {
   fix_id: number;
   bench_score: number | null;
+  report_count: number;
   machine_ids: number[];
   chassis_ids: number[];
   maker_ids: number[];
@@ -128,7 +129,7 @@ async function featuresOf(
     `WITH raw AS (${union.sql}),
           c AS (SELECT DISTINCT fix_id FROM raw),
           counted AS (SELECT coalesce(json_object_agg(stage, n), '{}'::json) AS by_stage FROM (SELECT stage, count(*) AS n FROM raw GROUP BY stage) AS x)
-     SELECT s.fix_id, s.bench_score, s.machine_ids, s.chassis_ids, s.maker_ids, s.device_types, s.formats, s.caution_kinds, s.has_photos,
+     SELECT s.fix_id, s.bench_score, s.report_count, s.machine_ids, s.chassis_ids, s.maker_ids, s.device_types, s.formats, s.caution_kinds, s.has_photos,
             ${levels.sql} AS levels, (SELECT by_stage FROM counted) AS by_stage
      FROM c JOIN fix_search s ON s.fix_id = c.fix_id`,
     ...union.bindings,
@@ -220,5 +221,29 @@ export async function partialMatches(
   }
   stages.push(stage(filter, anyClause(analysed), limit, plan.anyClause, NEAR_STAGE, PARTIAL_WALK));
   const { rows } = await featuresOf(knex, analysed, stages, 'FALSE');
+  return rows;
+}
+
+/** Near the named machine, partial matches are read however many full matches the whole catalogue has. */
+const NEAR_PARTIAL_LIMIT = 40;
+
+/**
+ * Fixes on the named machine or its chassis family that match any clause: relaxation within reach of the
+ * bench, so the machine's own fix is a candidate even when strangers match every word. The machine's and
+ * family's fixes are found through their own indexes and the text is only tested on them.
+ */
+export async function nearPartialMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, machine: ResolvedMachine): Promise<CandidateRow[]> {
+  const any = anyClause(analysed);
+  const near =
+    machine.chassisId === null
+      ? frag('s.machine_ids @> ARRAY[?]::int[]', machine.id)
+      : frag('(s.machine_ids @> ARRAY[?]::int[] OR s.chassis_ids @> ARRAY[?]::int[])', machine.id, machine.chassisId);
+  const stage = frag(
+    `(SELECT s.fix_id, ${NEAR_STAGE} AS stage FROM fix_search s WHERE (${filter.sql}) AND ${near.sql} AND (${any.sql}) IS TRUE LIMIT ${NEAR_PARTIAL_LIMIT})`,
+    ...filter.bindings,
+    ...near.bindings,
+    ...any.bindings,
+  );
+  const { rows } = await featuresOf(knex, analysed, [stage], 'FALSE');
   return rows;
 }

@@ -3,6 +3,7 @@ import type { SearchQuery } from '@/lib/search/query-schema';
 import type { CodeClause } from '@/lib/search/plan';
 import { allOf, anyOf, frag, pgArray, type Fragment } from './sql-fragment';
 import { andQuery, orQuery, type AnalysedQuery, type CompiledTextClause } from './analyse';
+import { clauseLevel } from '@/lib/search/ranking';
 import type { SearchContext } from './context';
 
 /** The named machine's scope: its own fixes and family-wide ones, its whole family, or everything. */
@@ -98,15 +99,16 @@ export function neighbourQueries(analysed: AnalysedQuery): string[] {
 export function levelsExpression(analysed: AnalysedQuery, known: string): Fragment {
   const textLevel = (c: CompiledTextClause, isHard: boolean): Fragment => {
     const whens: Fragment[] = [];
-    if (c.typed) whens.push(frag('WHEN s.doc_a @@ ?::tsquery THEN 3', c.typed));
-    if (c.alternatives) whens.push(frag('WHEN s.doc_a @@ ?::tsquery THEN 2', c.alternatives));
-    if (isHard) whens.push(frag(`WHEN ${known} THEN 1`));
-    whens.push(frag('WHEN s.document @@ ?::tsquery THEN 1', c.any));
+    const alternative = c.clause.dictionary ? clauseLevel.summaryDictionary : clauseLevel.summaryAlternative;
+    if (c.typed) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.summary}`, c.typed));
+    if (c.alternatives) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${alternative}`, c.alternatives));
+    if (isHard) whens.push(frag(`WHEN ${known} THEN ${clauseLevel.body}`));
+    whens.push(frag(`WHEN s.document @@ ?::tsquery THEN ${clauseLevel.body}`, c.any));
     return frag(`CASE ${whens.map((w) => w.sql).join(' ')} ELSE 0 END`, ...whens.flatMap((w) => w.bindings));
   };
   const codeLevel = (c: CodeClause): Fragment =>
     frag(
-      'CASE WHEN s.code_list && ?::text[] THEN 3 WHEN s.code_list && ?::text[] THEN 2 ELSE 0 END',
+      `CASE WHEN s.code_list && ?::text[] THEN ${clauseLevel.summary} WHEN s.code_list && ?::text[] THEN ${clauseLevel.summaryAlternative} ELSE 0 END`,
       pgArray(c.exact),
       pgArray(c.variants),
     );
@@ -114,7 +116,7 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     ...analysed.hardText.map((c) => textLevel(c, true)),
     ...analysed.codes.map(codeLevel),
     ...analysed.softText.map((c) => textLevel(c, false)),
-    ...neighbourQueries(analysed).map((q) => frag('CASE WHEN s.doc_a @@ ?::tsquery THEN 1 ELSE 0 END', q)),
+    ...neighbourQueries(analysed).map((q) => frag(`CASE WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.body} ELSE 0 END`, q)),
   ];
   if (levels.length === 0) return frag(`'{}'::int[]`);
   return frag(`ARRAY[${levels.map((l) => l.sql).join(', ')}]::int[]`, ...levels.flatMap((l) => l.bindings));

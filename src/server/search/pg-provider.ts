@@ -3,9 +3,9 @@ import type { Knex } from 'knex';
 import { MAX_PAGE, type SearchQuery } from '@/lib/search/query-schema';
 import { emptyFacets, type SearchResult } from '@/lib/search/result-types';
 import { CODE_WEIGHT, WORD_WEIGHT, proximityOf, rank, relevanceOf, type Rankable } from '@/lib/search/ranking';
-import { analyseQuery, orQuery, type AnalysedQuery } from './analyse';
+import { analyseQuery, highlightQuery, type AnalysedQuery } from './analyse';
 import { proximityTarget, resolveContext, type SearchContext } from './context';
-import { fullMatches, partialMatches, type CandidateRow } from './pg-candidates';
+import { fullMatches, nearPartialMatches, partialMatches, type CandidateRow } from './pg-candidates';
 import { filterCondition } from './pg-conditions';
 import { readPlan } from './read-plan';
 import { facetsOf } from './pg-facets';
@@ -41,6 +41,7 @@ function toRanked(rows: CandidateRow[], analysed: AnalysedQuery, context: Search
       relevance,
       proximity: proximityOf({ machineIds: row.machine_ids, chassisIds: row.chassis_ids, makerIds: row.maker_ids }, target),
       benchScore: row.bench_score,
+      benchReports: row.report_count,
       matchedAll: relevance.matched === fullWeight,
       row,
     };
@@ -98,15 +99,19 @@ export class PostgresSearchProvider implements SearchProvider {
       rows = [...rows, ...partial];
       total = full.total + partial.length;
     }
+    if (context.machine && query.scope !== 'machine' && hardCount > 0) {
+      const near = (await nearPartialMatches(this.knex, analysed, filter, context.machine)).filter((r) => !rows.some((f) => f.fix_id === r.fix_id));
+      rows = [...rows, ...near];
+      total += near.length;
+    }
     const ranked = rank(toRanked(rows, analysed, context));
     const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
-    const headline = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
     // Facets are counted over the candidates: every match when the count is exact, the best ones otherwise.
     // They describe the fixes that match the whole query; partial matches only when nothing matches in full.
     const described = full.total > 0 ? ranked.filter((r) => r.matchedAll) : ranked;
     const facetRows = (full.lowerBound ? described.slice(0, FACET_SAMPLE) : described).map((r) => r.row);
     const [hits, facets] = await Promise.all([
-      hydrateHits(this.knex, pageRows, headline),
+      hydrateHits(this.knex, pageRows, highlightQuery(analysed)),
       total > 0 ? facetsOf(this.knex, facetRows) : Promise.resolve(null),
     ]);
     return {
