@@ -16,7 +16,7 @@ export type ClauseLevel = (typeof clauseLevel)[keyof typeof clauseLevel];
 
 /** Text relevance kept coarse on purpose, so that closeness to the named machine can decide between equals. */
 export interface Relevance {
-  /** Weighted count of the required clauses found anywhere in the fix. */
+  /** Weighted count of the required clauses found: in full in the title or symptoms, by half elsewhere. */
   matched: number;
   /** Sum of the clause levels, soft clauses and neighbouring-word bonuses included. */
   quality: number;
@@ -25,22 +25,34 @@ export interface Relevance {
 /** A code names one fault or one machine: finding it says more than finding a common word. */
 export const CODE_WEIGHT = 2;
 export const WORD_WEIGHT = 1;
+/** A clause found only in the cause, remedy or parts counts this much of one found in the title or symptoms. */
+export const BODY_SHARE = 0.5;
 
 /**
  * Relevance from the levels of the required clauses (with their weights, 1 when not given) and of the
  * clauses that only rank (stop-word groups, and the bonus for typed words found side by side).
  */
 export function relevanceOf(levels: readonly number[], extraLevels: readonly number[] = [], weights: readonly number[] = []): Relevance {
+  const share = (level: number) => (level > clauseLevel.body ? 1 : level > clauseLevel.none ? BODY_SHARE : 0);
   return {
-    matched: levels.reduce((sum, level, i) => sum + (level > clauseLevel.none ? (weights[i] ?? WORD_WEIGHT) : 0), 0),
+    matched: levels.reduce((sum, level, i) => sum + share(level) * (weights[i] ?? WORD_WEIGHT), 0),
     quality: [...levels, ...extraLevels].reduce((sum, l) => sum + l, 0),
   };
 }
 
-/** Relevance from an engine's own score in [0, 1], in twenty steps (used for the Meilisearch adapter). */
-export function relevanceFromScore(score: number): Relevance {
+/** Whether every required clause was found somewhere in the fix. */
+export function matchesAll(levels: readonly number[]): boolean {
+  return levels.every((level) => level > clauseLevel.none);
+}
+
+/**
+ * Relevance from an engine's own score in [0, 1] (the Meilisearch adapter): the score times the query's
+ * concepts as the count matched, so the named machine's boost weighs the same as with PostgreSQL, and the
+ * score in twenty steps as the quality.
+ */
+export function relevanceFromScore(score: number, concepts = 0): Relevance {
   const clamped = Number.isFinite(score) ? Math.min(1, Math.max(0, score)) : 0;
-  return { matched: 0, quality: Math.floor(clamped * 20) };
+  return { matched: Math.round(clamped * concepts), quality: Math.floor(clamped * 20) };
 }
 
 /** Same machine 3, same chassis family 2, same maker 1, other 0. */

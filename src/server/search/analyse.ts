@@ -1,11 +1,11 @@
 // Reads a query against the database's vocabulary and word families, and compiles its clauses to tsqueries.
 import type { Knex } from 'knex';
 import { parseQuery } from '@/lib/search/tokens';
-import { buildPlan, planTerms, type CodeClause, type SearchPlan, type TextClause } from '@/lib/search/plan';
+import { NEGATIONS, buildPlan, planTerms, type CodeClause, type SearchPlan, type TextClause } from '@/lib/search/plan';
 import { compiledWordFamilies } from './word-families';
 import { lookupVocabulary } from './vocabulary';
 import { lexemeQuery, phraseQuery } from '@/lib/search/tsquery-text';
-import { familyVocabulary, termWords } from '@/lib/search/word-families';
+import { termWords } from '@/lib/search/word-families';
 import type { HighlightQuery } from './hydrate';
 
 export interface CompiledTextClause {
@@ -30,6 +30,9 @@ export interface AnalysedQuery {
   /** True when there is something to search for. */
   searchable: boolean;
 }
+
+/** The lexemes of a tsquery text as we write it: 'tray' <-> 'open' → tray, open. */
+export const lexemesOf = (tsquery: string): string[] => [...tsquery.matchAll(/'((?:[^']|'')*)'/g)].map((m) => (m[1] ?? '').replace(/''/g, "'"));
 
 export const orQuery = (parts: string[]): string =>
   parts
@@ -81,15 +84,25 @@ const UNINDEXED_NEGATIONS = new Set(['no', 'not', 'nor']);
  */
 const keepsItsMeaning = (term: string) => !termWords(term.replace(/"/g, '')).some((w) => UNINDEXED_NEGATIONS.has(w));
 
+const NEGATING = new Set([...NEGATIONS, 'fails']);
+const keepsANegation = (term: string) => termWords(term.replace(/"/g, '')).some((w) => NEGATING.has(w) && !UNINDEXED_NEGATIONS.has(w));
+
 function compileClause(clause: TextClause, compiled: Map<string, string>): CompiledTextClause {
-  const typedQueries = [...new Set(clause.terms.map((t) => compiled.get(t) ?? ''))];
+  let terms = clause.terms;
+  let alternatives = clause.alternatives.filter(keepsItsMeaning);
+  // "will not open" is searched as open, which also finds "opens then closes": its family's terms that
+  // keep their negation ("won't open") stand for what was typed, and the bare word ranks as a family term.
+  const negated = alternatives.filter(keepsANegation);
+  if (!terms.some(keepsItsMeaning) && negated.length > 0) {
+    alternatives = [...terms, ...alternatives.filter((t) => !negated.includes(t))];
+    terms = negated;
+  }
+  const typedQueries = [...new Set(terms.map((t) => compiled.get(t) ?? ''))];
   // "rewinds" and "rewinding" stem to the typed "rewind": search each distinct query once.
-  const alternativeQueries = [...new Set(clause.alternatives.filter(keepsItsMeaning).map((t) => compiled.get(t) ?? ''))].filter(
-    (q) => !typedQueries.includes(q),
-  );
+  const alternativeQueries = [...new Set(alternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !typedQueries.includes(q));
   const typed = orQuery(typedQueries);
-  const alternatives = orQuery(alternativeQueries);
-  return { clause, typed, alternatives, any: orQuery([typed, alternatives]) };
+  const alternativeText = orQuery(alternativeQueries);
+  return { clause, typed, alternatives: alternativeText, any: orQuery([typed, alternativeText]) };
 }
 
 export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQuery> {
@@ -98,12 +111,12 @@ export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQu
     lookupVocabulary(knex, parsed),
     compiledWordFamilies(knex),
   ]);
-  // Dictionary relatives count only where they are the trade's words: used in some fix, or in a word family.
-  const familyWords = familyVocabulary(families);
+  // Dictionary relatives count only where they are the trade's words: a word of some word family (by stem).
+  const tradeLexemes = new Set([...termQueries.values()].flatMap(lexemesOf));
   const related = new Map(
     [...relatedCandidates].map(([word, list]) => [
       word,
-      list.filter((r) => r.stored || r.word.split(' ').every((part) => familyWords.has(part))).map((r) => r.word),
+      list.filter((r) => r.word.split(' ').every((part) => tradeLexemes.has(stems.get(part) ?? part))).map((r) => r.word),
     ]),
   );
   const plan = buildPlan(parsed, { ...vocabulary, related }, families);

@@ -2,7 +2,7 @@
 import type { SearchQuery } from '@/lib/search/query-schema';
 import type { CodeClause } from '@/lib/search/plan';
 import { allOf, anyOf, frag, pgArray, type Fragment } from './sql-fragment';
-import { andQuery, orQuery, type AnalysedQuery, type CompiledTextClause } from './analyse';
+import { andQuery, lexemesOf, orQuery, type AnalysedQuery, type CompiledTextClause } from './analyse';
 import { clauseLevel } from '@/lib/search/ranking';
 import type { SearchContext } from './context';
 
@@ -77,7 +77,8 @@ export function anyClause(analysed: AnalysedQuery): Fragment {
 /**
  * For each pair of neighbouring text clauses, a query finding them side by side (one stop word may sit
  * between, as in "won't open", where the dropped "t" keeps its place): "won't open" then outranks
- * "won't stay open" for the query "tray won't open".
+ * "won't stay open" for the query "tray won't open". A clause that opens with words the index drops
+ * ("will not open" searched as open) may stand that many places further off.
  */
 export function neighbourQueries(analysed: AnalysedQuery): string[] {
   const ordered = [...analysed.hardText, ...analysed.softText]
@@ -86,8 +87,12 @@ export function neighbourQueries(analysed: AnalysedQuery): string[] {
   const queries: string[] = [];
   for (let i = 1; i < ordered.length; i++) {
     const left = ordered[i - 1]?.any;
-    const right = ordered[i]?.any;
-    if (left && right) queries.push(`((${left}) <-> (${right})) | ((${left}) <2> (${right}))`);
+    const rightClause = ordered[i];
+    const right = rightClause?.any;
+    if (!left || !right || !rightClause) continue;
+    const dropped = Math.max(0, rightClause.clause.label.split(' ').length - Math.max(1, lexemesOf(rightClause.typed).length));
+    const gaps = Array.from({ length: 2 + Math.min(dropped, 3) }, (_, g) => (g === 0 ? '<->' : `<${g + 1}>`));
+    queries.push(gaps.map((gap) => `((${left}) ${gap} (${right}))`).join(' | '));
   }
   return queries;
 }

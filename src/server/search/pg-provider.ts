@@ -2,7 +2,7 @@
 import type { Knex } from 'knex';
 import { MAX_PAGE, type SearchQuery } from '@/lib/search/query-schema';
 import { emptyFacets, type SearchResult } from '@/lib/search/result-types';
-import { CODE_WEIGHT, WORD_WEIGHT, proximityOf, rank, relevanceOf, type Rankable } from '@/lib/search/ranking';
+import { CODE_WEIGHT, WORD_WEIGHT, matchesAll, proximityOf, rank, relevanceOf, type Rankable } from '@/lib/search/ranking';
 import { analyseQuery, highlightQuery, type AnalysedQuery } from './analyse';
 import { proximityTarget, resolveContext, type SearchContext } from './context';
 import { fullMatches, nearPartialMatches, partialMatches, type CandidateRow } from './pg-candidates';
@@ -32,7 +32,6 @@ function toRanked(rows: CandidateRow[], analysed: AnalysedQuery, context: Search
   const target = proximityTarget(context.machine);
   const weights = clauseWeights(analysed);
   const hardCount = weights.length;
-  const fullWeight = weights.reduce((a, b) => a + b, 0);
   return rows.map((row) => {
     // Levels past the required clauses are the soft clauses and the side-by-side bonuses.
     const relevance = relevanceOf(row.levels.slice(0, hardCount), row.levels.slice(hardCount), weights);
@@ -42,7 +41,7 @@ function toRanked(rows: CandidateRow[], analysed: AnalysedQuery, context: Search
       proximity: proximityOf({ machineIds: row.machine_ids, chassisIds: row.chassis_ids, makerIds: row.maker_ids }, target),
       benchScore: row.bench_score,
       benchReports: row.report_count,
-      matchedAll: relevance.matched === fullWeight,
+      matchedAll: matchesAll(row.levels.slice(0, hardCount)),
       row,
     };
   });

@@ -1,7 +1,7 @@
 // Chooses how the PostgreSQL provider reads candidates, from how many fixes its clauses are expected to match.
 import type { Knex } from 'knex';
 import { estimateMatches, estimateShare, walkThreshold } from '@/lib/search/estimate';
-import type { AnalysedQuery } from './analyse';
+import { lexemesOf, type AnalysedQuery } from './analyse';
 import type { ReadPlan, ReadWay } from './pg-candidates';
 import { lexemeStats, type LexemeStats } from './vocabulary';
 
@@ -17,7 +17,6 @@ const COSTS = {
   anywhere: { walk: 4, collect: 1, collectPhrase: 7 },
 } as const;
 
-const lexemesOf = (tsquery: string): string[] => [...tsquery.matchAll(/'((?:[^']|'')*)'/g)].map((m) => (m[1] ?? '').replace(/''/g, "'"));
 
 /** Estimated matches per hard clause (text clauses, then codes), anywhere and in the summary. */
 function clauseCounts(analysed: AnalysedQuery, stats: LexemeStats): { summary: number[]; anywhere: number[] } {

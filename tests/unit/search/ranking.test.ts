@@ -2,6 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { fc, test } from '@fast-check/vitest';
 import {
+  BODY_SHARE,
   CODE_WEIGHT,
   FEW_REPORTS,
   NEUTRAL_BENCH_SCORE,
@@ -24,9 +25,9 @@ const item = (fixId: number, over: Partial<Rankable> = {}): Rankable => ({
 });
 
 describe('relevanceOf', () => {
-  it('counts required clauses found, weighted, and sums their levels with the bonuses', () => {
+  it('counts required clauses found, weighted, a body-only match by half, and sums their levels with the bonuses', () => {
     expect(relevanceOf([clauseLevel.summary, clauseLevel.none, clauseLevel.body], [1], [1, 1, CODE_WEIGHT])).toEqual({
-      matched: 1 + CODE_WEIGHT,
+      matched: 1 + BODY_SHARE * CODE_WEIGHT,
       quality: clauseLevel.summary + clauseLevel.body + 1,
     });
   });
@@ -96,5 +97,13 @@ describe('compareRanked', () => {
   test.prop([arbitrary, arbitrary])('is antisymmetric', (a, b) => {
     fc.pre(a.fixId !== b.fixId);
     expect(Math.sign(compareRanked(a, b))).toBe(-Math.sign(compareRanked(b, a)));
+  });
+});
+
+describe('relevanceFromScore with concepts', () => {
+  it("counts the engine's score as the share of the query's concepts matched", () => {
+    expect(relevanceFromScore(1, 3).matched).toBe(3);
+    expect(relevanceFromScore(0.34, 3).matched).toBe(1);
+    expect(relevanceFromScore(0.97).matched).toBe(0);
   });
 });

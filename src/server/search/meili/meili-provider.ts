@@ -56,13 +56,16 @@ export class MeiliSearchProvider implements SearchProvider {
       offset: 0,
       showRankingScore: true,
       attributesToRetrieve: ['id', 'machines', 'chassis', 'makers', 'benchScore', 'reportCount'],
-      // A quoted phrase or a code no fix carries must be found, never dropped to widen the search.
-      matchingStrategy: analysed.hardText.some((c) => c.clause.exact) ? 'all' : 'last',
+      // Relaxation as PostgreSQL's: when not every word matches, the commonest words are dropped first, so the
+      // rarer concepts decide. A quoted phrase or a code no fix carries must be found, never dropped.
+      matchingStrategy: analysed.hardText.some((c) => c.clause.exact) ? 'all' : 'frequency',
     });
+    // The engine's score stands for the share of the query's concepts found, as PostgreSQL counts them.
+    const concepts = analysed.hardText.length + analysed.codes.length;
     const ranked = response.hits
       .map((hit) => ({
         fixId: hit.id,
-        relevance: relevanceFromScore(hit._rankingScore ?? 0),
+        relevance: relevanceFromScore(hit._rankingScore ?? 0, concepts),
         proximity: proximityFor(hit, context.machine),
         benchScore: hit.benchScore,
         benchReports: hit.reportCount,

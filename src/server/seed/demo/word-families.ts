@@ -115,5 +115,9 @@ export const demoWordFamilies: DemoWordFamily[] = [
   { name: 'forgets settings', terms: ['forgets the clock', 'loses the clock', 'clock resets', 'forgets settings', 'loses settings', 'loses its memory'] },
   { name: 'dry joints', terms: ['dry joints', 'dry joint', 'cracked solder', 'bad solder', 'cold joint', 'cracked joints'] },
   { name: 'betamax', terms: ['betamax', 'beta'] },
-  { name: 'combination unit', terms: ['combo', 'combination unit', 'combi', 'dual deck'] },
+  { name: 'combination unit', terms: ['combo', 'combination unit', 'combination recorder', 'combi', 'dual deck'] },
+  { name: 'video recorder', terms: ['VCR', 'video cassette recorder', 'video recorder', 'VHS recorder', 'video deck'] },
+  { name: 'cassette deck', terms: ['cassette deck', 'tape deck', 'cassette player', 'cassette recorder'] },
+  { name: 'CD player', terms: ['CD player', 'CD deck', 'compact disc player'] },
+  { name: 'camcorder', terms: ['camcorder', 'video camera', 'camera'] },
 ];
