@@ -24,7 +24,7 @@ describe('demo world', () => {
     expect(await count(knex, 'SELECT count(DISTINCT device_type) AS n FROM machines')).toBeGreaterThanOrEqual(7);
     expect(
       await count(knex, `SELECT count(*) AS n FROM fixes f JOIN revisions r ON r.id = f.current_revision_id WHERE r.state = 'proofed'`),
-    ).toBeGreaterThanOrEqual(40);
+    ).toBeGreaterThanOrEqual(60);
     expect(
       await count(knex, `SELECT count(*) AS n FROM (SELECT fix_id FROM revisions GROUP BY fix_id HAVING count(*) > 1) x`),
     ).toBeGreaterThanOrEqual(5);

@@ -52,7 +52,7 @@ export const qualityCases: QualityCase[] = [
   { q: 'F-12 grinding noise', expect: 'kd560-spindle-noisy-f12', kinds: ['code'] },
   { q: 'no disc dr 4120', expect: 'tl2-no-disc-dirty-lens', kinds: ['model'] },
   { q: 'dr4120k wont finalize', expect: 'dr4120k-fails-to-finalise-e47', kinds: ['model', 'slang'] },
-  { q: 'stuck on hello', expect: 'tl2-slow-start-stuck-on-hello', kinds: ['plain'], meili: true },
+  { q: 'stuck on waking', expect: 'tl2-slow-start-stuck-on-waking', kinds: ['plain'], meili: true },
   { q: 'takes ages to turn on', machine: 'quillmere-vdc900-pal', expect: 'qc3-slow-start-shared-supply', kinds: ['paraphrase', 'machine'] },
   { q: 'psu ticking kd560', expect: 'kd560-clicking-supply-no-power', kinds: ['slang', 'model'] },
   { q: 'fan not spinning F31', expect: 'kd560-f31-fan-stalled', kinds: ['code'] },

@@ -31,8 +31,15 @@ async function roundTrip(driver: StorageDriver): Promise<void> {
   const got = await driver.get(key);
   expect(got?.body.equals(body)).toBe(true);
   expect(got?.contentType).toBe('image/jpeg');
+  const listed = [];
+  for await (const object of driver.list('photos/ab/')) listed.push(object);
+  expect(listed.find((o) => o.key === key)?.modifiedAt).toBeInstanceOf(Date);
   await driver.delete(key);
   expect(await driver.get(key)).toBeNull();
+  const after = [];
+  for await (const object of driver.list('photos/ab/')) after.push(object.key);
+  expect(after).not.toContain(key);
+  for await (const object of driver.list('photos/never-used-prefix/')) expect.unreachable(`listed ${object.key}`);
   // Deleting what is not there is not an error.
   await driver.delete(key);
 }

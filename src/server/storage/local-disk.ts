@@ -1,6 +1,6 @@
 // Local-disk storage under the data folder: the embedded default.
-import { mkdir, readFile, rm, writeFile, rename } from 'node:fs/promises';
-import { dirname, join, resolve } from 'node:path';
+import { mkdir, readFile, readdir, rm, stat, writeFile, rename } from 'node:fs/promises';
+import { dirname, join, relative, resolve, sep } from 'node:path';
 import { assertKey, type StorageDriver } from './storage-driver';
 
 const types: Record<string, string> = { webp: 'image/webp', jpg: 'image/jpeg', jpeg: 'image/jpeg', png: 'image/png', avif: 'image/avif' };
@@ -32,6 +32,21 @@ export function localDiskStorage(root: string): StorageDriver {
     },
     async delete(key) {
       await rm(pathOf(key), { force: true });
+    },
+    async *list(prefix) {
+      const start = join(base, prefix);
+      let entries: string[];
+      try {
+        entries = (await readdir(start, { recursive: true })) as string[];
+      } catch (error) {
+        if ((error as NodeJS.ErrnoException).code === 'ENOENT') return;
+        throw error;
+      }
+      for (const entry of entries.sort()) {
+        const path = join(start, entry);
+        const info = await stat(path).catch(() => null);
+        if (info?.isFile()) yield { key: relative(base, path).split(sep).join('/'), modifiedAt: info.mtime };
+      }
     },
   };
 }

@@ -1,5 +1,12 @@
 // S3-compatible object storage (AWS, MinIO, a local s3rver in tests) behind the one storage interface.
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  ListObjectsV2Command,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from '@aws-sdk/client-s3';
 import { assertKey, type StorageDriver } from './storage-driver';
 
 export interface S3Settings {
@@ -55,6 +62,16 @@ export function s3Storage(settings: S3Settings): StorageDriver {
       assertKey(key);
       // Deleting a key that is not there succeeds on S3, as it does on local disk.
       await client.send(new DeleteObjectCommand({ Bucket: bucket, Key: key }));
+    },
+    async *list(prefix) {
+      let token: string | undefined;
+      do {
+        const page = await client.send(new ListObjectsV2Command({ Bucket: bucket, Prefix: prefix, ContinuationToken: token }));
+        for (const object of page.Contents ?? []) {
+          if (object.Key) yield { key: object.Key, modifiedAt: object.LastModified ?? new Date(0) };
+        }
+        token = page.IsTruncated ? page.NextContinuationToken : undefined;
+      } while (token);
     },
   };
 }

@@ -8,6 +8,8 @@ export interface StorageDriver {
   put(key: string, body: Buffer, contentType: string): Promise<void>;
   get(key: string): Promise<StoredObject | null>;
   delete(key: string): Promise<void>;
+  /** Every stored key under `prefix` with when it was written, for integrity checks and collecting orphans. */
+  list(prefix: string): AsyncIterable<{ key: string; modifiedAt: Date }>;
 }
 
 /** Keys are our own: lower-case path segments of letters, digits, dashes and dots. */

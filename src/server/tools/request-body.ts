@@ -13,6 +13,23 @@ function tooLarge(limit: number): BodyRead<never> {
   return { ok: false, response };
 }
 
+/** How far past its limit a body is read and thrown away before the connection is cut. */
+const DRAIN_FACTOR = 8;
+
+async function drain(reader: ReadableStreamDefaultReader<Uint8Array>, read: number, most: number): Promise<void> {
+  let size = read;
+  try {
+    while (size <= most) {
+      const { done, value } = await reader.read();
+      if (done) return;
+      size += value.byteLength;
+    }
+  } catch {
+    return;
+  }
+  await reader.cancel().catch(() => undefined);
+}
+
 /** Reads the body as text, refusing it as soon as it passes the limit, whatever Content-Length claims. */
 export async function readCappedText(request: Request, limit = MAX_BODY_BYTES): Promise<BodyRead<string>> {
   const declared = Number(request.headers.get('content-length') ?? '0');
@@ -26,7 +43,9 @@ export async function readCappedText(request: Request, limit = MAX_BODY_BYTES): 
     if (done) break;
     size += value.byteLength;
     if (size > limit) {
-      await reader.cancel().catch(() => undefined);
+      // Drain a moderately oversized body so the client reads the 413 instead of a reset mid-upload;
+      // past DRAIN_BYTES the connection is cut.
+      await drain(reader, size, limit * DRAIN_FACTOR);
       return tooLarge(limit);
     }
     chunks.push(value);

@@ -358,4 +358,25 @@ const cdPlayers: DemoMachine[] = [
   },
 ];
 
-export const demoMachines: DemoMachine[] = [...videoDecks, ...discRecorders, ...comboUnits, ...camcorders, ...cassetteDecks, ...cdPlayers];
+const miniDiscDecks: DemoMachine[] = [
+  {
+    makerSlug: 'kestrune',
+    modelNumber: 'MD-30',
+    region: 'multi',
+    deviceType: 'minidisc',
+    formats: ['MiniDisc'],
+    yearFrom: 1997,
+    yearTo: 2002,
+    about: 'Hi-fi MiniDisc recorder with an optical input and a lever-lowered overwrite head.',
+  },
+];
+
+export const demoMachines: DemoMachine[] = [
+  ...videoDecks,
+  ...discRecorders,
+  ...comboUnits,
+  ...camcorders,
+  ...cassetteDecks,
+  ...cdPlayers,
+  ...miniDiscDecks,
+];

@@ -35,7 +35,7 @@ export const demoMakers: DemoMaker[] = [
     name: 'Kestrune',
     country: 'Norvessa',
     about:
-      'Kestrune designed its own CD transport and laser platform and used it across several generations of players. It also sold a small DV camcorder and a compact DVD recorder.',
+      'Kestrune designed its own CD transport and laser platform and used it across several generations of players. It also sold a small DV camcorder, a compact DVD recorder and a MiniDisc deck.',
   },
   {
     slug: 'halvorin',

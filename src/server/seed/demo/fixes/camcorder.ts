@@ -1,4 +1,4 @@
-// Demo fixes for tape camcorders: cassette compartment, dew lockout, heads, viewfinder and power.
+// Demo fixes for tape camcorders: cassette compartment, dew lockout, heads, viewfinder, zoom and power.
 import type { DemoFix } from '../types';
 import { cap, caution, doc, figure, h, p, part, reading, rev, revise, steps } from './build';
 
@@ -170,6 +170,34 @@ const smdR2 = revise(smdR1, {
   ],
 });
 
+const zoomRocker = rev({
+  title: 'Zoom rocker dead or half-working: carbon tracks under the boot',
+  symptoms: ['zoom not working', 'telephoto dead, wide angle works', 'zoom motor silent'],
+  cause:
+    'The HC-8A zoom rocker is a pair of carbon-track contacts under a rubber boot on the handle. Skin oil and dust work in under the boot, the tracks go high-resistance, and the zoom driver reads one or both directions as released. The zoom motor itself rarely fails, and can be checked by feeding it directly.',
+  body: doc(
+    steps(
+      'Remove the battery and the cassette, then the four screws of the handle cover.',
+      'Lift the rocker board and measure each direction with the rocker pressed (reading below).',
+      'Clean the carbon tracks and the contact pads with isopropyl alcohol on a lint-free swab and let them dry.',
+      'If a track is worn through, fit a new rocker board rather than clean it again.',
+      'Check the zoom motor by feeding 3 V from a bench supply across its leads: it should run smoothly both ways when reversed.',
+      'Refit the boot so it seals all round, and try the zoom through its whole range in both directions.',
+    ),
+    reading({
+      testPoint: 'Rocker board, common to each direction, rocker pressed',
+      expected: 'under 200 Ω',
+      measured: 'tele side 15-40 kΩ, wide side 150 Ω',
+    }),
+  ),
+  parts: [part('switch', 'zoom rocker board with rubber boot', { notes: 'only if a carbon track is worn through' })],
+  difficulty: 'careful',
+  timeMinutes: 35,
+  editSummary: 'First write-up.',
+  author: 'tech-esme',
+  proofer: 'moderator2',
+});
+
 export const camcorderFixes: DemoFix[] = [
   {
     slug: 'hm2-cassette-door-will-not-close',
@@ -190,5 +218,11 @@ export const camcorderFixes: DemoFix[] = [
     machines: ['halvorin/HC-85H/PAL'],
     chassis: ['halvorin-hm2-mechanism'],
     revisions: [smdR1, smdR2],
+  },
+  {
+    slug: 'hc8a-zoom-dead-rocker-contacts',
+    machines: ['halvorin/HC-8A/PAL', 'halvorin/HC-8A/NTSC'],
+    chassis: [],
+    revisions: [zoomRocker],
   },
 ];

@@ -1,4 +1,4 @@
-// Demo fixes for cassette decks: belts, idlers, pinch rollers and speed.
+// Demo fixes for cassette decks: belts, idlers, pinch rollers, bearings and speed.
 import type { DemoFix } from '../types';
 import { caution, doc, figure, h, p, part, reading, rev, revise, steps } from './build';
 
@@ -134,6 +134,82 @@ const creaseR2 = revise(creaseR1, {
   ],
 });
 
+const reverseSpill = rev({
+  title: 'Spills tape at auto-reverse: the forward pinch roller lifts late',
+  symptoms: ['spills tape on reverse', 'tape caught on the reverse capstan', 'chews tape at changeover'],
+  cause:
+    'The TD-570R has two capstans and two pinch rollers, and at the end of a side a solenoid-driven changeover cam swaps which roller presses. The grease on the cam hardens and the forward roller lifts late, so for a moment both capstans pull against each other and the slack is wound round the reverse capstan. A glazed reverse roller makes it worse.',
+  body: doc(
+    caution(
+      'spring',
+      'The pinch roller arm return springs are small and strong; they fly off when unhooked. Wear eye protection and hold each spring with tweezers as you release it.',
+    ),
+    steps(
+      'Unplug the deck, remove the cassette door and the head block cover.',
+      'Work the changeover cam by hand through a full cycle: it should move freely and snap over under its spring.',
+      'Clean the old grease from the cam and its slider with isopropyl alcohol and apply a little light plastic-safe grease.',
+      'Clean both pinch rollers with rubber cleaner; replace the reverse roller if it stays glossy or shows a groove.',
+      'With a tape you do not mind losing, play to the end of a side ten times in each direction and watch the changeover.',
+    ),
+    reading({
+      testPoint: 'Changeover, forward roller lift against reverse roller press',
+      expected: 'forward roller lifts first, reverse roller presses within 100 ms',
+      measured: 'both rollers pressing together for about 300 ms',
+      note: 'Watch through the open head block with a slow-motion phone video.',
+    }),
+  ),
+  parts: [part('pinch_roller', 'pinch roller 10 mm diameter, 7 mm wide', { notes: 'reverse side' })],
+  difficulty: 'careful',
+  timeMinutes: 50,
+  editSummary: 'First write-up.',
+  author: 'tech-nils',
+  proofer: 'moderator2',
+  illustrations: [
+    figure(
+      'pinch-roller',
+      'Drawing of a rubber roller pressing a tape against a thin steel shaft.',
+      'Only one of the two rollers may press at any moment; watch both during the changeover.',
+    ),
+  ],
+});
+
+const capstanBearing = rev({
+  title: 'Capstan squeal in play: dry capstan bearing',
+  symptoms: ['capstan squeal', 'squealing in play and fast wind', 'noise stops when the flywheel is touched'],
+  cause:
+    'The KT-44 capstan runs in a sintered bronze bearing that holds a little oil in its pores. After years the oil is gone, the shaft runs metal on metal and squeals at play speed, and the extra drag can slow the tape. Left alone the shaft scores and the bearing has to be replaced with it.',
+  body: doc(
+    caution(
+      'spring',
+      'The E-clip that holds the flywheel springs away when it is levered off. Wear eye protection and cover the clip with a finger as it comes free.',
+    ),
+    steps(
+      'Unplug the deck and remove the bottom cover and the flywheel retaining plate.',
+      'Lift the belt off the flywheel, lever off the E-clip and draw the flywheel and capstan out from the front.',
+      'Clean the shaft with isopropyl alcohol and look at it against a light: a dull band or score marks mean a new flywheel and bearing.',
+      'Put one drop of light synthetic oil on the shaft and one on the bearing; no more, and none on the capstan face that meets the tape.',
+      'Refit the flywheel, the clip and the belt, and check that the shaft has a little end float.',
+      'Play a tape for ten minutes: the squeal should not return, and the speed should be as before.',
+    ),
+  ),
+  parts: [
+    part('mechanical', 'E-clip 2.3 mm', { notes: 'spare, they are easily lost' }),
+    part('other', 'light synthetic oil for sintered bearings'),
+  ],
+  difficulty: 'careful',
+  timeMinutes: 40,
+  editSummary: 'First write-up.',
+  author: 'tech-oona',
+  proofer: 'moderator2',
+  illustrations: [
+    figure(
+      'belt-path',
+      'Drawing of a belt running from a small motor pulley round a large flywheel.',
+      'The flywheel comes out once the belt is off and the clip is removed.',
+    ),
+  ],
+});
+
 export const cassetteDeckTransportFixes: DemoFix[] = [
   {
     slug: 'bt4-wow-and-flutter-capstan-belt',
@@ -154,4 +230,11 @@ export const cassetteDeckTransportFixes: DemoFix[] = [
     chassis: ['brindlecote-bt4-transport'],
     revisions: [creaseR1, creaseR2],
   },
+  {
+    slug: 'td570r-eats-tape-on-reverse-pinch-roller',
+    machines: ['brindlecote/TD-570R/multi'],
+    chassis: [],
+    revisions: [reverseSpill],
+  },
+  { slug: 'kt44-squeal-capstan-bearing', machines: ['kestrune/KT-44/multi'], chassis: [], revisions: [capstanBearing] },
 ];

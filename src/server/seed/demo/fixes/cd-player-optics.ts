@@ -1,4 +1,4 @@
-// Demo fixes for CD players: the laser pickup, the sled and the spindle.
+// Demo fixes for CD players: the laser pickup, the sled, the spindle and its connector.
 import type { DemoFix } from '../types';
 import { caution, doc, h, p, part, reading, rev, revise, steps, table } from './build';
 
@@ -140,6 +140,41 @@ const spindle = rev({
   proofer: 'moderator2',
 });
 
+const spindleFlex = rev({
+  title: 'Disc does not rotate: no drive reaches the spindle motor, cracked joints at the transport connector',
+  symptoms: ['disc does not rotate', 'spindle motor not turning', 'focus search then NO DISC'],
+  errorCodes: ['NO DISC'],
+  cause:
+    "The BCD-15's bought-in transport takes its spindle motor drive through a six-way connector soldered to the servo board. The connector is held only by its pins, and every tray movement flexes the board, so the joints crack in a ring. The laser focuses, the controller sees no spindle movement, and it reports an empty tray.",
+  body: doc(
+    caution(
+      'laser',
+      'The pickup fires its laser during the focus search with the tray closed and the cover off. Keep your eyes away from the lens while the player is powered.',
+    ),
+    caution('mains', 'The BCD-15 mains switch and transformer primary sit beside the transport; unplug before soldering.'),
+    steps(
+      'Unplug the player and remove the top cover.',
+      'Look at the six pins of CN201 on the servo board with a magnifier: a fine ring round a pin is a cracked joint.',
+      'Measure the spindle motor through the connector while flexing the board gently (reading below).',
+      'Remove the old solder from all six pins with braid and resolder them with fresh solder; do the same for the connector anchor tabs.',
+      'Check that the spindle turns freely by hand and that the disc table is not rubbing on the chassis.',
+      'Power up with a disc: the disc should spin up within two seconds of the tray closing.',
+    ),
+    reading({
+      testPoint: 'Spindle motor terminals, measured at CN201 pins 1 and 2',
+      expected: '8-15 Ω, steady',
+      measured: 'open, or jumping when the board is flexed',
+      note: 'Player unplugged.',
+    }),
+  ),
+  parts: [],
+  difficulty: 'careful',
+  timeMinutes: 35,
+  editSummary: 'First write-up.',
+  author: 'tech-farid',
+  proofer: 'moderator',
+});
+
 export const cdPlayerOpticsFixes: DemoFix[] = [
   {
     slug: 'kl9-skips-dirty-lens',
@@ -160,4 +195,5 @@ export const cdPlayerOpticsFixes: DemoFix[] = [
     chassis: ['kestrune-kl9-transport'],
     revisions: [spindle],
   },
+  { slug: 'bcd15-disc-does-not-rotate-spindle-flex', machines: ['brindlecote/BCD-15/multi'], chassis: [], revisions: [spindleFlex] },
 ];

@@ -1,4 +1,4 @@
-// Demo fixes for CD players: tray drive and the power supply.
+// Demo fixes for CD players: tray drive, the power supply and the line outputs.
 import type { DemoFix } from '../types';
 import { cap, caution, doc, figure, p, part, reading, rev, steps } from './build';
 
@@ -67,6 +67,37 @@ const fuse = rev({
   ],
 });
 
+const mutingRelay = rev({
+  title: 'One channel missing or intermittent: output muting relay contacts',
+  symptoms: ['one channel dead', 'intermittent right channel', 'scratchy output on one side'],
+  cause:
+    'The CP-760 mutes its line outputs at switch-on and between tracks with a small sealed relay after the output stage. Its contacts carry almost no current, so they never wipe themselves clean and one pair tarnishes into a high resistance. The channel then fades or comes and goes, and tapping the relay changes it.',
+  body: doc(
+    caution(
+      'mains',
+      'The CP-760 transformer primary and fuse holder are exposed with the cover off. Take the relay readings with the player unplugged, and keep clear of the primary side when testing it powered.',
+    ),
+    steps(
+      'Swap the left and right leads at the amplifier: if the fault moves to the other speaker, it is in the player.',
+      'Unplug the player, remove the top cover and find RL601 beside the output sockets.',
+      'Measure the contact resistance of each pole with the relay energised from a bench supply (reading below).',
+      'Replace the relay with a sealed one of the same coil voltage and pin-out; cleaning the contacts of a sealed relay does not last.',
+      'Play a disc with a test tone on both channels and check that both outputs match within 0.5 dB.',
+    ),
+    reading({
+      testPoint: 'RL601 contacts, each pole, coil fed 12 V from a bench supply',
+      expected: 'under 0.1 Ω',
+      measured: '5-200 Ω and wandering on the right channel pole',
+    }),
+  ),
+  parts: [part('switch', 'relay 12 V coil, 2 changeover contacts, sealed', { ref: 'RL601', notes: 'signal relay, gold-clad contacts' })],
+  difficulty: 'careful',
+  timeMinutes: 35,
+  editSummary: 'First write-up.',
+  author: 'tech-farid',
+  proofer: 'moderator2',
+});
+
 export const cdPlayerPowerFixes: DemoFix[] = [
   {
     slug: 'kl9-drawer-opens-then-closes',
@@ -75,4 +106,5 @@ export const cdPlayerPowerFixes: DemoFix[] = [
     revisions: [tray],
   },
   { slug: 'cp760-dead-fuse-blown-bridge', machines: ['kestrune/CP-760/multi'], chassis: [], revisions: [fuse] },
+  { slug: 'cp760-one-channel-silent-muting-relay', machines: ['kestrune/CP-760/multi'], chassis: [], revisions: [mutingRelay] },
 ];

@@ -1,4 +1,4 @@
-// Demo fixes for VHS/DVD combination recorders: faults on the tape side.
+// Demo fixes for VHS/DVD combination recorders: faults on the tape side, mechanical and colour.
 import type { DemoFix } from '../types';
 import { caution, doc, p, part, reading, rev, revise, steps } from './build';
 
@@ -97,6 +97,38 @@ const slowRewind = rev({
   proofer: 'moderator',
 });
 
+const chromaCrystal = rev({
+  title: 'VHS playback in monochrome: colour killer cuts in, chroma reference drifted',
+  symptoms: ['no colour on VHS playback', 'monochrome playback', 'colour flickers in and out'],
+  cause:
+    'On PAL playback the CX-330 rebuilds the colour from the tape against a 4.43 MHz reference from a crystal oscillator on the video board. The trimmer capacitor beside the crystal drifts and its contacts corrode, the reference falls outside the lock range of the colour circuit, and the colour killer switches colour off rather than show wrong colours. The DVD side has its own encoder and is not affected.',
+  body: doc(
+    caution(
+      'mains',
+      'The CX-330 video board sits above the power supply, whose primary side is uncovered. Make the powered adjustment with the recorder on an isolating transformer and a plastic trimming tool.',
+    ),
+    steps(
+      'Play a colour tape recorded on this machine and one recorded elsewhere: if both play in monochrome, the fault is in playback, not the tape.',
+      'Remove the top cover and measure the reference at TP401 with a frequency counter (reading below).',
+      'Turn trimmer CT401 slowly with a plastic tool until the counter reads the expected frequency and colour appears.',
+      'If the trimmer is crackly or will not reach the frequency, unplug the recorder and replace it.',
+      'Play tapes from several machines and check that colour holds steady from the start of each.',
+    ),
+    reading({
+      testPoint: 'TP401, chroma reference oscillator, in play',
+      expected: '4.433619 MHz ± 50 Hz',
+      measured: '4.43425 MHz',
+      note: 'The PAL colour subcarrier is 4.43361875 MHz.',
+    }),
+  ),
+  parts: [part('capacitor', '5-30pF trimmer', { ref: 'CT401', notes: 'only if crackly or out of range' })],
+  difficulty: 'skilled',
+  timeMinutes: 40,
+  editSummary: 'First write-up.',
+  author: 'tech-jonah',
+  proofer: 'moderator2',
+});
+
 export const comboTapeSideFixes: DemoFix[] = [
   {
     slug: 'qc3-vhs-side-eats-tape',
@@ -116,4 +148,5 @@ export const comboTapeSideFixes: DemoFix[] = [
     chassis: ['quillmere-qc3-combo'],
     revisions: [slowRewind],
   },
+  { slug: 'cx330-tape-plays-black-and-white', machines: ['orvalle/CX-330/PAL'], chassis: [], revisions: [chromaCrystal] },
 ];

@@ -1,4 +1,4 @@
-// Demo fixes for DVD-RAM recorders: standby and main power supply faults.
+// Demo fixes for DVD-RAM recorders: standby, main power supply and hard disc start-up faults.
 import type { DemoFix } from '../types';
 import { cap, caution, doc, h, p, part, reading, rev, revise, steps } from './build';
 
@@ -97,6 +97,53 @@ const warmShutdownR2 = revise(warmShutdownR1, {
   proofer: 'moderator2',
 });
 
+const hardDiscStartR1 = rev({
+  title: 'Slow start-up on the hard disc model: the drive retries before the clock appears',
+  symptoms: ['slow start-up', 'HDD spins up again and again', 'clock shows only after several minutes'],
+  cause:
+    'The RX-760H will not finish its start-up until its internal hard disc reports ready. The drive takes its 12 V from the main supply through a small filter capacitor on the drive adaptor board, and as that capacitor dries the 12 V dips each time the drive motor starts, so the drive resets and tries again. An ageing drive with slow sectors near its start looks the same, so check the supply before replacing the drive.',
+  body: doc(
+    caution(
+      'mains',
+      'The ORX-5 main supply sits under the hard disc bracket with its primary side uncovered. Take readings with the recorder on an isolating transformer, and unplug it before touching anything.',
+    ),
+    caution(
+      'stored_charge',
+      'The main reservoir capacitor keeps its charge after unplugging. Measure it and discharge it through a 2k2 5 W resistor before lifting the hard disc bracket.',
+    ),
+    steps(
+      'With the top cover off and the recorder on an isolating transformer, switch on and listen: a drive that spins up, stops and spins up again is being reset.',
+      'Measure the 12 V feed at the drive power connector during spin-up (reading below).',
+      'If it dips, unplug, discharge the supply as above and lift the hard disc bracket.',
+      'Replace C1203 on the drive adaptor board with a 105 °C low-ESR part of the same value.',
+      'Switch on and time the start-up: the clock should appear within 40 seconds.',
+      'If the 12 V holds steady and the start-up is still slow, the drive itself is failing; a new drive of the same interface is formatted by the recorder at its next start, and the old recordings are lost.',
+    ),
+    reading({
+      testPoint: '12 V at the hard disc power connector, during spin-up',
+      expected: '11.4-12.6 V',
+      measured: 'dips to 9.8 V as the drive motor starts',
+      note: 'Oscilloscope on 2 V/div, 50 ms/div, triggered on the falling edge.',
+    }),
+  ),
+  parts: [cap('C1203', '470uF', '16V 105C low-ESR', 'hard disc 12 V filter on the adaptor board')],
+  difficulty: 'skilled',
+  timeMinutes: 60,
+  editSummary: 'First write-up.',
+  author: 'tech-dmitri',
+  proofer: 'moderator2',
+});
+
+const hardDiscStartR2 = revise(hardDiscStartR1, {
+  body: doc(
+    ...hardDiscStartR1.body.content,
+    p('Before fitting a new drive, copy off any recordings the owner wants kept: the recorder formats the new drive at its next start.'),
+  ),
+  editSummary: 'Added a reminder to copy recordings off before a drive is replaced.',
+  author: 'tech-ansel',
+  proofer: 'moderator',
+});
+
 export const dvdRamPowerFixes: DemoFix[] = [
   {
     slug: 'orx5-no-power-standby-supply',
@@ -109,5 +156,11 @@ export const dvdRamPowerFixes: DemoFix[] = [
     machines: ['orvalle/RX-710/PAL', 'orvalle/RX-760H/PAL'],
     chassis: ['orvalle-orx5-platform'],
     revisions: [warmShutdownR1, warmShutdownR2],
+  },
+  {
+    slug: 'rx760h-slow-start-up-hard-disc',
+    machines: ['orvalle/RX-760H/PAL'],
+    chassis: [],
+    revisions: [hardDiscStartR1, hardDiscStartR2],
   },
 ];

@@ -103,6 +103,50 @@ const spindle = rev({
   proofer: 'moderator2',
 });
 
+const clamperArm = rev({
+  title: 'Loading tray stops half way on closing, then reopens',
+  symptoms: ['loading tray stops half way', 'tray reverses before it loads', 'disc not clamped'],
+  cause:
+    'In the last few millimetres of its closing travel the KD-560 tray lifts the clamper arm over the disc along a plastic cam track. The grease on the arm pivot dries and the cam follower wears a flat, so the tray meets a hard spot near the end of its travel. The controller sees the loaded switch too late and reverses the tray as if it had hit an obstruction.',
+  body: doc(
+    caution(
+      'mains',
+      'The KD-560 power board beside the loader has an uncovered primary side. Unplug the recorder before reaching past it; do not run the loader with the cover off and your hand near the board.',
+    ),
+    steps(
+      'Unplug the recorder and remove the top cover.',
+      'Remove the three screws of the loader top plate and lift it off with the clamper arm attached.',
+      'Look at the cam follower on the clamper arm: a flat or a groove worn into its tip means the arm needs replacing.',
+      'Clean the old grease from the arm pivot and the cam track with isopropyl alcohol on a swab.',
+      'Apply a thin film of plastic-safe grease to the pivot and the track; none on the clamper magnet or the disc table.',
+      'While the loader is open, check the loading belt for shine or slack and replace it if in doubt.',
+      'Refit the plate and cycle the tray twenty times with a disc and twenty without.',
+    ),
+    reading({
+      testPoint: 'Loaded switch S702, tray pushed fully home by hand',
+      expected: 'closed, under 1 Ω',
+      measured: 'open until the tray is pressed the last 2 mm',
+      note: 'Unit unplugged, loader connector removed.',
+    }),
+  ),
+  parts: [
+    part('mechanical', 'clamper arm with cam follower', { notes: 'only if the follower tip is worn flat' }),
+    part('belt', 'flat belt 2 mm wide, 30 mm inside diameter', { notes: 'KD-560 loading belt, replace while open' }),
+  ],
+  difficulty: 'careful',
+  timeMinutes: 40,
+  editSummary: 'First write-up.',
+  author: 'tech-lucan',
+  proofer: 'moderator',
+  illustrations: [
+    figure(
+      'tray-gear',
+      'Drawing of a small gear train with a timing mark lined up against an arrow.',
+      'The loader gear train sits under the clamper arm; check its timing mark while the plate is off.',
+    ),
+  ],
+});
+
 export const dvdRecorderMechanismFixes: DemoFix[] = [
   {
     slug: 'tl2-tray-opens-then-closes',
@@ -117,4 +161,5 @@ export const dvdRecorderMechanismFixes: DemoFix[] = [
     revisions: [trayStuck],
   },
   { slug: 'kd560-spindle-noisy-f12', machines: ['kestrune/KD-560/PAL'], chassis: [], revisions: [spindle] },
+  { slug: 'kd560-tray-stops-halfway-clamper-arm', machines: ['kestrune/KD-560/PAL'], chassis: [], revisions: [clamperArm] },
 ];

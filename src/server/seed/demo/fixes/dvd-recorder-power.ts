@@ -3,8 +3,8 @@ import type { DemoFix } from '../types';
 import { cap, caution, doc, figure, p, part, reading, rev, revise, steps } from './build';
 
 const slowStartR1 = rev({
-  title: 'Slow to start: stuck on HELLO for minutes, then works',
-  symptoms: ['slow start-up', 'stuck on HELLO', 'takes ages to turn on', 'works once warm'],
+  title: 'Slow to start: stuck on WAKING for minutes, then works',
+  symptoms: ['slow start-up', 'stuck on WAKING', 'takes ages to turn on', 'works once warm'],
   cause:
     'The TL-2 recorders use one switch-mode board whose output capacitors stand in a row beside the secondary rectifier heatsink. As they dry out, the 3.3 V and 5 V rails carry so much ripple that the main processor resets over and over. Once the capacitors warm up their ESR falls and the recorder starts.',
   body: doc(
@@ -22,7 +22,7 @@ const slowStartR1 = rev({
       "Unplug the power board's output connector and remove its four screws.",
       'Replace C905, C906, C908 and C910 beside the heatsink with 105 °C low-ESR parts of the same value and at least the same voltage.',
       'Keep the new parts the same height, standing off the board by 2 mm, so they do not touch the heatsink.',
-      'Refit the board and time the start: HELLO should clear in under 15 seconds.',
+      'Refit the board and time the start: WAKING should clear in under 15 seconds.',
     ),
   ),
   parts: [
@@ -41,7 +41,7 @@ const slowStartR1 = rev({
 const slowStartR2 = revise(slowStartR1, {
   body: doc(
     ...slowStartR1.body.content,
-    p('To confirm the diagnosis before opening the supply, measure the 3.3 V rail with an oscilloscope during the HELLO loop:'),
+    p('To confirm the diagnosis before opening the supply, measure the 3.3 V rail with an oscilloscope during the WAKING loop:'),
     reading({
       testPoint: '3.3 V rail at C905',
       expected: '3.3 V, ripple under 50 mV',
@@ -138,7 +138,7 @@ const fanR2 = revise(fanR1, {
 
 export const dvdRecorderPowerFixes: DemoFix[] = [
   {
-    slug: 'tl2-slow-start-stuck-on-hello',
+    slug: 'tl2-slow-start-stuck-on-waking',
     machines: ['tamberlyn/DR-4120/PAL', 'tamberlyn/DR-4120/NTSC', 'tamberlyn/DR-4120K/PAL'],
     chassis: ['tamberlyn-tl2-loader'],
     revisions: [slowStartR1, slowStartR2],

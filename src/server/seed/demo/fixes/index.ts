@@ -6,12 +6,15 @@ import { cassetteDeckTransportFixes } from './cassette-deck-transport';
 import { cdPlayerOpticsFixes } from './cd-player-optics';
 import { cdPlayerPowerFixes } from './cd-player-power';
 import { comboDiscSideFixes } from './combo-disc-side';
+import { comboFrontPanelFixes } from './combo-front-panel';
 import { comboTapeSideFixes } from './combo-tape-side';
 import { dvdRamDiscFixes } from './dvd-ram-disc';
 import { dvdRamPowerFixes } from './dvd-ram-power';
 import { dvdRecorderMechanismFixes } from './dvd-recorder-mechanism';
 import { dvdRecorderOpticsFixes } from './dvd-recorder-optics';
+import { dvdRecorderOutputFixes } from './dvd-recorder-outputs';
 import { dvdRecorderPowerFixes } from './dvd-recorder-power';
+import { miniDiscFixes } from './minidisc';
 import { vcrMechanismFixes } from './vcr-mechanism';
 import { vcrPowerFixes } from './vcr-power';
 import { vcrTapePathFixes } from './vcr-tape-path';
@@ -23,13 +26,16 @@ export const demoFixes: DemoFix[] = [
   ...dvdRecorderMechanismFixes,
   ...dvdRecorderOpticsFixes,
   ...dvdRecorderPowerFixes,
+  ...dvdRecorderOutputFixes,
   ...dvdRamDiscFixes,
   ...dvdRamPowerFixes,
   ...comboTapeSideFixes,
   ...comboDiscSideFixes,
+  ...comboFrontPanelFixes,
   ...camcorderFixes,
   ...cassetteDeckTransportFixes,
   ...cassetteDeckElectricsFixes,
   ...cdPlayerOpticsFixes,
   ...cdPlayerPowerFixes,
+  ...miniDiscFixes,
 ];

@@ -1,4 +1,4 @@
-// Demo fixes for video cassette recorders: power supply and supply-smoothing faults.
+// Demo fixes for video cassette recorders: power supply, supply-smoothing and memory backup faults.
 import type { DemoFix } from '../types';
 import { cap, caution, doc, figure, h, p, part, reading, rev, revise, steps } from './build';
 
@@ -169,6 +169,78 @@ const warmBarsR2 = revise(warmBarsR1, {
   proofer: 'moderator2',
 });
 
+const dryJointsR1 = rev({
+  title: 'Intermittent shutdown: dry joints on the regulator and transformer pins',
+  symptoms: ['intermittent shutdown', 'drops to standby at random', 'fault comes and goes', 'tap test brings it on'],
+  cause:
+    'The QM-7 power board carries its regulators and the mains transformer on one single-sided board, and their heavy pins move a little with every warm-up. After years the solder round them cracks in a ring, the contact makes and breaks with heat and vibration, and any dip on the 5 V rail resets the controller to standby.',
+  body: doc(
+    caution(
+      'mains',
+      'The transformer primary pins and the fuse on the QM-7 power board are at mains voltage when the recorder is plugged in. Do the tap test only with the recorder on an isolating transformer, and use an insulated rod, never a metal tool or a finger.',
+    ),
+    caution('heat', 'The regulator heatsinks are hot after a warm-up run; let them cool before you solder next to them.'),
+    steps(
+      'Remove the top cover and run the recorder on an isolating transformer until it is warm.',
+      'Tap round the power board with an insulated rod while watching the 5 V rail (reading below); note where a tap makes it drop.',
+      'Unplug the recorder and let the heatsinks cool.',
+      'Remove the old solder from every regulator, transformer and connector pin on the power board with braid, and resolder each with fresh solder.',
+      'Repeat the tap test: the rail should not move and the recorder should stay on.',
+    ),
+    reading({
+      testPoint: '5 V rail at the regulator output, during the tap test',
+      expected: '4.9-5.1 V, steady',
+      measured: 'drops to 0 V for a moment when the transformer is tapped',
+    }),
+  ),
+  parts: [],
+  difficulty: 'careful',
+  timeMinutes: 45,
+  editSummary: 'First write-up.',
+  author: 'tech-hugo',
+  proofer: 'moderator',
+});
+
+const dryJointsR2 = revise(dryJointsR1, {
+  body: doc(
+    ...dryJointsR1.body.content,
+    p(
+      'If the fault survives the resoldering, look at the ribbon from the power board to the main board: its end connector can crack the same way and gives the same shutdown.',
+    ),
+  ),
+  editSummary: 'Added the ribbon connector as the next place to look.',
+  author: 'tech-lucan',
+  proofer: 'moderator2',
+});
+
+const backupCap = rev({
+  title: 'Clock and presets lost whenever it is unplugged: memory backup capacitor',
+  symptoms: ['clock resets after a power cut', 'tuner presets lost', 'timer recordings forgotten'],
+  cause:
+    "The QM-7 recorders keep the clock and the tuner presets in the controller's own memory, held up by a 0.1 F backup capacitor while the mains is off. After twenty years its capacitance has fallen and its leakage risen, so it holds the memory for seconds rather than days. The S-VHS model mounts it beside the warm 5 V regulator, which ages it sooner.",
+  body: doc(
+    caution('mains', 'The backup capacitor sits near the fuse on the power board, which is at mains voltage. Unplug before working.'),
+    steps(
+      'Set the clock, then measure the backup capacitor and unplug the recorder (reading below).',
+      'Remove the top cover and find C951, the flat coin-shaped capacitor next to the 5 V regulator.',
+      'Replace it with a 0.1 F 5.5 V memory backup capacitor, observing the polarity marked on the board.',
+      'Plug in for an hour to charge it, set the clock and tune the channels, then leave the recorder unplugged overnight: the clock should still be right in the morning.',
+    ),
+    reading({
+      testPoint: 'Across C951, ten minutes after unplugging',
+      expected: 'above 3 V',
+      measured: 'under 0.5 V',
+      note: 'Charged for an hour first.',
+    }),
+  ),
+  parts: [cap('C951', '0.1F', '5.5V', 'memory backup, coin type')],
+  difficulty: 'routine',
+  timeMinutes: 30,
+  editSummary: 'First write-up.',
+  author: 'tech-ilse',
+  proofer: 'moderator',
+});
+
 export const vcrPowerFixes: DemoFix[] = [
   {
     slug: 'tv5-dead-no-clock-startup-capacitor',
@@ -183,4 +255,16 @@ export const vcrPowerFixes: DemoFix[] = [
     revisions: [dimDisplay],
   },
   { slug: 'qm7-noise-bars-after-warm-up', machines: ['quillmere/VR-3150S/PAL'], chassis: [], revisions: [warmBarsR1, warmBarsR2] },
+  {
+    slug: 'vr3100-cuts-out-intermittently-dry-joints',
+    machines: ['quillmere/VR-3100/PAL', 'quillmere/VR-3100/NTSC'],
+    chassis: [],
+    revisions: [dryJointsR1, dryJointsR2],
+  },
+  {
+    slug: 'qm7-forgets-clock-backup-capacitor',
+    machines: ['quillmere/VR-3150S/PAL', 'quillmere/VR-3100/PAL'],
+    chassis: ['quillmere-qm7-deck'],
+    revisions: [backupCap],
+  },
 ];

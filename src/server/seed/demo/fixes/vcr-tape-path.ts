@@ -1,4 +1,4 @@
-// Demo fixes for video cassette recorders: heads, audio head and tape threading.
+// Demo fixes for video cassette recorders: heads, audio head, tape threading and back tension.
 import type { DemoFix } from '../types';
 import { caution, doc, h, p, part, reading, rev, revise, steps, table } from './build';
 
@@ -110,6 +110,38 @@ const audioHead = rev({
   proofer: 'moderator2',
 });
 
+const backTension = rev({
+  title: 'Flagging on playback: back tension band worn',
+  symptoms: ['flagging', 'skew error on playback', 'verticals bend at the top of the screen'],
+  cause:
+    'Tape tension on the supply side of the TV-5 deck is set by a felt-lined band round the supply reel table, pulled tight by a spring on the tension arm. The felt wears and glazes and the spring tires, so the tape reaches the drum at the wrong tension and the tracks are read with a timing error. The error is largest at the start of each head pass, so the top lines of the picture bend sideways.',
+  body: doc(
+    caution(
+      'spring',
+      'The tension arm spring is under load and springs away when unhooked. Wear eye protection and keep a finger over it as you lift it off its post.',
+    ),
+    steps(
+      'Measure the back tension in play with a cassette-type tension gauge (reading below).',
+      'Unplug the recorder and remove the top cover and the cassette housing.',
+      'Lift the tension band off the supply reel table and look at the felt: shiny, thin or torn felt means a new band.',
+      'Clean the reel table rim with isopropyl alcohol; any oil on it gives the same fault.',
+      'Fit the new band and hook the spring into the slot that brings the tension into range; the middle slot is the factory setting.',
+      'Measure again and play a tape recorded on another machine: the verticals at the top of the picture should stand straight.',
+    ),
+    reading({
+      testPoint: 'Back tension in play, tension gauge cassette',
+      expected: '28-38 g·cm',
+      measured: '12-15 g·cm',
+    }),
+  ),
+  parts: [part('mechanical', 'back tension band with felt lining', { notes: 'TV-5 supply side' })],
+  difficulty: 'careful',
+  timeMinutes: 45,
+  editSummary: 'First write-up.',
+  author: 'tech-ansel',
+  proofer: 'moderator2',
+});
+
 export const vcrTapePathFixes: DemoFix[] = [
   {
     slug: 'vhs-snowy-playback-clogged-heads',
@@ -123,5 +155,11 @@ export const vcrTapePathFixes: DemoFix[] = [
     machines: ['tamberlyn/TV-825K/PAL', 'tamberlyn/TV-820/PAL'],
     chassis: ['tamberlyn-tv5-deck'],
     revisions: [audioHead],
+  },
+  {
+    slug: 'tv5-picture-top-bends-back-tension',
+    machines: ['tamberlyn/TV-825K/PAL', 'tamberlyn/TV-825K/NTSC', 'tamberlyn/TV-820/PAL'],
+    chassis: ['tamberlyn-tv5-deck'],
+    revisions: [backTension],
   },
 ];
