@@ -2,10 +2,10 @@
 import type { Knex } from 'knex';
 import type { CodeClause } from '@/lib/search/plan';
 import type { SearchScope } from '@/lib/search/query-schema';
-import { allClauses, anyClause, levelsExpression } from './pg-conditions';
+import { allClauses, anyClause, codeCondition, levelsExpression } from './pg-conditions';
 import type { AnalysedQuery, CompiledTextClause } from './analyse';
 import type { ResolvedMachine } from './context';
-import { frag, joinFragments, raw, type Fragment } from './sql-fragment';
+import { anyOf, frag, joinFragments, raw, type Fragment } from './sql-fragment';
 
 export interface CandidateRow {
   fix_id: number;
@@ -66,6 +66,8 @@ export interface ReadPlan {
   /** For partial matches: each "all clauses but this one" stage, then the "any clause" stage. */
   allButOne: ReadWay[];
   anyClause: ReadWay;
+  /** The hard clauses (text, then codes) matching fewest fixes, rarest first: the query's telling concepts. */
+  rareClauses?: number[];
   /** Fixes in the search table (an estimate), to tell a walk that ran out from one that saw everything. */
   tableRows: number;
   /** Shares of matching fixes from which walking beats collecting, for the two main stages. */
@@ -202,7 +204,7 @@ export async function partialMatches(
   analysed: AnalysedQuery,
   filter: Fragment,
   limit: number,
-  plan: Pick<ReadPlan, 'allButOne' | 'anyClause'>,
+  plan: Pick<ReadPlan, 'allButOne' | 'anyClause' | 'rareClauses'>,
 ): Promise<CandidateRow[]> {
   const clauses: ({ text: CompiledTextClause } | { code: CodeClause })[] = [
     ...analysed.hardText.map((text) => ({ text })),
@@ -218,6 +220,17 @@ export async function partialMatches(
         stage(filter, allClauses(analysed, 'document', text, codes), limit, plan.allButOne[skip] ?? 'collect', NEAR_STAGE, PARTIAL_WALK),
       );
     });
+  }
+  // Relaxation by concepts: fixes holding one of the query's rarest clauses, however common the others are,
+  // so "beta … groaning" finds the Betamax fix that stalls even when "deck", "motor" and "dies" are everywhere.
+  const rare = (plan.rareClauses ?? []).flatMap((i) => {
+    const c = clauses[i];
+    return c ? [c] : [];
+  });
+  if (rare.length > 0 && clauses.length >= 3) {
+    const text = rare.flatMap((c) => ('text' in c ? [frag('s.document @@ ?::tsquery', c.text.any)] : []));
+    const codes = rare.flatMap((c) => ('code' in c ? [codeCondition(c.code)] : []));
+    stages.push(stage(filter, anyOf([...text, ...codes]), limit, 'collect', NEAR_STAGE));
   }
   stages.push(stage(filter, anyClause(analysed), limit, plan.anyClause, NEAR_STAGE, PARTIAL_WALK));
   const { rows } = await featuresOf(knex, analysed, stages, 'FALSE');
