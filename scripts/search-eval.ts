@@ -64,7 +64,7 @@ try {
       console.log(
         '  The fake matches whole lower-case words and their synonyms, without stemming, typo tolerance, proximity or attribute\n' +
           '  ranking; it drops words from the end of the query (any strategy but "all"). Its figures measure our requests and\n' +
-          "  our re-ranking over a crude matcher, not what a real Meilisearch server would find.\n",
+          '  our re-ranking over a crude matcher, not what a real Meilisearch server would find.\n',
       );
     } finally {
       await fake.stop();

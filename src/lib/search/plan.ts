@@ -24,7 +24,20 @@ export interface Vocabulary {
 
 /** Words that only negate: alone they name no fault, so they rank (beside the word they negate) but never exclude. */
 export const NEGATIONS: ReadonlySet<string> = new Set([
-  'no', 'not', 'never', 'wont', 'dont', 'doesnt', 'didnt', 'cant', 'cannot', 'isnt', 'wasnt', 'wouldnt', 'aint', 'nor',
+  'no',
+  'not',
+  'never',
+  'wont',
+  'dont',
+  'doesnt',
+  'didnt',
+  'cant',
+  'cannot',
+  'isnt',
+  'wasnt',
+  'wouldnt',
+  'aint',
+  'nor',
 ]);
 
 /** One requirement of the query, matched through full-text search. */

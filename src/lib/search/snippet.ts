@@ -36,7 +36,12 @@ export interface ConceptMarks {
   terms: readonly (readonly string[])[];
 }
 
-const fold = (word: string) => word.normalize('NFKD').replace(/\p{M}+/gu, '').toLowerCase().replace(/['’]/g, '');
+const fold = (word: string) =>
+  word
+    .normalize('NFKD')
+    .replace(/\p{M}+/gu, '')
+    .toLowerCase()
+    .replace(/['’]/g, '');
 /** Two forms of one word as far as a highlight needs ("drawers", "drawer"): the stemmer already matched them. */
 const sameStart = (a: string, b: string) => a.slice(0, Math.min(3, a.length, b.length)) === b.slice(0, Math.min(3, a.length, b.length));
 
@@ -84,19 +89,20 @@ function split(text: string, separator: RegExp, from = 0, to = text.length): Pie
 
 const touches = (piece: Piece, ranges: readonly Range[]) => ranges.some(([a, b]) => a < piece.end && b > piece.start);
 
-/** The symptoms to show: those with a match, in order, within the budget; the first symptoms when none matched. */
+/** The symptoms to show: those with most matches first, within the budget, in their own order; the first ones when none matched. */
 function chooseSymptoms(symptoms: Piece[], ranges: readonly Range[]): Piece[] {
-  const matched = symptoms.filter((s) => touches(s, ranges));
-  const pool = matched.length > 0 ? matched : symptoms;
+  const hits = (s: Piece) => ranges.filter(([a, b]) => a < s.end && b > s.start).length;
+  const matched = symptoms.filter((s) => hits(s) > 0);
+  const pool = matched.length > 0 ? [...matched].sort((a, b) => hits(b) - hits(a) || a.start - b.start) : symptoms;
   const chosen: Piece[] = [];
   let used = 0;
   for (const symptom of pool) {
     const length = symptom.end - symptom.start;
-    if (chosen.length > 0 && used + length > SNIPPET_BUDGET) break;
+    if (chosen.length > 0 && used + length > SNIPPET_BUDGET) continue;
     chosen.push(symptom);
     used += length + SYMPTOM_SEPARATOR.length;
   }
-  return chosen;
+  return chosen.sort((a, b) => a.start - b.start);
 }
 
 /** A long symptom by its whole sentences: the ones with a match, else the first. */
@@ -112,7 +118,9 @@ function highlighted(text: string, piece: Piece, typed: readonly Range[], concep
   type Mark = { start: number; end: number; label: string | null };
   const marks: Mark[] = [
     ...typed.map(([start, end]) => ({ start, end, label: null })),
-    ...concepts.filter((c) => !typed.some(([a, b]) => a < c.range[1] && b > c.range[0])).map((c) => ({ start: c.range[0], end: c.range[1], label: c.label })),
+    ...concepts
+      .filter((c) => !typed.some(([a, b]) => a < c.range[1] && b > c.range[0]))
+      .map((c) => ({ start: c.range[0], end: c.range[1], label: c.label })),
   ]
     .filter((m) => m.start >= piece.start && m.end <= piece.end)
     .sort((a, b) => a.start - b.start);

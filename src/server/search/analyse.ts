@@ -16,6 +16,11 @@ export interface CompiledTextClause {
   alternatives: string;
   /** typed OR alternatives. */
   any: string;
+  /** What highlights mark as typed: the typed terms, and what was typed when negated terms stand for it. */
+  shownTyped: string;
+  /** What highlights mark as the concept, with the terms' words for lining up phrases. */
+  shownAlternatives: string;
+  alternativeTerms: string[];
 }
 
 export interface AnalysedQuery {
@@ -32,7 +37,8 @@ export interface AnalysedQuery {
 }
 
 /** The lexemes of a tsquery text as we write it: 'tray' <-> 'open' → tray, open. */
-export const lexemesOf = (tsquery: string): string[] => [...tsquery.matchAll(/'((?:[^']|'')*)'/g)].map((m) => (m[1] ?? '').replace(/''/g, "'"));
+export const lexemesOf = (tsquery: string): string[] =>
+  [...tsquery.matchAll(/'((?:[^']|'')*)'/g)].map((m) => (m[1] ?? '').replace(/''/g, "'"));
 
 export const orQuery = (parts: string[]): string =>
   parts
@@ -84,6 +90,16 @@ const UNINDEXED_NEGATIONS = new Set(['no', 'not', 'nor']);
  */
 const keepsItsMeaning = (term: string) => !termWords(term.replace(/"/g, '')).some((w) => UNINDEXED_NEGATIONS.has(w));
 
+/**
+ * A phrase holding a word the clause already searches alone adds no match ("disc tray" beside "tray"), but
+ * costs a recheck of every candidate's positions: such phrases are left out.
+ */
+function withoutSubsumed(typed: string[], alternatives: string[]): string[] {
+  const single = /^'(?:[^']|'')*'$/;
+  const alone = new Set([...typed, ...alternatives].filter((q) => single.test(q)).flatMap(lexemesOf));
+  return alternatives.filter((q) => single.test(q) || !lexemesOf(q).some((l) => alone.has(l)));
+}
+
 const NEGATING = new Set([...NEGATIONS, 'fails']);
 const keepsANegation = (term: string) => termWords(term.replace(/"/g, '')).some((w) => NEGATING.has(w) && !UNINDEXED_NEGATIONS.has(w));
 
@@ -99,10 +115,25 @@ function compileClause(clause: TextClause, compiled: Map<string, string>): Compi
   }
   const typedQueries = [...new Set(terms.map((t) => compiled.get(t) ?? ''))];
   // "rewinds" and "rewinding" stem to the typed "rewind": search each distinct query once.
-  const alternativeQueries = [...new Set(alternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !typedQueries.includes(q));
+  const alternativeQueries = withoutSubsumed(
+    typedQueries,
+    [...new Set(alternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !typedQueries.includes(q)),
+  );
   const typed = orQuery(typedQueries);
   const alternativeText = orQuery(alternativeQueries);
-  return { clause, typed, alternatives: alternativeText, any: orQuery([typed, alternativeText]) };
+  const asTyped = clause.terms.map((t) => compiled.get(t) ?? '');
+  const shownAlternatives = alternatives.filter((t) => !clause.terms.includes(t));
+  return {
+    clause,
+    typed,
+    alternatives: alternativeText,
+    any: orQuery([typed, alternativeText]),
+    shownTyped: orQuery([...new Set([...typedQueries, ...asTyped])]),
+    shownAlternatives: orQuery(
+      [...new Set(shownAlternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !asTyped.includes(q) && !typedQueries.includes(q)),
+    ),
+    alternativeTerms: shownAlternatives,
+  };
 }
 
 export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQuery> {
@@ -134,13 +165,13 @@ export function highlightQuery(analysed: AnalysedQuery): HighlightQuery {
   const clauses = [...analysed.hardText, ...analysed.softText];
   return {
     any: orQuery(clauses.map((c) => c.any)),
-    typed: orQuery(clauses.map((c) => c.typed)),
+    typed: orQuery(clauses.map((c) => c.shownTyped)),
     concepts: clauses
-      .filter((c) => c.alternatives !== '')
+      .filter((c) => c.shownAlternatives !== '')
       .map((c) => ({
         label: c.clause.label,
-        query: c.alternatives,
-        terms: c.clause.alternatives.map((t) => termWords(t.replace(/"/g, ''))),
+        query: c.shownAlternatives,
+        terms: c.alternativeTerms.map((t) => termWords(t.replace(/"/g, ''))),
       })),
   };
 }

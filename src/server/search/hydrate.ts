@@ -64,7 +64,10 @@ export function headlineColumns(knex: Knex, highlight: HighlightQuery): Knex.Raw
     highlight.any ? knex.raw('? AS title_marked', [headline('s.title', highlight.any)]) : knex.raw('NULL AS title_marked'),
     knex.raw('? AS snippet_marked', [headline(SYMPTOMS_TEXT, highlight.typed)]),
     concepts.length
-      ? knex.raw(`ARRAY[${concepts.map(() => '?').join(', ')}]::text[] AS concept_marked`, concepts.map((c) => headline(SYMPTOMS_TEXT, c.query)))
+      ? knex.raw(
+          `ARRAY[${concepts.map(() => '?').join(', ')}]::text[] AS concept_marked`,
+          concepts.map((c) => headline(SYMPTOMS_TEXT, c.query)),
+        )
       : knex.raw('NULL AS concept_marked'),
   ];
 }
@@ -113,7 +116,11 @@ export async function hydrateHits(knex: Knex, ranked: RankedRow[], highlight: Hi
     const concepts = highlight.concepts.filter((c) => c.query);
     const snippet = buildSnippet(
       row.snippet_marked ?? row.symptoms.replace(/ \. /g, ' · '),
-      (row.concept_marked ?? []).map((marked, i): ConceptMarks => ({ label: concepts[i]?.label ?? '', marked, terms: concepts[i]?.terms ?? [] })),
+      (row.concept_marked ?? []).map((marked, i): ConceptMarks => ({
+        label: concepts[i]?.label ?? '',
+        marked,
+        terms: concepts[i]?.terms ?? [],
+      })),
     );
     return [
       {

@@ -14,9 +14,32 @@ const POSES: readonly Pos[] = ['noun', 'verb', 'adj', 'adv'];
 
 /** WordNet's detachment rules per part of speech: ending → replacement. */
 const DETACH: Record<Pos, readonly [string, string][]> = {
-  noun: [['s', ''], ['ses', 's'], ['xes', 'x'], ['zes', 'z'], ['ches', 'ch'], ['shes', 'sh'], ['men', 'man'], ['ies', 'y']],
-  verb: [['s', ''], ['ies', 'y'], ['es', 'e'], ['es', ''], ['ed', 'e'], ['ed', ''], ['ing', 'e'], ['ing', '']],
-  adj: [['er', ''], ['est', ''], ['er', 'e'], ['est', 'e']],
+  noun: [
+    ['s', ''],
+    ['ses', 's'],
+    ['xes', 'x'],
+    ['zes', 'z'],
+    ['ches', 'ch'],
+    ['shes', 'sh'],
+    ['men', 'man'],
+    ['ies', 'y'],
+  ],
+  verb: [
+    ['s', ''],
+    ['ies', 'y'],
+    ['es', 'e'],
+    ['es', ''],
+    ['ed', 'e'],
+    ['ed', ''],
+    ['ing', 'e'],
+    ['ing', ''],
+  ],
+  adj: [
+    ['er', ''],
+    ['est', ''],
+    ['er', 'e'],
+    ['est', 'e'],
+  ],
   adv: [],
 };
 
@@ -103,7 +126,12 @@ async function readSynset(lex: Lexicon, pos: Pos, offset: number): Promise<Synse
   }
   const fields = text.split('\n')[0]!.split(' ');
   const wordCount = parseInt(fields[3] ?? '0', 16);
-  const words = Array.from({ length: wordCount }, (_, i) => (fields[4 + 2 * i] ?? '').replace(/\(.*\)$/, '').replace(/_/g, ' ').toLowerCase());
+  const words = Array.from({ length: wordCount }, (_, i) =>
+    (fields[4 + 2 * i] ?? '')
+      .replace(/\(.*\)$/, '')
+      .replace(/_/g, ' ')
+      .toLowerCase(),
+  );
   const pointerAt = 4 + 2 * wordCount;
   const pointerCount = Number(fields[pointerAt]);
   const hypernyms: Synset['hypernyms'] = [];
@@ -128,7 +156,8 @@ export async function relatedWords(word: string): Promise<string[]> {
     for (const offset of (lex.index[pos].get(lemma) ?? []).slice(0, SENSES_FOLLOWED)) {
       const synset = await readSynset(lex, pos, offset);
       synset.words.forEach((w) => found.add(w));
-      for (const hypernym of synset.hypernyms.slice(0, 2)) (await readSynset(lex, hypernym.pos, hypernym.offset)).words.forEach((w) => found.add(w));
+      for (const hypernym of synset.hypernyms.slice(0, 2))
+        (await readSynset(lex, hypernym.pos, hypernym.offset)).words.forEach((w) => found.add(w));
     }
   }
   return [...found].filter((w) => !own.has(w) && /^[a-z]+( [a-z]+)?$/.test(w));

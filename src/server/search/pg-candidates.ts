@@ -2,7 +2,7 @@
 import type { Knex } from 'knex';
 import type { CodeClause } from '@/lib/search/plan';
 import type { SearchScope } from '@/lib/search/query-schema';
-import { allClauses, anyClause, codeCondition, levelsExpression } from './pg-conditions';
+import { allClauses, anyClause, codeCondition, levelsExpression, matchQuery } from './pg-conditions';
 import type { AnalysedQuery, CompiledTextClause } from './analyse';
 import type { ResolvedMachine } from './context';
 import { anyOf, frag, joinFragments, raw, type Fragment } from './sql-fragment';
@@ -228,7 +228,7 @@ export async function partialMatches(
     return c ? [c] : [];
   });
   if (rare.length > 0 && clauses.length >= 3) {
-    const text = rare.flatMap((c) => ('text' in c ? [frag('s.document @@ ?::tsquery', c.text.any)] : []));
+    const text = rare.flatMap((c) => ('text' in c ? [frag('s.document @@ ?::tsquery', matchQuery(c.text))] : []));
     const codes = rare.flatMap((c) => ('code' in c ? [codeCondition(c.code)] : []));
     stages.push(stage(filter, anyOf([...text, ...codes]), limit, 'collect', NEAR_STAGE));
   }
@@ -245,7 +245,12 @@ const NEAR_PARTIAL_LIMIT = 40;
  * bench, so the machine's own fix is a candidate even when strangers match every word. The machine's and
  * family's fixes are found through their own indexes and the text is only tested on them.
  */
-export async function nearPartialMatches(knex: Knex, analysed: AnalysedQuery, filter: Fragment, machine: ResolvedMachine): Promise<CandidateRow[]> {
+export async function nearPartialMatches(
+  knex: Knex,
+  analysed: AnalysedQuery,
+  filter: Fragment,
+  machine: ResolvedMachine,
+): Promise<CandidateRow[]> {
   const any = anyClause(analysed);
   const near =
     machine.chassisId === null

@@ -40,6 +40,13 @@ export function codeCondition(code: CodeClause): Fragment {
   return frag('s.code_list && ?::text[]', pgArray([...code.exact, ...code.variants]));
 }
 
+/**
+ * What a clause must find for a fix to be a candidate: a word family's phrases ("won't close", "disc tray")
+ * loosened to their words, so the index answers without reading every candidate's word positions; the
+ * phrases themselves rank (levelsExpression), on the few candidates only. A quoted phrase stays a phrase.
+ */
+export const matchQuery = (c: CompiledTextClause): string => (c.clause.exact ? c.any : withoutPhrases(c.any));
+
 /** Every hard clause, each searched in `column` (the whole document, or doc_a: title and symptoms). */
 export function allClauses(
   analysed: AnalysedQuery,
@@ -49,7 +56,7 @@ export function allClauses(
   testTextOnly = false,
 ): Fragment {
   const parts: Fragment[] = [];
-  const textQuery = andQuery(text.map((c) => c.any));
+  const textQuery = andQuery(text.map(matchQuery));
   // "IS TRUE" makes the text a test on rows found otherwise (by a code, a machine): scanning the text
   // index for a broad word would cost more than the rows it is tested on.
   const test = (q: string) => frag(testTextOnly ? `(s.${column} @@ ?::tsquery) IS TRUE` : `s.${column} @@ ?::tsquery`, q);
@@ -67,7 +74,7 @@ export function allClauses(
 /** At least one clause (soft ones included): the widest net, for partial matches. */
 export function anyClause(analysed: AnalysedQuery): Fragment {
   const parts: Fragment[] = [];
-  const textQuery = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
+  const textQuery = orQuery([...analysed.hardText, ...analysed.softText].map(matchQuery));
   if (textQuery) parts.push(frag('s.document @@ ?::tsquery', textQuery));
   const codes = analysed.codes.flatMap((c) => [...c.exact, ...c.variants]);
   if (codes.length) parts.push(frag('s.code_list && ?::text[]', pgArray(codes)));

@@ -99,7 +99,9 @@ export class PostgresSearchProvider implements SearchProvider {
       total = full.total + partial.length;
     }
     if (context.machine && query.scope !== 'machine' && hardCount > 0) {
-      const near = (await nearPartialMatches(this.knex, analysed, filter, context.machine)).filter((r) => !rows.some((f) => f.fix_id === r.fix_id));
+      const near = (await nearPartialMatches(this.knex, analysed, filter, context.machine)).filter(
+        (r) => !rows.some((f) => f.fix_id === r.fix_id),
+      );
       rows = [...rows, ...near];
       total += near.length;
     }

@@ -17,7 +17,6 @@ const COSTS = {
   anywhere: { walk: 4, collect: 1, collectPhrase: 7 },
 } as const;
 
-
 /** Estimated matches per hard clause (text clauses, then codes), anywhere and in the summary. */
 function clauseCounts(analysed: AnalysedQuery, stats: LexemeStats): { summary: number[]; anywhere: number[] } {
   const codeCounts = analysed.codes.map((c) => [...c.exact, ...c.variants].reduce((sum, code) => sum + stats.code(code), 0));

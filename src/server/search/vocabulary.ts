@@ -107,12 +107,20 @@ function splits(word: string): [string, string][] {
 async function dictionaryLookup(
   knex: Knex,
   unknown: string[],
-): Promise<{ english: Set<string>; related: Map<string, string[]>; compounds: Map<string, string>; stems: Map<string, string>; stored: Set<string> }> {
+): Promise<{
+  english: Set<string>;
+  related: Map<string, string[]>;
+  compounds: Map<string, string>;
+  stems: Map<string, string>;
+  stored: Set<string>;
+}> {
   const english = await englishWords(unknown);
   const related = new Map<string, string[]>();
   for (const word of english) related.set(word, await relatedWords(word));
   const compoundWords = unknown.filter((w) => !english.has(w) && w.length >= MIN_COMPOUND);
-  const asked = [...new Set([...[...related.values()].flat().flatMap((w) => [w, ...w.split(' ')]), ...compoundWords.flatMap((w) => splits(w).flat())])];
+  const asked = [
+    ...new Set([...[...related.values()].flat().flatMap((w) => [w, ...w.split(' ')]), ...compoundWords.flatMap((w) => splits(w).flat())]),
+  ];
   const stems = new Map<string, string>();
   const stored = new Set<string>();
   if (asked.length) {

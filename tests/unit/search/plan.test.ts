@@ -131,7 +131,11 @@ describe('words a dictionary knows are never corrected into other words', () => 
   it('keeps "gobbles" and "lace" as typed: searched through their relatives, or left out', () => {
     const plan = buildPlan(parseQuery('gobbles tape'), withDictionary(['gobbles', 'lace'], [['gobbles', ['eat']]]), []);
     expect(plan.corrections).toEqual([]);
-    expect(texts(plan.clauses).find((c) => c.label === 'gobbles')).toMatchObject({ terms: ['gobbles'], alternatives: ['eat'], dictionary: true });
+    expect(texts(plan.clauses).find((c) => c.label === 'gobbles')).toMatchObject({
+      terms: ['gobbles'],
+      alternatives: ['eat'],
+      dictionary: true,
+    });
     const lace = buildPlan(parseQuery('lace'), withDictionary(['gobbles', 'lace']), []);
     expect(lace.corrections).toEqual([]);
     expect(lace.ignored).toEqual(['lace']);

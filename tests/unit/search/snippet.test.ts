@@ -5,7 +5,22 @@ import { MARK_END, MARK_START } from '@/lib/search/highlight';
 import { SNIPPET_BUDGET, buildSnippet, readMarks } from '@/lib/search/snippet';
 
 const openers = ['no', 'not', "won't", "doesn't", 'never', 'will not', 'slow', 'no', 'dead', 'a', 'it', 'tray'];
-const words = ['rewind', 'disc', 'start-up', 'picture', 'tray', 'close', 'sound', 'power', 'eject', 'spin', 'clock', 'display', 'tape', 'reads'];
+const words = [
+  'rewind',
+  'disc',
+  'start-up',
+  'picture',
+  'tray',
+  'close',
+  'sound',
+  'power',
+  'eject',
+  'spin',
+  'clock',
+  'display',
+  'tape',
+  'reads',
+];
 
 const plain = (html: string) =>
   html
@@ -87,7 +102,16 @@ describe('buildSnippet', () => {
   });
 
   it('keeps "no rewind", "no disc" and "slow start-up" whole', () => {
-    for (const symptom of ['no rewind', 'no disc', 'slow start-up', "won't eject", "doesn't spin", 'never starts', 'will not close', 'not reading']) {
+    for (const symptom of [
+      'no rewind',
+      'no disc',
+      'slow start-up',
+      "won't eject",
+      "doesn't spin",
+      'never starts',
+      'will not close',
+      'not reading',
+    ]) {
       const [first, ...rest] = symptom.split(' ');
       const text = `play works fine · ${first} ${MARK_START}${rest.join(' ')}${MARK_END} · clock is fine`;
       expect(plain(buildSnippet(text).html)).toContain(symptom);
