@@ -114,7 +114,9 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     const alternative = c.clause.dictionary ? clauseLevel.summaryDictionary : clauseLevel.summaryAlternative;
     if (c.typed) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.summary}`, c.typed));
     if (c.alternatives) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${alternative}`, c.alternatives));
-    if (isHard) whens.push(frag(`WHEN ${known} THEN ${clauseLevel.body}`));
+    // A full match is known to hold the clause's words; only a clause matched by its words alone, not its
+    // phrases ("won't … close" apart), is tested again as written.
+    if (isHard && matchQuery(c) === c.any) whens.push(frag(`WHEN ${known} THEN ${clauseLevel.body}`));
     whens.push(frag(`WHEN s.document @@ ?::tsquery THEN ${clauseLevel.body}`, c.any));
     return frag(`CASE ${whens.map((w) => w.sql).join(' ')} ELSE 0 END`, ...whens.flatMap((w) => w.bindings));
   };
