@@ -42,8 +42,14 @@ const fold = (word: string) =>
     .replace(/\p{M}+/gu, '')
     .toLowerCase()
     .replace(/['’]/g, '');
-/** Two forms of one word as far as a highlight needs ("drawers", "drawer"): the stemmer already matched them. */
-const sameStart = (a: string, b: string) => a.slice(0, Math.min(3, a.length, b.length)) === b.slice(0, Math.min(3, a.length, b.length));
+/** A word without its regular endings ("drawers", "spinning", "closes" → "drawer", "spin", "clos"), not "loader" → "load". */
+function bare(word: string): string {
+  const cut = word.replace(/(ing|ed|es|s)$/, '');
+  const single = /([b-df-hj-np-tv-z])\1$/.test(cut) ? cut.slice(0, -1) : cut;
+  return single.length > 2 ? single.replace(/e$/, '') : word;
+}
+/** Two forms of one word as far as a highlight needs: the stemmer already matched them. */
+const sameStart = (a: string, b: string) => bare(a) === bare(b);
 
 /**
  * Concept marks joined into runs of neighbouring words, kept only where the run is one whole term: the

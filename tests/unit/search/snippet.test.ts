@@ -170,3 +170,13 @@ describe('readMarks', () => {
     expect(readMarks(`a ${MARK_START}b${MARK_END} c${MARK_END}`)).toEqual({ text: 'a b c', ranges: [[2, 3]] });
   });
 });
+
+describe('concept highlights line up word forms, not neighbours', () => {
+  it('takes "drawers" for "drawer" and "spinning" for "spin", never "loads" for "loader"', () => {
+    const text = `two ${MARK_START}drawers${MARK_END} · ${MARK_START}loads${MARK_END} slowly · not ${MARK_START}spinning${MARK_END}`;
+    const snippet = buildSnippet('two drawers · loads slowly · not spinning', [
+      { label: 'tray', marked: text, terms: [['drawer'], ['loader'], ['spin']] },
+    ]);
+    expect(snippet.matched).toEqual(['tray ≈ drawers', 'tray ≈ spinning']);
+  });
+});
