@@ -38,8 +38,8 @@ export function ResultOption({ hit, id, active, onChoose, onHover }: ResultOptio
           className="h-auto w-[4.5rem] flex-none rounded border border-rule object-cover"
         />
       )}
-      <div className="min-w-0 flex-1 [&_mark]:bg-amber-wash [&_mark]:text-ink">
-        {/* titleHtml and snippetHtml are escaped on the server; the only tag in them is <mark>. */}
+      <div className="min-w-0 flex-1 [&_mark.concept]:underline [&_mark.concept]:decoration-dotted [&_mark]:bg-amber-wash [&_mark]:text-ink">
+        {/* titleHtml and snippetHtml are escaped on the server; the only tag in them is <mark> (a family match's carries a title). */}
         <span className="block font-serif font-semibold text-teal" dangerouslySetInnerHTML={{ __html: hit.titleHtml }} />
         {machines.length > 0 && (
           <span className="block font-mono text-xs text-ink-soft">
@@ -48,6 +48,7 @@ export function ResultOption({ hit, id, active, onChoose, onHover }: ResultOptio
           </span>
         )}
         <span className="block text-sm text-ink-soft" dangerouslySetInnerHTML={{ __html: hit.snippetHtml }} />
+        {hit.matched.length > 0 && <span className="block text-xs text-ink-soft">matched: {hit.matched.join('; ')}</span>}
         <span className="block text-xs font-semibold text-teal">{benchScoreText(hit.benchScore.score, hit.benchScore.reports)}</span>
       </div>
     </li>

@@ -11,19 +11,47 @@ function lettersOf(code: string): string {
   return code.replace(/\d+/g, '');
 }
 
+/** A code with the leading zeros of each digit run dropped: "f07" → "f7", "e005" → "e5", "f10" stays. */
+export function zeroless(code: string): string {
+  return code.replace(/\d+/g, (run) => run.replace(/^0+(?=\d)/, ''));
+}
+
+const MAX_PADDED_RUNS = 3;
+
+/**
+ * Every stored digits key a typed code may stand for: each run as typed, without its leading zeros, and
+ * padded with one or two zeros ("f7" → "7", "07", "007"), so "F7" finds F-07 but never F-17 or F-70.
+ */
+export function digitKeysOf(code: string): string[] {
+  const runs = (code.match(/\d+/g) ?? []).map((run) => run.replace(/^0+(?=\d)/, ''));
+  if (runs.length === 0) return [];
+  if (runs.length > MAX_PADDED_RUNS) return [digitsOf(code)];
+  let keys: string[] = [''];
+  for (const run of runs) {
+    const forms = [run, `0${run}`, `00${run}`];
+    keys = keys.flatMap((key) => forms.map((form) => (key === '' ? form : `${key}.${form}`)));
+  }
+  return [...new Set([digitsOf(code), ...keys])];
+}
+
 export type CodeMatchQuality = 'exact' | 'variant';
 
 /**
  * Whether a stored code answers what was typed. Digits must be the same digits in the same runs: a code
  * for one machine never matches its neighbour's ("kx45n" is not "kx44n"). Letters may be left off at the
  * end (a region or feature suffix: "dr4120" finds "dr4120k"), left out entirely when at least two digits
- * were typed ("4120" finds "dr4120"), or carry one slip when the letters run to three or more.
+ * were typed ("4120" finds "dr4120"), or carry one slip when the letters run to three or more. Leading
+ * zeros of a digit run do not count: "f7", "f-7" and "f 07" all find "f07", never "f17" or "f70".
  */
-export function codeMatchQuality(typed: string, stored: string): CodeMatchQuality | null {
-  if (typed === stored) return 'exact';
+export function codeMatchQuality(typedCode: string, storedCode: string): CodeMatchQuality | null {
+  if (typedCode === storedCode) return 'exact';
+  // Leading zeros are how a display pads a code, not part of it: "f7" and "f07" are one code.
+  const typed = zeroless(typedCode);
+  const stored = zeroless(storedCode);
   if (!typed || digitsOf(typed) === '' || digitsOf(typed) !== digitsOf(stored)) return null;
+  if (typed === stored) return 'variant';
   const typedLetters = lettersOf(typed);
-  if (typedLetters === '') return typed.length >= 2 ? 'variant' : null;
+  if (typedLetters === '') return typedCode.length >= 2 ? 'variant' : null;
   if (stored.startsWith(typed) && /^[a-z]{1,2}$/.test(stored.slice(typed.length))) return 'variant';
   const storedLetters = lettersOf(stored);
   if (typedLetters.length >= 3 && typed.length === stored.length && editDistance(typedLetters, storedLetters) <= 1) {

@@ -14,7 +14,31 @@ export interface Vocabulary {
   candidates: ReadonlyMap<string, readonly { word: string; ndoc: number }[]>;
   /** Stored codes sharing digits with some window of the query. */
   codes: readonly string[];
+  /** Typed words an English dictionary knows: a real word is never "corrected" into another ("gobbles", "lace"). */
+  english?: ReadonlySet<string>;
+  /** For typed words no fix uses, dictionary synonyms and broader words that the fixes do use ("gobble" → "eat"). */
+  related?: ReadonlyMap<string, readonly string[]>;
+  /** Typed words that are two stored words run together: "takeup" → "take up", "autoreverse" → "auto reverse". */
+  compounds?: ReadonlyMap<string, string>;
 }
+
+/** Words that only negate: alone they name no fault, so they rank (beside the word they negate) but never exclude. */
+export const NEGATIONS: ReadonlySet<string> = new Set([
+  'no',
+  'not',
+  'never',
+  'wont',
+  'dont',
+  'doesnt',
+  'didnt',
+  'cant',
+  'cannot',
+  'isnt',
+  'wasnt',
+  'wouldnt',
+  'aint',
+  'nor',
+]);
 
 /** One requirement of the query, matched through full-text search. */
 export interface TextClause {
@@ -29,6 +53,8 @@ export interface TextClause {
   soft: boolean;
   /** A quoted phrase or a code no fix carries: matched as written, never loosened. */
   exact: boolean;
+  /** The alternatives come from the dictionary (synonyms, broader words), not a word family: they rank lower. */
+  dictionary?: boolean;
   /** Order among the query's words, for the side-by-side bonus. */
   position: number;
 }
@@ -86,6 +112,8 @@ function compareKeys(a: readonly number[], b: readonly number[]): number {
 interface Word {
   text: string;
   stop: boolean;
+  /** Dictionary relatives of a word no fix uses. */
+  related?: readonly string[];
 }
 
 /** Maximal runs of a group's pieces that no stored code took, with stop words trimmed from their ends. */
@@ -154,6 +182,15 @@ function wordsOf(
     const text = piece.text;
     if (vocabulary.stopwords.has(text)) return words.push({ text, stop: true });
     if (vocabulary.known.has(text) || familyWords.has(text)) return words.push({ text, stop: false });
+    const compound = vocabulary.compounds?.get(text);
+    if (compound) return compound.split(' ').forEach((part) => words.push({ text: part, stop: vocabulary.stopwords.has(part) }));
+    if (vocabulary.english?.has(text)) {
+      // A real word no fix uses: searched through its dictionary relatives the fixes use, or left out.
+      const related = vocabulary.related?.get(text) ?? [];
+      if (related.length > 0) return words.push({ text, stop: false, related });
+      plan.ignored.push(text);
+      return;
+    }
     // Family words are candidates too, even where no fix uses them yet: they lead to their family.
     const familyCandidates = [...familyWords].filter((w) => w.length > 2).map((w) => ({ word: w, ndoc: 0 }));
     const corrected = correctWord(text, [...(vocabulary.candidates.get(text) ?? []), ...familyCandidates], familyWords);
@@ -178,13 +215,25 @@ export function buildPlan(parsed: ParsedQuery, vocabulary: Vocabulary, families:
   let next = 0;
   const textClauses: TextClause[] = [];
   const plainWord = (w: Word, position: number) => {
-    if (!w.stop) textClauses.push({ kind: 'text', label: w.text, terms: [w.text], alternatives: [], soft: false, exact: false, position });
+    if (w.stop) return;
+    const related = w.related ?? [];
+    textClauses.push({
+      kind: 'text',
+      label: w.text,
+      terms: [w.text],
+      alternatives: related.map(quoteMultiWord),
+      soft: NEGATIONS.has(w.text),
+      exact: false,
+      position,
+      ...(related.length ? { dictionary: true } : {}),
+    });
   };
   const plainWords = (from: number, to: number) => words.slice(from, to).forEach((w, i) => plainWord(w, from + i));
   for (const span of spans) {
     plainWords(next, span.from);
     const typed = words.slice(span.from, span.to);
-    const allStop = typed.every((w) => w.stop);
+    // "won't", "will not", "doesn't": a negation alone ranks beside its verb but never decides a match.
+    const allStop = typed.every((w) => w.stop || NEGATIONS.has(w.text));
     textClauses.push({
       kind: 'text',
       label: typed.map((w) => w.text).join(' '),

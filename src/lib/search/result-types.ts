@@ -22,8 +22,10 @@ export interface SearchHit {
   title: string;
   /** Title with matched words in <mark>; everything else escaped. */
   titleHtml: string;
-  /** A stretch of the symptoms (or cause) with matched words in <mark>; everything else escaped. */
+  /** Whole symptoms with matched words in <mark> (a family match carries its reason as a title); "…" marks cuts. */
   snippetHtml: string;
+  /** Why a highlighted word matched when it is not what was typed: "drawer ≈ tray". Shown in small text. */
+  matched: string[];
   machines: SearchHitMachine[];
   cautionKinds: CautionKind[];
   /** Never shown alone: `reports` is how many bench reports it rests on. */

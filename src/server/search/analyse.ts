@@ -1,10 +1,12 @@
 // Reads a query against the database's vocabulary and word families, and compiles its clauses to tsqueries.
 import type { Knex } from 'knex';
 import { parseQuery } from '@/lib/search/tokens';
-import { buildPlan, planTerms, type CodeClause, type SearchPlan, type TextClause } from '@/lib/search/plan';
+import { NEGATIONS, buildPlan, planTerms, type CodeClause, type SearchPlan, type TextClause } from '@/lib/search/plan';
 import { compiledWordFamilies } from './word-families';
 import { lookupVocabulary } from './vocabulary';
 import { lexemeQuery, phraseQuery } from '@/lib/search/tsquery-text';
+import { termWords } from '@/lib/search/word-families';
+import type { HighlightQuery } from './hydrate';
 
 export interface CompiledTextClause {
   clause: TextClause;
@@ -14,6 +16,11 @@ export interface CompiledTextClause {
   alternatives: string;
   /** typed OR alternatives. */
   any: string;
+  /** What highlights mark as typed: the typed terms, and what was typed when negated terms stand for it. */
+  shownTyped: string;
+  /** What highlights mark as the concept, with the terms' words for lining up phrases. */
+  shownAlternatives: string;
+  alternativeTerms: string[];
 }
 
 export interface AnalysedQuery {
@@ -28,6 +35,10 @@ export interface AnalysedQuery {
   /** True when there is something to search for. */
   searchable: boolean;
 }
+
+/** The lexemes of a tsquery text as we write it: 'tray' <-> 'open' → tray, open. */
+export const lexemesOf = (tsquery: string): string[] =>
+  [...tsquery.matchAll(/'((?:[^']|'')*)'/g)].map((m) => (m[1] ?? '').replace(/''/g, "'"));
 
 export const orQuery = (parts: string[]): string =>
   parts
@@ -70,22 +81,76 @@ function compileTerms(plan: SearchPlan, termQueries: Map<string, string>, stems:
   return compiled;
 }
 
+/** Negations the English dictionary drops from the index: a term holding one cannot be searched as meant. */
+const UNINDEXED_NEGATIONS = new Set(['no', 'not', 'nor']);
+
+/**
+ * An alternative term that loses its negation when compiled ("no power" → power, "will not turn on" → turn)
+ * would find the opposite of what its family means: it is left out of other terms' alternatives.
+ */
+const keepsItsMeaning = (term: string) => !termWords(term.replace(/"/g, '')).some((w) => UNINDEXED_NEGATIONS.has(w));
+
+/**
+ * A phrase holding a word the clause already searches alone adds no match ("disc tray" beside "tray"), but
+ * costs a recheck of every candidate's positions: such phrases are left out.
+ */
+function withoutSubsumed(typed: string[], alternatives: string[]): string[] {
+  const single = /^'(?:[^']|'')*'$/;
+  const alone = new Set([...typed, ...alternatives].filter((q) => single.test(q)).flatMap(lexemesOf));
+  return alternatives.filter((q) => single.test(q) || !lexemesOf(q).some((l) => alone.has(l)));
+}
+
+const NEGATING = new Set([...NEGATIONS, 'fails']);
+const keepsANegation = (term: string) => termWords(term.replace(/"/g, '')).some((w) => NEGATING.has(w) && !UNINDEXED_NEGATIONS.has(w));
+
 function compileClause(clause: TextClause, compiled: Map<string, string>): CompiledTextClause {
-  const typedQueries = [...new Set(clause.terms.map((t) => compiled.get(t) ?? ''))];
+  let terms = clause.terms;
+  let alternatives = clause.alternatives.filter(keepsItsMeaning);
+  // "will not open" is searched as open, which also finds "opens then closes": its family's terms that
+  // keep their negation ("won't open") stand for what was typed, and the bare word ranks as a family term.
+  const negated = alternatives.filter(keepsANegation);
+  if (!terms.some(keepsItsMeaning) && negated.length > 0) {
+    alternatives = [...terms, ...alternatives.filter((t) => !negated.includes(t))];
+    terms = negated;
+  }
+  const typedQueries = [...new Set(terms.map((t) => compiled.get(t) ?? ''))];
   // "rewinds" and "rewinding" stem to the typed "rewind": search each distinct query once.
-  const alternativeQueries = [...new Set(clause.alternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !typedQueries.includes(q));
+  const alternativeQueries = withoutSubsumed(
+    typedQueries,
+    [...new Set(alternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !typedQueries.includes(q)),
+  );
   const typed = orQuery(typedQueries);
-  const alternatives = orQuery(alternativeQueries);
-  return { clause, typed, alternatives, any: orQuery([typed, alternatives]) };
+  const alternativeText = orQuery(alternativeQueries);
+  const asTyped = clause.terms.map((t) => compiled.get(t) ?? '');
+  const shownAlternatives = alternatives.filter((t) => !clause.terms.includes(t));
+  return {
+    clause,
+    typed,
+    alternatives: alternativeText,
+    any: orQuery([typed, alternativeText]),
+    shownTyped: orQuery([...new Set([...typedQueries, ...asTyped])]),
+    shownAlternatives: orQuery(
+      [...new Set(shownAlternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !asTyped.includes(q) && !typedQueries.includes(q)),
+    ),
+    alternativeTerms: shownAlternatives,
+  };
 }
 
 export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQuery> {
   const parsed = parseQuery(text);
-  const [{ vocabulary, stems }, { families, termQueries }] = await Promise.all([
+  const [{ vocabulary, stems, relatedCandidates }, { families, termQueries }] = await Promise.all([
     lookupVocabulary(knex, parsed),
     compiledWordFamilies(knex),
   ]);
-  const plan = buildPlan(parsed, vocabulary, families);
+  // Dictionary relatives count only where they are the trade's words: a word of some word family (by stem).
+  const tradeLexemes = new Set([...termQueries.values()].flatMap(lexemesOf));
+  const related = new Map(
+    [...relatedCandidates].map(([word, list]) => [
+      word,
+      list.filter((r) => r.word.split(' ').every((part) => tradeLexemes.has(stems.get(part) ?? part))).map((r) => r.word),
+    ]),
+  );
+  const plan = buildPlan(parsed, { ...vocabulary, related }, families);
   const compiled = compileTerms(plan, termQueries, stems);
   const textClauses = plan.clauses.filter((c): c is TextClause => c.kind === 'text').map((c) => compileClause(c, compiled));
   const hardText = textClauses.filter((c) => c.any !== '' && !(c.clause.soft || c.typed === ''));
@@ -93,4 +158,20 @@ export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQu
   const codes = plan.clauses.filter((c): c is CodeClause => c.kind === 'code');
   const excluded = orQuery(plan.excluded.map((w) => compiled.get(w) ?? ''));
   return { plan, hardText, softText, codes, excluded, searchable: hardText.length + codes.length > 0 };
+}
+
+/** What the hits highlight: all matches in titles; typed terms and each clause's family terms apart in symptoms. */
+export function highlightQuery(analysed: AnalysedQuery): HighlightQuery {
+  const clauses = [...analysed.hardText, ...analysed.softText];
+  return {
+    any: orQuery(clauses.map((c) => c.any)),
+    typed: orQuery(clauses.map((c) => c.shownTyped)),
+    concepts: clauses
+      .filter((c) => c.shownAlternatives !== '')
+      .map((c) => ({
+        label: c.clause.label,
+        query: c.shownAlternatives,
+        terms: c.alternativeTerms.map((t) => termWords(t.replace(/"/g, ''))),
+      })),
+  };
 }

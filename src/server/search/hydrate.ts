@@ -2,6 +2,7 @@
 import type { Knex } from 'knex';
 import type { CautionKind } from '@/lib/schemas/revision';
 import { MARK_END, MARK_START, escapeHtml, markedHtml } from '@/lib/search/highlight';
+import { buildSnippet, type ConceptMarks } from '@/lib/search/snippet';
 import type { Proximity } from '@/lib/search/ranking';
 import type { SearchHit, SearchHitThumbnail } from '@/lib/search/result-types';
 import { toPhotoView } from '../photos/photo-views';
@@ -25,6 +26,7 @@ interface HitRow {
   has_photos: boolean;
   title_marked: string | null;
   snippet_marked: string | null;
+  concept_marked: string[] | null;
   machines: string[] | null;
   photo: {
     id: number;
@@ -37,20 +39,36 @@ interface HitRow {
   } | null;
 }
 
-/** Marked text from the database, or plain text escaped when nothing was marked. */
-export type Marker = (column: 'title' | 'symptoms') => string;
+/** What to highlight: every matched term in the title; in the symptoms, the typed terms and each concept apart. */
+export interface HighlightQuery {
+  /** tsquery text of everything the query matches (typed terms and their families). */
+  any: string;
+  /** tsquery text of the terms as typed (after any correction). */
+  typed: string;
+  /** Per clause with a word family or related words: its label, the tsquery of its other terms, their words. */
+  concepts: { label: string; query: string; terms: string[][] }[];
+}
 
-const HEADLINE_OPTIONS = `StartSel=${MARK_START}, StopSel=${MARK_END}`;
+const HEADLINE_OPTIONS = `StartSel=${MARK_START}, StopSel=${MARK_END}, HighlightAll=true`;
+const SYMPTOMS_TEXT = `replace(s.symptoms, ' . ', ' · ')`;
 
-/** ts_headline for the title (whole) and the symptoms (two short fragments); the caller passes the tsquery text. */
-export function headlineColumns(knex: Knex, tsquery: string): Knex.Raw[] {
-  if (!tsquery) return [knex.raw('NULL AS title_marked'), knex.raw('NULL AS snippet_marked')];
+/**
+ * ts_headline over the whole title and the whole symptoms (the snippet is cut later, by whole symptoms,
+ * in buildSnippet), and the symptoms once more per concept so a family match can say why it matched.
+ */
+export function headlineColumns(knex: Knex, highlight: HighlightQuery): Knex.Raw[] {
+  const headline = (text: string, query: string) =>
+    query ? knex.raw(`ts_headline('english', ${text}, ?::tsquery, ?)`, [query, HEADLINE_OPTIONS]) : knex.raw(text);
+  const concepts = highlight.concepts.filter((c) => c.query);
   return [
-    knex.raw(`ts_headline('english', s.title, ?::tsquery, ?) AS title_marked`, [tsquery, `${HEADLINE_OPTIONS}, HighlightAll=true`]),
-    knex.raw(`ts_headline('english', replace(s.symptoms, ' . ', ' · '), ?::tsquery, ?) AS snippet_marked`, [
-      tsquery,
-      `${HEADLINE_OPTIONS}, MaxFragments=2, MaxWords=16, MinWords=5, FragmentDelimiter=" … "`,
-    ]),
+    highlight.any ? knex.raw('? AS title_marked', [headline('s.title', highlight.any)]) : knex.raw('NULL AS title_marked'),
+    knex.raw('? AS snippet_marked', [headline(SYMPTOMS_TEXT, highlight.typed)]),
+    concepts.length
+      ? knex.raw(
+          `ARRAY[${concepts.map(() => '?').join(', ')}]::text[] AS concept_marked`,
+          concepts.map((c) => headline(SYMPTOMS_TEXT, c.query)),
+        )
+      : knex.raw('NULL AS concept_marked'),
   ];
 }
 
@@ -61,13 +79,8 @@ function thumbnailOf(photo: HitRow['photo']): SearchHitThumbnail | null {
   return { src: view.src, srcset: view.srcsetJpeg, alt: view.alt, width: view.width, height: view.height };
 }
 
-/** Hits in the order given. `marks` overrides the highlighted title and snippet (the Meilisearch adapter's own). */
-export async function hydrateHits(
-  knex: Knex,
-  ranked: RankedRow[],
-  tsquery: string,
-  marks?: Map<number, { title: string; snippet: string }>,
-): Promise<SearchHit[]> {
+/** Hits in the order given, highlighted from what the query matched (both providers highlight the same way). */
+export async function hydrateHits(knex: Knex, ranked: RankedRow[], highlight: HighlightQuery): Promise<SearchHit[]> {
   if (ranked.length === 0) return [];
   const rows: HitRow[] = await knex('fix_search as s')
     .join('fixes as f', 'f.id', 's.fix_id')
@@ -85,7 +98,7 @@ export async function hydrateHits(
       's.bench_score',
       's.report_count',
       's.has_photos',
-      ...headlineColumns(knex, tsquery),
+      ...headlineColumns(knex, highlight),
       knex.raw(`ARRAY(SELECT m.slug || '|' || mk.name || ' ' || m.model_number || ' (' || m.region || ')'
         FROM machines m JOIN makers mk ON mk.id = m.maker_id
         WHERE m.id = ANY(s.machine_ids) ORDER BY mk.name, m.model_number, m.region) AS machines`),
@@ -100,19 +113,23 @@ export async function hydrateHits(
   return ranked.flatMap((r) => {
     const row = byId.get(r.fixId);
     if (!row) return [];
-    const own = marks?.get(r.fixId);
-    // Fragments may start or end on a separator between symptoms; it reads better without.
-    const trimSeparators = (html: string) => html.replace(/^(\s*·\s*)+/, '').replace(/(\s*·\s*)+$/, '');
-    const symptoms = row.symptoms.replace(/ \. /g, ' · ');
+    const concepts = highlight.concepts.filter((c) => c.query);
+    const snippet = buildSnippet(
+      row.snippet_marked ?? row.symptoms.replace(/ \. /g, ' · '),
+      (row.concept_marked ?? []).map((marked, i): ConceptMarks => ({
+        label: concepts[i]?.label ?? '',
+        marked,
+        terms: concepts[i]?.terms ?? [],
+      })),
+    );
     return [
       {
         fixId: row.fix_id,
         slug: row.slug,
         title: row.title,
-        titleHtml: own ? markedHtml(own.title) : row.title_marked ? markedHtml(row.title_marked) : escapeHtml(row.title),
-        snippetHtml: trimSeparators(
-          own ? markedHtml(own.snippet) : row.snippet_marked ? markedHtml(row.snippet_marked) : escapeHtml(symptoms),
-        ),
+        titleHtml: row.title_marked ? markedHtml(row.title_marked) : escapeHtml(row.title),
+        snippetHtml: snippet.html,
+        matched: snippet.matched,
         machines: (row.machines ?? []).map((m) => {
           const [slug = '', label = ''] = m.split('|');
           return { slug, label };

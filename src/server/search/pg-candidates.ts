@@ -2,14 +2,15 @@
 import type { Knex } from 'knex';
 import type { CodeClause } from '@/lib/search/plan';
 import type { SearchScope } from '@/lib/search/query-schema';
-import { allClauses, anyClause, levelsExpression } from './pg-conditions';
+import { allClauses, anyClause, codeCondition, levelsExpression, matchQuery } from './pg-conditions';
 import type { AnalysedQuery, CompiledTextClause } from './analyse';
 import type { ResolvedMachine } from './context';
-import { frag, joinFragments, raw, type Fragment } from './sql-fragment';
+import { anyOf, frag, joinFragments, raw, type Fragment } from './sql-fragment';
 
 export interface CandidateRow {
   fix_id: number;
   bench_score: number | null;
+  report_count: number;
   machine_ids: number[];
   chassis_ids: number[];
   maker_ids: number[];
@@ -65,6 +66,8 @@ export interface ReadPlan {
   /** For partial matches: each "all clauses but this one" stage, then the "any clause" stage. */
   allButOne: ReadWay[];
   anyClause: ReadWay;
+  /** The hard clauses (text, then codes) matching fewest fixes, rarest first: the query's telling concepts. */
+  rareClauses?: number[];
   /** Fixes in the search table (an estimate), to tell a walk that ran out from one that saw everything. */
   tableRows: number;
   /** Shares of matching fixes from which walking beats collecting, for the two main stages. */
@@ -128,7 +131,7 @@ async function featuresOf(
     `WITH raw AS (${union.sql}),
           c AS (SELECT DISTINCT fix_id FROM raw),
           counted AS (SELECT coalesce(json_object_agg(stage, n), '{}'::json) AS by_stage FROM (SELECT stage, count(*) AS n FROM raw GROUP BY stage) AS x)
-     SELECT s.fix_id, s.bench_score, s.machine_ids, s.chassis_ids, s.maker_ids, s.device_types, s.formats, s.caution_kinds, s.has_photos,
+     SELECT s.fix_id, s.bench_score, s.report_count, s.machine_ids, s.chassis_ids, s.maker_ids, s.device_types, s.formats, s.caution_kinds, s.has_photos,
             ${levels.sql} AS levels, (SELECT by_stage FROM counted) AS by_stage
      FROM c JOIN fix_search s ON s.fix_id = c.fix_id`,
     ...union.bindings,
@@ -201,7 +204,7 @@ export async function partialMatches(
   analysed: AnalysedQuery,
   filter: Fragment,
   limit: number,
-  plan: Pick<ReadPlan, 'allButOne' | 'anyClause'>,
+  plan: Pick<ReadPlan, 'allButOne' | 'anyClause' | 'rareClauses'>,
 ): Promise<CandidateRow[]> {
   const clauses: ({ text: CompiledTextClause } | { code: CodeClause })[] = [
     ...analysed.hardText.map((text) => ({ text })),
@@ -218,7 +221,47 @@ export async function partialMatches(
       );
     });
   }
+  // Relaxation by concepts: fixes holding one of the query's rarest clauses, however common the others are,
+  // so "beta … groaning" finds the Betamax fix that stalls even when "deck", "motor" and "dies" are everywhere.
+  const rare = (plan.rareClauses ?? []).flatMap((i) => {
+    const c = clauses[i];
+    return c ? [c] : [];
+  });
+  if (rare.length > 0 && clauses.length >= 3) {
+    const text = rare.flatMap((c) => ('text' in c ? [frag('s.document @@ ?::tsquery', matchQuery(c.text))] : []));
+    const codes = rare.flatMap((c) => ('code' in c ? [codeCondition(c.code)] : []));
+    stages.push(stage(filter, anyOf([...text, ...codes]), limit, 'collect', NEAR_STAGE));
+  }
   stages.push(stage(filter, anyClause(analysed), limit, plan.anyClause, NEAR_STAGE, PARTIAL_WALK));
   const { rows } = await featuresOf(knex, analysed, stages, 'FALSE');
+  return rows;
+}
+
+/** Near the named machine, partial matches are read however many full matches the whole catalogue has. */
+const NEAR_PARTIAL_LIMIT = 40;
+
+/**
+ * Fixes on the named machine or its chassis family that match any clause: relaxation within reach of the
+ * bench, so the machine's own fix is a candidate even when strangers match every word. The machine's and
+ * family's fixes are found through their own indexes and the text is only tested on them.
+ */
+export async function nearPartialMatches(
+  knex: Knex,
+  analysed: AnalysedQuery,
+  filter: Fragment,
+  machine: ResolvedMachine,
+): Promise<CandidateRow[]> {
+  const any = anyClause(analysed);
+  const near =
+    machine.chassisId === null
+      ? frag('s.machine_ids @> ARRAY[?]::int[]', machine.id)
+      : frag('(s.machine_ids @> ARRAY[?]::int[] OR s.chassis_ids @> ARRAY[?]::int[])', machine.id, machine.chassisId);
+  const stage = frag(
+    `(SELECT s.fix_id, ${NEAR_STAGE} AS stage FROM fix_search s WHERE (${filter.sql}) AND ${near.sql} AND (${any.sql}) IS TRUE LIMIT ${NEAR_PARTIAL_LIMIT})`,
+    ...filter.bindings,
+    ...near.bindings,
+    ...any.bindings,
+  );
+  const { rows } = await featuresOf(knex, analysed, [stage], 'FALSE');
   return rows;
 }

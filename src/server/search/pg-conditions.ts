@@ -2,7 +2,8 @@
 import type { SearchQuery } from '@/lib/search/query-schema';
 import type { CodeClause } from '@/lib/search/plan';
 import { allOf, anyOf, frag, pgArray, type Fragment } from './sql-fragment';
-import { andQuery, orQuery, type AnalysedQuery, type CompiledTextClause } from './analyse';
+import { andQuery, lexemesOf, orQuery, type AnalysedQuery, type CompiledTextClause } from './analyse';
+import { clauseLevel } from '@/lib/search/ranking';
 import type { SearchContext } from './context';
 
 /** The named machine's scope: its own fixes and family-wide ones, its whole family, or everything. */
@@ -39,6 +40,13 @@ export function codeCondition(code: CodeClause): Fragment {
   return frag('s.code_list && ?::text[]', pgArray([...code.exact, ...code.variants]));
 }
 
+/**
+ * What a clause must find for a fix to be a candidate: a word family's phrases ("won't close", "disc tray")
+ * loosened to their words, so the index answers without reading every candidate's word positions; the
+ * phrases themselves rank (levelsExpression), on the few candidates only. A quoted phrase stays a phrase.
+ */
+export const matchQuery = (c: CompiledTextClause): string => (c.clause.exact ? c.any : withoutPhrases(c.any));
+
 /** Every hard clause, each searched in `column` (the whole document, or doc_a: title and symptoms). */
 export function allClauses(
   analysed: AnalysedQuery,
@@ -48,7 +56,7 @@ export function allClauses(
   testTextOnly = false,
 ): Fragment {
   const parts: Fragment[] = [];
-  const textQuery = andQuery(text.map((c) => c.any));
+  const textQuery = andQuery(text.map(matchQuery));
   // "IS TRUE" makes the text a test on rows found otherwise (by a code, a machine): scanning the text
   // index for a broad word would cost more than the rows it is tested on.
   const test = (q: string) => frag(testTextOnly ? `(s.${column} @@ ?::tsquery) IS TRUE` : `s.${column} @@ ?::tsquery`, q);
@@ -66,7 +74,7 @@ export function allClauses(
 /** At least one clause (soft ones included): the widest net, for partial matches. */
 export function anyClause(analysed: AnalysedQuery): Fragment {
   const parts: Fragment[] = [];
-  const textQuery = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
+  const textQuery = orQuery([...analysed.hardText, ...analysed.softText].map(matchQuery));
   if (textQuery) parts.push(frag('s.document @@ ?::tsquery', textQuery));
   const codes = analysed.codes.flatMap((c) => [...c.exact, ...c.variants]);
   if (codes.length) parts.push(frag('s.code_list && ?::text[]', pgArray(codes)));
@@ -76,7 +84,8 @@ export function anyClause(analysed: AnalysedQuery): Fragment {
 /**
  * For each pair of neighbouring text clauses, a query finding them side by side (one stop word may sit
  * between, as in "won't open", where the dropped "t" keeps its place): "won't open" then outranks
- * "won't stay open" for the query "tray won't open".
+ * "won't stay open" for the query "tray won't open". A clause that opens with words the index drops
+ * ("will not open" searched as open) may stand that many places further off.
  */
 export function neighbourQueries(analysed: AnalysedQuery): string[] {
   const ordered = [...analysed.hardText, ...analysed.softText]
@@ -85,8 +94,12 @@ export function neighbourQueries(analysed: AnalysedQuery): string[] {
   const queries: string[] = [];
   for (let i = 1; i < ordered.length; i++) {
     const left = ordered[i - 1]?.any;
-    const right = ordered[i]?.any;
-    if (left && right) queries.push(`((${left}) <-> (${right})) | ((${left}) <2> (${right}))`);
+    const rightClause = ordered[i];
+    const right = rightClause?.any;
+    if (!left || !right || !rightClause) continue;
+    const dropped = Math.max(0, rightClause.clause.label.split(' ').length - Math.max(1, lexemesOf(rightClause.typed).length));
+    const gaps = Array.from({ length: 2 + Math.min(dropped, 3) }, (_, g) => (g === 0 ? '<->' : `<${g + 1}>`));
+    queries.push(gaps.map((gap) => `((${left}) ${gap} (${right}))`).join(' | '));
   }
   return queries;
 }
@@ -98,15 +111,18 @@ export function neighbourQueries(analysed: AnalysedQuery): string[] {
 export function levelsExpression(analysed: AnalysedQuery, known: string): Fragment {
   const textLevel = (c: CompiledTextClause, isHard: boolean): Fragment => {
     const whens: Fragment[] = [];
-    if (c.typed) whens.push(frag('WHEN s.doc_a @@ ?::tsquery THEN 3', c.typed));
-    if (c.alternatives) whens.push(frag('WHEN s.doc_a @@ ?::tsquery THEN 2', c.alternatives));
-    if (isHard) whens.push(frag(`WHEN ${known} THEN 1`));
-    whens.push(frag('WHEN s.document @@ ?::tsquery THEN 1', c.any));
+    const alternative = c.clause.dictionary ? clauseLevel.summaryDictionary : clauseLevel.summaryAlternative;
+    if (c.typed) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.summary}`, c.typed));
+    if (c.alternatives) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${alternative}`, c.alternatives));
+    // A full match is known to hold the clause's words; only a clause matched by its words alone, not its
+    // phrases ("won't … close" apart), is tested again as written.
+    if (isHard && matchQuery(c) === c.any) whens.push(frag(`WHEN ${known} THEN ${clauseLevel.body}`));
+    whens.push(frag(`WHEN s.document @@ ?::tsquery THEN ${clauseLevel.body}`, c.any));
     return frag(`CASE ${whens.map((w) => w.sql).join(' ')} ELSE 0 END`, ...whens.flatMap((w) => w.bindings));
   };
   const codeLevel = (c: CodeClause): Fragment =>
     frag(
-      'CASE WHEN s.code_list && ?::text[] THEN 3 WHEN s.code_list && ?::text[] THEN 2 ELSE 0 END',
+      `CASE WHEN s.code_list && ?::text[] THEN ${clauseLevel.summary} WHEN s.code_list && ?::text[] THEN ${clauseLevel.summaryAlternative} ELSE 0 END`,
       pgArray(c.exact),
       pgArray(c.variants),
     );
@@ -114,7 +130,7 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     ...analysed.hardText.map((c) => textLevel(c, true)),
     ...analysed.codes.map(codeLevel),
     ...analysed.softText.map((c) => textLevel(c, false)),
-    ...neighbourQueries(analysed).map((q) => frag('CASE WHEN s.doc_a @@ ?::tsquery THEN 1 ELSE 0 END', q)),
+    ...neighbourQueries(analysed).map((q) => frag(`CASE WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.body} ELSE 0 END`, q)),
   ];
   if (levels.length === 0) return frag(`'{}'::int[]`);
   return frag(`ARRAY[${levels.map((l) => l.sql).join(', ')}]::int[]`, ...levels.flatMap((l) => l.bindings));

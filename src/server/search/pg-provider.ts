@@ -2,10 +2,10 @@
 import type { Knex } from 'knex';
 import { MAX_PAGE, type SearchQuery } from '@/lib/search/query-schema';
 import { emptyFacets, type SearchResult } from '@/lib/search/result-types';
-import { CODE_WEIGHT, WORD_WEIGHT, proximityOf, rank, relevanceOf, type Rankable } from '@/lib/search/ranking';
-import { analyseQuery, orQuery, type AnalysedQuery } from './analyse';
+import { CODE_WEIGHT, WORD_WEIGHT, matchesAll, proximityOf, rank, relevanceOf, type Rankable } from '@/lib/search/ranking';
+import { analyseQuery, highlightQuery, type AnalysedQuery } from './analyse';
 import { proximityTarget, resolveContext, type SearchContext } from './context';
-import { fullMatches, partialMatches, type CandidateRow } from './pg-candidates';
+import { fullMatches, nearPartialMatches, partialMatches, type CandidateRow } from './pg-candidates';
 import { filterCondition } from './pg-conditions';
 import { readPlan } from './read-plan';
 import { facetsOf } from './pg-facets';
@@ -32,7 +32,6 @@ function toRanked(rows: CandidateRow[], analysed: AnalysedQuery, context: Search
   const target = proximityTarget(context.machine);
   const weights = clauseWeights(analysed);
   const hardCount = weights.length;
-  const fullWeight = weights.reduce((a, b) => a + b, 0);
   return rows.map((row) => {
     // Levels past the required clauses are the soft clauses and the side-by-side bonuses.
     const relevance = relevanceOf(row.levels.slice(0, hardCount), row.levels.slice(hardCount), weights);
@@ -41,7 +40,8 @@ function toRanked(rows: CandidateRow[], analysed: AnalysedQuery, context: Search
       relevance,
       proximity: proximityOf({ machineIds: row.machine_ids, chassisIds: row.chassis_ids, makerIds: row.maker_ids }, target),
       benchScore: row.bench_score,
-      matchedAll: relevance.matched === fullWeight,
+      benchReports: row.report_count,
+      matchedAll: matchesAll(row.levels.slice(0, hardCount)),
       row,
     };
   });
@@ -98,15 +98,21 @@ export class PostgresSearchProvider implements SearchProvider {
       rows = [...rows, ...partial];
       total = full.total + partial.length;
     }
+    if (context.machine && query.scope !== 'machine' && hardCount > 0) {
+      const near = (await nearPartialMatches(this.knex, analysed, filter, context.machine)).filter(
+        (r) => !rows.some((f) => f.fix_id === r.fix_id),
+      );
+      rows = [...rows, ...near];
+      total += near.length;
+    }
     const ranked = rank(toRanked(rows, analysed, context));
     const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
-    const headline = orQuery([...analysed.hardText, ...analysed.softText].map((c) => c.any));
     // Facets are counted over the candidates: every match when the count is exact, the best ones otherwise.
     // They describe the fixes that match the whole query; partial matches only when nothing matches in full.
     const described = full.total > 0 ? ranked.filter((r) => r.matchedAll) : ranked;
     const facetRows = (full.lowerBound ? described.slice(0, FACET_SAMPLE) : described).map((r) => r.row);
     const [hits, facets] = await Promise.all([
-      hydrateHits(this.knex, pageRows, headline),
+      hydrateHits(this.knex, pageRows, highlightQuery(analysed)),
       total > 0 ? facetsOf(this.knex, facetRows) : Promise.resolve(null),
     ]);
     return {

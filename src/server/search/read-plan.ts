@@ -1,7 +1,7 @@
 // Chooses how the PostgreSQL provider reads candidates, from how many fixes its clauses are expected to match.
 import type { Knex } from 'knex';
 import { estimateMatches, estimateShare, walkThreshold } from '@/lib/search/estimate';
-import type { AnalysedQuery } from './analyse';
+import { lexemesOf, type AnalysedQuery } from './analyse';
 import type { ReadPlan, ReadWay } from './pg-candidates';
 import { lexemeStats, type LexemeStats } from './vocabulary';
 
@@ -17,8 +17,6 @@ const COSTS = {
   anywhere: { walk: 4, collect: 1, collectPhrase: 7 },
 } as const;
 
-const lexemesOf = (tsquery: string): string[] => [...tsquery.matchAll(/'((?:[^']|'')*)'/g)].map((m) => (m[1] ?? '').replace(/''/g, "'"));
-
 /** Estimated matches per hard clause (text clauses, then codes), anywhere and in the summary. */
 function clauseCounts(analysed: AnalysedQuery, stats: LexemeStats): { summary: number[]; anywhere: number[] } {
   const codeCounts = analysed.codes.map((c) => [...c.exact, ...c.variants].reduce((sum, code) => sum + stats.code(code), 0));
@@ -33,6 +31,8 @@ const wayFor = (share: number, threshold: number): ReadWay => (share >= threshol
 /** One small query for the counts of the query's lexemes and codes. */
 /** A text whose upper-bound share reaches this is tested on rows found by a code or narrow scope, not index-scanned. */
 const BROAD_TEXT_SHARE = 0.01;
+/** A clause matching under this share of all fixes is rare enough to gather partial matches by. */
+const RARE_SHARE = 0.05;
 
 export async function readPlan(knex: Knex, analysed: AnalysedQuery, limit: number, narrowed: boolean): Promise<ReadPlan> {
   const lexemes = [...new Set([...analysed.hardText, ...analysed.softText].flatMap((c) => lexemesOf(c.any)))];
@@ -59,6 +59,14 @@ export async function readPlan(knex: Knex, analysed: AnalysedQuery, limit: numbe
       ),
     ),
     anyClause: wayFor(anyShare, anywhereAt),
+    // Rare enough to collect cheaply, and telling: the two clauses matching fewest fixes.
+    rareClauses: counts.anywhere
+      .map((count, i) => ({ count, i }))
+      // Before the table was ever analysed its size reads 0: the broadest clause then stands for the whole.
+      .filter((c) => c.count / Math.max(1, stats.total || Math.max(...counts.anywhere)) < RARE_SHARE)
+      .sort((a, b) => a.count - b.count || a.i - b.i)
+      .slice(0, 2)
+      .map((c) => c.i),
     tableRows: stats.total,
     textBroad: estimateShare(counts.anywhere.slice(0, analysed.hardText.length), stats.total) >= BROAD_TEXT_SHARE,
     narrowed,

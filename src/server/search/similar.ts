@@ -89,7 +89,8 @@ export async function similarFixes(knex: Knex, symptom: string, about: ResolvedM
       const d = byId.get(row.fix_id);
       if (!d) return [];
       const found = summaryShare(row.levels.slice(0, weights.length), weights) / fullWeight;
-      const bonus = relevanceOf([], row.levels.slice(weights.length)).quality;
+      // Between equally alike fixes, the closer wording first: typed words over family terms, side by side.
+      const bonus = relevanceOf(row.levels.slice(0, weights.length), row.levels.slice(weights.length)).quality;
       const proximity = proximityOf({ machineIds: row.machine_ids, chassisIds: row.chassis_ids, makerIds: row.maker_ids }, target);
       return [
         {

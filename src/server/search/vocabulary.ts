@@ -1,9 +1,10 @@
 // The words and codes of the live fixes, kept beside fix_search: what corrections and code matching look up.
 import type { Knex } from 'knex';
 import type { Vocabulary } from '@/lib/search/plan';
-import { codeGroups, codeWindows, digitsOf } from '@/lib/search/code-match';
+import { codeGroups, codeWindows, digitKeysOf } from '@/lib/search/code-match';
 import type { ParsedQuery } from '@/lib/search/tokens';
 import { pgArray } from './sql-fragment';
+import { englishWords, relatedWords } from './lexicon';
 
 /** Every text column of fix_search, as the 'simple' dictionary splits it (unstemmed, lower case). */
 const SIMPLE_DOCUMENT = `to_tsvector('simple', benchlore_unaccent(title || ' ' || symptoms || ' ' || cause || ' ' || remedy || ' ' || parts || ' ' || machines_text))`;
@@ -85,6 +86,63 @@ interface WordRow {
 export interface LookedUp {
   vocabulary: Vocabulary;
   stems: Map<string, string>;
+  /** Dictionary relatives of typed words no fix uses, each with whether a fix uses it (the caller adds family words). */
+  relatedCandidates: Map<string, { word: string; stored: boolean }[]>;
+}
+
+/** A word of at least this many letters that nothing knows may be two words run together ("takeup"). */
+const MIN_COMPOUND = 6;
+
+/** Every way to cut a word into two words of two letters or more. */
+function splits(word: string): [string, string][] {
+  const cuts: [string, string][] = [];
+  for (let i = 2; i <= word.length - 2; i++) cuts.push([word.slice(0, i), word.slice(i)]);
+  return cuts;
+}
+
+/**
+ * For typed words neither the fixes nor the word families know: which are English (never corrected), their
+ * dictionary relatives, and which run two stored words together. One small query, only when such words exist.
+ */
+async function dictionaryLookup(
+  knex: Knex,
+  unknown: string[],
+): Promise<{
+  english: Set<string>;
+  related: Map<string, string[]>;
+  compounds: Map<string, string>;
+  stems: Map<string, string>;
+  stored: Set<string>;
+}> {
+  const english = await englishWords(unknown);
+  const related = new Map<string, string[]>();
+  for (const word of english) related.set(word, await relatedWords(word));
+  const compoundWords = unknown.filter((w) => !english.has(w) && w.length >= MIN_COMPOUND);
+  const asked = [
+    ...new Set([...[...related.values()].flat().flatMap((w) => [w, ...w.split(' ')]), ...compoundWords.flatMap((w) => splits(w).flat())]),
+  ];
+  const stems = new Map<string, string>();
+  const stored = new Set<string>();
+  if (asked.length) {
+    const { rows } = await knex.raw<{ rows: { word: string; stem: string; stored: boolean }[] }>(
+      `SELECT t.word, ${STEM_OF('t.word')} AS stem, EXISTS (SELECT 1 FROM search_words w WHERE w.word = t.word) AS stored
+       FROM unnest(?::text[]) AS t(word)`,
+      [pgArray(asked)],
+    );
+    for (const row of rows) {
+      stems.set(row.word, row.stem);
+      if (row.stored) stored.add(row.word);
+    }
+  }
+  const compounds = new Map<string, string>();
+  for (const word of compoundWords) {
+    // The cut whose shorter half is longest: "autoreverse" → "auto reverse" rather than "au toreverse".
+    const cut = splits(word)
+      .filter(([a, b]) => stored.has(a) && stored.has(b))
+      .sort((x, y) => Math.min(y[0].length, y[1].length) - Math.min(x[0].length, x[1].length))[0];
+    if (cut) compounds.set(word, cut.join(' '));
+  }
+  return { english, related, compounds, stems, stored };
 }
 
 /** Up to this many stored words are compared with each unknown word (same first letter, near length). */
@@ -121,7 +179,7 @@ export async function lookupVocabulary(knex: Knex, parsed: ParsedQuery): Promise
   const phraseWords = parsed.phrases.flatMap((p) => p.split(' '));
   const words = [...new Set([...parsed.pieces.filter((p) => !p.hasDigit).map((p) => p.text), ...phraseWords, ...parsed.excluded])];
   const windows = codeGroups(parsed.pieces).flatMap(codeWindows);
-  const digitKeys = [...new Set(windows.map(digitsOf).filter((d) => d !== ''))];
+  const digitKeys = [...new Set(windows.flatMap(digitKeysOf))];
   const [wordRows, codeRows] = await Promise.all([
     wordsQuery(knex, words),
     digitKeys.length ? knex('search_codes').whereIn('digits', digitKeys).limit(500).pluck('code') : Promise.resolve([] as string[]),
@@ -139,7 +197,27 @@ export async function lookupVocabulary(knex: Knex, parsed: ParsedQuery): Promise
       candidates.set(row.typed, [...(candidates.get(row.typed) ?? []), { word: row.word, ndoc: Number(row.ndoc ?? 0) }]);
     }
   }
-  return { vocabulary: { known, stopwords, candidates, codes: codeRows as string[] }, stems };
+  const unknown = words.filter((w) => stems.has(w) && !known.has(w) && !stopwords.has(w));
+  const dictionary = unknown.length ? await dictionaryLookup(knex, unknown) : null;
+  const relatedCandidates = new Map<string, { word: string; stored: boolean }[]>();
+  for (const [word, related] of dictionary?.related ?? [])
+    relatedCandidates.set(
+      word,
+      related.map((r) => ({ word: r, stored: r.split(' ').every((part) => dictionary?.stored.has(part)) })),
+    );
+  for (const [word, stem] of dictionary?.stems ?? []) if (!stems.has(word)) stems.set(word, stem);
+  return {
+    vocabulary: {
+      known,
+      stopwords,
+      candidates,
+      codes: codeRows as string[],
+      english: dictionary?.english ?? new Set(),
+      compounds: dictionary?.compounds ?? new Map(),
+    },
+    stems,
+    relatedCandidates,
+  };
 }
 
 export interface LexemeStats {

@@ -1,6 +1,6 @@
 // Codes typed loosely: separators and letter suffixes forgiven, digits never.
 import { describe, expect, it } from 'vitest';
-import { codeGroups, codeMatchQuality, codeWindows, digitsOf, resolveCodeGroup } from '@/lib/search/code-match';
+import { codeGroups, codeMatchQuality, codeWindows, digitKeysOf, digitsOf, resolveCodeGroup } from '@/lib/search/code-match';
 import { foldText, piecesOf } from '@/lib/search/tokens';
 
 describe('digitsOf', () => {
@@ -67,5 +67,34 @@ describe('resolveCodeGroup', () => {
   it('leaves trailing words of the group alone', () => {
     const [group] = codeGroups(piecesOf('e-21 on'));
     expect(resolveCodeGroup(group!, stored)).toEqual([{ from: 0, to: 2, typed: 'e21', exact: ['e21'], variants: [] }]);
+  });
+});
+
+describe('error codes typed with or without their leading zero', () => {
+  const stored = ['f07', 'f17', 'f70', 'f7x', 'e05', 'e50', 'e15', 'kx44n'];
+  const found = (typed: string) => {
+    const [group] = codeGroups(piecesOf(foldText(typed)));
+    return group ? resolveCodeGroup(group, stored).flatMap((s) => [...s.exact, ...s.variants]) : [];
+  };
+  it.each(['F7', 'f-7', 'F 07', 'F-07', 'f07', 'F 7'])('reads %s as F-07 and nothing else', (typed) => {
+    expect(found(typed).filter((c) => c.startsWith('f'))).toContain('f07');
+    expect(found(typed)).not.toContain('f17');
+    expect(found(typed)).not.toContain('f70');
+  });
+  it.each(['E5', 'e-5', 'E 05', 'E05'])('reads %s as E-05, never E-50 or E-15', (typed) => {
+    expect(found(typed)).toContain('e05');
+    expect(found(typed)).not.toContain('e50');
+    expect(found(typed)).not.toContain('e15');
+  });
+  it('keeps a zero that is a digit of the code: "F70" is not F-07', () => {
+    expect(found('F70')).toEqual(['f70']);
+    expect(codeMatchQuality('f70', 'f07')).toBeNull();
+    expect(codeMatchQuality('e50', 'e05')).toBeNull();
+  });
+  it('looks up the padded digit keys a stored code may carry', () => {
+    expect(digitKeysOf('f7')).toEqual(expect.arrayContaining(['7', '07', '007']));
+    expect(digitKeysOf('f7')).not.toContain('17');
+    expect(digitKeysOf('e05')).toEqual(expect.arrayContaining(['05', '5', '005']));
+    expect(digitKeysOf('nodisc')).toEqual([]);
   });
 });

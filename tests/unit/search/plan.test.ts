@@ -113,3 +113,51 @@ describe('buildPlan', () => {
     expect(planTerms(plan)).toEqual(['tray', 'drawer', 'loader', 'belt']);
   });
 });
+
+describe('words a dictionary knows are never corrected into other words', () => {
+  const withDictionary = (english: string[], related: [string, string[]][] = [], extra: Partial<Vocabulary> = {}) =>
+    vocabulary({
+      known: new Set(['tray', 'close', 'wobbles', 'place', 'eats', 'tape']),
+      candidates: new Map([
+        ['gobbles', [{ word: 'wobbles', ndoc: 4 }]],
+        ['lace', [{ word: 'place', ndoc: 9 }]],
+        ['tary', [{ word: 'tray', ndoc: 9 }]],
+      ]),
+      english: new Set(english),
+      related: new Map(related),
+      ...extra,
+    });
+
+  it('keeps "gobbles" and "lace" as typed: searched through their relatives, or left out', () => {
+    const plan = buildPlan(parseQuery('gobbles tape'), withDictionary(['gobbles', 'lace'], [['gobbles', ['eat']]]), []);
+    expect(plan.corrections).toEqual([]);
+    expect(texts(plan.clauses).find((c) => c.label === 'gobbles')).toMatchObject({
+      terms: ['gobbles'],
+      alternatives: ['eat'],
+      dictionary: true,
+    });
+    const lace = buildPlan(parseQuery('lace'), withDictionary(['gobbles', 'lace']), []);
+    expect(lace.corrections).toEqual([]);
+    expect(lace.ignored).toEqual(['lace']);
+  });
+
+  it('still corrects a slip that is no English word', () => {
+    expect(buildPlan(parseQuery('tary'), withDictionary(['gobbles']), []).corrections).toEqual([{ from: 'tary', to: 'tray' }]);
+  });
+
+  it('reads two stored words run together as both words', () => {
+    const plan = buildPlan(parseQuery('takeup tray'), withDictionary([], [], { compounds: new Map([['takeup', 'take up']]) }), []);
+    expect(texts(plan.clauses).map((c) => c.label)).toEqual(['take', 'up', 'tray']);
+  });
+});
+
+describe('negations rank but never decide a match', () => {
+  it('makes "won\'t" and "not" soft, so "tray won\'t close" needs only tray and close', () => {
+    const plan = buildPlan(parseQuery("tray won't close"), vocabulary({ known: new Set(['tray', 'close', 'wont']) }), families);
+    const clauses = texts(plan.clauses);
+    expect(clauses.filter((c) => !c.soft).map((c) => c.label)).toEqual(['tray', 'close']);
+    expect(clauses.find((c) => c.label === 'wont')?.soft).toBe(true);
+    const plain = buildPlan(parseQuery('not reading'), vocabulary({ known: new Set(['not', 'reading']), stopwords: new Set() }), []);
+    expect(texts(plain.clauses).find((c) => c.label === 'not')?.soft).toBe(true);
+  });
+});

@@ -1,11 +1,10 @@
 // The Meilisearch provider: the same query analysis as PostgreSQL, Meilisearch for text matching, our order on top.
 import type { Knex } from 'knex';
 import { MAX_PAGE, type SearchQuery } from '@/lib/search/query-schema';
-import { MARK_END, MARK_START } from '@/lib/search/highlight';
 import { compareRanked, proximityOf, relevanceFromScore, type Rankable } from '@/lib/search/ranking';
 import type { SearchResult } from '@/lib/search/result-types';
 import type { TextClause } from '@/lib/search/plan';
-import { analyseQuery, type AnalysedQuery } from '../analyse';
+import { analyseQuery, highlightQuery, type AnalysedQuery } from '../analyse';
 import { resolveContext, type ResolvedMachine } from '../context';
 import { hydrateHits } from '../hydrate';
 import { emptyResult } from '../pg-provider';
@@ -26,7 +25,7 @@ export function meiliQueryText(analysed: AnalysedQuery): string {
   return [...analysed.hardText, ...analysed.softText].map((c) => clause(c.clause)).join(' ');
 }
 
-type Hit = MeiliFixDocument & { _rankingScore?: number; _formatted?: Partial<Record<keyof MeiliFixDocument, unknown>> };
+type Hit = MeiliFixDocument & { _rankingScore?: number };
 
 function proximityFor(hit: Hit, machine: ResolvedMachine | null) {
   const target = machine
@@ -56,35 +55,29 @@ export class MeiliSearchProvider implements SearchProvider {
       limit: Math.min(MAX_HITS, window + RERANK_MARGIN),
       offset: 0,
       showRankingScore: true,
-      attributesToRetrieve: ['id', 'machines', 'chassis', 'makers', 'benchScore'],
-      attributesToHighlight: ['title', 'symptoms'],
-      highlightPreTag: MARK_START,
-      highlightPostTag: MARK_END,
-      attributesToCrop: ['symptoms'],
-      cropLength: 24,
-      // A quoted phrase or a code no fix carries must be found, never dropped to widen the search.
-      matchingStrategy: analysed.hardText.some((c) => c.clause.exact) ? 'all' : 'last',
+      attributesToRetrieve: ['id', 'machines', 'chassis', 'makers', 'benchScore', 'reportCount'],
+      // Relaxation as PostgreSQL's: when not every word matches, the commonest words are dropped first, so the
+      // rarer concepts decide. A quoted phrase or a code no fix carries must be found, never dropped.
+      matchingStrategy: analysed.hardText.some((c) => c.clause.exact) ? 'all' : 'frequency',
     });
+    // The engine's score stands for the share of the query's concepts found, as PostgreSQL counts them.
+    const concepts = analysed.hardText.length + analysed.codes.length;
     const ranked = response.hits
       .map((hit) => ({
         fixId: hit.id,
-        relevance: relevanceFromScore(hit._rankingScore ?? 0),
+        relevance: relevanceFromScore(hit._rankingScore ?? 0, concepts),
         proximity: proximityFor(hit, context.machine),
         benchScore: hit.benchScore,
+        benchReports: hit.reportCount,
         matchedAll: true,
         hit,
       }))
       .sort((a: Rankable, b: Rankable) => compareRanked(a, b));
     const pageRows = ranked.slice((query.page - 1) * query.perPage, window);
-    const marks = new Map(
-      pageRows.map((r) => [
-        r.fixId,
-        { title: String(r.hit._formatted?.title ?? ''), snippet: String(r.hit._formatted?.symptoms ?? '').replace(/ \. /g, ' · ') },
-      ]),
-    );
     const total = response.estimatedTotalHits ?? response.hits.length;
     const [hits, facets] = await Promise.all([
-      hydrateHits(this.knex, pageRows, '', marks),
+      // Highlights come from the same analysis as PostgreSQL's, so snippets keep whole symptoms with either provider.
+      hydrateHits(this.knex, pageRows, highlightQuery(analysed)),
       facetsFromDistribution(this.knex, response.facetDistribution ?? {}),
     ]);
     return {
