@@ -14,7 +14,9 @@ export interface PhotoFigures {
 
 /** A photo-like 4000 × 3000 JPEG: blurred noise compresses like a real bench photo, not like a flat colour. */
 async function twelveMegapixelJpeg(): Promise<Buffer> {
-  return sharp({ create: { width: 4000, height: 3000, channels: 3, noise: { type: 'gaussian', mean: 128, sigma: 40 } } })
+  return sharp({
+    create: { width: 4000, height: 3000, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 40 } },
+  })
     .blur(1.2)
     .jpeg({ quality: 88 })
     .toBuffer();
@@ -33,7 +35,7 @@ export async function benchPhoto(base: string, cookie: string, serverPid: number
   })();
   try {
     const form = new FormData();
-    form.set('file', new Blob([jpeg], { type: 'image/jpeg' }), 'bench.jpg');
+    form.set('file', new Blob([new Uint8Array(jpeg)], { type: 'image/jpeg' }), 'bench.jpg');
     form.set('alt', 'A synthetic 12-megapixel photo for the benchmark.');
     const started = performance.now();
     const res = await fetch(`${base}/api/v1/photos`, { method: 'POST', body: form, headers: { cookie, origin: base } });
