@@ -57,7 +57,7 @@ describe('the duplicate warning on the writing page', () => {
     const link = notice(page).getByRole('link', { name: new RegExp(fix.title.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')) });
     await expect(link.getAttribute('href')).resolves.toBe(`/fixes/${SEEDED_FIX}`);
     await expect(link.getAttribute('target')).resolves.toBe('_blank');
-    await expect(notice(page).textContent()).resolves.toMatch(/Bench score \d+\/100 from \d+ bench reports?|No bench reports yet/);
+    await expect(notice(page).textContent()).resolves.toMatch(/Bench score [01]\.\d\d from \d+ bench reports?|No bench reports yet/);
 
     // A symptom like nothing written: the server answers no fixes, and the notice goes.
     const nothing = similarAnswer(page, 'quibbling');

@@ -23,7 +23,8 @@ describe('an editor', () => {
   it('opens word families and wanted fixes from the header and adds a word family', async () => {
     const journey = new Journey(browser);
     const page = await journey.page({ as: editor });
-    const nav = page.getByRole('navigation', { name: 'Main' });
+    // Staff pages sit in the header's second row, beside the main navigation.
+    const nav = page.getByRole('banner');
     // Invented words of this run only, so no other test's search changes.
     const suffix = Date.now().toString(36);
     const family = `Journey spindle ${suffix}`;

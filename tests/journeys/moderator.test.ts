@@ -45,9 +45,7 @@ describe('a moderator', () => {
 
     await journey.step('opens the proofing desk from the header and finds the new fix with its summary', async () => {
       await journey.goto(page, '/');
-      await journey.navigates(page, /\/proofing$/, () =>
-        page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Proofing desk' }).click(),
-      );
+      await journey.navigates(page, /\/proofing$/, () => page.getByRole('banner').getByRole('link', { name: 'Proofing desk' }).click());
       await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toMatch(/Proofing desk/);
       const row = page.getByRole('row').filter({ hasText: values.title });
       await sees(row);
@@ -64,8 +62,8 @@ describe('a moderator', () => {
     });
 
     await journey.step('returns it, giving the note in one place', async () => {
-      await expect(page.getByLabel(/What the author should change/).count()).resolves.toBe(1);
-      await page.getByLabel(/What the author should change/).fill(returnNote);
+      await expect(page.getByLabel('Note to the author').count()).resolves.toBe(1);
+      await page.getByLabel('Note to the author').fill(returnNote);
       await journey.navigates(page, /\/proofing\?returned=1$/, () =>
         page.getByRole('button', { name: 'Return it with this note' }).click(),
       );
@@ -90,9 +88,10 @@ describe('a moderator', () => {
       await sees(main.getByText(returnNote));
       await sees(main.getByText('Named C512 and its rating, as asked.'));
       await sees(main.getByRole('heading', { name: /returned r1/i }));
-      const cause = main.locator('section[aria-labelledby="d-cause"]').first();
-      await expect(cause.innerText()).resolves.toContain('C512, the 470 µF 16 V supply capacitor');
-      await expect(cause.innerText()).resolves.toContain('supply capacitor has dried out and its ripple');
+      // The cause as changed since the returned r1: the old wording struck, the board reference added.
+      const cause = main.locator('section[aria-labelledby="since-cause"]');
+      await expect(cause.locator('del').allInnerTexts()).resolves.toContainEqual(expect.stringContaining('The capstan motor driver’s'));
+      await expect(cause.locator('ins').allInnerTexts()).resolves.toContainEqual(expect.stringContaining('C512, the 470 µF 16 V'));
     });
 
     await journey.step('proofs it and sees the fix live', async () => {

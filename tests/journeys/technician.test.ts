@@ -82,7 +82,7 @@ describe('a bench technician', () => {
       await page.getByLabel('Note for other technicians').fill(longNote);
       // A reading without the value a good unit shows.
       await page.getByLabel('Reading 1: test point').fill('Rewind torque at the take-up reel');
-      await page.getByLabel('Reading 1: measured').fill('15 g·cm');
+      await page.getByLabel('Reading 1: what you measured').fill('15 g·cm');
       await journey.navigates(page, /\/fixes\/qm7-no-rewind-glazed-idler/, () =>
         page.getByRole('button', { name: 'Save the bench report' }).click(),
       );
@@ -91,17 +91,17 @@ describe('a bench technician', () => {
       await sees(page.getByText(/expected value, e\.g\./i));
       await expect(page.getByLabel('Note for other technicians').inputValue()).resolves.toBe(longNote);
       await expect(page.getByLabel('Reading 1: test point').inputValue()).resolves.toBe('Rewind torque at the take-up reel');
-      await expect(page.getByLabel('Reading 1: measured').inputValue()).resolves.toBe('15 g·cm');
+      await expect(page.getByLabel('Reading 1: what you measured').inputValue()).resolves.toBe('15 g·cm');
       expect(page.url().length).toBeLessThan(300);
       expect(decodeURIComponent(page.url())).not.toContain('idler tyre was glazed');
     });
 
     await journey.step('gives the expected value and sees the report saved with its note and reading', async () => {
-      await page.getByLabel('Reading 1: expected').fill('40 to 60 g·cm');
+      await page.getByLabel('Reading 1: what a good unit shows').fill('40 to 60 g·cm');
       await journey.navigates(page, /\/fixes\/qm7-no-rewind-glazed-idler/, () =>
         page.getByRole('button', { name: 'Save the bench report' }).click(),
       );
-      await sees(page.getByText(/Your report on the .*: Fixed/));
+      await sees(page.getByText('Your bench report is saved.'));
       // Other technicians' notes and readings are what a bench needs: both show on the fix page.
       await sees(page.getByText('worth replacing the idler spring along with the tyre'));
       await sees(page.getByText('Rewind torque at the take-up reel'));

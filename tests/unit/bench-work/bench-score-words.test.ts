@@ -1,6 +1,6 @@
 // The bench score in a technician's words and the shares of its bar.
 import { describe, expect, it } from 'vitest';
-import { benchScoreBar, benchScoreInWords } from '@/components/bench-score-words';
+import { benchScoreBar, benchScoreInWords } from '@/lib/bench/bench-score-words';
 
 const counts = (over: Partial<Parameters<typeof benchScoreInWords>[0]>) => ({
   counted: 0,

@@ -37,9 +37,9 @@ describe('word family form', () => {
 
 describe('benchScoreText', () => {
   it('always says how many reports the score rests on', () => {
-    // 8 fixed of 10 gives a Wilson lower bound of 0.4902 at 95 % (Wilson 1927); shown as 49/100.
-    expect(benchScoreText(0.4902, 10)).toBe('Bench score 49/100 from 10 bench reports');
-    expect(benchScoreText(0.2065, 1)).toBe('Bench score 21/100 from 1 bench report');
+    // 8 fixed of 10 gives a Wilson lower bound of 0.4902 at 95 % (Wilson 1927); shown as 0.49.
+    expect(benchScoreText(0.4902, 10)).toBe('Bench score 0.49 from 10 bench reports');
+    expect(benchScoreText(0.2065, 1)).toBe('Bench score 0.21 from 1 bench report');
     expect(benchScoreText(null, 0)).toBe('No bench reports yet');
   });
 });

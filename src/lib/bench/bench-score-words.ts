@@ -1,7 +1,14 @@
 // The bench score told in a technician's words: counts by outcome and how much the reports so far can say.
-import type { BenchScoreView } from '@/server/bench-scores';
-
-type Counts = Pick<BenchScoreView, 'counted' | 'fixed' | 'partly' | 'notFixed' | 'cameBack' | 'ownReports'>;
+/** The counts a bench score rests on (the fix author's own reports are shown, not counted). */
+export interface BenchCounts {
+  counted: number;
+  fixed: number;
+  partly: number;
+  notFixed: number;
+  cameBack: number;
+  ownReports: number;
+}
+type Counts = BenchCounts;
 
 /** Below this many counted reports the Wilson bound stays low whatever they say (5 of 5 fixed scores 0.57). */
 export const FEW_REPORTS = 10;
