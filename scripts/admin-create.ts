@@ -2,10 +2,10 @@
 // Without --password it prints a one-time link to choose one (valid one hour).
 import { parseArgs } from 'node:util';
 import { z } from 'zod';
-import { readConfig } from '../src/server/config.ts';
+import { readConfig } from '../src/server/core/config.ts';
 import { displayNameSchema, emailSchema, newPasswordSchema } from '../src/lib/schemas/account.ts';
-import { db, closeDb } from '../src/server/db.ts';
-import { writeAudit } from '../src/server/audit.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
+import { writeAudit } from '../src/server/core/audit.ts';
 import { hashPassword } from '../src/server/auth/passwords.ts';
 import { passwordWeaknesses } from '../src/server/auth/password-strength.ts';
 import { issueToken } from '../src/server/auth/user-tokens.ts';

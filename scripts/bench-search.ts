@@ -8,7 +8,7 @@
     naive    – one ILIKE per word over the text columns, AND-ed, best bench score first, LIMIT 10 (no facets)
   Usage: npm run bench:search [-- --sizes 10000,100000 --rounds 5]
 */
-import { readConfig } from '../src/server/config.ts';
+import { readConfig } from '../src/server/core/config.ts';
 import { ensureDatabase, run } from './lib/prepare.ts';
 
 const DB = 'benchlore_bench';
@@ -34,7 +34,7 @@ await ensureDatabase(env, { fresh: true });
 run(process.execPath, ['--import', 'tsx', 'scripts/migrate.ts'], env);
 
 // Imported only now: the app's Knex reads BENCHLORE_DB_NAME when it is first loaded.
-const { db, closeDb } = await import('../src/server/db.ts');
+const { db, closeDb } = await import('../src/server/core/db.ts');
 const { seedCatalogue } = await import('../src/server/seed/seed-catalogue.ts');
 const { seededRandom, pick } = await import('../src/server/seed/prng.ts');
 const { PostgresSearchProvider } = await import('../src/server/search/pg-provider.ts');

@@ -49,7 +49,7 @@ if (only.has('pages') || only.has('photos')) {
   const { benchPages, pagesTable } = await import('./bench/pages.ts');
   const { benchPhoto, photoTable } = await import('./bench/photos.ts');
   const { signIn } = await import('../tests/support/sign-in.ts');
-  const { db, closeDb } = await import('../src/server/db.ts');
+  const { db, closeDb } = await import('../src/server/core/db.ts');
   const server = await startBenchServer(PORT, env);
   try {
     const cookie = await signIn(server.base, 'member@example.test', 'bench-demo-2026', '127.0.0.1');

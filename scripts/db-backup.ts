@@ -1,8 +1,8 @@
 // `npm run db:backup [-- --out FILE]`: the database and the photo store in one checked file.
 import { join } from 'node:path';
 import { parseArgs } from 'node:util';
-import { config, databaseUrl } from '../src/server/config.ts';
-import { db, closeDb } from '../src/server/db.ts';
+import { config, databaseUrl } from '../src/server/core/config.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { storage } from '../src/server/storage/index.ts';
 import { createBackup } from '../src/server/backup/backup.ts';
 import { ensureDatabase } from './lib/prepare.ts';

@@ -1,7 +1,7 @@
 // `npm run db:check [-- --collect] [-- --grace-minutes N]`: integrity of the database and the photo store.
 // Exits 1 when anything is wrong; orphan photo files are deleted with --collect (older than the grace period).
 import { parseArgs } from 'node:util';
-import { db, closeDb } from '../src/server/db.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { storage } from '../src/server/storage/index.ts';
 import { checkDatabase } from '../src/server/integrity/checks.ts';
 import { checkPhotoFiles } from '../src/server/integrity/photo-files.ts';

@@ -1,6 +1,6 @@
 // `npm run db:restore -- FILE`: restores a backup into the configured database, which must be empty.
-import { config, databaseUrl } from '../src/server/config.ts';
-import { db, closeDb } from '../src/server/db.ts';
+import { config, databaseUrl } from '../src/server/core/config.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { storage } from '../src/server/storage/index.ts';
 import { restoreBackup, RestoreError } from '../src/server/backup/restore.ts';
 import { ensureDatabase } from './lib/prepare.ts';

@@ -1,5 +1,5 @@
 // `npm run db -- <start|stop|status|ensure>`: manages the local PostgreSQL cluster.
-import { readConfig } from '../src/server/config.ts';
+import { readConfig } from '../src/server/core/config.ts';
 import * as localPg from './lib/local-pg.ts';
 
 const command = process.argv[2] ?? 'status';

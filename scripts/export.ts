@@ -1,8 +1,8 @@
 // `npm run export [-- --out DIR]`: the proofed knowledge as JSON Lines with a manifest, under its licence.
 import { join } from 'node:path';
 import { parseArgs } from 'node:util';
-import { config } from '../src/server/config.ts';
-import { db, closeDb } from '../src/server/db.ts';
+import { config } from '../src/server/core/config.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { writeKnowledgeExport } from '../src/server/export/knowledge-export.ts';
 
 const { values } = parseArgs({ options: { out: { type: 'string' } } });

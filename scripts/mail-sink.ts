@@ -1,7 +1,7 @@
 // A local SMTP sink on 127.0.0.1: accepts every message and keeps it as JSON under <data>/mail (or BENCHLORE_MAIL_DIR).
 import { SMTPServer } from 'smtp-server';
 import { simpleParser, type AddressObject } from 'mailparser';
-import { readConfig } from '../src/server/config.ts';
+import { readConfig } from '../src/server/core/config.ts';
 import { mailDir, storeMail } from '../src/server/mail/sink-store.ts';
 
 const config = readConfig();

@@ -1,5 +1,5 @@
 // `npm run photos:cleanup`: removes photos never attached to a submitted revision, older than a day (the server also runs it hourly).
-import { db, closeDb } from '../src/server/db.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { cleanupAbandonedPhotos } from '../src/server/photos/cleanup.ts';
 
 try {

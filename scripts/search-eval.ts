@@ -7,7 +7,7 @@
   beside them, and every failing case.
   Usage: npm run search:eval [-- --provider postgres|meilisearch] [-- --scopes machine,all]
 */
-import { readConfig } from '../src/server/config.ts';
+import { readConfig } from '../src/server/core/config.ts';
 import { ensureDatabase, migrateAndSeed } from './lib/prepare.ts';
 
 const arg = (name: string, fallback: string) => {
@@ -32,7 +32,7 @@ await ensureDatabase(env, { fresh: true });
 migrateAndSeed(env);
 
 // Imported only now: the app's Knex reads BENCHLORE_DB_NAME when it is first loaded.
-const { db, closeDb } = await import('../src/server/db.ts');
+const { db, closeDb } = await import('../src/server/core/db.ts');
 const { PostgresSearchProvider } = await import('../src/server/search/pg-provider.ts');
 const { MeiliSearchProvider } = await import('../src/server/search/meili/meili-provider.ts');
 const { MeiliIndex } = await import('../src/server/search/meili/index-client.ts');

@@ -1,6 +1,6 @@
 // `npm run search:reindex`: rebuilds every fix's search row and the vocabularies, then Meilisearch when MEILI_URL is set.
-import { config } from '../src/server/config.ts';
-import { db, closeDb } from '../src/server/db.ts';
+import { config } from '../src/server/core/config.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { MeiliIndex } from '../src/server/search/meili/index-client.ts';
 import { reindexMeili, reindexPostgres } from '../src/server/search/reindex.ts';
 

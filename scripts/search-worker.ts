@@ -1,6 +1,6 @@
 // `npm run search:worker`: works the Meilisearch sync queue in a process of its own (the app server also does, once asked to search).
-import { config } from '../src/server/config.ts';
-import { db, closeDb } from '../src/server/db.ts';
+import { config } from '../src/server/core/config.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { MeiliIndex } from '../src/server/search/meili/index-client.ts';
 import { startSearchSyncWorker } from '../src/server/search/sync-worker.ts';
 

@@ -1,5 +1,5 @@
 // `npm run db:seed`: seeds the invented demo world (idempotent).
-import { db, closeDb } from '../src/server/db.ts';
+import { db, closeDb } from '../src/server/core/db.ts';
 import { seedDemoWorld } from '../src/server/seed/seed-demo-world.ts';
 
 try {

@@ -3,7 +3,7 @@ import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { randomBytes } from 'node:crypto';
 import { join } from 'node:path';
-import { readConfig } from '../src/server/config.ts';
+import { readConfig } from '../src/server/core/config.ts';
 import { buildIfStale, ensureDatabase, migrateAndSeed } from './lib/prepare.ts';
 import { mailDir } from '../src/server/mail/sink-store.ts';
 import { startMailSink } from '../src/server/mail/sink-process.ts';

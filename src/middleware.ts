@@ -1,11 +1,11 @@
 // Request pipeline: background work started once, security headers, no 500 page leaking a stack trace, who is asking, the route guard.
 import { defineMiddleware, sequence } from 'astro:middleware';
-import { applySecurityHeaders } from '@/server/security-headers';
-import { logger } from '@/server/logger';
+import { applySecurityHeaders } from '@/server/http/security-headers';
+import { logger } from '@/server/core/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/auth/route-guard';
-import { routeAccess } from '@/server/route-access';
-import { startBackgroundWork } from '@/server/background';
+import { routeAccess } from '@/server/auth/route-access';
+import { startBackgroundWork } from '@/server/core/background';
 
 /** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
 function editable(response: Response): Response {

@@ -1,6 +1,6 @@
 // Shared set-up for `npm start` and `npm test`: database up and migrated, demo world seeded, server built.
 import { spawnSync } from 'node:child_process';
-import { readConfig } from '../../src/server/config.ts';
+import { readConfig } from '../../src/server/core/config.ts';
 import * as localPg from './local-pg.ts';
 import { buildIsCurrent, distDir, markBuilt } from './build-stamp.ts';
 

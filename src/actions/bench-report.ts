@@ -1,8 +1,8 @@
 // The bench report form (fix page and job sheet) as an Action: saved, or refused with everything typed kept.
 import type { ActionAPIContext } from 'astro:actions';
 import { can } from '@/lib/permissions';
-import { fieldErrors } from '@/server/http';
-import { benchReportFromForm, consumeLimit, saveBenchReport } from '@/server/bench-reports';
+import { fieldErrors } from '@/server/http/responses';
+import { benchReportFromForm, consumeLimit, saveBenchReport } from '@/server/bench-work/bench-reports';
 import { benchFormFields, benchRefusal, benchReportInputSchema, typedFields, type FormActionResult } from '@/lib/schemas/bench-work';
 
 export type BenchReportFormResult = FormActionResult<{ fix: string; counted: boolean }>;

@@ -1,8 +1,8 @@
 // The fix page's "something wrong with this fix" form as an Action: sent, or refused with what was typed kept.
 import type { ActionAPIContext } from 'astro:actions';
 import { can } from '@/lib/permissions';
-import { fieldErrors } from '@/server/http';
-import { createReport, reportInputSchema } from '@/server/reports';
+import { fieldErrors } from '@/server/http/responses';
+import { createReport, reportInputSchema } from '@/server/fixes/reports';
 import { formText, typedFields, type FormActionResult } from '@/lib/schemas/bench-work';
 
 export type ReportFixFormResult = FormActionResult<{ fix: string }>;

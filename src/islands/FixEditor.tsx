@@ -2,7 +2,7 @@
 import { useState } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { FixForm } from './editor/FixForm';
-import type { FixEditorProps } from './editor/types';
+import type { FixEditorProps } from '../lib/writing/editor-data';
 
 export default function FixEditor(props: FixEditorProps) {
   const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: false } } }));

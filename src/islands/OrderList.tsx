@@ -1,6 +1,6 @@
 // Order list island: the parts to buy, merged by canonical spec, kept in this browser or with the member's account.
 import type { ReactElement } from 'react';
-import type { StoredLine } from './tools/model/order-list';
+import type { StoredLine } from '../lib/tools/order-list';
 import type { SaveState } from './tools/order-list/account-store';
 import { ListControls } from './tools/order-list/ListControls';
 import { OrderTable } from './tools/order-list/OrderTable';

@@ -2,7 +2,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { precheckPhoto, uploadPhoto, waitForPhoto } from './editor/upload-xhr';
 import { imageFilesOf } from './editor/paste';
-import type { PhotoRefData } from './editor/types';
+import type { PhotoRefData } from '../lib/writing/editor-data';
 
 type ItemStatus = 'describe' | 'uploading' | 'processing' | 'done' | 'error';
 

@@ -5,11 +5,11 @@ import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, PASSWORD } from '../integration/bench-work-support';
-import { createHandoverNote } from '@/server/handover-notes';
-import { createJobSheet } from '@/server/job-sheets';
+import { createHandoverNote } from '@/server/bench-work/handover-notes';
+import { createJobSheet } from '@/server/bench-work/job-sheets';
 import { handoverNoteInputSchema, jobSheetCreateSchema } from '@/lib/schemas/bench-work';
 import { cautionKinds } from '@/lib/schemas/revision';
-import { closeDb } from '@/server/db';
+import { closeDb } from '@/server/core/db';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;
 let browser: Browser;

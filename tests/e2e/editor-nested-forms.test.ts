@@ -2,7 +2,7 @@
 // server sends (where the browser would silently drop the inner form) and, for pages with islands, in Chromium's DOM.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { routeAccess } from '@/server/route-access';
+import { routeAccess } from '@/server/auth/route-access';
 import { launchBrowser } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';

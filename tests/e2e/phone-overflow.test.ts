@@ -7,11 +7,11 @@ import { testDb } from '../support/db';
 import { createUser, signIn, type TestUser } from '../support/sign-in';
 import { describeOverflow, horizontalOverflow } from '../support/overflow';
 import { call, completeValues, someMachineId } from '../fixtures/writing';
-import { addToOrderList, fixPartsForOrder } from '@/server/order-lists';
-import { applyFixToJob, createJobSheet } from '@/server/job-sheets';
-import { createHandoverNote } from '@/server/handover-notes';
+import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
+import { applyFixToJob, createJobSheet } from '@/server/bench-work/job-sheets';
+import { createHandoverNote } from '@/server/bench-work/handover-notes';
 import { handoverNoteInputSchema, jobSheetCreateSchema } from '@/lib/schemas/bench-work';
-import { closeDb } from '@/server/db';
+import { closeDb } from '@/server/core/db';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;
 const PHONE = { width: 360, height: 740 };

@@ -1,6 +1,6 @@
 // Which client address a rate limit counts: the socket's, or the one our trusted proxies saw; never a value a client wrote.
 import { describe, expect, it } from 'vitest';
-import { clientKey, limitSpecs } from '@/server/rate-limit';
+import { clientKey, limitSpecs } from '@/server/http/rate-limit';
 import { testDb } from '../support/db';
 
 describe('clientKey', () => {

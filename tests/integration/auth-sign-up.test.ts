@@ -181,7 +181,7 @@ describe('joining with an address', () => {
   it('rate-limits joining per address with a 429 and Retry-After', async () => {
     const email = uniqueEmail('limit');
     const statuses: number[] = [];
-    // Three sign-ups per address per hour (src/server/rate-limit.ts), each from a different client.
+    // Three sign-ups per address per hour (src/server/http/rate-limit.ts), each from a different client.
     for (let i = 0; i < 4; i++) statuses.push((await signUp({ name: 'Limit Tester', email, password: STRONG_PASSWORD })).status);
     expect(statuses).toEqual([303, 303, 303, 429]);
     const limited = await signUp({ name: 'Limit Tester', email, password: STRONG_PASSWORD });

@@ -3,7 +3,7 @@ import { readdirSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { can, type Actor } from '@/lib/permissions';
-import { routeAccess, type Access, type RouteMethod } from '@/server/route-access';
+import { routeAccess, type Access, type RouteMethod } from '@/server/auth/route-access';
 import { INTEGRATION_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { createUser, signIn } from '../support/sign-in';
@@ -64,7 +64,7 @@ describe('route table', () => {
       .filter((file) => !routeAccess[routePatternOf(file)])
       .map(
         (file) =>
-          `${relative(process.cwd(), file)} has no entry: add '${routePatternOf(file)}' to routeAccess in src/server/route-access.ts`,
+          `${relative(process.cwd(), file)} has no entry: add '${routePatternOf(file)}' to routeAccess in src/server/auth/route-access.ts`,
       );
     expect(missing, `\n${missing.join('\n')}\n`).toEqual([]);
   });
@@ -73,7 +73,7 @@ describe('route table', () => {
     const patterns = new Set(routeFiles().map(routePatternOf));
     const stale = Object.entries(routeAccess)
       .filter(([pattern, rule]) => !rule.injected && !patterns.has(pattern))
-      .map(([pattern]) => `${pattern} is in src/server/route-access.ts but no file under src/pages makes it`);
+      .map(([pattern]) => `${pattern} is in src/server/auth/route-access.ts but no file under src/pages makes it`);
     expect(stale, `\n${stale.join('\n')}\n`).toEqual([]);
   });
 

@@ -12,10 +12,10 @@ import {
   listJobSheets,
   removeFixFromJob,
   updateJobSheet,
-} from '@/server/job-sheets';
-import { createHandoverNote } from '@/server/handover-notes';
+} from '@/server/bench-work/job-sheets';
+import { createHandoverNote } from '@/server/bench-work/handover-notes';
 import { handoverNoteInputSchema, jobSheetCreateSchema, jobSheetListQuerySchema, jobSheetPatchSchema } from '@/lib/schemas/bench-work';
-import { closeDb } from '@/server/db';
+import { closeDb } from '@/server/core/db';
 
 const knex = testDb();
 let world: TestWorld;

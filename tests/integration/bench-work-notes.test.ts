@@ -2,11 +2,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, proofNewRevision, type TestFix, type TestWorld } from './bench-work-support';
-import { createHandoverNote, findPublicNote, getOwnNote, invoiceLine, listOwnNotes, revokeNote } from '@/server/handover-notes';
-import { createJobSheet, deleteJobSheet } from '@/server/job-sheets';
+import { createHandoverNote, findPublicNote, getOwnNote, invoiceLine, listOwnNotes, revokeNote } from '@/server/bench-work/handover-notes';
+import { createJobSheet, deleteJobSheet } from '@/server/bench-work/job-sheets';
 import { handoverNoteInputSchema, jobSheetCreateSchema } from '@/lib/schemas/bench-work';
 import { HANDOVER_ALPHABET } from '@/lib/handover-code';
-import { closeDb } from '@/server/db';
+import { closeDb } from '@/server/core/db';
 
 const knex = testDb();
 let world: TestWorld;

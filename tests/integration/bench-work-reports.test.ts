@@ -2,11 +2,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, type TestFix, type TestWorld } from './bench-work-support';
-import { eligibleMachines, listOwnBenchReports, saveBenchReport } from '@/server/bench-reports';
-import { benchCountsByRevision, benchScoresFor } from '@/server/bench-scores';
+import { eligibleMachines, listOwnBenchReports, saveBenchReport } from '@/server/bench-work/bench-reports';
+import { benchCountsByRevision, benchScoresFor } from '@/server/bench-work/bench-scores';
 import { benchReportInputSchema } from '@/lib/schemas/bench-work';
 import { wilsonLowerBound } from '@/lib/bench/bench-score';
-import { closeDb } from '@/server/db';
+import { closeDb } from '@/server/core/db';
 
 const knex = testDb();
 let world: TestWorld;

@@ -5,7 +5,7 @@ import knexConfig from '../../knexfile.js';
 import { testDb } from '../support/db';
 import { TEST_DB } from '../support/test-env';
 import { seedDemoWorld } from '@/server/seed/seed-demo-world';
-import { closeDb } from '@/server/db';
+import { closeDb } from '@/server/core/db';
 
 const knex = testDb();
 const count = async (db: Knex, sql: string): Promise<number> => Number((await db.raw(sql)).rows[0].n);

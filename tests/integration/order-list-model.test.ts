@@ -12,7 +12,7 @@ import {
   setQuantity,
   storedListCsv,
   type StoredLine,
-} from '@/islands/tools/model/order-list';
+} from '@/lib/tools/order-list';
 
 const row = (ref: string, value: string, rating: string, source = 'Dead after a storm (r2)', quantity = 1) => ({
   source,

@@ -1,6 +1,6 @@
 // The blind evaluation set as a regression floor: top-3 recall may not fall below the committed figures.
 import { describe, expect, it } from 'vitest';
-import { db } from '@/server/db';
+import { db } from '@/server/core/db';
 import { PostgresSearchProvider } from '@/server/search/pg-provider';
 import { demoFixes } from '@/server/seed/demo/fixes';
 import { figuresOf, loadCases, readFloor, reportLines, runEval } from '../search-eval/eval';

@@ -1,6 +1,6 @@
 // The Meilisearch adapter against a local fake of its HTTP API: settings, documents, requests, escaping, the sync queue.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { db } from '@/server/db';
+import { db } from '@/server/core/db';
 import { MeiliIndex } from '@/server/search/meili/index-client';
 import { MeiliSearchProvider } from '@/server/search/meili/meili-provider';
 import { buildFilter } from '@/server/search/meili/filter';

@@ -1,6 +1,6 @@
 // The PostgreSQL search provider on the demo world: codes, corrections, filters, facets, scope, order, paging, upkeep.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { db } from '@/server/db';
+import { db } from '@/server/core/db';
 import { PostgresSearchProvider } from '@/server/search/pg-provider';
 import { recordSearchMiss, listWantedFixes } from '@/server/search/misses';
 import { nearMatches } from '@/server/search/near-matches';

@@ -8,7 +8,7 @@
   mapping of its answers, never about ranking quality.
 */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { db } from '@/server/db';
+import { db } from '@/server/core/db';
 import { PostgresSearchProvider } from '@/server/search/pg-provider';
 import { MeiliSearchProvider } from '@/server/search/meili/meili-provider';
 import { MeiliIndex } from '@/server/search/meili/index-client';

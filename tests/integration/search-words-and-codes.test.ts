@@ -1,6 +1,6 @@
 // Codes typed loosely, snippets that keep whole symptoms, and words a dictionary knows, on the demo world.
 import { describe, expect, it } from 'vitest';
-import { db } from '@/server/db';
+import { db } from '@/server/core/db';
 import { PostgresSearchProvider } from '@/server/search/pg-provider';
 import type { SearchQuery } from '@/lib/search/query-schema';
 

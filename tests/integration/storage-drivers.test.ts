@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import S3rver from 's3rver';
-import { readConfig } from '@/server/config';
+import { readConfig } from '@/server/core/config';
 import { storageFromConfig } from '@/server/storage';
 import { localDiskStorage } from '@/server/storage/local-disk';
 import { s3Storage } from '@/server/storage/s3';

@@ -1,6 +1,6 @@
 // What the fix applies to: machines and chassis families, picked from the catalogue and shown as removable chips.
 import { CatalogueTypeahead, type LookupHit } from './CatalogueTypeahead';
-import type { LabelledRefData } from './types';
+import type { LabelledRefData } from '../../lib/writing/editor-data';
 
 interface AppliesToProps {
   machines: LabelledRefData[];

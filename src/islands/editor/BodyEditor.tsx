@@ -7,7 +7,7 @@ import { BodyToolbar } from './BodyToolbar';
 import { CautionPanel, FigurePanel, LinkPanel, ReadingPanel, type PanelName } from './body-panels';
 import { officeListsToHtmlLists } from './office-lists';
 import { imageFilesOf, pastedImageFiles } from './paste';
-import type { PhotoRefData } from './types';
+import type { PhotoRefData } from '../../lib/writing/editor-data';
 
 interface BodyEditorProps {
   initial: unknown;

@@ -24,7 +24,7 @@ import { StaleBasePanel } from './StaleBasePanel';
 import { useAutosave } from './useAutosave';
 import { useRestoredStart } from './useRestoredStart';
 import { useSubmission } from './useSubmission';
-import type { EditorRevisionData, FixEditorProps, LabelledRefData, PhotoRefData } from './types';
+import type { EditorRevisionData, FixEditorProps, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 
 /** Enter in a one-line field never sends the revision to the desk: only the submit button does. */
 function keepEnterFromSubmitting(event: KeyboardEvent<HTMLFormElement>): void {

@@ -1,5 +1,5 @@
 // The photos attached to this revision: shown under the fix as its Photos section; each may also be placed in the remedy.
-import type { PhotoRefData } from './types';
+import type { PhotoRefData } from '../../lib/writing/editor-data';
 
 interface PhotoListProps {
   photos: PhotoRefData[];

@@ -8,7 +8,7 @@ import type { SimilarFix } from '@/lib/search/result-types';
 import { mergeSimilar, similarHeading, similarPath, similarRequests, type SimilarRequest } from '@/lib/search/similar-request';
 import { useDebounced } from '../search/use-live-search';
 import { callApi } from './api';
-import type { LabelledRefData } from './types';
+import type { LabelledRefData } from '../../lib/writing/editor-data';
 
 /** Longer than the search box's pause: the writer is composing a sentence, not hunting, and a warning should not flicker. */
 const WRITING_PAUSE_MS = 500;

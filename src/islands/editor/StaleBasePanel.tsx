@@ -2,7 +2,7 @@
 import { comparableFrom, diffRevisions, type ComparableRevision } from '@/lib/diff';
 import type { FixDraft } from '@/lib/schemas/fix-draft';
 import { cautionLabels, difficultyLabels } from '@/lib/schemas/revision';
-import type { EditorRevisionData, LabelledRefData, PhotoRefData } from './types';
+import type { EditorRevisionData, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 
 export type SectionName =
   'Title' | 'Machines' | 'Symptoms' | 'Cause' | 'Difficulty and time' | 'Cautions' | 'Remedy' | 'Parts' | 'Readings' | 'Photos';

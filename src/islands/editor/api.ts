@@ -1,6 +1,6 @@
 // The island's calls to /api/v1: JSON in and out, the one error shape read back, network failures told apart.
 import type { FixDraftInput } from '@/lib/schemas/fix-draft';
-import type { EditorRevisionData } from './types';
+import type { EditorRevisionData } from '../../lib/writing/editor-data';
 
 export interface ApiFailure {
   status: number;

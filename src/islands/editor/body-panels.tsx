@@ -6,7 +6,7 @@ import { cautionKinds, cautionLabels, type CautionKind } from '@/lib/schemas/rev
 import { isSafeLinkHref } from '@/lib/tiptap/urls';
 import { readingAttrsOf } from '@/lib/tiptap/nodes/reading';
 import { Panel, PanelField } from './Panel';
-import type { PhotoRefData } from './types';
+import type { PhotoRefData } from '../../lib/writing/editor-data';
 
 export type PanelName = 'link' | 'reading' | 'caution' | 'figure' | null;
 

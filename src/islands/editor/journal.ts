@@ -1,6 +1,6 @@
 // The browser's own copy of unsaved edits (localStorage, one entry per fix), so a lost connection or tab loses nothing.
 import type { FixDraftInput } from '@/lib/schemas/fix-draft';
-import type { LabelledRefData, PhotoRefData } from './types';
+import type { LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 
 export interface JournalEntry {
   version: 1;

@@ -1,6 +1,6 @@
 // Uploads one photo with XMLHttpRequest (for upload progress), then polls until its renditions are made.
 import { callApi, type ApiResult } from './api';
-import type { PhotoRefData } from './types';
+import type { PhotoRefData } from '../../lib/writing/editor-data';
 
 export const MAX_PHOTO_BYTES = 12 * 1024 * 1024;
 export const acceptedTypes = ['image/jpeg', 'image/png', 'image/webp', 'image/avif'];

@@ -2,7 +2,7 @@
 import { useState } from 'react';
 import { withHeldFields, type FixDraftInput, type HeldFields } from '@/lib/schemas/fix-draft';
 import { journalScope, readJournal, shouldRestore } from './journal';
-import type { FixEditorProps, LabelledRefData, PhotoRefData } from './types';
+import type { FixEditorProps, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 
 export interface FormStart {
   values: FixDraftInput;

@@ -5,7 +5,7 @@ import type { FixDraft, FixDraftInput } from '@/lib/schemas/fix-draft';
 import { saveDraftRequest, submitDraftRequest } from './api';
 import type { SummaryItem } from './ErrorSummary';
 import { flattenErrors, serverFieldItems } from './form-helpers';
-import type { EditorRevisionData, LabelledRefData, PhotoRefData } from './types';
+import type { EditorRevisionData, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 import type { Autosave } from './useAutosave';
 
 interface SubmissionOptions {

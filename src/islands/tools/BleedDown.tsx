@@ -1,8 +1,8 @@
 // Bench tool island: bleed-down time of a stored charge through a resistor, with the decay drawn and tabled.
 import type { ReactElement } from 'react';
-import { bleedExample, bleedOutcome, type BleedField, type BleedOutcomeResult } from './model/bleed-down';
-import { queryFromFields } from './model/form-reader';
-import { duration, energy, quantityText, significant } from './model/format';
+import { bleedExample, bleedOutcome, type BleedField, type BleedOutcomeResult } from '../../lib/tools/bleed-down';
+import { queryFromFields } from '../../lib/tools/form-reader';
+import { duration, energy, quantityText, significant } from '../../lib/tools/format';
 import { LineChart } from './charts/LineChart';
 import { Field } from './ui/Field';
 import { NotYet, PrintedInputs } from './ui/ResultStates';

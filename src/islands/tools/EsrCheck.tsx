@@ -1,8 +1,8 @@
 // Bench tool island: the ESR a new general-purpose electrolytic may have, and a measured ESR judged against it.
 import type { ReactElement } from 'react';
-import { esrOutcome, type EsrField, type EsrResult } from './model/esr';
+import { esrOutcome, type EsrField, type EsrResult } from '../../lib/tools/esr';
 import { tableVoltagesText, type EsrReference } from '@/lib/bench/esr';
-import { quantityText, significant } from './model/format';
+import { quantityText, significant } from '../../lib/tools/format';
 import { Field } from './ui/Field';
 import { NotYet, PrintedInputs } from './ui/ResultStates';
 import { StatusMark } from './ui/StatusMark';

@@ -1,8 +1,8 @@
 // Bench tool island: electrolytic life by the 10-kelvin rule, with life against temperature drawn and tabled.
 import type { ReactElement } from 'react';
-import { queryFromFields } from './model/form-reader';
-import { celsius, hours, significant, years } from './model/format';
-import { lifeExample, lifeOutcome, type LifeField, type LifeOutcomeResult } from './model/life-estimate';
+import { queryFromFields } from '../../lib/tools/form-reader';
+import { celsius, hours, significant, years } from '../../lib/tools/format';
+import { lifeExample, lifeOutcome, type LifeField, type LifeOutcomeResult } from '../../lib/tools/life-estimate';
 import { HOURS_PER_YEAR } from '@/lib/bench/life';
 import { LineChart } from './charts/LineChart';
 import { Field } from './ui/Field';

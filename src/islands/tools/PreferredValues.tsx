@@ -1,8 +1,14 @@
 // Bench tool island: the nearest IEC 60063 preferred value (E3 to E192) to a value, with its neighbours.
 import type { ReactElement } from 'react';
 import { inDecade, seriesNames } from '@/lib/bench/preferred-values';
-import { preferredOutcome, preferredQuantities, DEFAULT_SERIES, type PreferredField, type PreferredResult } from './model/preferred-values';
-import { percent, quantityText } from './model/format';
+import {
+  preferredOutcome,
+  preferredQuantities,
+  DEFAULT_SERIES,
+  type PreferredField,
+  type PreferredResult,
+} from '../../lib/tools/preferred-values';
+import { percent, quantityText } from '../../lib/tools/format';
 import { Field, SelectField } from './ui/Field';
 import { NotYet, PrintedInputs } from './ui/ResultStates';
 import { Figures, ToolShell } from './ui/ToolShell';

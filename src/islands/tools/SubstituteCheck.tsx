@@ -1,8 +1,8 @@
 // Bench tool island: can this electrolytic replace the original? Each rule with its reason, the worst one wins.
 import type { ReactElement } from 'react';
 import type { CheckName, SubstituteResult } from '@/lib/bench/substitute';
-import { queryFromFields } from './model/form-reader';
-import { substituteExample, substituteOutcome, type SubstituteField } from './model/substitute-check';
+import { queryFromFields } from '../../lib/tools/form-reader';
+import { substituteExample, substituteOutcome, type SubstituteField } from '../../lib/tools/substitute-check';
 import { Field } from './ui/Field';
 import { NotYet, PrintedInputs } from './ui/ResultStates';
 import { StatusMark } from './ui/StatusMark';

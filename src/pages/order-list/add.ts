@@ -9,9 +9,9 @@
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { slugSchema } from '@/lib/schemas/slug';
-import { addToOrderList, fixPartsForOrder } from '@/server/order-lists';
-import { orderListOwner } from '@/server/tools/member';
-import { readFormBody } from '@/server/tools/request-body';
+import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
+import { orderListOwner } from '@/server/bench-work/order-list-owner';
+import { readFormBody } from '@/server/http/body';
 
 const emptyToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v);
 

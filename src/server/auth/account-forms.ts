@@ -2,8 +2,8 @@
 // deleting the account.
 import { deleteAccountSchema, emailChangeSchema, passwordChangeSchema, profileSchema } from '@/lib/schemas/account';
 import type { SessionUser } from '@/lib/permissions';
-import { fieldErrors } from '../http';
-import { check, consume } from '../rate-limit';
+import { fieldErrors } from '../http/responses';
+import { check, consume } from '../http/rate-limit';
 import { resendConfirmation } from './email-verification';
 import { requestEmailChange } from './email-change';
 import { formInput } from '@/lib/schemas/account-forms';

@@ -2,9 +2,9 @@
 import type { Knex } from 'knex';
 import { can, type Role, type SessionUser } from '@/lib/permissions';
 import { roleChangeSchema, suspendSchema, unsuspendSchema } from '@/lib/schemas/account';
-import { db } from '../db';
-import { writeAudit } from '../audit';
-import { fieldErrors } from '../http';
+import { db } from '../core/db';
+import { writeAudit } from '../core/audit';
+import { fieldErrors } from '../http/responses';
 import { sendInBackground } from '../mail/send';
 import { suspendedMail } from '../mail/templates';
 import { siteUrl } from './sign-up';

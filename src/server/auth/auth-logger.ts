@@ -1,6 +1,6 @@
 // Auth.js's log lines into our logger; a wrong password is routine, not an error.
 import type { AuthConfig } from '@auth/core';
-import { logger } from '../logger';
+import { logger } from '../core/logger';
 
 const routine = new Set(['CredentialsSignin', 'Verification', 'AccessDenied', 'MissingCSRF']);
 

@@ -1,8 +1,8 @@
 // Deleting an account anonymises it: contributions stay, credited to "a former member"; private records go.
 import { randomBytes } from 'node:crypto';
 import type { Knex } from 'knex';
-import { db } from '../db';
-import { writeAudit } from '../audit';
+import { db } from '../core/db';
+import { writeAudit } from '../core/audit';
 
 export const FORMER_MEMBER_NAME = 'a former member';
 

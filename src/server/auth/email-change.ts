@@ -1,8 +1,8 @@
 // Changing an account's e-mail address: a link goes to the new address, and only opening it changes the
 // account (the old address is told afterwards). Answers never say whether the new address has an account.
-import { db } from '../db';
-import { writeAudit } from '../audit';
-import { consume } from '../rate-limit';
+import { db } from '../core/db';
+import { writeAudit } from '../core/audit';
+import { consume } from '../http/rate-limit';
 import { sendInBackground } from '../mail/send';
 import { addressChangedMail, confirmNewAddressMail } from '../mail/templates';
 import type { SessionUser } from '@/lib/permissions';

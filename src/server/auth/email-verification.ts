@@ -1,5 +1,5 @@
 // Confirming an e-mail address with our own single-use token, and sending a fresh confirmation mail.
-import { consume } from '../rate-limit';
+import { consume } from '../http/rate-limit';
 import { sendInBackground } from '../mail/send';
 import { confirmAddressMail } from '../mail/templates';
 import type { SessionUser } from '@/lib/permissions';

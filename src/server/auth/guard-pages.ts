@@ -39,7 +39,7 @@ export function notServedPage(): string {
   return page('Not served here', ['This address does not answer that kind of request.'], [['/', 'Back to the front page']]);
 }
 
-/** Fails closed: a route missing from src/server/route-access.ts is refused until someone lists it. */
+/** Fails closed: a route missing from src/server/auth/route-access.ts is refused until someone lists it. */
 export function unlistedPage(): string {
   return page(
     'Not open yet',

@@ -1,8 +1,8 @@
 // Forgotten passwords: a one-hour, single-use link by e-mail, then a new password that ends every session.
 import { emailRequestSchema, resetPasswordSchema } from '@/lib/schemas/account';
-import { db } from '../db';
-import { fieldErrors } from '../http';
-import { consume } from '../rate-limit';
+import { db } from '../core/db';
+import { fieldErrors } from '../http/responses';
+import { consume } from '../http/rate-limit';
 import { sendInBackground } from '../mail/send';
 import { noAccountMail, resetPasswordMail } from '../mail/templates';
 import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';

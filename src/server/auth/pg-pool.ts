@@ -1,6 +1,6 @@
 // A small pg Pool for Auth.js's PostgreSQL adapter (Knex keeps its own pool for everything else).
 import pg from 'pg';
-import { config, databaseUrl } from '../config';
+import { config, databaseUrl } from '../core/config';
 
 let pool: pg.Pool | undefined;
 

@@ -1,8 +1,8 @@
 // The middleware's guard: looks the route up in route-access.ts and answers 401/redirect, 403 or 405 before any page runs.
 import { can, type SessionUser } from '@/lib/permissions';
-import { json } from '../http';
-import { logger } from '../logger';
-import { decideRoute, type Access } from '../route-access';
+import { json } from '../http/responses';
+import { logger } from '../core/logger';
+import { decideRoute, type Access } from './route-access';
 import { forbiddenPage, notServedPage, unlistedPage } from './guard-pages';
 
 interface GuardContext {
@@ -57,8 +57,8 @@ export function guardRequest(context: GuardContext, user: SessionUser | null): R
   const decision = decideRoute(context.routePattern, context.request.method);
   const api = isApi(context.routePattern);
   if (decision.kind === 'unlisted') {
-    logger().error({ route: context.routePattern }, 'route missing from src/server/route-access.ts: refused');
-    const message = `The route ${context.routePattern} has no entry in src/server/route-access.ts.`;
+    logger().error({ route: context.routePattern }, 'route missing from src/server/auth/route-access.ts: refused');
+    const message = `The route ${context.routePattern} has no entry in src/server/auth/route-access.ts.`;
     return api ? errorJson(403, 'forbidden', message) : html(403, unlistedPage());
   }
   if (decision.kind === 'method_not_allowed' || decision.access === 'closed') {

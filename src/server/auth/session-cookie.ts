@@ -1,7 +1,7 @@
 // The Auth.js session cookie: its name, reading the signed-in user id from it, and clearing it.
 import { getToken } from '@auth/core/jwt';
 import type { AstroCookies } from 'astro';
-import { config } from '../config';
+import { config } from '../core/config';
 
 /** Secure cookies (and their __Secure- prefix) whenever the public address is https. */
 export function useSecureCookies(): boolean {

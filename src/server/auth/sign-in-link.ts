@@ -1,5 +1,5 @@
 // The e-mailed sign-in link (Auth.js's Nodemailer provider): what to send, and where the link lands.
-import { config } from '../config';
+import { config } from '../core/config';
 import { sendInBackground } from '../mail/send';
 import { noAccountMail, signInLinkMail, suspendedMail } from '../mail/templates';
 import { findUserByEmail } from './users';

@@ -1,7 +1,7 @@
 // The sign-in page's two forms: password (Credentials) and "e-mail me a link" (Nodemailer), rate-limited.
 import { emailRequestSchema, signInSchema } from '@/lib/schemas/account';
-import { fieldErrors } from '../http';
-import { check, consume, forgive } from '../rate-limit';
+import { fieldErrors } from '../http/responses';
+import { check, consume, forgive } from '../http/rate-limit';
 import { signInWithPassword, requestSignInLink } from './auth-js';
 import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';
 import { findUserByEmail } from './users';

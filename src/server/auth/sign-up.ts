@@ -1,8 +1,8 @@
 // Joining: a new member with a hashed password, signed in at once, and a confirmation mail; an address already in use gets a note instead.
 import { signUpSchema } from '@/lib/schemas/account';
-import { config } from '../config';
-import { fieldErrors } from '../http';
-import { consume } from '../rate-limit';
+import { config } from '../core/config';
+import { fieldErrors } from '../http/responses';
+import { consume } from '../http/rate-limit';
 import { sendInBackground } from '../mail/send';
 import { alreadyJoinedMail, confirmAddressMail } from '../mail/templates';
 import { formInput } from '@/lib/schemas/account-forms';

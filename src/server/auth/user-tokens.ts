@@ -2,7 +2,7 @@
 // only as a hash).
 import { createHash, randomBytes } from 'node:crypto';
 import type { Knex } from 'knex';
-import { db } from '../db';
+import { db } from '../core/db';
 
 export type TokenPurpose = 'verify_email' | 'reset_password' | 'change_email';
 

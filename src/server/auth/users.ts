@@ -1,6 +1,6 @@
 // Reading and writing accounts in the users table: lookups, sign-up, profile, password, confirmation.
 import type { Knex } from 'knex';
-import { db } from '../db';
+import { db } from '../core/db';
 import { isRole, type Role, type SessionUser } from '@/lib/permissions';
 
 export interface UserRow {

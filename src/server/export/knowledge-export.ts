@@ -7,7 +7,7 @@ import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { once } from 'node:events';
 import type { Knex } from 'knex';
-import { getFix } from '../fixes';
+import { getFix } from '../fixes/fixes';
 import { mediaUrl } from '../storage';
 import type { Rendition } from '../photos/renditions';
 

@@ -1,6 +1,6 @@
 // Sending our messages: always a plain-text and an HTML part, from MAIL_FROM.
-import { config } from '../config';
-import { logger } from '../logger';
+import { config } from '../core/config';
+import { logger } from '../core/logger';
 import { mailTransport } from './transport';
 
 export interface OutgoingMail {

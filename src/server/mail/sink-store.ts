@@ -3,7 +3,7 @@ import { mkdir, readFile, readdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { randomBytes } from 'node:crypto';
 import { z } from 'zod';
-import type { Config } from '../config';
+import type { Config } from '../core/config';
 
 export const storedMailSchema = z.object({
   id: z.string(),

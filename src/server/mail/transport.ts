@@ -1,7 +1,7 @@
 // The one nodemailer transport: SMTP_URL when set, otherwise the local sink on 127.0.0.1.
 import { createTransport, type Transporter } from 'nodemailer';
 import type SMTPTransport from 'nodemailer/lib/smtp-transport';
-import { config, type Config } from '../config';
+import { config, type Config } from '../core/config';
 
 /** Connection settings, also handed to Auth.js's Nodemailer provider so both send the same way. */
 export function smtpServer(settings: Pick<Config, 'SMTP_URL' | 'SMTP_SINK_PORT'> = config()): string | SMTPTransport.Options {

@@ -1,6 +1,6 @@
 // Removes uploads nobody used: photos never attached to a revision past draft, older than a day.
 import type { Knex } from 'knex';
-import { logger } from '../logger';
+import { logger } from '../core/logger';
 import { storage } from '../storage';
 import type { Rendition } from './renditions';
 

@@ -2,7 +2,7 @@
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
 import { z } from 'zod';
-import { issuesToFields, refuse, succeed, type Outcome, type Writer } from '../proofing-types';
+import { issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { MAX_INPUT_PIXELS, openImage, readImageHeader } from './sharp-factory';
 import { sniffPhotoType } from './sniff';
 import { photoRef, type PhotoRef } from './photo-refs';

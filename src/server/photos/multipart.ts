@@ -1,7 +1,7 @@
 // Reads one photo upload (a file and its alt text and caption) from a multipart request, streamed with hard limits.
 import { Readable } from 'node:stream';
 import busboy from 'busboy';
-import { refuse, succeed, type Outcome } from '../proofing-types';
+import { refuse, succeed, type Outcome } from '../http/result';
 import { MAX_CAPTION_LENGTH, MAX_PHOTO_BYTES, MAX_UPLOAD_REQUEST_BYTES } from './upload-limits';
 
 export interface PhotoUpload {

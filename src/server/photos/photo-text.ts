@@ -1,6 +1,6 @@
 // Changing a photo's alt text and caption: by its owner, while no revision past draft shows it.
 import type { Knex } from 'knex';
-import { refuse, succeed, type Outcome, type Writer } from '../proofing-types';
+import { refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { photoRef, type PhotoRef } from './photo-refs';
 
 export async function updatePhotoText(

@@ -1,5 +1,5 @@
 // Photos as pages show them: alt text, caption, sizes and srcsets of their renditions.
-import { db } from '../db';
+import { db } from '../core/db';
 import { mediaUrl } from '../storage';
 import type { Rendition } from './renditions';
 

@@ -1,6 +1,6 @@
 // Makes the renditions of uploaded photos off the request path; any app instance may pick up any pending photo.
 import type { Knex } from 'knex';
-import { logger } from '../logger';
+import { logger } from '../core/logger';
 import { storage } from '../storage';
 import { makeRenditions } from './renditions';
 

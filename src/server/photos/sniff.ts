@@ -1,6 +1,6 @@
 // Tells what an uploaded file really is from its bytes (never from its name or the browser's word for it).
 import { fileTypeFromBuffer } from 'file-type';
-import { refuse, succeed, type Outcome } from '../proofing-types';
+import { refuse, succeed, type Outcome } from '../http/result';
 import { acceptedPhotoTypes, type AcceptedPhotoType } from './upload-limits';
 
 const heicTypes = new Set(['image/heic', 'image/heif', 'image/heic-sequence', 'image/heif-sequence']);

@@ -1,6 +1,6 @@
 // Runs photo work inside the app process: renditions soon after each upload, abandoned uploads once an hour.
-import { db } from '../db';
-import { logger } from '../logger';
+import { db } from '../core/db';
+import { logger } from '../core/logger';
 import { cleanupAbandonedPhotos } from './cleanup';
 import { processPendingPhotos } from './processing';
 

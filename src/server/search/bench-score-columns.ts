@@ -1,6 +1,6 @@
 // Copies each fix's bench score and report count into fix_search, where ranking reads it.
 import type { Knex } from 'knex';
-import { benchScoresFor } from '../bench-scores';
+import { benchScoresFor } from '../bench-work/bench-scores';
 import { queueSearchSync } from './sync-queue';
 
 export async function refreshBenchScoreColumns(knex: Knex, fixIds?: number[]): Promise<void> {

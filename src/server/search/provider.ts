@@ -1,7 +1,7 @@
 // Chooses the search provider from configuration: Meilisearch when MEILI_URL is set, PostgreSQL otherwise.
-import { config } from '../config';
-import { db } from '../db';
-import { logger } from '../logger';
+import { config } from '../core/config';
+import { db } from '../core/db';
+import { logger } from '../core/logger';
 import { MeiliIndex } from './meili/index-client';
 import { MeiliSearchProvider } from './meili/meili-provider';
 import { PostgresSearchProvider } from './pg-provider';

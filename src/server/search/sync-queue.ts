@@ -1,8 +1,8 @@
 // Keeps Meilisearch in step with PostgreSQL through a pg-boss job queue: jobs survive restarts and Meilisearch outages.
 import PgBoss from 'pg-boss';
 import type { Knex } from 'knex';
-import { config, databaseUrl } from '../config';
-import { logger } from '../logger';
+import { config, databaseUrl } from '../core/config';
+import { logger } from '../core/logger';
 
 export const SEARCH_SYNC_QUEUE = 'search-sync';
 

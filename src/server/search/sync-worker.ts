@@ -1,8 +1,8 @@
 // Works the search-sync queue: reads each named fix from PostgreSQL and upserts or deletes it in Meilisearch.
 import PgBoss from 'pg-boss';
 import type { Knex } from 'knex';
-import { config, databaseUrl } from '../config';
-import { logger } from '../logger';
+import { config, databaseUrl } from '../core/config';
+import { logger } from '../core/logger';
 import { documentsFor } from './meili/documents';
 import type { MeiliIndex } from './meili/index-client';
 import { activeWordFamilies } from './word-families';

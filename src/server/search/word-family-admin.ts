@@ -2,8 +2,8 @@
 import type { Knex } from 'knex';
 import { can, type SessionUser } from '@/lib/permissions';
 import { wordFamilyFormSchema, type WordFamilyForm } from '@/lib/search/word-family-schema';
-import { writeAudit } from '../audit';
-import { fieldErrors } from '../http';
+import { writeAudit } from '../core/audit';
+import { fieldErrors } from '../http/responses';
 import { invalid, redirectTo, refused, type FormOutcome } from '../auth/form-outcome';
 import { queueSynonymsSync } from './sync-queue';
 

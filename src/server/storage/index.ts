@@ -1,6 +1,6 @@
 // Picks the storage driver from configuration, once per process: S3-compatible when S3_ENDPOINT and S3_BUCKET are set.
 import { join } from 'node:path';
-import { config, type Config } from '../config';
+import { config, type Config } from '../core/config';
 import { localDiskStorage } from './local-disk';
 import { s3Storage } from './s3';
 import type { StorageDriver } from './storage-driver';

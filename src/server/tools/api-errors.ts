@@ -2,7 +2,7 @@
 import type { z } from 'zod';
 import type { InputError } from '@/lib/values/result';
 import { readableMessage } from '@/lib/schemas/field-errors';
-import { apiError, fieldErrors } from '@/server/http';
+import { apiError, fieldErrors } from '@/server/http/responses';
 
 /** "… For example: 4.7 µF, 4u7, 100nF or 104": the one sentence a field message carries. */
 export function withExample(error: InputError): string {

@@ -1,6 +1,6 @@
 // Unit tests of the life tool's form: self-heating given directly, or worked out from ripple current, ESR and thermal resistance.
 import { describe, expect, it } from 'vitest';
-import { lifeExample, lifeOutcome, type LifeField } from '@/islands/tools/model/life-estimate';
+import { lifeExample, lifeOutcome, type LifeField } from '@/lib/tools/life-estimate';
 
 const fields = (changes: Partial<Record<LifeField, string>>): Record<LifeField, string> => ({ ...lifeExample, ambient: '80', ...changes });
 

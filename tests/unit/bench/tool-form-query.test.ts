@@ -1,8 +1,8 @@
 // Unit tests of how a tool's page reads its address: a link that fills some fields is not a submission.
 import { describe, expect, it } from 'vitest';
-import { fieldsFromQuery } from '@/islands/tools/model/form-reader';
-import { substituteFieldNames, substituteOutcome } from '@/islands/tools/model/substitute-check';
-import { decoderFieldNames, decoderOutcome } from '@/islands/tools/model/value-decoder';
+import { fieldsFromQuery } from '@/lib/tools/form-reader';
+import { substituteFieldNames, substituteOutcome } from '@/lib/tools/substitute-check';
+import { decoderFieldNames, decoderOutcome } from '@/lib/tools/value-decoder';
 
 /** The address a fix's parts table links to: the row's value and rating only. */
 const fromFix = new URLSearchParams({ value: '470uF', rating: '16V 105C' });

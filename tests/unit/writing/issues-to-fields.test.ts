@@ -1,7 +1,7 @@
 // Rule checks and zod issues become field messages a person can read; the validator's own wording never passes.
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { issuesToFields } from '@/server/proofing-types';
+import { issuesToFields } from '@/server/http/result';
 import { isRawValidatorText } from '@/lib/schemas/field-errors';
 
 describe('issuesToFields', () => {

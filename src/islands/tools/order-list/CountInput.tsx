@@ -1,6 +1,6 @@
 // A whole-number input for quantities and spares: keeps what is typed, applies it only when it is valid.
 import { useEffect, useId, useState, type ReactElement } from 'react';
-import { MAX_LINE_QUANTITY } from '../model/order-list';
+import { MAX_LINE_QUANTITY } from '../../../lib/tools/order-list';
 
 export interface CountInputProps {
   label: string;

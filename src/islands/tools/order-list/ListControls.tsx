@@ -1,7 +1,7 @@
 // The order list's actions: spares for every line, CSV download, print, clear.
 import { useState, type ReactElement } from 'react';
 import type { Spares } from '@/lib/bench/order-list';
-import { applySpares, type StoredLine } from '../model/order-list';
+import { applySpares, type StoredLine } from '../../../lib/tools/order-list';
 import { downloadCsv } from './download';
 
 const sparesChoices: ReadonlyArray<{ value: string; label: string; spares: Spares | undefined }> = [

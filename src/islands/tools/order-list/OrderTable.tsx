@@ -1,6 +1,6 @@
 // The order list as a table: one line per canonical spec, with quantity, spares, total and a remove button.
 import type { ReactElement } from 'react';
-import { removeLine, setQuantity, setSpares, type StoredLine } from '../model/order-list';
+import { removeLine, setQuantity, setSpares, type StoredLine } from '../../../lib/tools/order-list';
 import { CountInput } from './CountInput';
 
 export interface OrderTableProps {

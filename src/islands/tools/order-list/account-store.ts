@@ -1,5 +1,5 @@
 // The member's saved order list through the API: the whole list is sent after each change.
-import type { StoredLine } from '../model/order-list';
+import type { StoredLine } from '../../../lib/tools/order-list';
 
 export type SaveState = 'idle' | 'saving' | 'saved' | 'failed';
 

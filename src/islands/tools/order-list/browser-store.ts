@@ -1,5 +1,5 @@
 // The order list kept in this browser (localStorage): read defensively, written whole after each change.
-import { readStoredLines, type StoredLine } from '../model/order-list';
+import { readStoredLines, type StoredLine } from '../../../lib/tools/order-list';
 
 export const STORAGE_KEY = 'benchlore.order-list.v1';
 

@@ -1,5 +1,5 @@
 // Saves the order list as a CSV file from the browser, with the same writer the API uses.
-import { storedListCsv, type StoredLine } from '../model/order-list';
+import { storedListCsv, type StoredLine } from '../../../lib/tools/order-list';
 
 export function downloadCsv(lines: readonly StoredLine[], filename = 'order-list.csv'): void {
   // The byte-order mark makes spreadsheets read µ, ° and Ø as UTF-8.

@@ -1,6 +1,6 @@
 // The order list's state: loaded from this browser or the account, parts from a fix merged in, every edit kept.
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { mergeLists, type StoredLine } from '../model/order-list';
+import { mergeLists, type StoredLine } from '../../../lib/tools/order-list';
 import { saveAccountLines, type SaveState } from './account-store';
 import { cleanAddress, clearBrowserLines, loadBrowserLines, saveBrowserLines } from './browser-store';
 

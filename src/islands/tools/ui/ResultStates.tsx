@@ -1,6 +1,6 @@
 // What a tool shows before its result: a prompt, the fields still needed, or a summary of what is wrong.
 import type { ReactElement } from 'react';
-import type { Outcome } from '../model/form-reader';
+import type { Outcome } from '../../../lib/tools/form-reader';
 import { FieldError } from './Field';
 
 export function NotYet<F extends string, R>({

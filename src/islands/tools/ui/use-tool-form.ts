@@ -1,6 +1,6 @@
 // State of a tool's form: fields as typed, the outcome recomputed on every keystroke, the address kept in step.
 import { useEffect, useMemo, useRef, useState, type SubmitEvent } from 'react';
-import { queryFromFields, type Outcome } from '../model/form-reader';
+import { queryFromFields, type Outcome } from '../../../lib/tools/form-reader';
 
 export interface ToolForm<F extends string, R> {
   fields: Record<F, string>;

@@ -2,8 +2,8 @@
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { can } from '@/lib/permissions';
-import { apiError, fieldErrors, json, parseSearchParams } from '@/server/http';
-import { consumeLimit, listOwnBenchReports, readBenchBody, saveBenchReport } from '@/server/bench-reports';
+import { apiError, fieldErrors, json, parseSearchParams } from '@/server/http/responses';
+import { consumeLimit, listOwnBenchReports, readBenchBody, saveBenchReport } from '@/server/bench-work/bench-reports';
 import { benchReportInputSchema } from '@/lib/schemas/bench-work';
 import { slugSchema } from '@/lib/schemas/slug';
 

@@ -1,7 +1,7 @@
 // GET /api/v1/catalogue-lookup?q=...&kind=machine|chassis|all: the type-ahead for what a fix applies to.
 import type { APIRoute } from 'astro';
-import { json, parseSearchParams } from '@/server/http';
-import { lookupCatalogue, lookupQuerySchema } from '@/server/catalogue-lookup';
+import { json, parseSearchParams } from '@/server/http/responses';
+import { lookupCatalogue, lookupQuerySchema } from '@/server/catalogue/lookup';
 
 export const GET: APIRoute = async ({ url }) => {
   const query = parseSearchParams(lookupQuerySchema, url);

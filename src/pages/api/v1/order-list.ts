@@ -1,13 +1,13 @@
 // GET/PUT /api/v1/order-list: the signed-in member's saved order list (GET ?format=csv answers the CSV).
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
-import { storedListCsv, storedListSchema } from '@/islands/tools/model/order-list';
-import { apiError, json, parseSearchParams } from '@/server/http';
-import { getOrderList, saveOrderList } from '@/server/order-lists';
+import { storedListCsv, storedListSchema } from '@/lib/tools/order-list';
+import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { getOrderList, saveOrderList } from '@/server/bench-work/order-lists';
 import { schemaError } from '@/server/tools/api-errors';
-import { csvResponse } from '@/server/tools/csv-response';
-import { orderListOwner } from '@/server/tools/member';
-import { readJsonBody } from '@/server/tools/request-body';
+import { csvResponse } from '@/server/http/csv-response';
+import { orderListOwner } from '@/server/bench-work/order-list-owner';
+import { readJsonBody } from '@/server/http/body';
 
 const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 

@@ -7,8 +7,8 @@
 */
 import type { APIRoute } from 'astro';
 import { searchParamsSchema, toSearchQuery } from '@/lib/search/query-schema';
-import { apiError, json, parseSearchParams } from '@/server/http';
-import { db } from '@/server/db';
+import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { db } from '@/server/core/db';
 import { findNamedMachine } from '@/server/search/context';
 import { searchProvider } from '@/server/search/provider';
 

@@ -2,7 +2,7 @@
 import type { APIRoute } from 'astro';
 import { allowedActions } from '@/lib/permissions';
 import { profileSchema } from '@/lib/schemas/account';
-import { apiError, fieldErrors, json } from '@/server/http';
+import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { readJson } from '@/server/auth/form-data';
 import { updateProfile } from '@/server/auth/users';
 

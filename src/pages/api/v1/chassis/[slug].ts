@@ -1,8 +1,8 @@
 // GET /api/v1/chassis/:slug: a chassis family, its machines and the fixes written for it.
 import type { APIRoute } from 'astro';
-import { getChassis, machinesOfChassis } from '@/server/catalogue';
-import { listFixSummaries } from '@/server/fixes';
-import { apiError, json } from '@/server/http';
+import { getChassis, machinesOfChassis } from '@/server/catalogue/catalogue';
+import { listFixSummaries } from '@/server/fixes/fixes';
+import { apiError, json } from '@/server/http/responses';
 import { slugSchema } from '@/lib/schemas/slug';
 
 export const GET: APIRoute = async ({ params }) => {

@@ -2,12 +2,12 @@
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { can } from '@/lib/permissions';
-import { apiError, fieldErrors, json } from '@/server/http';
-import { db } from '@/server/db';
-import { discardDraft, saveDraft } from '@/server/drafts';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { failureResponse } from '@/server/proofing-types';
-import { loadRevision } from '@/server/revisions';
+import { apiError, fieldErrors, json } from '@/server/http/responses';
+import { db } from '@/server/core/db';
+import { discardDraft, saveDraft } from '@/server/writing/drafts';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { failureResponse } from '@/server/http/result';
+import { loadRevision } from '@/server/writing/revisions';
 
 const bodySchema = z.object({ values: z.unknown(), baseRevisionId: z.number().int().positive().nullable().optional() });
 

@@ -3,11 +3,11 @@ import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { can } from '@/lib/permissions';
 import { slugSchema } from '@/lib/schemas/slug';
-import { apiError, fieldErrors } from '@/server/http';
-import { db } from '@/server/db';
-import { createDraft } from '@/server/drafts';
-import { answer, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { failureResponse } from '@/server/proofing-types';
+import { apiError, fieldErrors } from '@/server/http/responses';
+import { db } from '@/server/core/db';
+import { createDraft } from '@/server/writing/drafts';
+import { answer, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { failureResponse } from '@/server/http/result';
 
 const bodySchema = z.object({ fixSlug: slugSchema.nullish(), values: z.unknown() });
 

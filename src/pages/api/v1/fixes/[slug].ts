@@ -1,8 +1,8 @@
 // GET /api/v1/fixes/:slug: the live proofed revision of a fix, or `?revision=n` for an older proofed one.
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
-import { getFix } from '@/server/fixes';
-import { apiError, json, parseSearchParams } from '@/server/http';
+import { getFix } from '@/server/fixes/fixes';
+import { apiError, json, parseSearchParams } from '@/server/http/responses';
 import { slugSchema } from '@/lib/schemas/slug';
 
 const querySchema = z.object({ revision: z.coerce.number().int().min(1).max(100_000).optional() });

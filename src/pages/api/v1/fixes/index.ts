@@ -1,10 +1,10 @@
 // GET /api/v1/fixes: live fixes, newest proofed first, optionally for one machine or chassis family.
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
-import { getChassis, getMachine } from '@/server/catalogue';
-import { countFixSummaries, listFixSummaries } from '@/server/fixes';
-import { apiError, json, parseSearchParams } from '@/server/http';
-import { pageQuerySchema, toPage } from '@/server/pagination';
+import { getChassis, getMachine } from '@/server/catalogue/catalogue';
+import { countFixSummaries, listFixSummaries } from '@/server/fixes/fixes';
+import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { pageQuerySchema, toPage } from '@/server/core/pagination';
 import { slugSchema } from '@/lib/schemas/slug';
 
 const querySchema = pageQuerySchema.extend({ machine: slugSchema.optional(), chassis: slugSchema.optional() });

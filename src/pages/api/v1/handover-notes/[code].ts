@@ -1,10 +1,10 @@
 // GET /api/v1/handover-notes/:code: the public note (410 once revoked). DELETE, or POST from a form: revoke your own.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError, json } from '@/server/http';
-import { requestClientKey } from '@/server/rate-limit';
-import { checkLimit, consumeLimit } from '@/server/bench-reports';
-import { findPublicNote, revokeNote } from '@/server/handover-notes';
+import { apiError, json } from '@/server/http/responses';
+import { requestClientKey } from '@/server/http/rate-limit';
+import { checkLimit, consumeLimit } from '@/server/bench-work/bench-reports';
+import { findPublicNote, revokeNote } from '@/server/bench-work/handover-notes';
 import { seeOther } from '@/lib/schemas/bench-work';
 
 function tooMany(retryAfterSeconds: number): Response {

@@ -1,9 +1,9 @@
 // POST /api/v1/handover-notes: create a hand-over note pinned to a proofed revision. GET: your own notes.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError, fieldErrors, json } from '@/server/http';
-import { consumeLimit, readBenchBody } from '@/server/bench-reports';
-import { createHandoverNote, getOwnNote, listOwnNotes } from '@/server/handover-notes';
+import { apiError, fieldErrors, json } from '@/server/http/responses';
+import { consumeLimit, readBenchBody } from '@/server/bench-work/bench-reports';
+import { createHandoverNote, getOwnNote, listOwnNotes } from '@/server/bench-work/handover-notes';
 import { handoverNoteInputSchema } from '@/lib/schemas/bench-work';
 
 export const GET: APIRoute = async ({ locals }) => {

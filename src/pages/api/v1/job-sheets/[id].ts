@@ -1,8 +1,8 @@
 // GET, PATCH, DELETE /api/v1/job-sheets/:id: one of your job sheets. Another member's answers 404, never 403.
 import type { APIRoute } from 'astro';
-import { apiError, fieldErrors, json } from '@/server/http';
-import { readBenchBody } from '@/server/bench-reports';
-import { deleteJobSheet, getJobSheet, jobSheetNotFound, jobSheetRequest, updateJobSheet } from '@/server/job-sheets';
+import { apiError, fieldErrors, json } from '@/server/http/responses';
+import { readBenchBody } from '@/server/bench-work/bench-reports';
+import { deleteJobSheet, getJobSheet, jobSheetNotFound, jobSheetRequest, updateJobSheet } from '@/server/bench-work/job-sheets';
 import { jobSheetPatchSchema } from '@/lib/schemas/bench-work';
 
 export const GET: APIRoute = async ({ locals, params }) => {

@@ -1,9 +1,9 @@
 // GET /api/v1/job-sheets: your job sheets (status, q, sort). POST: open a new job sheet.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError, fieldErrors, json, parseSearchParams } from '@/server/http';
-import { readBenchBody } from '@/server/bench-reports';
-import { createJobSheet, getJobSheet, listJobSheets } from '@/server/job-sheets';
+import { apiError, fieldErrors, json, parseSearchParams } from '@/server/http/responses';
+import { readBenchBody } from '@/server/bench-work/bench-reports';
+import { createJobSheet, getJobSheet, listJobSheets } from '@/server/bench-work/job-sheets';
 import { jobSheetCreateSchema, jobSheetListQuerySchema } from '@/lib/schemas/bench-work';
 
 export const GET: APIRoute = async ({ locals, url }) => {

@@ -1,8 +1,8 @@
 // GET /api/v1/machines/:slug: one machine with its chassis family and the fixes that apply to it.
 import type { APIRoute } from 'astro';
-import { getMachine, summariseMachine } from '@/server/catalogue';
-import { listFixSummaries } from '@/server/fixes';
-import { apiError, json } from '@/server/http';
+import { getMachine, summariseMachine } from '@/server/catalogue/catalogue';
+import { listFixSummaries } from '@/server/fixes/fixes';
+import { apiError, json } from '@/server/http/responses';
 import { slugSchema } from '@/lib/schemas/slug';
 
 export const GET: APIRoute = async ({ params }) => {

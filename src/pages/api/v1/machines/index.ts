@@ -1,7 +1,7 @@
 // GET /api/v1/machines: the catalogue with filters (maker, deviceType, format, region, chassis) and pages.
 import type { APIRoute } from 'astro';
-import { listMachines, machineFilterSchema } from '@/server/catalogue';
-import { json, parseSearchParams } from '@/server/http';
+import { listMachines, machineFilterSchema } from '@/server/catalogue/catalogue';
+import { json, parseSearchParams } from '@/server/http/responses';
 
 export const GET: APIRoute = async ({ url }) => {
   const query = parseSearchParams(machineFilterSchema, url);

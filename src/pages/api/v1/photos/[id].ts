@@ -1,13 +1,13 @@
 // GET /api/v1/photos/:id: processing state of one's own photo; PATCH: change its alt text or caption while unpublished.
 import type { APIRoute } from 'astro';
-import { apiError, fieldErrors, json } from '@/server/http';
-import { db } from '@/server/db';
+import { apiError, fieldErrors, json } from '@/server/http/responses';
+import { db } from '@/server/core/db';
 import { updatePhotoText } from '@/server/photos/photo-text';
 import { photoRef } from '@/server/photos/photo-refs';
 import { kickPhotoWork } from '@/server/photos/worker';
 import { photoTextSchema } from '@/server/photos/intake';
-import { idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { failureResponse } from '@/server/proofing-types';
+import { idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { failureResponse } from '@/server/http/result';
 
 export const GET: APIRoute = async ({ params, locals }) => {
   const user = requireUser(locals);

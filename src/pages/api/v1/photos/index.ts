@@ -1,13 +1,13 @@
 // POST /api/v1/photos: one photo (multipart: file, alt, caption) → 202 with its id, pending until its renditions exist.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError, json } from '@/server/http';
-import { db } from '@/server/db';
+import { apiError, json } from '@/server/http/responses';
+import { db } from '@/server/core/db';
 import { takeInPhoto } from '@/server/photos/intake';
 import { readPhotoUpload } from '@/server/photos/multipart';
 import { kickPhotoWork } from '@/server/photos/worker';
-import { requireUser } from '@/server/proofing-http';
-import { failureResponse } from '@/server/proofing-types';
+import { requireUser } from '@/server/proofing/http';
+import { failureResponse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ request, locals }) => {
   const user = requireUser(locals);

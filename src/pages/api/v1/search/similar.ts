@@ -21,8 +21,8 @@ import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { slugSchema } from '@/lib/schemas/slug';
 import { MAX_QUERY_LENGTH } from '@/lib/search/tokens';
-import { apiError, json, parseSearchParams } from '@/server/http';
-import { db } from '@/server/db';
+import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { db } from '@/server/core/db';
 import { findNamedChassis, findNamedMachine } from '@/server/search/context';
 import { similarFixes } from '@/server/search/similar';
 

@@ -1,9 +1,9 @@
 // GET/POST /api/v1/tools/decode: a parts row's value (and rating, kind) read into its canonical spec.
 import type { APIRoute } from 'astro';
-import { decodePart, decodeQuerySchema } from '@/islands/tools/model/value-decoder';
-import { json } from '@/server/http';
+import { decodePart, decodeQuerySchema } from '@/lib/tools/value-decoder';
+import { json } from '@/server/http/responses';
 import { schemaError, toolInputError } from '@/server/tools/api-errors';
-import { readJsonBody } from '@/server/tools/request-body';
+import { readJsonBody } from '@/server/http/body';
 
 const EXAMPLE = '{ "value": "470uF", "rating": "16V 105C low-ESR", "kind": "capacitor" }';
 

@@ -3,10 +3,10 @@ import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { buildOrderList, orderListInputSchema } from '@/lib/bench/order-list';
 import { orderListCsv } from '@/lib/bench/order-list-csv';
-import { json, parseSearchParams } from '@/server/http';
+import { json, parseSearchParams } from '@/server/http/responses';
 import { schemaError, toolInputError } from '@/server/tools/api-errors';
-import { csvResponse } from '@/server/tools/csv-response';
-import { readJsonBody } from '@/server/tools/request-body';
+import { csvResponse } from '@/server/http/csv-response';
+import { readJsonBody } from '@/server/http/body';
 
 const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 

@@ -1,9 +1,9 @@
 // POST /api/v1/tools/substitute: can a candidate electrolytic replace the original? Each check with its reason.
 import type { APIRoute } from 'astro';
 import { checkSubstitute, substituteInputSchema } from '@/lib/bench/substitute';
-import { json } from '@/server/http';
+import { json } from '@/server/http/responses';
 import { schemaError, toolInputError } from '@/server/tools/api-errors';
-import { readJsonBody } from '@/server/tools/request-body';
+import { readJsonBody } from '@/server/http/body';
 
 const EXAMPLE =
   '{ "original": { "capacitanceF": 0.00047, "ratedVoltageV": 16, "temperatureC": 85 }, "candidate": { "capacitanceF": 0.00047, "ratedVoltageV": 25, "temperatureC": 105 }, "workingVoltageV": 12 }';

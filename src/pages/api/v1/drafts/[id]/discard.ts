@@ -1,9 +1,9 @@
 // POST /api/v1/drafts/:id/discard: the writer gives up their draft from a plain form (the list of their revisions).
 import type { APIRoute } from 'astro';
-import { apiError } from '@/server/http';
-import { discardDraft } from '@/server/drafts';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { failureResponse } from '@/server/proofing-types';
+import { apiError } from '@/server/http/responses';
+import { discardDraft } from '@/server/writing/drafts';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { failureResponse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

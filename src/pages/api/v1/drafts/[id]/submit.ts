@@ -2,10 +2,10 @@
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { can } from '@/lib/permissions';
-import { apiError, fieldErrors } from '@/server/http';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { submitDraft } from '@/server/proofing-submit';
-import { failureResponse } from '@/server/proofing-types';
+import { apiError, fieldErrors } from '@/server/http/responses';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { submitDraft } from '@/server/writing/submit';
+import { failureResponse } from '@/server/http/result';
 
 const bodySchema = z.object({ values: z.unknown().optional() });
 

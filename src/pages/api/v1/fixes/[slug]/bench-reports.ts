@@ -1,8 +1,8 @@
 // GET /api/v1/fixes/:slug/bench-reports: the public counts behind a fix's bench score, per revision.
 import type { APIRoute } from 'astro';
-import { apiError, json } from '@/server/http';
-import { liveFixBySlug } from '@/server/bench-reports';
-import { benchCountsByRevision, benchScoresFor, emptyBenchScore } from '@/server/bench-scores';
+import { apiError, json } from '@/server/http/responses';
+import { liveFixBySlug } from '@/server/bench-work/bench-reports';
+import { benchCountsByRevision, benchScoresFor, emptyBenchScore } from '@/server/bench-work/bench-scores';
 import { slugSchema } from '@/lib/schemas/slug';
 
 export const GET: APIRoute = async ({ params }) => {

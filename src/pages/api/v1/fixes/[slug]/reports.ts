@@ -2,10 +2,10 @@
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
 import { slugSchema } from '@/lib/schemas/slug';
-import { apiError, fieldErrors } from '@/server/http';
-import { answer, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { createReport, reportInputSchema } from '@/server/reports';
-import { failureResponse, refuse } from '@/server/proofing-types';
+import { apiError, fieldErrors } from '@/server/http/responses';
+import { answer, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { createReport, reportInputSchema } from '@/server/fixes/reports';
+import { failureResponse, refuse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

@@ -2,8 +2,8 @@
 import type { APIRoute } from 'astro';
 import QRCode from 'qrcode';
 import { can } from '@/lib/permissions';
-import { apiError } from '@/server/http';
-import { getOwnNote } from '@/server/handover-notes';
+import { apiError } from '@/server/http/responses';
+import { getOwnNote } from '@/server/bench-work/handover-notes';
 
 export const GET: APIRoute = async ({ locals, params }) => {
   const user = locals.user;

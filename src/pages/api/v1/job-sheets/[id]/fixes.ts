@@ -1,9 +1,9 @@
 // POST /api/v1/job-sheets/:id/fixes: apply a fix (pins its live or named proofed revision). DELETE ?fix=slug: take it off.
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
-import { apiError, fieldErrors, json, parseSearchParams } from '@/server/http';
-import { readBenchBody } from '@/server/bench-reports';
-import { applyFixToJob, getJobSheet, jobSheetNotFound, jobSheetRequest, removeFixFromJob } from '@/server/job-sheets';
+import { apiError, fieldErrors, json, parseSearchParams } from '@/server/http/responses';
+import { readBenchBody } from '@/server/bench-work/bench-reports';
+import { applyFixToJob, getJobSheet, jobSheetNotFound, jobSheetRequest, removeFixFromJob } from '@/server/bench-work/job-sheets';
 import { applyFixSchema } from '@/lib/schemas/bench-work';
 import { slugSchema } from '@/lib/schemas/slug';
 

@@ -1,7 +1,7 @@
 // GET /api/v1/job-sheets/:id/invoice-lines.csv: the same lines as CSV to import or paste into an invoice.
 import type { APIRoute } from 'astro';
 import { stringify } from 'csv-stringify/sync';
-import { invoiceLinesFor, jobSheetNotFound, jobSheetRequest } from '@/server/job-sheets';
+import { invoiceLinesFor, jobSheetNotFound, jobSheetRequest } from '@/server/bench-work/job-sheets';
 import { safeCell } from '@/lib/bench/order-list-csv';
 
 const invoiceCsvHeader = ['kind', 'description', 'quantity', 'unit', 'link'];

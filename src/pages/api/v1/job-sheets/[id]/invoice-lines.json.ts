@@ -1,7 +1,7 @@
 // GET /api/v1/job-sheets/:id/invoice-lines.json: labour, parts and note links of a job, for invoicing programs.
 import type { APIRoute } from 'astro';
-import { json } from '@/server/http';
-import { invoiceLinesFor, jobSheetNotFound, jobSheetRequest } from '@/server/job-sheets';
+import { json } from '@/server/http/responses';
+import { invoiceLinesFor, jobSheetNotFound, jobSheetRequest } from '@/server/bench-work/job-sheets';
 
 export const GET: APIRoute = async ({ locals, params }) => {
   const job = jobSheetRequest(locals.user, params.id);

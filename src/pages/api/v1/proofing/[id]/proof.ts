@@ -1,10 +1,10 @@
 // POST /api/v1/proofing/:id/proof: a moderator proofs a waiting revision; it goes live. Never the moderator's own.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError } from '@/server/http';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { proofRevision } from '@/server/proofing';
-import { failureResponse } from '@/server/proofing-types';
+import { apiError } from '@/server/http/responses';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { proofRevision } from '@/server/proofing/decisions';
+import { failureResponse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

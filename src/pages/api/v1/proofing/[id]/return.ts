@@ -1,10 +1,10 @@
 // POST /api/v1/proofing/:id/return: a moderator returns a waiting revision to its author with a note (required).
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError } from '@/server/http';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { returnRevision } from '@/server/proofing';
-import { failureResponse } from '@/server/proofing-types';
+import { apiError } from '@/server/http/responses';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { returnRevision } from '@/server/proofing/decisions';
+import { failureResponse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

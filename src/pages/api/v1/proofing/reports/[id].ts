@@ -1,10 +1,10 @@
 // POST /api/v1/proofing/reports/:id: a moderator resolves or dismisses an open report.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError, fieldErrors } from '@/server/http';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { closeReport, resolutionSchema } from '@/server/reports';
-import { failureResponse, refuse } from '@/server/proofing-types';
+import { apiError, fieldErrors } from '@/server/http/responses';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { closeReport, resolutionSchema } from '@/server/fixes/reports';
+import { failureResponse, refuse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

@@ -1,11 +1,11 @@
 // POST /api/v1/revisions/:id/amend: a new draft continuing a returned (or waiting) revision; the original stays as it is.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError } from '@/server/http';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { amendRevision } from '@/server/proofing-submit';
-import { failureResponse, succeed } from '@/server/proofing-types';
-import { editorPath, safeBack } from '@/server/proofing-paths';
+import { apiError } from '@/server/http/responses';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { amendRevision } from '@/server/writing/submit';
+import { failureResponse, succeed } from '@/server/http/result';
+import { editorPath, safeBack } from '@/server/writing/paths';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

@@ -1,9 +1,9 @@
 // POST /api/v1/revisions/:id/withdraw: the author takes back a revision that waits for proofing.
 import type { APIRoute } from 'astro';
-import { apiError } from '@/server/http';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing-http';
-import { withdrawRevision } from '@/server/proofing-submit';
-import { failureResponse } from '@/server/proofing-types';
+import { apiError } from '@/server/http/responses';
+import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { withdrawRevision } from '@/server/writing/submit';
+import { failureResponse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

@@ -1,0 +1,357 @@
+// Bench reports: one per member per fix per machine, on the revision followed; saving refreshes the score.
+import type { Knex } from 'knex';
+import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
+import { db } from '../core/db';
+import { apiError } from '../http/responses';
+import { benchScoresFor, emptyBenchScore, type BenchScoreView } from './bench-scores';
+import { refreshBenchScoreColumns } from '../search/bench-score-columns';
+import type { Reading } from '@/lib/schemas/revision';
+import { formNumber, formRows, formText, type BenchOutcome, type BenchReportData, type FormFields } from '@/lib/schemas/bench-work';
+
+export interface LiveFixRef {
+  id: number;
+  slug: string;
+  createdBy: number;
+  currentRevisionId: number;
+  currentRevisionNumber: number;
+  title: string;
+}
+
+/** A fix readers can see (not deleted, not hidden, with a live revision), or null. */
+export async function liveFixBySlug(slug: string, knex: Knex = db()): Promise<LiveFixRef | null> {
+  const row = await knex('fixes as f')
+    .join('revisions as r', 'r.id', 'f.current_revision_id')
+    .where('f.slug', slug)
+    .whereNull('f.deleted_at')
+    .whereNull('f.hidden_at')
+    .first('f.id', 'f.slug', 'f.created_by', 'f.current_revision_id', 'r.number', 'r.title');
+  if (!row) return null;
+  return {
+    id: row.id,
+    slug: row.slug,
+    createdBy: row.created_by,
+    currentRevisionId: row.current_revision_id,
+    currentRevisionNumber: row.number,
+    title: row.title,
+  };
+}
+
+/** The id of a proofed revision of the fix by its number, or null. */
+export async function proofedRevisionId(fixId: number, number: number, knex: Knex = db()): Promise<number | null> {
+  const row = await knex('revisions').where({ fix_id: fixId, number, state: 'proofed' }).first('id');
+  return row ? (row.id as number) : null;
+}
+
+export interface MachineOption {
+  id: number;
+  slug: string;
+  label: string;
+}
+
+/** Machines a report may name: those the fix applies to, and every machine of the families involved. */
+export async function eligibleMachines(fixId: number): Promise<MachineOption[]> {
+  const knex = db();
+  const rows = await knex('machines as m')
+    .join('makers as mk', 'mk.id', 'm.maker_id')
+    .whereNull('m.deleted_at')
+    .where((q) => {
+      q.whereIn('m.id', knex('fix_machines').where('fix_id', fixId).select('machine_id'))
+        .orWhereIn('m.chassis_family_id', knex('fix_chassis').where('fix_id', fixId).select('chassis_family_id'))
+        .orWhereIn(
+          'm.chassis_family_id',
+          knex('fix_machines as fm')
+            .join('machines as fam', 'fam.id', 'fm.machine_id')
+            .where('fm.fix_id', fixId)
+            .whereNotNull('fam.chassis_family_id')
+            .select('fam.chassis_family_id'),
+        );
+    })
+    .orderBy(['mk.name', 'm.model_number', 'm.region'])
+    .select('m.id', 'm.slug', 'm.model_number', 'm.region', 'mk.name as maker_name');
+  return rows.map((r) => ({ id: r.id, slug: r.slug, label: `${r.maker_name} ${r.model_number} (${r.region})` }));
+}
+
+export interface SavedBenchReport {
+  id: number;
+  created: boolean;
+  /** False when the member wrote the fix: their report is shown but not counted. */
+  counted: boolean;
+  revisionNumber: number;
+  benchScore: BenchScoreView;
+}
+
+export type SaveBenchReportResult =
+  | { ok: true; report: SavedBenchReport }
+  | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
+
+export async function saveBenchReport(memberId: number, data: BenchReportData): Promise<SaveBenchReportResult> {
+  const knex = db();
+  const fix = await liveFixBySlug(data.fix, knex);
+  if (!fix) return { ok: false, code: 'not_found', message: `No fix "${data.fix}".` };
+  const revisionNumber = data.revision ?? fix.currentRevisionNumber;
+  const revisionId = data.revision === undefined ? fix.currentRevisionId : await proofedRevisionId(fix.id, data.revision, knex);
+  if (revisionId === null) {
+    return {
+      ok: false,
+      code: 'bad_request',
+      message: 'That revision cannot take reports.',
+      fields: { revision: [`The fix has no proofed revision r${revisionNumber}.`] },
+    };
+  }
+  const machine = (await eligibleMachines(fix.id)).find((m) => m.slug === data.machine);
+  if (!machine) {
+    return {
+      ok: false,
+      code: 'bad_request',
+      message: 'That machine is not one this fix applies to.',
+      fields: { machine: ['Choose a machine this fix applies to, or one of its chassis family.'] },
+    };
+  }
+  const values = {
+    revision_id: revisionId,
+    outcome: data.outcome,
+    held_days: data.heldDays,
+    note: data.note,
+    readings: JSON.stringify(data.readings),
+    updated_at: knex.fn.now(),
+  };
+  const [row] = await knex('bench_reports')
+    .insert({ fix_id: fix.id, machine_id: machine.id, member_id: memberId, ...values })
+    .onConflict(['fix_id', 'member_id', 'machine_id'])
+    .merge(values)
+    .returning(['id', knex.raw('(xmax = 0) AS inserted')]);
+  await refreshBenchScoreColumns(knex, [fix.id]);
+  const scores = await benchScoresFor([fix.id]);
+  return {
+    ok: true,
+    report: {
+      id: row.id,
+      created: row.inserted === true,
+      counted: fix.createdBy !== memberId,
+      revisionNumber,
+      benchScore: scores.get(fix.id) ?? emptyBenchScore(),
+    },
+  };
+}
+
+export interface OwnBenchReport {
+  id: number;
+  fix: { slug: string; title: string };
+  machine: { slug: string; label: string };
+  outcome: BenchOutcome;
+  heldDays: number | null;
+  note: string;
+  readings: Reading[];
+  revisionNumber: number;
+  onCurrentRevision: boolean;
+  counted: boolean;
+  updatedAt: Date;
+}
+
+/** The member's own reports, newest first; optionally only those on one fix. */
+export async function listOwnBenchReports(memberId: number, fixSlug?: string): Promise<OwnBenchReport[]> {
+  const q = db()('bench_reports as b')
+    .join('fixes as f', 'f.id', 'b.fix_id')
+    .join('revisions as cur', 'cur.id', 'f.current_revision_id')
+    .join('revisions as r', 'r.id', 'b.revision_id')
+    .join('machines as m', 'm.id', 'b.machine_id')
+    .join('makers as mk', 'mk.id', 'm.maker_id')
+    .where('b.member_id', memberId)
+    .whereNull('f.deleted_at')
+    .orderBy([
+      { column: 'b.updated_at', order: 'desc' },
+      { column: 'b.id', order: 'desc' },
+    ])
+    .select(
+      'b.*',
+      'f.slug as fix_slug',
+      'f.created_by',
+      'f.current_revision_id',
+      'cur.title',
+      'r.number as revision_number',
+      'm.slug as machine_slug',
+      'm.model_number',
+      'm.region',
+      'mk.name as maker_name',
+    );
+  if (fixSlug) q.where('f.slug', fixSlug);
+  const rows = await q;
+  return rows.map((r) => ({
+    id: r.id,
+    fix: { slug: r.fix_slug, title: r.title },
+    machine: { slug: r.machine_slug, label: `${r.maker_name} ${r.model_number} (${r.region})` },
+    outcome: r.outcome,
+    heldDays: r.held_days,
+    note: r.note,
+    readings: r.readings,
+    revisionNumber: r.revision_number,
+    onCurrentRevision: r.revision_id === r.current_revision_id,
+    counted: r.created_by !== memberId,
+    updatedAt: r.updated_at,
+  }));
+}
+
+export interface FixBenchReport {
+  id: number;
+  machineLabel: string;
+  outcome: BenchOutcome;
+  heldDays: number | null;
+  note: string;
+  readings: Reading[];
+  revisionNumber: number;
+  /** By the fix's author: shown, not counted. */
+  byAuthor: boolean;
+  /** By the member reading the page. */
+  own: boolean;
+  updatedAt: Date;
+}
+
+/** A fix's bench reports for its page, newest first, without who wrote them (the reader's own are marked). */
+export async function listFixBenchReports(fixId: number, readerId: number | null, limit = 50): Promise<FixBenchReport[]> {
+  const rows = await db()('bench_reports as b')
+    .join('fixes as f', 'f.id', 'b.fix_id')
+    .join('revisions as r', 'r.id', 'b.revision_id')
+    .join('machines as m', 'm.id', 'b.machine_id')
+    .join('makers as mk', 'mk.id', 'm.maker_id')
+    .where('b.fix_id', fixId)
+    .orderBy([
+      { column: 'b.updated_at', order: 'desc' },
+      { column: 'b.id', order: 'desc' },
+    ])
+    .limit(limit)
+    .select(
+      'b.id',
+      'b.outcome',
+      'b.held_days',
+      'b.note',
+      'b.readings',
+      'b.member_id',
+      'b.updated_at',
+      'f.created_by',
+      'r.number as revision_number',
+      'm.model_number',
+      'm.region',
+      'mk.name as maker_name',
+    );
+  return rows.map((r) => ({
+    id: r.id,
+    machineLabel: `${r.maker_name} ${r.model_number} (${r.region})`,
+    outcome: r.outcome,
+    heldDays: r.held_days,
+    note: r.note,
+    readings: Array.isArray(r.readings) ? r.readings : [],
+    revisionNumber: r.revision_number,
+    byAuthor: r.member_id === r.created_by,
+    own: readerId !== null && r.member_id === readerId,
+    updatedAt: r.updated_at,
+  }));
+}
+
+/** Reads the bench report form of a fix page or job sheet into the shape the schema checks. */
+export function benchReportFromForm(form: FormFields): Record<string, unknown> {
+  const readings = formRows(form, 'readings', ['testPoint', 'expected', 'measured', 'note']);
+  return {
+    fix: formText(form, 'fix'),
+    machine: formText(form, 'machine'),
+    revision: formNumber(form, 'revision'),
+    outcome: formText(form, 'outcome'),
+    // The days field may stay filled in when the member switches the outcome back: ignore it then.
+    heldDays: formText(form, 'outcome') === 'came_back' ? (formNumber(form, 'heldDays') ?? null) : null,
+    note: formText(form, 'note') ?? '',
+    readings,
+  };
+}
+
+/** Limits of the bench work, in the shared rate_limits table so every app instance counts together. */
+export const benchWorkLimits = {
+  /** Bench reports saved, per member. */
+  bench_report: { points: 30, windowSeconds: 60 * 60 },
+  /** Hand-over notes created, per member. */
+  note_create: { points: 60, windowSeconds: 60 * 60 },
+  /** Codes looked up that do not exist, per client address: guessing stops after a short burst. */
+  note_miss: { points: 20, windowSeconds: 15 * 60 },
+} as const;
+export type BenchWorkLimit = keyof typeof benchWorkLimits;
+
+const limiters = new Map<BenchWorkLimit, RateLimiterPostgres>();
+function limiterFor(name: BenchWorkLimit): RateLimiterPostgres {
+  let found = limiters.get(name);
+  if (!found) {
+    const spec = benchWorkLimits[name];
+    found = new RateLimiterPostgres({
+      storeClient: db(),
+      storeType: 'knex',
+      tableName: 'rate_limits',
+      tableCreated: true,
+      keyPrefix: `bench:${name}`,
+      points: spec.points,
+      duration: spec.windowSeconds,
+    });
+    limiters.set(name, found);
+  }
+  return found;
+}
+
+export type LimitCheck = { ok: true } | { ok: false; retryAfterSeconds: number };
+const blockedFor = (res: RateLimiterRes): LimitCheck => ({ ok: false, retryAfterSeconds: Math.max(1, Math.ceil(res.msBeforeNext / 1000)) });
+
+/** Counts one request; refused once the key's points for the window are used up. */
+export async function consumeLimit(name: BenchWorkLimit, key: string): Promise<LimitCheck> {
+  try {
+    await limiterFor(name).consume(key);
+    return { ok: true };
+  } catch (error) {
+    if (error instanceof RateLimiterRes) return blockedFor(error);
+    throw error;
+  }
+}
+
+/** Whether the key is used up, without counting this request (for limits that count failures only). */
+export async function checkLimit(name: BenchWorkLimit, key: string): Promise<LimitCheck> {
+  const res = await limiterFor(name).get(key);
+  return res && res.consumedPoints >= benchWorkLimits[name].points ? blockedFor(res) : { ok: true };
+}
+
+/** Bodies of the bench work endpoints: JSON from the API and islands, or a plain HTML form. */
+export type BenchBody = { kind: 'json'; data: unknown } | { kind: 'form'; form: URLSearchParams } | { kind: 'error'; response: Response };
+
+/** Big enough for a job sheet with its parts lines; the adapter itself sets no body limit. */
+export const MAX_BODY_BYTES = 256 * 1024;
+
+export async function readBenchBody(request: Request): Promise<BenchBody> {
+  const type = (request.headers.get('content-type') ?? '').toLowerCase();
+  const tooLarge = {
+    kind: 'error',
+    response: apiError('payload_too_large', `The body is larger than ${MAX_BODY_BYTES / 1024} KiB.`),
+  } as const;
+  if (Number(request.headers.get('content-length') ?? '0') > MAX_BODY_BYTES) return tooLarge;
+  const isForm = type.startsWith('application/x-www-form-urlencoded');
+  if (!isForm && !type.startsWith('application/json'))
+    return { kind: 'error', response: apiError('unsupported_media_type', 'Send JSON (application/json) or a plain form.') };
+  const text = await readCapped(request, MAX_BODY_BYTES);
+  if (text === null) return tooLarge;
+  if (isForm) return { kind: 'form', form: new URLSearchParams(text) };
+  try {
+    return { kind: 'json', data: text.trim() === '' ? {} : JSON.parse(text) };
+  } catch {
+    return { kind: 'error', response: apiError('bad_request', 'The body is not valid JSON.') };
+  }
+}
+
+async function readCapped(request: Request, cap: number): Promise<string | null> {
+  if (!request.body) return '';
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > cap) {
+      await reader.cancel();
+      return null;
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString('utf8');
+}

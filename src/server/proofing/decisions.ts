@@ -1,0 +1,151 @@
+// Deciding on a waiting revision: proofing it (it goes live) or returning it to its author (with a note).
+import type { Knex } from 'knex';
+import { z } from 'zod';
+import { can } from '@/lib/permissions';
+import { submissionIssues } from '@/lib/schemas/fix-draft';
+import { db } from '../core/db';
+import { writeAudit } from './audit';
+import { notifyAuthorOf } from './mail';
+import { publishRevision } from './publish';
+import { failureResponse, issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
+import { loadRevision, type RevisionRecord } from '../writing/revisions';
+
+export const proofNoteSchema = z.string().trim().max(2000, 'The note is at most 2000 characters.');
+export const returnNoteSchema = proofNoteSchema.pipe(
+  z
+    .string()
+    .min(
+      1,
+      'Say what the author should change, for example “Give the polarity of C512 and the reading at TP12.” A returned revision always carries a note.',
+    ),
+);
+
+type Decision = 'proof' | 'return';
+
+/** Locks the revision and its fix and checks the moderator may decide on it now. */
+async function decidable(
+  trx: Knex.Transaction,
+  moderator: Writer,
+  revisionId: number,
+  decision: Decision,
+): Promise<Outcome<RevisionRecord>> {
+  const locked = await trx('revisions').where({ id: revisionId }).forUpdate().first('id', 'fix_id');
+  if (!locked) return refuse('not_found', 'There is no such revision.');
+  await trx('fixes').where({ id: locked.fix_id }).forUpdate().first('id');
+  const revision = await loadRevision(trx, revisionId);
+  if (!revision) return refuse('not_found', 'There is no such revision.');
+  if (revision.state !== 'submitted')
+    return refuse('conflict', `This revision is already ${revision.state}; another moderator may have decided on it.`);
+  if (!can(moderator, 'proof', { authorId: revision.authorId })) {
+    return refuse(
+      'forbidden',
+      revision.authorId === moderator.id
+        ? 'Nobody proofs their own revision: another moderator decides on this one.'
+        : 'Only moderators proof revisions.',
+    );
+  }
+  if (decision === 'proof' && revision.baseRevisionId !== revision.liveRevisionId) {
+    return refuse(
+      'conflict',
+      'The fix went live with another revision after this one was written. Return it so the author can carry their text over onto the live one.',
+    );
+  }
+  return succeed(revision);
+}
+
+/** Proofs a waiting revision: it becomes the live text of its fix, the author is told. */
+export async function proofRevision(moderator: Writer, revisionId: number, rawNote: unknown = ''): Promise<Outcome<{ slug: string }>> {
+  const note = proofNoteSchema.safeParse(rawNote ?? '');
+  if (!note.success)
+    return refuse('bad_request', 'The note is not valid.', issuesToFields(note.error.issues.map((i) => ({ ...i, path: ['note'] }))));
+  const knex = db();
+  let record: RevisionRecord | null = null;
+  const outcome = await knex.transaction(async (trx): Promise<Outcome<{ slug: string }>> => {
+    const checked = await decidable(trx, moderator, revisionId, 'proof');
+    if (!checked.ok) return checked;
+    record = checked.value;
+    const issues = submissionIssues(record.values);
+    if (issues.length)
+      return refuse('bad_request', 'This revision does not meet the rules for going live; return it with a note.', issuesToFields(issues));
+    await trx('revisions')
+      .where({ id: revisionId })
+      .update({ state: 'proofed', proofer_id: moderator.id, proofed_at: trx.fn.now(), proof_note: note.data || null });
+    const published = await publishRevision(trx, record.fixId, revisionId);
+    await writeAudit(trx, {
+      actorId: moderator.id,
+      action: 'revision.proof',
+      subjectType: 'revision',
+      subjectId: revisionId,
+      detail: { fixId: record.fixId, number: record.number },
+    });
+    return succeed(published);
+  });
+  if (outcome.ok && record) {
+    const proofed: RevisionRecord = record;
+    await notifyAuthorOf(proofed.authorId, {
+      authorName: proofed.authorName,
+      outcome: 'proofed',
+      fixTitle: proofed.values.title,
+      revisionNumber: proofed.number,
+      note: note.data || null,
+      path: `/fixes/${outcome.value.slug}`,
+    });
+  }
+  return outcome;
+}
+
+/** Returns a waiting revision to its author with a note; it stays unchanged and visible to them. */
+export async function returnRevision(moderator: Writer, revisionId: number, rawNote: unknown): Promise<Outcome<null>> {
+  const note = returnNoteSchema.safeParse(rawNote ?? '');
+  if (!note.success)
+    return refuse('bad_request', 'A returned revision needs a note for its author.', { note: note.error.issues.map((i) => i.message) });
+  const knex = db();
+  let record: RevisionRecord | null = null;
+  const outcome = await knex.transaction(async (trx): Promise<Outcome<null>> => {
+    const checked = await decidable(trx, moderator, revisionId, 'return');
+    if (!checked.ok) return checked;
+    record = checked.value;
+    await trx('revisions')
+      .where({ id: revisionId })
+      .update({ state: 'returned', proofer_id: moderator.id, returned_at: trx.fn.now(), proof_note: note.data });
+    await writeAudit(trx, {
+      actorId: moderator.id,
+      action: 'revision.return',
+      subjectType: 'revision',
+      subjectId: revisionId,
+      detail: { note: note.data },
+    });
+    return succeed(null);
+  });
+  if (outcome.ok && record) {
+    const returned: RevisionRecord = record;
+    await notifyAuthorOf(returned.authorId, {
+      authorName: returned.authorName,
+      outcome: 'returned',
+      fixTitle: returned.values.title,
+      revisionNumber: returned.number,
+      note: note.data,
+      path: '/write/mine',
+    });
+  }
+  return outcome;
+}
+
+export type DeskDecision = { ok: true; location: string } | { ok: false; status: number; message: string; note: string };
+
+/**
+ * The revision page's one decision form: a note and two buttons, proof or return. A refusal comes back with the note
+ * as typed, so the page shows it again with the message and nothing is lost.
+ */
+export async function decideFromDesk(moderator: Writer, revisionId: number, fields: Record<string, unknown>): Promise<DeskDecision> {
+  const note = typeof fields.note === 'string' ? fields.note : '';
+  const decision = fields.decision;
+  if (decision !== 'proof' && decision !== 'return')
+    return { ok: false, status: 400, message: 'Choose “Proof: make it live” or “Return it with this note”.', note };
+  const outcome =
+    decision === 'proof' ? await proofRevision(moderator, revisionId, note) : await returnRevision(moderator, revisionId, note);
+  if (outcome.ok) return { ok: true, location: decision === 'proof' ? '/proofing?proofed=1' : '/proofing?returned=1' };
+  const detail = outcome.fields ? Object.values(outcome.fields).flat() : [];
+  const message = [outcome.message, ...detail.filter((line) => line !== outcome.message)].join(' ');
+  return { ok: false, status: failureResponse(outcome).status, message, note };
+}
