@@ -11,7 +11,7 @@ import { authPool } from './src/server/auth/pg-pool';
 import { useSecureCookies } from './src/server/auth/session-cookie';
 import { authLogger } from './src/server/auth/auth-logger';
 import { smtpServer } from './src/server/mail/transport';
-import { config } from './src/server/config';
+import { config } from './src/server/core/config';
 
 export default defineConfig({
   // Read at run time: values through import.meta.env would be frozen into the build.
