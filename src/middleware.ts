@@ -1,9 +1,10 @@
 // Request pipeline: background work started once, security headers, no 500 page leaking a stack trace, who is asking, the route guard.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/http/security-headers';
+import { apiError } from '@/server/http/responses';
 import { logger } from '@/server/core/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
-import { guardRequest } from '@/server/auth/route-guard';
+import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
 import { startBackgroundWork } from '@/server/core/background';
 
@@ -32,16 +33,11 @@ const errorBoundary = defineMiddleware(async (context, next) => {
     return await next();
   } catch (error) {
     logger().error({ err: error, path: context.url.pathname }, 'unhandled error');
-    const isApi = context.url.pathname.startsWith('/api/');
-    const body = isApi
-      ? JSON.stringify({
-          error: { code: 'internal', message: 'Something went wrong on our side. Nothing you sent was lost; please try again.' },
-        })
-      : '<!doctype html><title>Something went wrong · Benchlore</title><p>Something went wrong on our side. Please try again in a moment.</p>';
-    return new Response(body, {
-      status: 500,
-      headers: { 'Content-Type': isApi ? 'application/json' : 'text/html; charset=utf-8', 'Cache-Control': 'no-store' },
-    });
+    if (context.url.pathname.startsWith('/api/'))
+      return apiError('internal', 'Something went wrong on our side. Nothing you sent was lost; please try again.');
+    const body =
+      '<!doctype html><title>Something went wrong · Benchlore</title><p>Something went wrong on our side. Please try again in a moment.</p>';
+    return new Response(body, { status: 500, headers: { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'no-store' } });
   }
 });
 

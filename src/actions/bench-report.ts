@@ -2,7 +2,8 @@
 import type { ActionAPIContext } from 'astro:actions';
 import { can } from '@/lib/permissions';
 import { fieldErrors } from '@/server/http/responses';
-import { benchReportFromForm, consumeLimit, saveBenchReport } from '@/server/bench-work/bench-reports';
+import { consume } from '@/server/http/rate-limit';
+import { benchReportFromForm, saveBenchReport } from '@/server/bench-work/bench-reports';
 import { benchFormFields, benchRefusal, benchReportInputSchema, typedFields, type FormActionResult } from '@/lib/schemas/bench-work';
 
 export type BenchReportFormResult = FormActionResult<{ fix: string; counted: boolean }>;
@@ -20,14 +21,8 @@ export async function submitBenchReportForm(form: FormData, { locals }: Pick<Act
   // A session that ended while the member typed: keep the text so it can be sent again after signing in.
   if (!user) return refuse(401, 'The report was not saved: you are signed out. Sign in in another tab, then send the form again.');
   if (!can(user, 'bench_report')) return refuse(403, 'The report was not saved: confirm your e-mail address first (see your account).');
-  const limit = await consumeLimit('bench_report', String(user.id));
-  if (!limit.ok) {
-    const minutes = Math.ceil(limit.retryAfterSeconds / 60);
-    return refuse(
-      429,
-      `The report was not saved: you have saved many bench reports in a short time. Try again in about ${minutes} minutes.`,
-    );
-  }
+  const limit = await consume('bench_report', { account: String(user.id) });
+  if (!limit.ok) return refuse(429, `The report was not saved: ${limit.message.charAt(0).toLowerCase()}${limit.message.slice(1)}`);
   const parsed = benchReportInputSchema.safeParse(benchReportFromForm(form));
   if (!parsed.success) {
     const fields = fieldErrors(parsed.error);

@@ -1,5 +1,6 @@
 // Account forms and endpoints: one set of zod schemas for the server and any client code.
 import { z } from 'zod';
+import { isLocalPath } from '../local-path';
 import { roles } from '../permissions';
 
 export const PASSWORD_MIN = 10;
@@ -47,8 +48,7 @@ export const shopNameSchema = z
 /** Where to go after signing in: a path on this site only, never another origin. */
 export const nextPathSchema = z
   .string()
-  .max(2000)
-  .regex(/^\/(?![/\\])[^\s]*$/, { error: 'Not a path on this site.' })
+  .refine(isLocalPath, { error: 'Not a path on this site; use one such as /fixes or /account.' })
   .catch('/');
 
 export const signUpSchema = z.object({

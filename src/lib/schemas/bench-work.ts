@@ -182,11 +182,6 @@ export function formRows(form: FormFields, prefix: string, fields: readonly stri
   return rows;
 }
 
-/** The answer to a form post: 303 so the browser follows with GET, never cached. */
-export function seeOther(location: string): Response {
-  return new Response(null, { status: 303, headers: { Location: location, 'Cache-Control': 'private, no-store' } });
-}
-
 /**
  * A fix named the way a member has it to hand: its address ("tl2-tray-will-not-open-e21"), a link to it,
  * or a link to one revision ("https://.../fixes/<slug>/r/3"). Null when it names no fix.

@@ -11,7 +11,8 @@ import { z } from 'zod';
 import { slugSchema } from '@/lib/schemas/slug';
 import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
 import { orderListOwner } from '@/server/bench-work/order-list-owner';
-import { readFormBody } from '@/server/http/body';
+import { readBody } from '@/server/http/body';
+import { seeOther } from '@/server/http/responses';
 
 const emptyToUndefined = (v: unknown) => (v === '' || v === null ? undefined : v);
 
@@ -22,17 +23,13 @@ const addFormSchema = z.object({
 });
 
 function back(problem: string): Response {
-  return new Response(null, { status: 303, headers: { Location: `/order-list?problem=${problem}`, 'Cache-Control': 'no-store' } });
-}
-
-function to(location: string): Response {
-  return new Response(null, { status: 303, headers: { Location: location, 'Cache-Control': 'no-store' } });
+  return seeOther(`/order-list?problem=${problem}`);
 }
 
 export const POST: APIRoute = async ({ request, locals }) => {
-  const body = await readFormBody(request);
+  const body = await readBody(request, { form: 'pageForm' });
   if (!body.ok) return back('bad-form');
-  const form = addFormSchema.safeParse(Object.fromEntries(body.value));
+  const form = addFormSchema.safeParse(body.value.data);
   if (!form.success) return back('bad-form');
   const parts = await fixPartsForOrder(form.data.fix, form.data.r, form.data.row);
   if (!parts) return back('not-found');
@@ -40,7 +37,7 @@ export const POST: APIRoute = async ({ request, locals }) => {
   const owner = orderListOwner(locals);
   if (owner) {
     const saved = await addToOrderList(owner.id, parts.rows);
-    return saved.ok ? to(`/order-list?added=${parts.rows.length}&${from}`) : back('not-decoded');
+    return saved.ok ? seeOther(`/order-list?added=${parts.rows.length}&${from}`) : back('not-decoded');
   }
-  return to(`/order-list?add=${parts.revisionNumber}.${form.data.row}&${from}`);
+  return seeOther(`/order-list?add=${parts.revisionNumber}.${form.data.row}&${from}`);
 };

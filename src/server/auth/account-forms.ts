@@ -25,10 +25,10 @@ async function currentPasswordMatches(
 ): Promise<FormOutcome | null> {
   const row = await findUserById(userId);
   if (!row?.password_hash) return null;
-  const limit = await check('sign_in_failure', clientKey, email);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await check('sign_in_failure', { ip: clientKey, account: email });
+  if (!limit.ok) return tooMany(limit);
   if (password && (await verifyPassword(row.password_hash, password))) return null;
-  await consume('sign_in_failure', clientKey, email);
+  await consume('sign_in_failure', { ip: clientKey, account: email });
   return invalid({ currentPassword: ['That is not your current password.'] });
 }
 
@@ -63,7 +63,7 @@ async function deleteAccount(user: SessionUser, fields: Record<string, string>, 
   const parsed = deleteAccountSchema.safeParse(formInput('delete-account', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const wrong = await currentPasswordMatches(user.id, user.email, parsed.data.password, clientKey);
-  if (wrong) return wrong.kind === 'form' && wrong.fields.currentPassword ? invalid({ password: wrong.fields.currentPassword }) : wrong;
+  if (wrong) return !wrong.ok && wrong.fields?.currentPassword ? invalid({ password: wrong.fields.currentPassword }) : wrong;
   const deleted = await anonymiseAccount(user.id, user.id);
   if (!deleted) return refused(409, 'This account has already been deleted.');
   return redirectTo('/account/deleted');

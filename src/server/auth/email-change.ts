@@ -15,8 +15,8 @@ import { endAllSessions } from './users';
 /** Mails the confirmation link to the new address (rate-limited like every mailed link). */
 export async function requestEmailChange(user: SessionUser, newEmail: string, clientKey: string): Promise<FormOutcome> {
   if (newEmail === user.email) return redirectTo('/account?notice=email-unchanged');
-  const limit = await consume('email_request', clientKey, user.email);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await consume('email_request', { ip: clientKey, account: user.email });
+  if (!limit.ok) return tooMany(limit);
   const token = await issueToken(user.id, 'change_email', { newEmail });
   sendInBackground(confirmNewAddressMail(newEmail, user.name, siteUrl(`/account/email?token=${token}`)));
   return redirectTo('/account?notice=email-link-sent');

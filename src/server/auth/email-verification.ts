@@ -22,8 +22,8 @@ export async function verifyAddress(rawToken: string | null): Promise<VerifyResu
 
 export async function resendConfirmation(user: SessionUser, clientKey: string): Promise<FormOutcome> {
   if (user.verified) return redirectTo('/account?notice=already-confirmed');
-  const limit = await consume('email_request', clientKey, user.email);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await consume('email_request', { ip: clientKey, account: user.email });
+  if (!limit.ok) return tooMany(limit);
   const token = await issueToken(user.id, 'verify_email');
   sendInBackground(confirmAddressMail(user.email, user.name, siteUrl(`/verify?token=${token}`)));
   return redirectTo('/account?notice=confirmation-sent');

@@ -16,8 +16,8 @@ export async function requestReset(fields: Record<string, string>, clientKey: st
   const parsed = emailRequestSchema.safeParse(fields);
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const { email } = parsed.data;
-  const limit = await consume('email_request', clientKey, email);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await consume('email_request', { ip: clientKey, account: email });
+  if (!limit.ok) return tooMany(limit);
   const user = await findUserByEmail(email);
   if (!user) {
     sendInBackground(noAccountMail(email, 'a password reset', siteUrl('/sign-up')));
@@ -37,8 +37,8 @@ export async function checkResetLink(rawToken: string | null): Promise<TokenChec
 export async function resetPassword(fields: Record<string, string>, clientKey: string): Promise<FormOutcome> {
   const parsed = resetPasswordSchema.safeParse(fields);
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
-  const limit = await consume('reset_password', clientKey, null);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await consume('reset_password', { ip: clientKey });
+  if (!limit.ok) return tooMany(limit);
   const peeked = await peekToken(parsed.data.token, 'reset_password');
   if (!peeked.ok) return refused(410, 'This link has expired or has already been used.');
   const user = await findUserById(peeked.userId);

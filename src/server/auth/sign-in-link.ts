@@ -1,4 +1,5 @@
 // The e-mailed sign-in link (Auth.js's Nodemailer provider): what to send, and where the link lands.
+import { localPathOr } from '@/lib/local-path';
 import { config } from '../core/config';
 import { sendInBackground } from '../mail/send';
 import { noAccountMail, signInLinkMail, suspendedMail } from '../mail/templates';
@@ -20,7 +21,8 @@ export function landingUrl(authUrl: string, origin: string = config().PUBLIC_ORI
   }
   // Auth.js has made the return address absolute; only a path on this site goes into the mail.
   const callback = new URL(source.searchParams.get('callbackUrl') ?? '/', origin);
-  landing.searchParams.set('callbackUrl', callback.origin === new URL(origin).origin ? `${callback.pathname}${callback.search}` : '/');
+  const path = callback.origin === new URL(origin).origin ? `${callback.pathname}${callback.search}` : '/';
+  landing.searchParams.set('callbackUrl', localPathOr(path, '/'));
   return landing.href;
 }
 

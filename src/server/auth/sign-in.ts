@@ -22,8 +22,8 @@ export async function passwordSignIn(fields: Record<string, string>, asker: Aske
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const { email, password, next = '/' } = parsed.data;
   // Failures only are counted; once either count is used up, even the right password waits.
-  const limit = await check('sign_in_failure', asker.clientKey, email);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await check('sign_in_failure', { ip: asker.clientKey, account: email });
+  if (!limit.ok) return tooMany(limit);
   const outcome = await signInWithPassword(asker.origin, email, password, next);
   if (outcome.ok) {
     await forgive('sign_in_failure', email);
@@ -34,7 +34,7 @@ export async function passwordSignIn(fields: Record<string, string>, asker: Aske
     const reason = (await findUserByEmail(email))?.suspended_reason;
     return refused(403, suspendedMessage(reason ?? null));
   }
-  await consume('sign_in_failure', asker.clientKey, email);
+  await consume('sign_in_failure', { ip: asker.clientKey, account: email });
   // One message for an unknown address and a wrong password alike.
   return refused(401, 'That e-mail address and password do not match an account. Check both, or use a sign-in link instead.');
 }
@@ -43,8 +43,8 @@ export async function linkRequest(fields: Record<string, string>, asker: Asker):
   const parsed = emailRequestSchema.safeParse(fields);
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const { email, next = '/' } = parsed.data;
-  const limit = await consume('email_request', asker.clientKey, email);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await consume('email_request', { ip: asker.clientKey, account: email });
+  if (!limit.ok) return tooMany(limit);
   const outcome = await requestSignInLink(asker.origin, email, next);
   if (!outcome.ok) return refused(500, 'The sign-in link could not be prepared. Please try again in a moment.');
   return redirectTo('/sign-in/link-sent');

@@ -24,8 +24,8 @@ export async function signUp(fields: Record<string, string>, asker: { clientKey:
   const parsed = signUpSchema.safeParse(formInput('sign-up', fields));
   if (!parsed.success) return invalid(fieldErrors(parsed.error));
   const { name, email, password, shopName } = parsed.data;
-  const limit = await consume('sign_up', asker.clientKey, email);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await consume('sign_up', { ip: asker.clientKey, account: email });
+  if (!limit.ok) return tooMany(limit);
   const weaknesses = passwordWeaknesses(password, [name, email, shopName ?? '']);
   if (weaknesses.length > 0) return invalid({ password: weaknesses });
 

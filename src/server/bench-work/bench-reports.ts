@@ -1,8 +1,7 @@
 // Bench reports: one per member per fix per machine, on the revision followed; saving refreshes the score.
 import type { Knex } from 'knex';
-import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
 import { db } from '../core/db';
-import { apiError } from '../http/responses';
+import type { Failure } from '../http/result';
 import { benchScoresFor, emptyBenchScore, type BenchScoreView } from './bench-scores';
 import { refreshBenchScoreColumns } from '../search/bench-score-columns';
 import type { Reading } from '@/lib/schemas/revision';
@@ -80,9 +79,8 @@ export interface SavedBenchReport {
   benchScore: BenchScoreView;
 }
 
-export type SaveBenchReportResult =
-  | { ok: true; report: SavedBenchReport }
-  | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
+/** Saved (the report under `report`, the name callers and tests read), or the shared refusal. */
+export type SaveBenchReportResult = { ok: true; report: SavedBenchReport } | Failure;
 
 export async function saveBenchReport(memberId: number, data: BenchReportData): Promise<SaveBenchReportResult> {
   const knex = db();
@@ -260,98 +258,4 @@ export function benchReportFromForm(form: FormFields): Record<string, unknown> {
     note: formText(form, 'note') ?? '',
     readings,
   };
-}
-
-/** Limits of the bench work, in the shared rate_limits table so every app instance counts together. */
-export const benchWorkLimits = {
-  /** Bench reports saved, per member. */
-  bench_report: { points: 30, windowSeconds: 60 * 60 },
-  /** Hand-over notes created, per member. */
-  note_create: { points: 60, windowSeconds: 60 * 60 },
-  /** Codes looked up that do not exist, per client address: guessing stops after a short burst. */
-  note_miss: { points: 20, windowSeconds: 15 * 60 },
-} as const;
-export type BenchWorkLimit = keyof typeof benchWorkLimits;
-
-const limiters = new Map<BenchWorkLimit, RateLimiterPostgres>();
-function limiterFor(name: BenchWorkLimit): RateLimiterPostgres {
-  let found = limiters.get(name);
-  if (!found) {
-    const spec = benchWorkLimits[name];
-    found = new RateLimiterPostgres({
-      storeClient: db(),
-      storeType: 'knex',
-      tableName: 'rate_limits',
-      tableCreated: true,
-      keyPrefix: `bench:${name}`,
-      points: spec.points,
-      duration: spec.windowSeconds,
-    });
-    limiters.set(name, found);
-  }
-  return found;
-}
-
-export type LimitCheck = { ok: true } | { ok: false; retryAfterSeconds: number };
-const blockedFor = (res: RateLimiterRes): LimitCheck => ({ ok: false, retryAfterSeconds: Math.max(1, Math.ceil(res.msBeforeNext / 1000)) });
-
-/** Counts one request; refused once the key's points for the window are used up. */
-export async function consumeLimit(name: BenchWorkLimit, key: string): Promise<LimitCheck> {
-  try {
-    await limiterFor(name).consume(key);
-    return { ok: true };
-  } catch (error) {
-    if (error instanceof RateLimiterRes) return blockedFor(error);
-    throw error;
-  }
-}
-
-/** Whether the key is used up, without counting this request (for limits that count failures only). */
-export async function checkLimit(name: BenchWorkLimit, key: string): Promise<LimitCheck> {
-  const res = await limiterFor(name).get(key);
-  return res && res.consumedPoints >= benchWorkLimits[name].points ? blockedFor(res) : { ok: true };
-}
-
-/** Bodies of the bench work endpoints: JSON from the API and islands, or a plain HTML form. */
-export type BenchBody = { kind: 'json'; data: unknown } | { kind: 'form'; form: URLSearchParams } | { kind: 'error'; response: Response };
-
-/** Big enough for a job sheet with its parts lines; the adapter itself sets no body limit. */
-export const MAX_BODY_BYTES = 256 * 1024;
-
-export async function readBenchBody(request: Request): Promise<BenchBody> {
-  const type = (request.headers.get('content-type') ?? '').toLowerCase();
-  const tooLarge = {
-    kind: 'error',
-    response: apiError('payload_too_large', `The body is larger than ${MAX_BODY_BYTES / 1024} KiB.`),
-  } as const;
-  if (Number(request.headers.get('content-length') ?? '0') > MAX_BODY_BYTES) return tooLarge;
-  const isForm = type.startsWith('application/x-www-form-urlencoded');
-  if (!isForm && !type.startsWith('application/json'))
-    return { kind: 'error', response: apiError('unsupported_media_type', 'Send JSON (application/json) or a plain form.') };
-  const text = await readCapped(request, MAX_BODY_BYTES);
-  if (text === null) return tooLarge;
-  if (isForm) return { kind: 'form', form: new URLSearchParams(text) };
-  try {
-    return { kind: 'json', data: text.trim() === '' ? {} : JSON.parse(text) };
-  } catch {
-    return { kind: 'error', response: apiError('bad_request', 'The body is not valid JSON.') };
-  }
-}
-
-async function readCapped(request: Request, cap: number): Promise<string | null> {
-  if (!request.body) return '';
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > cap) {
-      await reader.cancel();
-      return null;
-    }
-    chunks.push(value);
-  }
-  return Buffer.concat(chunks).toString('utf8');
 }

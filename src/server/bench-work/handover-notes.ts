@@ -1,6 +1,7 @@
 // Hand-over notes: a customer-facing page pinned to one proofed revision, behind a short random code.
 import type { Knex } from 'knex';
 import { db } from '../core/db';
+import type { Failure } from '../http/result';
 import { config } from '../core/config';
 import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { generateHandoverCode, normaliseHandoverCode } from '@/lib/handover-code';
@@ -21,8 +22,8 @@ export function invoiceLine(code: string): string {
   return `Repair notes: ${noteUrl(code)}`;
 }
 
-export type CreateNoteResult =
-  { ok: true; code: string } | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
+/** Created (the note's code under `code`), or the shared refusal. */
+export type CreateNoteResult = { ok: true; code: string } | Failure;
 
 const MAX_CODE_ATTEMPTS = 5;
 

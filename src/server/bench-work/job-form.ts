@@ -1,5 +1,6 @@
 // Reads the job sheet forms and carries out their buttons (save, apply or remove a fix, delete) for the pages.
 import { fieldErrors } from '../http/responses';
+import { refuse, succeed, type Failure, type Outcome } from '../http/result';
 import { applyFixToJob, deleteJobSheet, removeFixFromJob, updateJobSheet } from './job-sheets';
 import { putJobPartsOnOrderList, takePartsFromOrderList } from './job-sheet-parts';
 import {
@@ -32,26 +33,20 @@ export function jobSheetFromForm(form: FormFields): Record<string, unknown> {
   };
 }
 
-export type JobFormOutcome =
-  | { kind: 'redirect'; location: string }
-  | { kind: 'form'; status: number; message: string; fields: Record<string, string[]>; values?: Record<string, unknown> };
+/** Where the page goes after a button, or why not (the typed values ride in `detail.values`). */
+export type JobFormOutcome = Outcome<{ location: string }>;
 
-const problem = (message: string, fields: Record<string, string[]> = {}, values?: Record<string, unknown>): JobFormOutcome => ({
-  kind: 'form',
-  status: 400,
-  message,
-  fields,
-  ...(values ? { values } : {}),
-});
+const problem = (message: string, fields: Record<string, string[]> = {}, values?: Record<string, unknown>): Failure =>
+  refuse('bad_request', message, fields, values ? { values } : undefined);
+
+const goTo = (location: string): JobFormOutcome => succeed({ location });
 
 /** The new-sheet form: validated input, or the messages to show beside the fields. */
-export function parseNewJobSheet(
-  form: FormFields,
-): { ok: true; data: ReturnType<typeof jobSheetCreateSchema.parse> } | { ok: false; outcome: JobFormOutcome } {
+export function parseNewJobSheet(form: FormFields): Outcome<ReturnType<typeof jobSheetCreateSchema.parse>> {
   const values = jobSheetFromForm(form);
   const parsed = jobSheetCreateSchema.safeParse(values);
-  if (parsed.success) return { ok: true, data: parsed.data };
-  return { ok: false, outcome: problem('Please correct the fields marked below.', fieldErrors(parsed.error), values) };
+  if (parsed.success) return succeed(parsed.data);
+  return problem('Please correct the fields marked below.', fieldErrors(parsed.error), values);
 }
 
 /** One button of the job sheet page, chosen by its `intent`. */
@@ -64,32 +59,29 @@ export async function handleJobSheetPost(ownerId: number, id: number, form: Form
     if (!parsed.success)
       return problem('The job sheet was not saved: please correct the fields marked below.', fieldErrors(parsed.error), values);
     const saved = await updateJobSheet(ownerId, id, parsed.data);
-    if (!saved.ok)
-      return saved.code === 'not_found'
-        ? { kind: 'form', status: 404, message: saved.message, fields: {} }
-        : problem(saved.message, saved.fields, values);
-    return { kind: 'redirect', location: `${here}?job=saved` };
+    if (!saved.ok) return saved.code === 'not_found' ? refuse('not_found', saved.message) : problem(saved.message, saved.fields, values);
+    return goTo(`${here}?job=saved`);
   }
   if (intent === 'apply_fix') {
     const ref = fixRefFromText(formText(form, 'fixLink') ?? formText(form, 'fix'));
     if (!ref) return problem('Choose a fix, or paste its address or link.', { fix: ['Choose a fix, or paste its address or link.'] });
     const applied = await applyFixToJob(ownerId, id, ref.slug, ref.revision);
     if (!applied.ok) return problem(applied.message, applied.fields);
-    return { kind: 'redirect', location: `${here}?job=fix_applied#applied-fixes` };
+    return goTo(`${here}?job=fix_applied#applied-fixes`);
   }
   if (intent === 'remove_fix') {
     await removeFixFromJob(ownerId, id, formText(form, 'fix') ?? '');
-    return { kind: 'redirect', location: `${here}?job=fix_removed#applied-fixes` };
+    return goTo(`${here}?job=fix_removed#applied-fixes`);
   }
   if (intent === 'take_order_list') {
     const taken = await takePartsFromOrderList(ownerId, id, { clear: formText(form, 'clear') === 'yes' });
     if (!taken.ok) return problem(taken.message, { orderList: [taken.message] });
-    return { kind: 'redirect', location: `${here}?job=parts_taken#parts-used` };
+    return goTo(`${here}?job=parts_taken#parts-used`);
   }
   if (intent === 'to_order_list') {
     const listed = await putJobPartsOnOrderList(ownerId, id);
     if (!listed.ok) return problem(listed.message, { orderList: [listed.message] });
-    return { kind: 'redirect', location: `${here}?job=parts_listed#order-list-heading` };
+    return goTo(`${here}?job=parts_listed#order-list-heading`);
   }
   if (intent === 'delete') {
     if (formText(form, 'confirm') !== 'yes')
@@ -97,7 +89,7 @@ export async function handleJobSheetPost(ownerId: number, id: number, form: Form
         confirm: ['Tick to confirm.'],
       });
     await deleteJobSheet(ownerId, id);
-    return { kind: 'redirect', location: '/jobs?job=deleted' };
+    return goTo('/jobs?job=deleted');
   }
   return problem('That button is not one this page knows.');
 }

@@ -2,7 +2,7 @@
 import type { Knex } from 'knex';
 import { z } from 'zod';
 import { db } from '../core/db';
-import { apiError } from '../http/responses';
+import { refuse, type Outcome } from '../http/result';
 import { can, type SessionUser } from '@/lib/permissions';
 import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { config } from '../core/config';
@@ -48,8 +48,8 @@ export interface JobSheetView extends Omit<JobSheetSummary, 'machine' | 'fixCoun
   fixes: AppliedFix[];
 }
 
-export type WriteResult<T> =
-  { ok: true; value: T } | { ok: false; code: 'not_found' | 'bad_request'; message: string; fields?: Record<string, string[]> };
+/** What a job sheet write hands back: the sheet's number (or a count), or why not. */
+export type WriteResult<T> = Outcome<T>;
 
 const machineLabel = knexLabel('m', 'mk');
 function knexLabel(machine: string, maker: string): string {
@@ -331,19 +331,15 @@ export async function invoiceLinesFor(
 
 export const jobSheetIdSchema = z.coerce.number().int().positive().max(2_147_483_647);
 
-export function jobSheetNotFound(): Response {
-  return apiError('not_found', 'You have no job sheet with that number.');
-}
+/** A sheet that does not exist, is someone else's, or has a malformed number: all answered alike. */
+export const jobSheetMissing = refuse('not_found', 'You have no job sheet with that number.');
 
-export type JobSheetRequest = { ok: true; ownerId: number; id: number } | { ok: false; response: Response };
-
-/** The signed-in owner and the sheet number of a job sheet endpoint, or the answer to give instead. */
-export function jobSheetRequest(user: SessionUser | null | undefined, rawId: string | undefined): JobSheetRequest {
-  if (!user) return { ok: false, response: apiError('unauthorised', 'Sign in to use your job sheets.') };
-  if (!can(user, 'own_job_sheets'))
-    return { ok: false, response: apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.') };
+/** The signed-in owner and the sheet number of a job sheet endpoint, or why not. */
+export function jobSheetRequest(user: SessionUser | null | undefined, rawId: string | undefined): Outcome<{ ownerId: number; id: number }> {
+  if (!user) return refuse('unauthorised', 'Sign in to use your job sheets.');
+  if (!can(user, 'own_job_sheets')) return refuse('forbidden', 'Confirm your e-mail address before you keep job sheets.');
   const id = jobSheetIdSchema.safeParse(rawId);
   // A malformed number is as unknown as someone else's sheet.
-  if (!id.success) return { ok: false, response: jobSheetNotFound() };
-  return { ok: true, ownerId: user.id, id: id.data };
+  if (!id.success) return jobSheetMissing;
+  return { ok: true, value: { ownerId: user.id, id: id.data } };
 }

@@ -1,20 +1,50 @@
-// Request bodies for the tools' API and forms: size-capped (413), typed by content type (415), never a 500.
-import { apiError } from '@/server/http/responses';
+// The one request-body reader: JSON or a URL-encoded form, size-capped (413), typed by content type (415), never a 500.
+import { refuse, succeed, type Outcome } from './result';
 
-/** Largest body any tool endpoint reads: an order list of 2000 rows fits with room to spare. */
-export const MAX_BODY_BYTES = 256 * 1024;
+const KiB = 1024;
 
-export type BodyRead<T> = { ok: true; value: T } | { ok: false; response: Response };
-
-/** The unread rest of the body may still be arriving: close the connection rather than let a client reuse it. */
-function tooLarge(limit: number): BodyRead<never> {
-  const response = apiError('payload_too_large', `The body is larger than ${Math.floor(limit / 1024)} kB; send fewer lines at a time.`);
-  response.headers.set('Connection', 'close');
-  return { ok: false, response };
-}
+/**
+ * Every body cap, by what is posted. The adapter sets no body limit, so nothing is read past these. Where two readers
+ * once capped the same kind of post differently, the smaller cap is kept.
+ */
+export const bodyLimits = {
+  /** Account, sign-in and admin forms and the account JSON: a few short fields. */
+  account: 32 * KiB,
+  /** The fix page's small plain forms (adding a part to the order list). */
+  pageForm: 16 * KiB,
+  /** Writing and proofing forms: a decision with its note, a report, a withdrawal. */
+  decisionForm: 64 * KiB,
+  /** Bench work: bench reports, hand-over notes, job sheets with their parts lines, as JSON or a form. */
+  benchWork: 256 * KiB,
+  /** The bench tools' API: an order list of 2000 rows fits with room to spare. */
+  tools: 256 * KiB,
+  /** A draft with a long remedy and its tables stays well under this. */
+  draft: 2 * 1024 * KiB,
+} as const;
+export type BodyLimit = keyof typeof bodyLimits;
 
 /** How far past its limit a body is read and thrown away before the connection is cut. */
 const DRAIN_FACTOR = 8;
+
+/** A body as read: parsed JSON, or a form's fields (the last value of a repeated name wins in `data`). */
+export type Body = { kind: 'json'; data: unknown } | { kind: 'form'; data: Record<string, string>; form: URLSearchParams };
+
+/** The kinds a route accepts, each with its cap. */
+export interface Accept {
+  json?: BodyLimit;
+  form?: BodyLimit;
+}
+
+function kib(limit: number): string {
+  return limit >= 1024 * KiB ? `${limit / (1024 * KiB)} MB` : `${Math.floor(limit / KiB)} kB`;
+}
+
+function tooLarge(limit: number) {
+  return refuse(
+    'payload_too_large',
+    `The body is larger than ${kib(limit)}; send less at a time, e.g. a long list in two parts or a long fix as two fixes.`,
+  );
+}
 
 async function drain(reader: ReadableStreamDefaultReader<Uint8Array>, read: number, most: number): Promise<void> {
   let size = read;
@@ -30,11 +60,11 @@ async function drain(reader: ReadableStreamDefaultReader<Uint8Array>, read: numb
   await reader.cancel().catch(() => undefined);
 }
 
-/** Reads the body as text, refusing it as soon as it passes the limit, whatever Content-Length claims. */
-export async function readCappedText(request: Request, limit = MAX_BODY_BYTES): Promise<BodyRead<string>> {
+/** Reads the body as UTF-8 text, refusing it as soon as it passes the limit, whatever Content-Length claims. */
+export async function readCappedText(request: Request, limit: number): Promise<Outcome<string>> {
   const declared = Number(request.headers.get('content-length') ?? '0');
   if (Number.isFinite(declared) && declared > limit) return tooLarge(limit);
-  if (!request.body) return { ok: true, value: '' };
+  if (!request.body) return succeed('');
   const reader = request.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -44,7 +74,7 @@ export async function readCappedText(request: Request, limit = MAX_BODY_BYTES): 
     size += value.byteLength;
     if (size > limit) {
       // Drain a moderately oversized body so the client reads the 413 instead of a reset mid-upload;
-      // past DRAIN_BYTES the connection is cut.
+      // past DRAIN_FACTOR times the limit the connection is cut.
       await drain(reader, size, limit * DRAIN_FACTOR);
       return tooLarge(limit);
     }
@@ -57,39 +87,48 @@ export async function readCappedText(request: Request, limit = MAX_BODY_BYTES): 
     at += chunk.byteLength;
   }
   try {
-    return { ok: true, value: new TextDecoder('utf-8', { fatal: true }).decode(bytes) };
+    return succeed(new TextDecoder('utf-8', { fatal: true }).decode(bytes));
   } catch {
-    return { ok: false, response: apiError('bad_request', 'The body is not valid UTF-8 text.') };
+    return refuse('bad_request', 'The body is not valid UTF-8 text; save it as UTF-8, e.g. from a text editor’s “Save as UTF-8”.');
   }
 }
 
-/** A JSON body: application/json only, capped, parsed; a syntax error is a 400 that says where to look. */
-export async function readJsonBody(request: Request): Promise<BodyRead<unknown>> {
-  const type = request.headers.get('content-type') ?? '';
-  if (!/^application\/json\b/i.test(type.trim())) {
-    return { ok: false, response: apiError('unsupported_media_type', 'Send the body as JSON with Content-Type: application/json.') };
-  }
-  const text = await readCappedText(request);
+function unsupported(accept: Accept) {
+  const message =
+    accept.json && accept.form
+      ? 'Send JSON (Content-Type: application/json) or a plain form (application/x-www-form-urlencoded).'
+      : accept.json
+        ? 'Send the body as JSON with Content-Type: application/json.'
+        : 'Send the form as application/x-www-form-urlencoded, e.g. from this site’s own page.';
+  return refuse('unsupported_media_type', message);
+}
+
+/**
+ * Reads a JSON body or a URL-encoded form, as the route accepts, each kind with its named cap. An empty JSON body
+ * reads as `{}` (a button that posts no fields); JSON with a syntax error is a 400 that says where to look.
+ */
+export async function readBody(request: Request, accept: Accept): Promise<Outcome<Body>> {
+  const type = (request.headers.get('content-type') ?? '').trim();
+  const isJson = /^application\/json\b/i.test(type);
+  const isForm = /^application\/x-www-form-urlencoded\b/i.test(type);
+  const limit = isJson ? accept.json : isForm ? accept.form : undefined;
+  if (limit === undefined) return unsupported(accept);
+  const text = await readCappedText(request, bodyLimits[limit]);
   if (!text.ok) return text;
+  if (isForm) {
+    const form = new URLSearchParams(text.value);
+    return succeed({ kind: 'form', form, data: Object.fromEntries(form) });
+  }
+  if (text.value.trim() === '') return succeed({ kind: 'json', data: {} });
   try {
-    return { ok: true, value: JSON.parse(text.value) as unknown };
+    return succeed({ kind: 'json', data: JSON.parse(text.value) as unknown });
   } catch (error) {
-    const detail = error instanceof SyntaxError ? ` (${error.message})` : '';
-    return {
-      ok: false,
-      response: apiError('bad_request', `The body is not valid JSON${detail}.`, {
-        _: ['Send one JSON object, e.g. {"value": "470uF", "rating": "16V"}.'],
-      }),
-    };
+    const where = error instanceof SyntaxError ? `${error.message}. ` : '';
+    return refuse('bad_request', 'The body is not valid JSON.', {
+      _: [`${where}Send one JSON object, e.g. {"note": "Replaced C12", "quantity": 2}.`],
+    });
   }
 }
 
-/** A URL-encoded form body (the fix page's plain HTML forms), capped like the JSON bodies. */
-export async function readFormBody(request: Request, limit = 16 * 1024): Promise<BodyRead<URLSearchParams>> {
-  const type = request.headers.get('content-type') ?? '';
-  if (!/^application\/x-www-form-urlencoded\b/i.test(type.trim())) {
-    return { ok: false, response: apiError('unsupported_media_type', 'Send the form as application/x-www-form-urlencoded.') };
-  }
-  const text = await readCappedText(request, limit);
-  return text.ok ? { ok: true, value: new URLSearchParams(text.value) } : text;
-}
+/** The writing and proofing endpoints: a draft as JSON from the editor, or a small plain form from a page. */
+export const writingInput: Accept = { json: 'draft', form: 'decisionForm' };

@@ -1,5 +1,4 @@
 // The one JSON response and error shape of the API: { error: { code, message, fields? } }.
-import type { z } from 'zod';
 import { fieldErrors } from '@/lib/schemas/field-errors';
 
 // Pages and endpoints take the field messages from here, beside the rest of the error shape.
@@ -10,18 +9,22 @@ export type ErrorCode =
   | 'unauthorised'
   | 'forbidden'
   | 'not_found'
+  | 'method_not_allowed'
   | 'conflict'
+  | 'gone'
   | 'too_many_requests'
   | 'payload_too_large'
   | 'unsupported_media_type'
   | 'internal';
 
-const statusOf: Record<ErrorCode, number> = {
+export const statusOf: Record<ErrorCode, number> = {
   bad_request: 400,
   unauthorised: 401,
   forbidden: 403,
   not_found: 404,
+  method_not_allowed: 405,
   conflict: 409,
+  gone: 410,
   payload_too_large: 413,
   unsupported_media_type: 415,
   too_many_requests: 429,
@@ -50,19 +53,26 @@ export function json(
   });
 }
 
-export function apiError(code: ErrorCode, message: string, fields?: Record<string, string[]>): Response {
+/**
+ * The one error answer: `{ error: { code, message, fields? } }` with the code's status, never cached. `extra` sits
+ * beside `error` (a 409 carries both versions); `headers` adds e.g. Retry-After or Allow.
+ */
+export function apiError(
+  code: ErrorCode,
+  message: string,
+  fields?: Record<string, string[]>,
+  options: { extra?: Record<string, unknown>; headers?: Record<string, string> } = {},
+): Response {
   const body: ApiError = { error: { code, message, ...(fields ? { fields } : {}) } };
-  return json(body, { status: statusOf[code], cache: 'private' });
+  return json(
+    { ...body, ...options.extra },
+    { status: statusOf[code], cache: 'private', ...(options.headers ? { headers: options.headers } : {}) },
+  );
 }
 
-/** Parses URL search parameters with a schema; a failure is a ready 400 response. */
-export function parseSearchParams<S extends z.ZodType>(
-  schema: S,
-  url: URL,
-): { ok: true; data: z.infer<S> } | { ok: false; response: Response } {
-  const raw: Record<string, string> = {};
-  for (const [k, v] of url.searchParams) if (v !== '') raw[k] = v;
-  const parsed = schema.safeParse(raw);
-  if (parsed.success) return { ok: true, data: parsed.data };
-  return { ok: false, response: apiError('bad_request', 'Some query parameters are not valid.', fieldErrors(parsed.error)) };
+/** The answer to a form post: 303 so the browser follows with GET, never cached; cookies (Auth.js) ride along. */
+export function seeOther(location: string, setCookies: string[] = []): Response {
+  const headers = new Headers({ Location: location, 'Cache-Control': 'private, no-store' });
+  for (const cookie of setCookies) headers.append('Set-Cookie', cookie);
+  return new Response(null, { status: 303, headers });
 }

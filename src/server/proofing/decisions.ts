@@ -7,7 +7,7 @@ import { db } from '../core/db';
 import { writeAudit } from './audit';
 import { notifyAuthorOf } from './mail';
 import { publishRevision } from './publish';
-import { failureResponse, issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
+import { issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { loadRevision, type RevisionRecord } from '../writing/revisions';
 
 export const proofNoteSchema = z.string().trim().max(2000, 'The note is at most 2000 characters.');
@@ -131,7 +131,8 @@ export async function returnRevision(moderator: Writer, revisionId: number, rawN
   return outcome;
 }
 
-export type DeskDecision = { ok: true; location: string } | { ok: false; status: number; message: string; note: string };
+/** Where the desk goes after a decision, or why not, with the note as typed in `detail.note`. */
+export type DeskDecision = Outcome<{ location: string }>;
 
 /**
  * The revision page's one decision form: a note and two buttons, proof or return. A refusal comes back with the note
@@ -141,11 +142,11 @@ export async function decideFromDesk(moderator: Writer, revisionId: number, fiel
   const note = typeof fields.note === 'string' ? fields.note : '';
   const decision = fields.decision;
   if (decision !== 'proof' && decision !== 'return')
-    return { ok: false, status: 400, message: 'Choose “Proof: make it live” or “Return it with this note”.', note };
+    return refuse('bad_request', 'Choose “Proof: make it live” or “Return it with this note”.', undefined, { note });
   const outcome =
     decision === 'proof' ? await proofRevision(moderator, revisionId, note) : await returnRevision(moderator, revisionId, note);
-  if (outcome.ok) return { ok: true, location: decision === 'proof' ? '/proofing?proofed=1' : '/proofing?returned=1' };
+  if (outcome.ok) return succeed({ location: decision === 'proof' ? '/proofing?proofed=1' : '/proofing?returned=1' });
   const detail = outcome.fields ? Object.values(outcome.fields).flat() : [];
   const message = [outcome.message, ...detail.filter((line) => line !== outcome.message)].join(' ');
-  return { ok: false, status: failureResponse(outcome).status, message, note };
+  return refuse(outcome.code, message, undefined, { note });
 }

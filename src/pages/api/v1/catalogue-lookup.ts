@@ -1,10 +1,11 @@
 // GET /api/v1/catalogue-lookup?q=...&kind=machine|chassis|all: the type-ahead for what a fix applies to.
 import type { APIRoute } from 'astro';
-import { json, parseSearchParams } from '@/server/http/responses';
+import { parseSearchParams, respond } from '@/server/http/result';
+import { json } from '@/server/http/responses';
 import { lookupCatalogue, lookupQuerySchema } from '@/server/catalogue/lookup';
 
 export const GET: APIRoute = async ({ url }) => {
   const query = parseSearchParams(lookupQuerySchema, url);
-  if (!query.ok) return query.response;
-  return json({ hits: await lookupCatalogue(query.data) }, { cache: 'public' });
+  if (!query.ok) return respond(query);
+  return json({ hits: await lookupCatalogue(query.value) }, { cache: 'public' });
 };

@@ -2,12 +2,12 @@
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { storedListCsv, storedListSchema } from '@/lib/tools/order-list';
-import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { apiError, json } from '@/server/http/responses';
 import { getOrderList, saveOrderList } from '@/server/bench-work/order-lists';
-import { schemaError } from '@/server/tools/api-errors';
 import { csvResponse } from '@/server/http/csv-response';
 import { orderListOwner } from '@/server/bench-work/order-list-owner';
-import { readJsonBody } from '@/server/http/body';
+import { readBody } from '@/server/http/body';
+import { respond, schemaRefusal, parseSearchParams } from '@/server/http/result';
 
 const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 
@@ -25,19 +25,20 @@ export const GET: APIRoute = async ({ locals, url }) => {
   const owner = orderListOwner(locals);
   if (!owner) return refusal(locals);
   const query = parseSearchParams(querySchema, url);
-  if (!query.ok) return query.response;
+  if (!query.ok) return respond(query);
   const list = await getOrderList(owner.id);
-  if (query.data.format === 'csv') return csvResponse(storedListCsv(list.lines), 'order-list.csv');
+  if (query.value.format === 'csv') return csvResponse(storedListCsv(list.lines), 'order-list.csv');
   return json({ name: list.name, lines: list.lines, updatedAt: list.updatedAt }, { cache: 'private' });
 };
 
 export const PUT: APIRoute = async ({ locals, request }) => {
   const owner = orderListOwner(locals);
   if (!owner) return refusal(locals);
-  const body = await readJsonBody(request);
-  if (!body.ok) return body.response;
-  const parsed = storedListSchema.safeParse(body.value);
-  if (!parsed.success) return schemaError(parsed.error, EXAMPLE);
+  const read = await readBody(request, { json: 'tools' });
+  if (!read.ok) return respond(read);
+  const body = read.value;
+  const parsed = storedListSchema.safeParse(body.data);
+  if (!parsed.success) return respond(schemaRefusal(parsed.error, EXAMPLE));
   const keys = new Set(parsed.data.lines.map((l) => l.key));
   if (keys.size !== parsed.data.lines.length)
     return apiError('bad_request', 'Two lines have the same key; merge them first.', { lines: ['Each key once.'] });

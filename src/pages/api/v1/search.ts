@@ -6,16 +6,17 @@
   Searches made here are never counted as misses: typing passes through many half-words.
 */
 import type { APIRoute } from 'astro';
+import { parseSearchParams, respond } from '@/server/http/result';
 import { searchParamsSchema, toSearchQuery } from '@/lib/search/query-schema';
-import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { apiError, json } from '@/server/http/responses';
 import { db } from '@/server/core/db';
 import { findNamedMachine } from '@/server/search/context';
 import { searchProvider } from '@/server/search/provider';
 
 export const GET: APIRoute = async ({ url }) => {
   const params = parseSearchParams(searchParamsSchema, url);
-  if (!params.ok) return params.response;
-  const query = toSearchQuery(params.data);
+  if (!params.ok) return respond(params);
+  const query = toSearchQuery(params.value);
   if (query.machine && !(await findNamedMachine(db(), query.machine)))
     return apiError('not_found', `No machine "${query.machine}" in the catalogue.`);
   const result = await searchProvider().search(query);

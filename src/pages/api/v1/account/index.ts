@@ -3,7 +3,8 @@ import type { APIRoute } from 'astro';
 import { allowedActions } from '@/lib/permissions';
 import { profileSchema } from '@/lib/schemas/account';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
-import { readJson } from '@/server/auth/form-data';
+import { readBody } from '@/server/http/body';
+import { respond } from '@/server/http/result';
 import { updateProfile } from '@/server/auth/users';
 
 export const GET: APIRoute = ({ locals }) => {
@@ -15,14 +16,10 @@ export const GET: APIRoute = ({ locals }) => {
 export const PATCH: APIRoute = async ({ locals, request }) => {
   const user = locals.user;
   if (!user) return apiError('unauthorised', 'Sign in to do this.');
-  const read = await readJson(request);
-  if (!read.ok) {
-    return read.reason === 'too_large'
-      ? apiError('payload_too_large', 'The body is larger than an account change needs.')
-      : apiError('bad_request', 'Send a JSON object.');
-  }
+  const read = await readBody(request, { json: 'account' });
+  if (!read.ok) return respond(read);
   // Only the fields sent are changed; "shopName": "" or null removes the shop name.
-  const parsed = profileSchema.partial().strict().safeParse(read.body);
+  const parsed = profileSchema.partial().strict().safeParse(read.value.data);
   if (!parsed.success) return apiError('bad_request', 'Some fields are not valid.', fieldErrors(parsed.error));
   const changes = {
     ...(parsed.data.name !== undefined ? { name: parsed.data.name } : {}),

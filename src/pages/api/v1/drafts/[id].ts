@@ -5,8 +5,9 @@ import { can } from '@/lib/permissions';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { db } from '@/server/core/db';
 import { discardDraft, saveDraft } from '@/server/writing/drafts';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
-import { failureResponse } from '@/server/http/result';
+import { answer, idParam, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
+import { respond } from '@/server/http/result';
 import { loadRevision } from '@/server/writing/revisions';
 
 const bodySchema = z.object({ values: z.unknown(), baseRevisionId: z.number().int().positive().nullable().optional() });
@@ -26,15 +27,16 @@ export const PUT: APIRoute = async ({ params, request, locals }) => {
   if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
   const id = idParam(params.id);
   if (!id) return apiError('not_found', 'There is no such draft among yours.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const body = bodySchema.safeParse(input.data);
   if (!body.success) return apiError('bad_request', 'The request is not valid.', fieldErrors(body.error));
   const saveInput =
     body.data.baseRevisionId === undefined
       ? { values: body.data.values }
       : { values: body.data.values, baseRevisionId: body.data.baseRevisionId };
-  return answer(await saveDraft(user, id, saveInput), { form: false }, { back: '/write' });
+  return answer(await saveDraft(user, id, saveInput), { kind: 'json' }, { back: '/write' });
 };
 
 export const DELETE: APIRoute = async ({ params, locals }) => {
@@ -42,5 +44,5 @@ export const DELETE: APIRoute = async ({ params, locals }) => {
   if (user instanceof Response) return user;
   const id = idParam(params.id);
   if (!id) return apiError('not_found', 'There is no such draft among yours.');
-  return answer(await discardDraft(user, id), { form: false }, { back: '/write' });
+  return answer(await discardDraft(user, id), { kind: 'json' }, { back: '/write' });
 };

@@ -6,8 +6,9 @@ import { slugSchema } from '@/lib/schemas/slug';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { db } from '@/server/core/db';
 import { createDraft } from '@/server/writing/drafts';
-import { answer, isFailure, readInput, requireUser } from '@/server/proofing/http';
-import { failureResponse } from '@/server/http/result';
+import { answer, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
+import { respond } from '@/server/http/result';
 
 const bodySchema = z.object({ fixSlug: slugSchema.nullish(), values: z.unknown() });
 
@@ -15,8 +16,9 @@ export const POST: APIRoute = async ({ request, locals }) => {
   const user = requireUser(locals);
   if (user instanceof Response) return user;
   if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const body = bodySchema.safeParse(input.data);
   if (!body.success) return apiError('bad_request', 'The request is not valid.', fieldErrors(body.error));
   let fixId: number | null = null;
@@ -25,5 +27,5 @@ export const POST: APIRoute = async ({ request, locals }) => {
     if (!fix) return apiError('not_found', 'There is no such fix to edit.');
     fixId = fix.id;
   }
-  return answer(await createDraft(user, { fixId, values: body.data.values }), { form: false }, { status: 201, back: '/write' });
+  return answer(await createDraft(user, { fixId, values: body.data.values }), { kind: 'json' }, { status: 201, back: '/write' });
 };

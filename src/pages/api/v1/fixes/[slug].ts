@@ -1,8 +1,9 @@
 // GET /api/v1/fixes/:slug: the live proofed revision of a fix, or `?revision=n` for an older proofed one.
 import type { APIRoute } from 'astro';
+import { parseSearchParams, respond } from '@/server/http/result';
 import { z } from 'zod';
 import { getFix } from '@/server/fixes/fixes';
-import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { apiError, json } from '@/server/http/responses';
 import { slugSchema } from '@/lib/schemas/slug';
 
 const querySchema = z.object({ revision: z.coerce.number().int().min(1).max(100_000).optional() });
@@ -11,14 +12,14 @@ export const GET: APIRoute = async ({ params, url }) => {
   const slug = slugSchema.safeParse(params.slug);
   if (!slug.success) return apiError('not_found', 'No fix has that address.');
   const query = parseSearchParams(querySchema, url);
-  if (!query.ok) return query.response;
-  const fix = await getFix(slug.data, query.data.revision);
+  if (!query.ok) return respond(query);
+  const fix = await getFix(slug.data, query.value.revision);
   if (!fix) {
     return apiError(
       'not_found',
-      query.data.revision ? `Fix "${slug.data}" has no proofed revision r${query.data.revision}.` : `No fix "${slug.data}".`,
+      query.value.revision ? `Fix "${slug.data}" has no proofed revision r${query.value.revision}.` : `No fix "${slug.data}".`,
     );
   }
   const { id: _id, createdBy: _createdBy, ...publicFix } = fix;
-  return json(publicFix, { cache: query.data.revision ? 'immutable' : 'public' });
+  return json(publicFix, { cache: query.value.revision ? 'immutable' : 'public' });
 };

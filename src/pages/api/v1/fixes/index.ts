@@ -1,9 +1,10 @@
 // GET /api/v1/fixes: live fixes, newest proofed first, optionally for one machine or chassis family.
 import type { APIRoute } from 'astro';
+import { parseSearchParams, respond } from '@/server/http/result';
 import { z } from 'zod';
 import { getChassis, getMachine } from '@/server/catalogue/catalogue';
 import { countFixSummaries, listFixSummaries } from '@/server/fixes/fixes';
-import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { apiError, json } from '@/server/http/responses';
 import { pageQuerySchema, toPage } from '@/server/core/pagination';
 import { slugSchema } from '@/lib/schemas/slug';
 
@@ -11,8 +12,8 @@ const querySchema = pageQuerySchema.extend({ machine: slugSchema.optional(), cha
 
 export const GET: APIRoute = async ({ url }) => {
   const query = parseSearchParams(querySchema, url);
-  if (!query.ok) return query.response;
-  const { machine: machineSlug, chassis: chassisSlug, page, perPage } = query.data satisfies z.infer<typeof querySchema>;
+  if (!query.ok) return respond(query);
+  const { machine: machineSlug, chassis: chassisSlug, page, perPage } = query.value satisfies z.infer<typeof querySchema>;
   const machine = machineSlug ? await getMachine(machineSlug) : undefined;
   if (machine === null) return apiError('not_found', `No machine "${machineSlug}" in the catalogue.`);
   const chassis = chassisSlug ? await getChassis(chassisSlug) : undefined;

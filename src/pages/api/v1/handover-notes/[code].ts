@@ -1,33 +1,23 @@
 // GET /api/v1/handover-notes/:code: the public note (410 once revoked). DELETE, or POST from a form: revoke your own.
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
-import { apiError, json } from '@/server/http/responses';
-import { requestClientKey } from '@/server/http/rate-limit';
-import { checkLimit, consumeLimit } from '@/server/bench-work/bench-reports';
+import { apiError, json, seeOther } from '@/server/http/responses';
+import { check, consume, requestClientKey } from '@/server/http/rate-limit';
+import { respond } from '@/server/http/result';
 import { findPublicNote, revokeNote } from '@/server/bench-work/handover-notes';
-import { seeOther } from '@/lib/schemas/bench-work';
-
-function tooMany(retryAfterSeconds: number): Response {
-  const response = apiError('too_many_requests', 'Too many codes tried from here. Wait a few minutes and check the code on your invoice.');
-  response.headers.set('Retry-After', String(retryAfterSeconds));
-  return response;
-}
 
 export const GET: APIRoute = async (context) => {
   const clientKey = requestClientKey(context);
-  const limit = await checkLimit('note_miss', clientKey);
-  if (!limit.ok) return tooMany(limit.retryAfterSeconds);
+  const limit = await check('note_miss', { ip: clientKey });
+  if (!limit.ok) return respond(limit);
   const lookup = await findPublicNote(context.params.code ?? '');
   if (lookup.state === 'not_found') {
     // Only misses count: a customer opening a real note is never held up, a guesser soon is.
-    await consumeLimit('note_miss', clientKey);
+    await consume('note_miss', { ip: clientKey });
     return apiError('not_found', 'No hand-over note has that code. Check it against your invoice.');
   }
   if (lookup.state === 'revoked') {
-    return json(
-      { error: { code: 'gone', message: 'The repair shop has withdrawn this hand-over note.' } },
-      { status: 410, cache: 'private' },
-    );
+    return apiError('gone', 'The repair shop has withdrawn this hand-over note.');
   }
   return json({ note: lookup.note }, { cache: 'private' });
 };

@@ -6,8 +6,9 @@ import { updatePhotoText } from '@/server/photos/photo-text';
 import { photoRef } from '@/server/photos/photo-refs';
 import { kickPhotoWork } from '@/server/photos/worker';
 import { photoTextSchema } from '@/server/photos/intake';
-import { idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
-import { failureResponse } from '@/server/http/result';
+import { idParam, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
+import { respond } from '@/server/http/result';
 
 export const GET: APIRoute = async ({ params, locals }) => {
   const user = requireUser(locals);
@@ -27,11 +28,12 @@ export const PATCH: APIRoute = async ({ params, request, locals }) => {
   if (user instanceof Response) return user;
   const id = idParam(params.id);
   if (!id) return apiError('not_found', 'There is no such photo among yours.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const text = photoTextSchema.safeParse(input.data);
   if (!text.success) return apiError('bad_request', 'The alt text or caption is not valid.', fieldErrors(text.error));
   const outcome = await updatePhotoText(db(), user, id, text.data);
-  if (!outcome.ok) return failureResponse(outcome);
+  if (!outcome.ok) return respond(outcome);
   return json({ photo: outcome.value }, { cache: 'private' });
 };

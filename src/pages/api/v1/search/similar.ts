@@ -18,10 +18,11 @@
   400 bad_request (with fields) for missing or bad parameters; 404 not_found for an unknown machine or family.
 */
 import type { APIRoute } from 'astro';
+import { parseSearchParams, respond } from '@/server/http/result';
 import { z } from 'zod';
 import { slugSchema } from '@/lib/schemas/slug';
 import { MAX_QUERY_LENGTH } from '@/lib/search/tokens';
-import { apiError, json, parseSearchParams } from '@/server/http/responses';
+import { apiError, json } from '@/server/http/responses';
 import { db } from '@/server/core/db';
 import { findNamedChassis, findNamedMachine } from '@/server/search/context';
 import { similarFixes } from '@/server/search/similar';
@@ -37,8 +38,8 @@ const querySchema = z
 
 export const GET: APIRoute = async ({ url }) => {
   const params = parseSearchParams(querySchema, url);
-  if (!params.ok) return params.response;
-  const { symptom, machine: machineSlug, chassis: chassisSlug } = params.data;
+  if (!params.ok) return respond(params);
+  const { symptom, machine: machineSlug, chassis: chassisSlug } = params.value;
   if (machineSlug !== undefined) {
     const machine = await findNamedMachine(db(), machineSlug);
     if (!machine) return apiError('not_found', `No machine "${machineSlug}" in the catalogue.`);

@@ -3,10 +3,10 @@ import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { buildOrderList, orderListInputSchema } from '@/lib/bench/order-list';
 import { orderListCsv } from '@/lib/bench/order-list-csv';
-import { json, parseSearchParams } from '@/server/http/responses';
-import { schemaError, toolInputError } from '@/server/tools/api-errors';
+import { json } from '@/server/http/responses';
 import { csvResponse } from '@/server/http/csv-response';
-import { readJsonBody } from '@/server/http/body';
+import { readBody } from '@/server/http/body';
+import { respond, inputRefusal, schemaRefusal, parseSearchParams } from '@/server/http/result';
 
 const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 
@@ -15,13 +15,14 @@ const EXAMPLE =
 
 export const POST: APIRoute = async ({ request, url }) => {
   const query = parseSearchParams(querySchema, url);
-  if (!query.ok) return query.response;
-  const body = await readJsonBody(request);
-  if (!body.ok) return body.response;
-  const parsed = orderListInputSchema.safeParse(body.value);
-  if (!parsed.success) return schemaError(parsed.error, EXAMPLE);
+  if (!query.ok) return respond(query);
+  const read = await readBody(request, { json: 'tools' });
+  if (!read.ok) return respond(read);
+  const body = read.value;
+  const parsed = orderListInputSchema.safeParse(body.data);
+  if (!parsed.success) return respond(schemaRefusal(parsed.error, EXAMPLE));
   const lines = buildOrderList(parsed.data);
-  if (!lines.ok) return toolInputError('lines', lines.error);
-  if (query.data.format === 'csv') return csvResponse(orderListCsv(lines.value), 'order-list.csv');
+  if (!lines.ok) return respond(inputRefusal('lines', lines.error));
+  if (query.value.format === 'csv') return csvResponse(orderListCsv(lines.value), 'order-list.csv');
   return json({ lines: lines.value }, { cache: 'private' });
 };

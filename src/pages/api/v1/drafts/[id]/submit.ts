@@ -3,9 +3,10 @@ import type { APIRoute } from 'astro';
 import { z } from 'zod';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors } from '@/server/http/responses';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { answer, idParam, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
 import { submitDraft } from '@/server/writing/submit';
-import { failureResponse } from '@/server/http/result';
+import { respond } from '@/server/http/result';
 
 const bodySchema = z.object({ values: z.unknown().optional() });
 
@@ -15,8 +16,9 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
   const id = idParam(params.id);
   if (!id) return apiError('not_found', 'There is no such draft among yours.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const body = bodySchema.safeParse(input.data);
   if (!body.success) return apiError('bad_request', 'The request is not valid.', fieldErrors(body.error));
   const outcome = await submitDraft(user, id, body.data.values === undefined ? {} : { values: body.data.values });

@@ -3,9 +3,10 @@ import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
 import { slugSchema } from '@/lib/schemas/slug';
 import { apiError, fieldErrors } from '@/server/http/responses';
-import { answer, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { answer, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
 import { createReport, reportInputSchema } from '@/server/fixes/reports';
-import { failureResponse, refuse } from '@/server/http/result';
+import { respond, refuse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);
@@ -13,8 +14,9 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (!can(user, 'report_fix')) return apiError('forbidden', 'Confirm your e-mail address to report a fix.');
   const slug = slugSchema.safeParse(params.slug);
   if (!slug.success) return apiError('not_found', 'There is no such fix.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const back = `/fixes/${slug.data}#report`;
   const body = reportInputSchema.safeParse(input.data);
   if (!body.success)

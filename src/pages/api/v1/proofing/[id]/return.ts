@@ -2,9 +2,10 @@
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
 import { apiError } from '@/server/http/responses';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { answer, idParam, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
 import { returnRevision } from '@/server/proofing/decisions';
-import { failureResponse } from '@/server/http/result';
+import { respond } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);
@@ -12,8 +13,9 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (!can(user, 'proof')) return apiError('forbidden', 'Only moderators return revisions.');
   const id = idParam(params.id);
   if (!id) return apiError('not_found', 'There is no such revision.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const note = (input.data as Record<string, unknown> | null)?.note;
   return answer(await returnRevision(user, id, note), input, { back: `/proofing/${id}`, done: '/proofing?returned=1' });
 };

@@ -4,8 +4,9 @@ import { can } from '@/lib/permissions';
 import { slugSchema } from '@/lib/schemas/slug';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { fixFlagSchema, setFixFlag } from '@/server/fixes/locks';
-import { answer, isFailure, readInput, requireUser } from '@/server/proofing/http';
-import { failureResponse, refuse } from '@/server/http/result';
+import { answer, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
+import { respond, refuse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);
@@ -13,8 +14,9 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (!can(user, 'lock_fix')) return apiError('forbidden', 'Only moderators lock or hide fixes.');
   const slug = slugSchema.safeParse(params.slug);
   if (!slug.success) return apiError('not_found', 'There is no such fix.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const body = fixFlagSchema.safeParse(input.data);
   // A plain form comes back to where it was sent from: the desk, or the moderation panel on the fix's history.
   const fromHistory = (input.data as { from?: unknown } | null)?.from === 'history';

@@ -2,9 +2,10 @@
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors } from '@/server/http/responses';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { answer, idParam, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
 import { closeReport, resolutionSchema } from '@/server/fixes/reports';
-import { failureResponse, refuse } from '@/server/http/result';
+import { respond, refuse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);
@@ -12,8 +13,9 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (!can(user, 'moderate')) return apiError('forbidden', 'Only moderators handle reports.');
   const id = idParam(params.id);
   if (!id) return apiError('not_found', 'There is no such report.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const body = resolutionSchema.safeParse(input.data);
   const back = '/proofing#reports';
   if (!body.success) return answer(refuse('bad_request', 'The resolution is not valid.', fieldErrors(body.error)), input, { back });

@@ -2,10 +2,12 @@
 import type { APIRoute } from 'astro';
 import { can } from '@/lib/permissions';
 import { apiError } from '@/server/http/responses';
-import { answer, idParam, isFailure, readInput, requireUser } from '@/server/proofing/http';
+import { answer, idParam, requireUser } from '@/server/http/endpoint';
+import { readBody, writingInput } from '@/server/http/body';
 import { amendRevision } from '@/server/writing/submit';
-import { failureResponse, succeed } from '@/server/http/result';
-import { editorPath, safeBack } from '@/server/writing/paths';
+import { respond, succeed } from '@/server/http/result';
+import { editorPath } from '@/server/writing/paths';
+import { localPathOr } from '@/lib/local-path';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);
@@ -13,10 +15,11 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (!can(user, 'write_fix')) return apiError('forbidden', 'Confirm your e-mail address to write fixes.');
   const id = idParam(params.id);
   if (!id) return apiError('not_found', 'There is no such revision.');
-  const input = await readInput(request);
-  if (isFailure(input)) return failureResponse(input);
+  const read = await readBody(request, writingInput);
+  if (!read.ok) return respond(read);
+  const input = read.value;
   const outcome = await amendRevision(user, id);
-  if (!outcome.ok) return answer(outcome, input, { back: safeBack((input.data as Record<string, unknown>).back, '/write/mine') });
+  if (!outcome.ok) return answer(outcome, input, { back: localPathOr((input.data as Record<string, unknown>).back, '/write/mine') });
   const path = editorPath(outcome.value.revision);
   return answer(succeed({ ...outcome.value, editorPath: path }), input, { status: 201, back: '/write/mine', done: path });
 };

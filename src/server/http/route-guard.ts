@@ -1,9 +1,9 @@
 // The middleware's guard: looks the route up in route-access.ts and answers 401/redirect, 403 or 405 before any page runs.
 import { can, type SessionUser } from '@/lib/permissions';
-import { json } from '../http/responses';
+import { apiError, type ErrorCode } from './responses';
 import { logger } from '../core/logger';
-import { decideRoute, type Access } from './route-access';
-import { forbiddenPage, notServedPage, unlistedPage } from './guard-pages';
+import { decideRoute, type Access } from '../auth/route-access';
+import { forbiddenPage, notServedPage, unlistedPage } from '../auth/guard-pages';
 
 interface GuardContext {
   routePattern: string;
@@ -15,8 +15,8 @@ function isApi(pattern: string): boolean {
   return pattern.startsWith('/api/');
 }
 
-function errorJson(status: number, code: string, message: string, headers: Record<string, string> = {}): Response {
-  return json({ error: { code, message } }, { status, cache: 'private', headers });
+function errorJson(code: ErrorCode, message: string, headers: Record<string, string> = {}): Response {
+  return apiError(code, message, undefined, { headers });
 }
 
 function html(status: number, body: string, headers: Record<string, string> = {}): Response {
@@ -36,12 +36,12 @@ function signInRedirect(context: GuardContext): Response {
 
 function denied(context: GuardContext, user: SessionUser | null): Response {
   const api = isApi(context.routePattern);
-  if (!user) return api ? errorJson(401, 'unauthorised', 'Sign in to do this.') : signInRedirect(context);
+  if (!user) return api ? errorJson('unauthorised', 'Sign in to do this.') : signInRedirect(context);
   if (api) {
     const message = user.verified
       ? 'Your account may not do this.'
       : 'Confirm your e-mail address first: your account page can send the mail again.';
-    return errorJson(403, 'forbidden', message);
+    return errorJson('forbidden', message);
   }
   return html(403, forbiddenPage(user));
 }
@@ -59,14 +59,12 @@ export function guardRequest(context: GuardContext, user: SessionUser | null): R
   if (decision.kind === 'unlisted') {
     logger().error({ route: context.routePattern }, 'route missing from src/server/auth/route-access.ts: refused');
     const message = `The route ${context.routePattern} has no entry in src/server/auth/route-access.ts.`;
-    return api ? errorJson(403, 'forbidden', message) : html(403, unlistedPage());
+    return api ? errorJson('forbidden', message) : html(403, unlistedPage());
   }
   if (decision.kind === 'method_not_allowed' || decision.access === 'closed') {
     const allow = decision.kind === 'method_not_allowed' ? decision.allow : ['GET', 'HEAD'];
     const headers = { Allow: allow.join(', ') };
-    return api
-      ? errorJson(405, 'method_not_allowed', 'This address does not take that method.', headers)
-      : html(405, notServedPage(), headers);
+    return api ? errorJson('method_not_allowed', 'This address does not take that method.', headers) : html(405, notServedPage(), headers);
   }
   return allowed(decision.access, user) ? null : denied(context, user);
 }

@@ -1,0 +1,117 @@
+// The one request-body reader: JSON or a form by content type, each kind under its named cap, never a throw.
+import { describe, expect, it } from 'vitest';
+import { bodyLimits, readBody, readCappedText, writingInput } from '@/server/http/body';
+
+function post(body: BodyInit | null, type: string | null, headers: Record<string, string> = {}): Request {
+  return new Request('http://local/x', {
+    method: 'POST',
+    body,
+    headers: { ...(type ? { 'Content-Type': type } : {}), ...headers },
+    // Node's fetch wants this for a stream body.
+    ...(body instanceof ReadableStream ? { duplex: 'half' } : {}),
+  } as RequestInit);
+}
+
+/** A body sent in chunks with no Content-Length, the way a client streams it. */
+function streamed(bytes: number, chunk = 16 * 1024): ReadableStream<Uint8Array> {
+  let sent = 0;
+  return new ReadableStream<Uint8Array>({
+    pull(controller) {
+      if (sent >= bytes) return controller.close();
+      const size = Math.min(chunk, bytes - sent);
+      sent += size;
+      controller.enqueue(new Uint8Array(size).fill(0x61));
+    },
+  });
+}
+
+describe('readBody', () => {
+  it('parses JSON and a URL-encoded form, each by its content type', async () => {
+    const asJson = await readBody(post('{"note":"Replaced C12"}', 'application/json; charset=utf-8'), { json: 'tools' });
+    expect(asJson).toEqual({ ok: true, value: { kind: 'json', data: { note: 'Replaced C12' } } });
+    const asForm = await readBody(post('fix=a-b&note=two+words&note=last', 'application/x-www-form-urlencoded'), { form: 'pageForm' });
+    expect(asForm.ok && asForm.value.kind === 'form' && asForm.value.data).toEqual({ fix: 'a-b', note: 'last' });
+    expect(asForm.ok && asForm.value.kind === 'form' && asForm.value.form.getAll('note')).toEqual(['two words', 'last']);
+  });
+
+  it('reads an empty JSON body as an empty object', async () => {
+    expect(await readBody(post('', 'application/json'), writingInput)).toEqual({ ok: true, value: { kind: 'json', data: {} } });
+  });
+
+  it('refuses a kind the route does not take with 415, naming what to send', async () => {
+    const form = await readBody(post('a=1', 'application/x-www-form-urlencoded'), { json: 'tools' });
+    expect(form).toMatchObject({ ok: false, code: 'unsupported_media_type' });
+    expect(!form.ok && form.message).toContain('application/json');
+    const plain = await readBody(post('a', 'text/plain'), writingInput);
+    expect(plain).toMatchObject({ ok: false, code: 'unsupported_media_type' });
+    expect(await readBody(post('{}', null), { json: 'tools' })).toMatchObject({ ok: false, code: 'unsupported_media_type' });
+  });
+
+  it('answers broken JSON with a 400 in a sentence and an example of a good body', async () => {
+    const broken = await readBody(post('{"customerRef": ', 'application/json'), { json: 'benchWork' });
+    expect(broken).toMatchObject({ ok: false, code: 'bad_request', message: 'The body is not valid JSON.' });
+    expect(!broken.ok && broken.fields?._?.[0]).toMatch(/e\.g\. \{"note"/);
+  });
+
+  it('refuses text that is not UTF-8', async () => {
+    const bad = await readBody(post(new Uint8Array([0x7b, 0xff, 0x7d]), 'application/json'), { json: 'tools' });
+    expect(bad).toMatchObject({ ok: false, code: 'bad_request' });
+  });
+
+  it('refuses a body over its cap by the declared length, without reading it', async () => {
+    const declared = await readBody(post('{}', 'application/json', { 'Content-Length': String(bodyLimits.tools + 1) }), {
+      json: 'tools',
+    });
+    expect(declared).toMatchObject({ ok: false, code: 'payload_too_large' });
+  });
+
+  it('refuses a streamed body as soon as it passes its cap, whatever it claims', async () => {
+    const result = await readBody(post(streamed(bodyLimits.pageForm + 1), 'application/x-www-form-urlencoded'), { form: 'pageForm' });
+    expect(result).toMatchObject({ ok: false, code: 'payload_too_large' });
+    expect(!result.ok && result.message).toMatch(/larger than 16 kB; send less at a time, e\.g\./);
+  });
+
+  it('uses the cap of the kind sent: a draft may be far larger than a decision form', async () => {
+    const big = JSON.stringify({ body: 'x'.repeat(bodyLimits.decisionForm * 2) });
+    expect((await readBody(post(big, 'application/json'), writingInput)).ok).toBe(true);
+    const form = await readBody(post(`note=${'x'.repeat(bodyLimits.decisionForm * 2)}`, 'application/x-www-form-urlencoded'), writingInput);
+    expect(form).toMatchObject({ ok: false, code: 'payload_too_large' });
+  });
+
+  it('names every cap in one table, each a whole number of kB', () => {
+    for (const limit of Object.values(bodyLimits)) expect(limit % 1024).toBe(0);
+    expect(bodyLimits.account).toBeLessThan(bodyLimits.benchWork);
+  });
+});
+
+describe('readCappedText', () => {
+  it('drains a moderately oversized body before refusing it, so the client can read the 413', async () => {
+    let pulled = 0;
+    const limit = 1024;
+    const source = new ReadableStream<Uint8Array>({
+      pull(controller) {
+        if (pulled >= limit * 4) return controller.close();
+        pulled += 256;
+        controller.enqueue(new Uint8Array(256));
+      },
+    });
+    const result = await readCappedText(post(source, 'application/json'), limit);
+    expect(result).toMatchObject({ ok: false, code: 'payload_too_large' });
+    expect(pulled).toBe(limit * 4);
+  });
+
+  it('stops draining at eight times the cap and cuts the rest', async () => {
+    let pulled = 0;
+    const limit = 1024;
+    const source = new ReadableStream<Uint8Array>({
+      pull(controller) {
+        pulled += 256;
+        controller.enqueue(new Uint8Array(256));
+      },
+    });
+    const result = await readCappedText(post(source, 'application/json'), limit);
+    expect(result).toMatchObject({ ok: false, code: 'payload_too_large' });
+    expect(pulled).toBeGreaterThan(limit * 8);
+    expect(pulled).toBeLessThan(limit * 8 + 256 * 4);
+  });
+});
