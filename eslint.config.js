@@ -6,7 +6,7 @@ import prettier from 'eslint-config-prettier';
 import globals from 'globals';
 
 export default [
-  { ignores: ['dist/', '.astro/', '.data/', 'node_modules/', 'coverage/', 'scripts/migration-stub.js'] },
+  { ignores: ['dist/', 'dist-*/', '**/.astro/', '.data/', '**/node_modules/', 'coverage/', 'scripts/migration-stub.js'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   ...astro.configs.recommended,

@@ -5,7 +5,8 @@
   the PostgreSQL provider and through the Meilisearch provider against the local fake of its HTTP API
   (tests/support/fake-meili.ts), and prints recall in the top 1, 3 and 10, mean reciprocal rank, the goals
   beside them, and every failing case.
-  Usage: npm run search:eval [-- --provider postgres|meilisearch] [-- --scopes machine,all]
+  Usage: npm run search:eval [-- --provider postgres|meilisearch] [-- --scopes machine,all] [-- --set tuned,holdout]
+  Both query sets run by default: the tuned set (search was tuned against it) and the held-out set.
 */
 import { readConfig } from '../src/server/core/config.ts';
 import { ensureDatabase, migrateAndSeed } from './lib/prepare.ts';
@@ -16,6 +17,7 @@ const arg = (name: string, fallback: string) => {
 };
 const providers = arg('provider', 'postgres,meilisearch').split(',');
 const scopes = arg('scopes', 'machine,all').split(',') as ('machine' | 'family' | 'all')[];
+const sets = arg('set', 'tuned,holdout').split(',') as ('tuned' | 'holdout')[];
 
 const env: NodeJS.ProcessEnv = {
   ...process.env,
@@ -38,36 +40,41 @@ const { MeiliSearchProvider } = await import('../src/server/search/meili/meili-p
 const { MeiliIndex } = await import('../src/server/search/meili/index-client.ts');
 const { reindexMeili } = await import('../src/server/search/reindex.ts');
 const { startFakeMeili } = await import('../tests/support/fake-meili.ts');
-const { loadCases, readFloor, reportLines, runEval, figuresOf } = await import('../tests/search-eval/eval.ts');
+const { loadCases, querySets, readFloor, reportLines, runEval, figuresOf } = await import('../tests/search-eval/eval.ts');
 
 const knex = db();
-const cases = loadCases();
-console.log(`\nSearch evaluation: ${cases.length} blind cases (${new Date().toISOString().slice(0, 16)}Z)\n`);
 try {
-  if (providers.includes('postgres')) {
-    const run = await runEval(knex, new PostgresSearchProvider(knex), cases, scopes);
-    console.log(reportLines('PostgreSQL provider', run).join('\n'));
-    const floor = readFloor();
-    const noMachine = figuresOf(run.results.filter((r) => r.group === 'noMachine')).at3;
-    const named = figuresOf(run.results.filter((r) => r.group === 'machineNamed')).at3;
-    console.log(
-      `  committed floor (tests/search-eval/floor.json, top-3): no machine ${(100 * floor.noMachine).toFixed(1)} %, machine named ${(100 * floor.machineNamed).toFixed(1)} %; this run ${(100 * noMachine).toFixed(1)} %, ${(100 * named).toFixed(1)} %\n`,
-    );
-  }
-  if (providers.includes('meilisearch')) {
-    const fake = await startFakeMeili('eval-key');
-    try {
-      const meili = new MeiliIndex({ url: fake.url, key: 'eval-key', index: 'fixes_eval' });
-      await reindexMeili(knex, meili);
-      const run = await runEval(knex, new MeiliSearchProvider(knex, meili), cases, scopes);
-      console.log(reportLines('Meilisearch provider against the local fake (tests/support/fake-meili.ts)', run).join('\n'));
-      console.log(
-        '  The fake matches whole lower-case words and their synonyms, without stemming, typo tolerance, proximity or attribute\n' +
-          '  ranking; it drops words from the end of the query (any strategy but "all"). Its figures measure our requests and\n' +
-          '  our re-ranking over a crude matcher, not what a real Meilisearch server would find.\n',
-      );
-    } finally {
-      await fake.stop();
+  for (const set of sets) {
+    const cases = loadCases(set);
+    console.log(`\nSearch evaluation, ${querySets[set].label}: ${cases.length} blind cases (${new Date().toISOString().slice(0, 16)}Z)\n`);
+
+    if (providers.includes('postgres')) {
+      const run = await runEval(knex, new PostgresSearchProvider(knex), cases, scopes);
+      console.log(reportLines('PostgreSQL provider', run).join('\n'));
+      if (set === 'tuned') {
+        const floor = readFloor();
+        const noMachine = figuresOf(run.results.filter((r) => r.group === 'noMachine')).at3;
+        const named = figuresOf(run.results.filter((r) => r.group === 'machineNamed')).at3;
+        console.log(
+          `  committed floor (tests/search-eval/floor.json, top-3): no machine ${(100 * floor.noMachine).toFixed(1)} %, machine named ${(100 * floor.machineNamed).toFixed(1)} %; this run ${(100 * noMachine).toFixed(1)} %, ${(100 * named).toFixed(1)} %\n`,
+        );
+      } else console.log('');
+    }
+    if (providers.includes('meilisearch')) {
+      const fake = await startFakeMeili('eval-key');
+      try {
+        const meili = new MeiliIndex({ url: fake.url, key: 'eval-key', index: 'fixes_eval' });
+        await reindexMeili(knex, meili);
+        const run = await runEval(knex, new MeiliSearchProvider(knex, meili), cases, scopes);
+        console.log(reportLines('Meilisearch provider against the local fake (tests/support/fake-meili.ts)', run).join('\n'));
+        console.log(
+          '  The fake matches whole lower-case words and their synonyms, without stemming, typo tolerance, proximity or attribute\n' +
+            '  ranking; it drops words from the end of the query (any strategy but "all"). Its figures measure our requests and\n' +
+            '  our re-ranking over a crude matcher, not what a real Meilisearch server would find.\n',
+        );
+      } finally {
+        await fake.stop();
+      }
     }
   }
 } finally {

@@ -4,8 +4,6 @@ import { describe, expect, it } from 'vitest';
 import {
   addRows,
   applySpares,
-  decodeAddRows,
-  encodeAddRows,
   mergeLists,
   readStoredLines,
   removeLine,
@@ -92,21 +90,6 @@ describe('mergeLists', () => {
       ['22 µF 16 V', 2],
       ['100 µF 10 V', 1],
     ]);
-  });
-});
-
-describe('the ?add= payload', () => {
-  it('round-trips rows with non-ASCII characters (µ, °, Ø)', () => {
-    const rows = [row('C1', '470 µF', '16 V 105 °C Ø8x12mm')];
-    const decoded = decodeAddRows(encodeAddRows(rows));
-    expect(decoded.ok && decoded.value[0]).toEqual(rows[0]);
-  });
-
-  it('answers a damaged payload with a message, not an exception', () => {
-    for (const payload of ['', 'not base64!', 'e30', encodeAddRows([]).slice(0, 3), 'x'.repeat(20_000)]) {
-      const decoded = decodeAddRows(payload);
-      expect(decoded.ok).toBe(false);
-    }
   });
 });
 

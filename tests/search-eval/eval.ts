@@ -26,15 +26,27 @@ export interface EvalCase {
   expect: string;
 }
 
-/** Every case of queries.json joined to key.json, minus the ones dropped in dropped.json (see README). */
-export function loadCases(): EvalCase[] {
-  const queries = JSON.parse(readFileSync(here('./queries.json'), 'utf8')) as QueryRow[];
+/**
+ * The two sets of blind queries over the same descriptions: "tuned" (queries.json, the set search was tuned
+ * against: its failures were read while choosing word families) and "held out" (queries-holdout.json, written
+ * later by another blind writer and never looked at while changing search: the honest figure).
+ */
+export const querySets = {
+  tuned: { file: './queries.json', dropped: './dropped.json', label: 'tuned set (search was tuned against it)' },
+  holdout: { file: './queries-holdout.json', dropped: null, label: 'held-out set (never tuned against)' },
+} as const;
+export type QuerySet = keyof typeof querySets;
+
+/** Every case of a query set joined to key.json, minus the ones dropped in its dropped list (see README). */
+export function loadCases(set: QuerySet = 'tuned'): EvalCase[] {
+  const files = querySets[set];
+  const queries = JSON.parse(readFileSync(here(files.file), 'utf8')) as QueryRow[];
   const key = JSON.parse(readFileSync(here('./key.json'), 'utf8')) as Record<string, string>;
-  const dropped = JSON.parse(readFileSync(here('./dropped.json'), 'utf8')) as { n: number; why: string }[];
+  const dropped = files.dropped ? (JSON.parse(readFileSync(here(files.dropped), 'utf8')) as { n: number; why: string }[]) : [];
   const droppedAt = new Set(dropped.map((d) => d.n));
   return queries.flatMap((q, n) => {
     const expect = key[q.id];
-    if (!expect) throw new Error(`queries.json case ${n} names description ${q.id}, which key.json lacks.`);
+    if (!expect) throw new Error(`${files.file} case ${n} names description ${q.id}, which key.json lacks.`);
     return droppedAt.has(n) ? [] : [{ id: q.id, n, query: q.query, machineLabel: q.machine, kind: q.kind, expect }];
   });
 }

@@ -5,6 +5,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { Editor } from '@tiptap/react';
 import { fixDraftLimits, fixSubmissionSchema, type FixDraft, type FixDraftInput, type HeldFields } from '@/lib/schemas/fix-draft';
 import { difficulties, difficultyLabels } from '@/lib/schemas/revision';
+import { readableErrors } from '@/lib/schemas/field-errors';
 import type { BodyDoc } from '@/lib/tiptap/allowlist';
 import PhotoUploader, { type IncomingFiles } from '../PhotoUploader';
 import { AppliesTo } from './AppliesTo';
@@ -37,7 +38,7 @@ export function FixForm(props: FixEditorProps) {
   const start = useRestoredStart(props);
   const form = useForm<FixDraftInput, unknown, FixDraft>({
     defaultValues: start.values,
-    resolver: zodResolver(fixSubmissionSchema),
+    resolver: zodResolver(fixSubmissionSchema, readableErrors),
     mode: 'onSubmit',
   });
   const { register, control, setValue, getValues, formState } = form;

@@ -93,3 +93,12 @@ export function fieldErrors(error: z.ZodError): Record<string, string[]> {
   }
   return fields;
 }
+
+/**
+ * zod's per-parse `error` option: every issue a schema leaves without a sentence of its own gets one with an
+ * example, so a form checked in the browser (e.g. through react-hook-form's zodResolver) never shows zod's
+ * wording. A schema's own messages still win.
+ */
+export const readableErrors = {
+  error: (issue: z.core.$ZodRawIssue): string => sentenceFor({ ...issue, path: issue.path ?? [], message: '' } as unknown as Issue),
+};

@@ -1,11 +1,10 @@
 // The order list as kept (browser storage or the order_lists table): merged lines by canonical spec, edits, CSV.
 import { z } from 'zod';
-import { buildOrderList, orderLineInputSchema, sparesFor, type OrderLine, type OrderLineInput, type Spares } from '@/lib/bench/order-list';
+import { buildOrderList, sparesFor, type OrderLine, type OrderLineInput, type Spares } from '@/lib/bench/order-list';
 import { orderListCsv } from '@/lib/bench/order-list-csv';
-import { readableMessage } from '@/lib/schemas/field-errors';
 import { partKinds } from '@/lib/schemas/revision';
 import { normaliseText } from '@/lib/values/text-key';
-import { fail, ok, type Result } from '@/lib/values/result';
+import { ok, type Result } from '@/lib/values/result';
 
 export const MAX_LIST_LINES = 2000;
 export const MAX_LINE_QUANTITY = 99_999;
@@ -49,12 +48,6 @@ export const storedListSchema = z.object(
   },
   { error: 'The order list holds a list of lines, e.g. 470 µF 16 V × 2.' },
 );
-
-/** Rows to add, as carried from a fix page in the address (?add=...). */
-export const addRowsSchema = z
-  .array(orderLineInputSchema, { error: 'The parts to add are a list of parts rows, e.g. 470uF 16V × 2.' })
-  .min(1, 'No parts to add; add them from a fix page, e.g. with "Add all parts to the order list".')
-  .max(500, 'At most 500 parts at a time; add the rest from a second fix.');
 
 /** Undecodable lines group by their text, so the same unreadable row from two fixes is one line. */
 function storedKey(line: OrderLine): string {
@@ -161,44 +154,4 @@ export function readStoredLines(raw: unknown): StoredLine[] {
     if (parsed.success && !lines.some((l) => l.key === parsed.data.key)) lines.push(parsed.data);
   }
   return lines;
-}
-
-function toBase64Url(bytes: Uint8Array): string {
-  let binary = '';
-  for (const byte of bytes) binary += String.fromCharCode(byte);
-  return btoa(binary).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '');
-}
-
-function fromBase64Url(text: string): Uint8Array {
-  const base64 = text.replace(/-/g, '+').replace(/_/g, '/');
-  const binary = atob(base64 + '='.repeat((4 - (base64.length % 4)) % 4));
-  return Uint8Array.from(binary, (c) => c.charCodeAt(0));
-}
-
-/** Longest ?add= payload read, well inside the server's header limit. */
-export const MAX_ADD_PAYLOAD = 12_000;
-
-/** Rows for the address, without empty fields so a fix's whole list stays short. */
-export function encodeAddRows(rows: readonly OrderLineInput[]): string {
-  const compact = rows.map((r) => Object.fromEntries(Object.entries(r).filter(([, v]) => v !== '' && v !== undefined)));
-  return toBase64Url(new TextEncoder().encode(JSON.stringify(compact)));
-}
-
-export function decodeAddRows(payload: string): Result<OrderLineInput[]> {
-  const example = 'a link from the "Add to order list" button on a fix page';
-  if (payload.length > MAX_ADD_PAYLOAD) return fail('The list of parts in the address is too long.', example);
-  if (!/^[A-Za-z0-9_-]+$/.test(payload)) return fail('The list of parts in the address is not readable.', example);
-  let json: unknown;
-  try {
-    json = JSON.parse(new TextDecoder('utf-8', { fatal: true }).decode(fromBase64Url(payload)));
-  } catch {
-    return fail('The list of parts in the address is not readable.', example);
-  }
-  const parsed = addRowsSchema.safeParse(json);
-  if (!parsed.success)
-    return fail(
-      `The parts in the address are not valid: ${parsed.error.issues[0] ? readableMessage(parsed.error.issues[0]) : 'unknown problem.'}`,
-      example,
-    );
-  return ok(parsed.data);
 }

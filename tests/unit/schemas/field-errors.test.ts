@@ -51,3 +51,32 @@ describe('readableMessage', () => {
     expect(issue && readableMessage(issue)).toBe('Email needs an e-mail address, e.g. name@example.org.');
   });
 });
+
+describe('readableErrors (the per-parse option forms in the browser use)', () => {
+  it("gives every issue a schema leaves without its own sentence one with an example, and keeps the schema's own", async () => {
+    const { z } = await import('zod');
+    const { readableErrors, isRawValidatorText } = await import('@/lib/schemas/field-errors');
+    const schema = z.object({
+      timeMinutes: z.number().int().min(1),
+      title: z.string().min(3, 'Give the fix a title, e.g. “Tray will not close”.'),
+      parts: z.array(z.object({ quantity: z.number() })),
+    });
+    const parsed = schema.safeParse({ timeMinutes: Number.NaN, title: 'x', parts: [{ quantity: 'two' }] }, readableErrors);
+    expect(parsed.success).toBe(false);
+    const messages = parsed.error!.issues.map((i) => i.message);
+    expect(messages).toContain('Give the fix a title, e.g. “Tray will not close”.');
+    expect(messages).toContain('Time minutes needs a number, e.g. 12.');
+    expect(messages).toContain('Quantity needs a number, e.g. 12.');
+    for (const message of messages) expect(isRawValidatorText(message)).toBe(false);
+  });
+
+  it('leaves nothing raw in the fix submission schema the editor checks with', async () => {
+    const { readableErrors, isRawValidatorText } = await import('@/lib/schemas/field-errors');
+    const { fixSubmissionSchema } = await import('@/lib/schemas/fix-draft');
+    for (const bad of [{}, { title: 5, symptoms: 'x', timeMinutes: 'soon', parts: [{ quantity: -1 }] }, null, []]) {
+      const parsed = fixSubmissionSchema.safeParse(bad, readableErrors);
+      expect(parsed.success).toBe(false);
+      for (const issue of parsed.error!.issues) expect(isRawValidatorText(issue.message), issue.message).toBe(false);
+    }
+  });
+});
