@@ -1,5 +1,5 @@
 // The one request-body reader: JSON or a URL-encoded form, size-capped (413), typed by content type (415), never a 500.
-import { refuse, succeed, type Outcome } from './result';
+import { refuse, succeed, type Failure, type Outcome } from './result';
 
 const KiB = 1024;
 
@@ -39,11 +39,15 @@ function kib(limit: number): string {
   return limit >= 1024 * KiB ? `${limit / (1024 * KiB)} MB` : `${Math.floor(limit / KiB)} kB`;
 }
 
-function tooLarge(limit: number) {
-  return refuse(
-    'payload_too_large',
-    `The body is larger than ${kib(limit)}; send less at a time, e.g. a long list in two parts or a long fix as two fixes.`,
-  );
+/** The unread rest of the body may still be arriving: close the connection rather than let a client reuse it. */
+function tooLarge(limit: number): Failure {
+  return {
+    ...refuse(
+      'payload_too_large',
+      `The body is larger than ${kib(limit)}; send less at a time, e.g. a long list in two parts or a long fix as two fixes.`,
+    ),
+    headers: { Connection: 'close' },
+  };
 }
 
 async function drain(reader: ReadableStreamDefaultReader<Uint8Array>, read: number, most: number): Promise<void> {

@@ -18,6 +18,8 @@ export interface Failure {
   detail?: Record<string, unknown>;
   /** For a rate limit: how long until the next try is counted again (the Retry-After header). */
   retryAfterSeconds?: number;
+  /** Headers the answer carries, e.g. Connection: close after an oversized body the reader stopped reading. */
+  headers?: Record<string, string>;
 }
 
 export type Outcome<T> = { ok: true; value: T } | Failure;
@@ -49,10 +51,8 @@ export function refuse(
  */
 export function respond<T>(outcome: Outcome<T>, init: { status?: number; cache?: keyof typeof cachePolicies } = {}): Response {
   if (outcome.ok) return json(outcome.value ?? { ok: true }, { status: init.status ?? 200, cache: init.cache ?? 'private' });
-  const headers: Record<string, string> = {};
+  const headers: Record<string, string> = { ...outcome.headers };
   if (outcome.retryAfterSeconds !== undefined) headers['Retry-After'] = String(outcome.retryAfterSeconds);
-  // The unread rest of an oversized body may still be arriving: close the connection rather than let a client reuse it.
-  if (outcome.code === 'payload_too_large') headers.Connection = 'close';
   return apiError(outcome.code, outcome.message, outcome.fields, { ...(outcome.detail ? { extra: outcome.detail } : {}), headers });
 }
 

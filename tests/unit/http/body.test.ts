@@ -62,7 +62,7 @@ describe('readBody', () => {
     const declared = await readBody(post('{}', 'application/json', { 'Content-Length': String(bodyLimits.tools + 1) }), {
       json: 'tools',
     });
-    expect(declared).toMatchObject({ ok: false, code: 'payload_too_large' });
+    expect(declared).toMatchObject({ ok: false, code: 'payload_too_large', headers: { Connection: 'close' } });
   });
 
   it('refuses a streamed body as soon as it passes its cap, whatever it claims', async () => {

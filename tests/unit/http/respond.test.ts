@@ -42,13 +42,14 @@ describe('respond', () => {
     });
   });
 
-  it('sends Retry-After for a rate limit and closes the connection after a 413', () => {
+  it('sends Retry-After for a rate limit and the headers a refusal carries', () => {
     const limited = respond(refuse('too_many_requests', 'Wait 2 minutes.', undefined, undefined, 90));
     expect(limited.status).toBe(429);
     expect(limited.headers.get('Retry-After')).toBe('90');
-    const large = respond(refuse('payload_too_large', 'Send less, e.g. half the list.'));
+    const large = respond({ ...refuse('payload_too_large', 'Send less, e.g. half the list.'), headers: { Connection: 'close' } });
     expect(large.status).toBe(413);
     expect(large.headers.get('Connection')).toBe('close');
+    expect(respond(refuse('payload_too_large', 'Send less, e.g. one photo at a time.')).headers.get('Connection')).toBeNull();
   });
 
   it('has a status for every error code', () => {
