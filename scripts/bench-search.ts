@@ -8,8 +8,7 @@
     naive    – one ILIKE per word over the text columns, AND-ed, best bench score first, LIMIT 10 (no facets)
   Usage: npm run bench:search [-- --sizes 10000,100000 --rounds 5]
 */
-import { readConfig } from '../src/server/core/config.ts';
-import { ensureDatabase, run } from './lib/prepare.ts';
+import { run, useOwnDatabase } from './lib/prepare.ts';
 
 const DB = 'benchlore_bench';
 const arg = (name: string, fallback: string) => {
@@ -19,18 +18,7 @@ const arg = (name: string, fallback: string) => {
 const SIZES = arg('sizes', '10000,100000').split(',').map(Number);
 const ROUNDS = Number(arg('rounds', '5'));
 
-const env: NodeJS.ProcessEnv = {
-  ...process.env,
-  BENCHLORE_DB_NAME: DB,
-  BENCHLORE_MEDIA_DIR: '.data/media-benchlore_bench',
-  LOG_LEVEL: 'warn',
-};
-delete env.DATABASE_URL;
-delete env.MEILI_URL;
-Object.assign(process.env, env);
-delete process.env.MEILI_URL;
-readConfig(env);
-await ensureDatabase(env, { fresh: true });
+const env = await useOwnDatabase(DB);
 run(process.execPath, ['--import', 'tsx', 'scripts/migrate.ts'], env);
 
 // Imported only now: the app's Knex reads BENCHLORE_DB_NAME when it is first loaded.

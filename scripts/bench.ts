@@ -12,7 +12,7 @@
 import { spawnSync } from 'node:child_process';
 import { cpus, totalmem } from 'node:os';
 import { parseArgs } from 'node:util';
-import { ensureDatabase, migrateAndSeed, buildIfStale } from './lib/prepare.ts';
+import { buildIfStale, migrateAndSeed, useOwnDatabase } from './lib/prepare.ts';
 
 const { values } = parseArgs({
   options: {
@@ -31,20 +31,11 @@ const PORT = 4480;
 console.log(`Machine: ${cpus().length} × ${cpus()[0]?.model.trim()}, ${(totalmem() / 2 ** 30).toFixed(0)} GB, Node ${process.version}\n`);
 
 if (only.has('pages') || only.has('photos')) {
-  const env: NodeJS.ProcessEnv = {
-    ...process.env,
-    BENCHLORE_DB_NAME: 'benchlore_bench_pages',
-    BENCHLORE_MEDIA_DIR: `${process.env.BENCHLORE_DATA_DIR ?? '.data'}/media-benchlore_bench_pages`,
+  const env = await useOwnDatabase('benchlore_bench_pages', {
     AUTH_SECRET: process.env.AUTH_SECRET ?? 'bench-secret-not-for-production-0123456789',
-    LOG_LEVEL: 'warn',
-  };
-  delete env.DATABASE_URL;
-  delete env.MEILI_URL;
-  delete env.SMTP_URL;
-  await ensureDatabase(env, { fresh: true });
+  });
   migrateAndSeed(env);
   buildIfStale(env);
-  Object.assign(process.env, env);
   const { startBenchServer } = await import('./bench/server.ts');
   const { benchPages, pagesTable } = await import('./bench/pages.ts');
   const { benchPhoto, photoTable } = await import('./bench/photos.ts');

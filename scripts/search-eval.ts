@@ -8,8 +8,7 @@
   Usage: npm run search:eval [-- --provider postgres|meilisearch] [-- --scopes machine,all] [-- --set tuned,holdout]
   Both query sets run by default: the tuned set (search was tuned against it) and the held-out set.
 */
-import { readConfig } from '../src/server/core/config.ts';
-import { ensureDatabase, migrateAndSeed } from './lib/prepare.ts';
+import { migrateAndSeed, useOwnDatabase } from './lib/prepare.ts';
 
 const arg = (name: string, fallback: string) => {
   const at = process.argv.indexOf(`--${name}`);
@@ -19,18 +18,7 @@ const providers = arg('provider', 'postgres,meilisearch').split(',');
 const scopes = arg('scopes', 'machine,all').split(',') as ('machine' | 'family' | 'all')[];
 const sets = arg('set', 'tuned,holdout').split(',') as ('tuned' | 'holdout')[];
 
-const env: NodeJS.ProcessEnv = {
-  ...process.env,
-  BENCHLORE_DB_NAME: process.env.BENCHLORE_EVAL_DB ?? 'benchlore_search_eval',
-  BENCHLORE_MEDIA_DIR: `.data/media-${process.env.BENCHLORE_EVAL_DB ?? 'benchlore_search_eval'}`,
-  LOG_LEVEL: 'warn',
-};
-delete env.DATABASE_URL;
-delete env.MEILI_URL;
-Object.assign(process.env, env);
-delete process.env.MEILI_URL;
-readConfig(env);
-await ensureDatabase(env, { fresh: true });
+const env = await useOwnDatabase(process.env.BENCHLORE_EVAL_DB ?? 'benchlore_search_eval');
 migrateAndSeed(env);
 
 // Imported only now: the app's Knex reads BENCHLORE_DB_NAME when it is first loaded.

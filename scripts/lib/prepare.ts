@@ -36,3 +36,26 @@ export function buildIfStale(env: NodeJS.ProcessEnv): void {
   run(process.execPath, ['node_modules/astro/astro.js', 'build', '--outDir', distDir], { ...env, NODE_ENV: 'production' });
   markBuilt();
 }
+
+/**
+ * For a script that works in a database of its own (benchmarks, the search evaluation): never the app's or a
+ * test database, never Meilisearch, a fresh database every run. Sets this process's environment too, so the
+ * app's Knex, imported after this, connects to it.
+ */
+export async function useOwnDatabase(name: string, extra: NodeJS.ProcessEnv = {}): Promise<NodeJS.ProcessEnv> {
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    BENCHLORE_DB_NAME: name,
+    BENCHLORE_MEDIA_DIR: `${process.env.BENCHLORE_DATA_DIR ?? '.data'}/media-${name}`,
+    LOG_LEVEL: 'warn',
+    ...extra,
+  };
+  delete env.DATABASE_URL;
+  delete env.MEILI_URL;
+  delete env.SMTP_URL;
+  Object.assign(process.env, env);
+  delete process.env.MEILI_URL;
+  readConfig(env);
+  await ensureDatabase(env, { fresh: true });
+  return env;
+}

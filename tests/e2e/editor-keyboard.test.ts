@@ -43,6 +43,8 @@ describe('tables in the remedy editor from the keyboard', () => {
     await arrowTo(page, 'Insert table');
     await page.keyboard.press('Enter');
     await expect(remedy.locator('table').count()).resolves.toBe(1);
+    // The editor takes focus back a frame after the button's action; the typing below goes into the first cell.
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('role'))).toBe('textbox');
 
     for (const text of ['Test point', 'Expected', 'Measured', 'TP4', '12 V', '11.6 V']) {
       await page.keyboard.type(text);
@@ -57,7 +59,7 @@ describe('tables in the remedy editor from the keyboard', () => {
     await arrowTo(page, 'Add table row below');
     await page.keyboard.press('Enter');
     await expect(remedy.locator('tr').count()).resolves.toBe(rows + 1);
-    await expect(page.evaluate(() => document.activeElement?.getAttribute('role'))).resolves.toBe('textbox');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute('role'))).toBe('textbox');
     await context.close();
   });
 });

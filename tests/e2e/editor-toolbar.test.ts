@@ -45,9 +45,26 @@ async function openWriting(user: TestUser, path = '/write'): Promise<{ page: Pag
 
 const focusedLabel = (page: Page) => page.evaluate(() => document.activeElement?.getAttribute('aria-label') ?? '');
 
+/**
+ * Waits until focus stops moving: after a button's action the editor takes focus back a frame later, and a key
+ * pressed before that lands on the button instead, as it would for a person pressing keys that fast.
+ */
+async function focusSettled(page: Page): Promise<void> {
+  let last = await focusedLabel(page);
+  for (let i = 0; i < 20; i++) {
+    await page.waitForTimeout(50);
+    const now = await focusedLabel(page);
+    if (now === last) return;
+    last = now;
+  }
+}
+
 /** From the remedy, Alt+F10 to the toolbar, then arrow keys to the named button (the toolbar is one tab stop). */
 async function toToolbarButton(page: Page, label: string): Promise<void> {
-  await page.keyboard.press('Alt+F10');
+  await focusSettled(page);
+  const inToolbar = () => page.evaluate(() => document.activeElement?.closest('[role="toolbar"]') !== null);
+  if (!(await inToolbar())) await page.keyboard.press('Alt+F10');
+  expect(await inToolbar(), 'Alt+F10 reached the toolbar').toBe(true);
   for (let i = 0; i < 30 && (await focusedLabel(page)) !== label; i++) await page.keyboard.press('ArrowRight');
   expect(await focusedLabel(page)).toBe(label);
 }

@@ -42,14 +42,16 @@ describe('demo world', () => {
 });
 
 describe('seeding', () => {
-  // A database of its own: other tests change the shared one while they run.
+  // A database of its own: other tests change the shared one while they run. Dropped without FORCE: that option
+  // would try to end an autovacuum worker busy on the fresh data, which only a superuser may do; a plain DROP
+  // ends autovacuum workers itself.
   const SCRATCH = `${TEST_DB}_seed`;
   let admin: Knex;
   let scratch: Knex;
 
   beforeAll(async () => {
     admin = testDb('postgres');
-    await admin.raw(`DROP DATABASE IF EXISTS ${SCRATCH} WITH (FORCE)`);
+    await admin.raw(`DROP DATABASE IF EXISTS ${SCRATCH}`);
     await admin.raw(`CREATE DATABASE ${SCRATCH}`);
     scratch = testDb(SCRATCH);
     await scratch.migrate.latest({ ...knexConfig.migrations });
@@ -57,7 +59,7 @@ describe('seeding', () => {
 
   afterAll(async () => {
     await scratch?.destroy();
-    await admin?.raw(`DROP DATABASE IF EXISTS ${SCRATCH} WITH (FORCE)`);
+    await admin?.raw(`DROP DATABASE IF EXISTS ${SCRATCH}`);
     await admin?.destroy();
   });
 
