@@ -3,7 +3,7 @@
 import { parseArgs } from 'node:util';
 import { z } from 'zod';
 import { readConfig } from '../src/server/core/config.ts';
-import { displayNameSchema, emailSchema, newPasswordSchema } from '../src/lib/schemas/account.ts';
+import { displayNameSchema, emailSchema, newPasswordSchema } from '../src/lib/schemas/account-fields.ts';
 import { db, closeDb } from '../src/server/core/db.ts';
 import { writeAudit } from '../src/server/core/audit.ts';
 import { hashPassword } from '../src/server/auth/passwords.ts';

@@ -4,7 +4,8 @@ import { can } from '@/lib/permissions';
 import { fieldErrors } from '@/server/http/responses';
 import { consume } from '@/server/http/rate-limit';
 import { benchReportFromForm, saveBenchReport } from '@/server/bench-work/bench-reports';
-import { benchFormFields, benchRefusal, benchReportInputSchema, typedFields, type FormActionResult } from '@/lib/schemas/bench-work';
+import { benchFormFields, benchRefusal, benchReportInputSchema } from '@/lib/schemas/bench-report';
+import { typedFields, type FormActionResult } from '@/lib/form-fields';
 
 export type BenchReportFormResult = FormActionResult<{ fix: string; counted: boolean }>;
 

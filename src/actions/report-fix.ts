@@ -2,8 +2,9 @@
 import type { ActionAPIContext } from 'astro:actions';
 import { can } from '@/lib/permissions';
 import { fieldErrors } from '@/server/http/responses';
-import { createReport, reportInputSchema } from '@/server/fixes/reports';
-import { formText, typedFields, type FormActionResult } from '@/lib/schemas/bench-work';
+import { createReport } from '@/server/fixes/reports';
+import { reportInputSchema } from '@/lib/schemas/fix-report-input';
+import { formText, typedFields, type FormActionResult } from '@/lib/form-fields';
 
 export type ReportFixFormResult = FormActionResult<{ fix: string }>;
 

@@ -7,7 +7,8 @@ import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, PASSWORD } from '../integration/bench-work-support';
 import { createHandoverNote } from '@/server/bench-work/handover-notes';
 import { createJobSheet } from '@/server/bench-work/job-sheets';
-import { handoverNoteInputSchema, jobSheetCreateSchema } from '@/lib/schemas/bench-work';
+import { handoverNoteInputSchema } from '@/lib/schemas/handover-note';
+import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
 import { cautionKinds } from '@/lib/schemas/revision';
 import { closeDb } from '@/server/core/db';
 

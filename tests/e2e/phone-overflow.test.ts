@@ -10,7 +10,8 @@ import { call, completeValues, someMachineId } from '../fixtures/writing';
 import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
 import { applyFixToJob, createJobSheet } from '@/server/bench-work/job-sheets';
 import { createHandoverNote } from '@/server/bench-work/handover-notes';
-import { handoverNoteInputSchema, jobSheetCreateSchema } from '@/lib/schemas/bench-work';
+import { handoverNoteInputSchema } from '@/lib/schemas/handover-note';
+import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
 import { closeDb } from '@/server/core/db';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;

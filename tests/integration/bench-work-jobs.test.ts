@@ -14,7 +14,9 @@ import {
   updateJobSheet,
 } from '@/server/bench-work/job-sheets';
 import { createHandoverNote } from '@/server/bench-work/handover-notes';
-import { handoverNoteInputSchema, jobSheetCreateSchema, jobSheetListQuerySchema, jobSheetPatchSchema } from '@/lib/schemas/bench-work';
+import { handoverNoteInputSchema } from '@/lib/schemas/handover-note';
+import { jobSheetCreateSchema, jobSheetPatchSchema } from '@/lib/schemas/job-sheet';
+import { jobSheetListQuerySchema } from '@/lib/schemas/job-sheet-list';
 import { closeDb } from '@/server/core/db';
 
 const knex = testDb();

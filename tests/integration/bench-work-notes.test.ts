@@ -4,7 +4,8 @@ import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, proofNewRevision, type TestFix, type TestWorld } from './bench-work-support';
 import { createHandoverNote, findPublicNote, getOwnNote, invoiceLine, listOwnNotes, revokeNote } from '@/server/bench-work/handover-notes';
 import { createJobSheet, deleteJobSheet } from '@/server/bench-work/job-sheets';
-import { handoverNoteInputSchema, jobSheetCreateSchema } from '@/lib/schemas/bench-work';
+import { handoverNoteInputSchema } from '@/lib/schemas/handover-note';
+import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
 import { HANDOVER_ALPHABET } from '@/lib/handover-code';
 import { closeDb } from '@/server/core/db';
 

@@ -4,7 +4,7 @@ import { testDb } from '../support/db';
 import { makeFix, makeMember, makeWorld, type TestFix, type TestWorld } from './bench-work-support';
 import { eligibleMachines, listOwnBenchReports, saveBenchReport } from '@/server/bench-work/bench-reports';
 import { benchCountsByRevision, benchScoresFor } from '@/server/bench-work/bench-scores';
-import { benchReportInputSchema } from '@/lib/schemas/bench-work';
+import { benchReportInputSchema } from '@/lib/schemas/bench-report';
 import { wilsonLowerBound } from '@/lib/bench/bench-score';
 import { closeDb } from '@/server/core/db';
 

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import { isLocalPath, localPathOr, MAX_LOCAL_PATH } from '@/lib/local-path';
-import { nextPathSchema } from '@/lib/schemas/account';
+import { nextPathSchema } from '@/lib/schemas/account-fields';
 
 describe('isLocalPath', () => {
   it.each([

@@ -2,16 +2,14 @@
 // and the optional fields an empty input leaves out (so "optional" applies rather than "too short").
 import type { z } from 'zod';
 import { fieldErrors } from './field-errors';
-import {
-  deleteAccountSchema,
-  emailChangeSchema,
-  emailRequestSchema,
-  passwordChangeSchema,
-  profileSchema,
-  resetPasswordSchema,
-  signInSchema,
-  signUpSchema,
-} from './account';
+import { deleteAccountSchema } from './delete-account';
+import { emailChangeSchema } from './email-change';
+import { emailRequestSchema } from './email-request';
+import { passwordChangeSchema } from './password-change';
+import { profileSchema } from './profile';
+import { resetPasswordSchema } from './reset-password';
+import { signInSchema } from './sign-in';
+import { signUpSchema } from './sign-up';
 
 interface FormCheck {
   schema: z.ZodType;

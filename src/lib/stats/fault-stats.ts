@@ -1,5 +1,5 @@
 // Turns bench report counts into chart rows: outcomes in a fixed order, the most reported faults first.
-import { benchOutcomeLabels, benchOutcomes, type BenchOutcome } from '@/lib/schemas/bench-work';
+import { benchOutcomeLabels, benchOutcomes, type BenchOutcome } from '@/lib/schemas/bench-report';
 import type { BarDatum, BarTone } from './bar-chart';
 
 export type OutcomeTally = Record<BenchOutcome, number>;

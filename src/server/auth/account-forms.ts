@@ -1,6 +1,9 @@
 // The account page's forms: profile, e-mail address, password, confirmation mail, signing out everywhere,
 // deleting the account.
-import { deleteAccountSchema, emailChangeSchema, passwordChangeSchema, profileSchema } from '@/lib/schemas/account';
+import { deleteAccountSchema } from '@/lib/schemas/delete-account';
+import { emailChangeSchema } from '@/lib/schemas/email-change';
+import { passwordChangeSchema } from '@/lib/schemas/password-change';
+import { profileSchema } from '@/lib/schemas/profile';
 import type { SessionUser } from '@/lib/permissions';
 import { fieldErrors } from '../http/responses';
 import { check, consume } from '../http/rate-limit';

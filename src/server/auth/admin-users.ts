@@ -1,7 +1,9 @@
 // Members and roles for the admin page: search, role changes and suspensions, each written to the audit log.
 import type { Knex } from 'knex';
 import { can, type Role, type SessionUser } from '@/lib/permissions';
-import { roleChangeSchema, suspendSchema, unsuspendSchema } from '@/lib/schemas/account';
+import { roleChangeSchema } from '@/lib/schemas/role-change';
+import { suspendSchema } from '@/lib/schemas/suspend';
+import { unsuspendSchema } from '@/lib/schemas/unsuspend';
 import { db } from '../core/db';
 import { writeAudit } from '../core/audit';
 import { fieldErrors } from '../http/responses';

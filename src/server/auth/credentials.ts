@@ -1,7 +1,7 @@
 // Checks an e-mail address and password for Auth.js's Credentials provider; returns the database user id.
 import { randomBytes } from 'node:crypto';
 import { CredentialsSignin } from '@auth/core/errors';
-import { signInSchema } from '@/lib/schemas/account';
+import { signInSchema } from '@/lib/schemas/sign-in';
 import { hashPassword, verifyPassword } from './passwords';
 import { findUserByEmail } from './users';
 

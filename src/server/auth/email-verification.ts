@@ -3,7 +3,7 @@ import { consume } from '../http/rate-limit';
 import { sendInBackground } from '../mail/send';
 import { confirmAddressMail } from '../mail/templates';
 import type { SessionUser } from '@/lib/permissions';
-import { tokenSchema } from '@/lib/schemas/account';
+import { tokenSchema } from '@/lib/schemas/account-fields';
 import { redirectTo, tooMany, type FormOutcome } from './form-outcome';
 import { siteUrl } from './sign-up';
 import { consumeToken, issueToken } from './user-tokens';

@@ -1,5 +1,6 @@
 // Forgotten passwords: a one-hour, single-use link by e-mail, then a new password that ends every session.
-import { emailRequestSchema, resetPasswordSchema } from '@/lib/schemas/account';
+import { emailRequestSchema } from '@/lib/schemas/email-request';
+import { resetPasswordSchema } from '@/lib/schemas/reset-password';
 import { db } from '../core/db';
 import { fieldErrors } from '../http/responses';
 import { consume } from '../http/rate-limit';

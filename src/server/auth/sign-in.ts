@@ -1,5 +1,6 @@
 // The sign-in page's two forms: password (Credentials) and "e-mail me a link" (Nodemailer), rate-limited.
-import { emailRequestSchema, signInSchema } from '@/lib/schemas/account';
+import { emailRequestSchema } from '@/lib/schemas/email-request';
+import { signInSchema } from '@/lib/schemas/sign-in';
 import { fieldErrors } from '../http/responses';
 import { check, consume, forgive } from '../http/rate-limit';
 import { signInWithPassword, requestSignInLink } from './auth-js';

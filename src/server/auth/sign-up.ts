@@ -1,5 +1,5 @@
 // Joining: a new member with a hashed password, signed in at once, and a confirmation mail; an address already in use gets a note instead.
-import { signUpSchema } from '@/lib/schemas/account';
+import { signUpSchema } from '@/lib/schemas/sign-up';
 import { config } from '../core/config';
 import { fieldErrors } from '../http/responses';
 import { consume } from '../http/rate-limit';

@@ -5,7 +5,8 @@ import type { Failure } from '../http/result';
 import { benchScoresFor, emptyBenchScore, type BenchScoreView } from './bench-scores';
 import { refreshBenchScoreColumns } from '../search/bench-score-columns';
 import type { Reading } from '@/lib/schemas/revision';
-import { formNumber, formRows, formText, type BenchOutcome, type BenchReportData, type FormFields } from '@/lib/schemas/bench-work';
+import { formNumber, formRows, formText, type FormFields } from '@/lib/form-fields';
+import { type BenchOutcome, type BenchReportData } from '@/lib/schemas/bench-report';
 
 export interface LiveFixRef {
   id: number;

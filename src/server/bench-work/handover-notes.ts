@@ -6,7 +6,9 @@ import { config } from '../core/config';
 import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { generateHandoverCode, normaliseHandoverCode } from '@/lib/handover-code';
 import type { Caution, CautionKind } from '@/lib/schemas/revision';
-import { fixRefFromText, formNumber, formText, type FormFields, type HandoverNoteData, type JobStatus } from '@/lib/schemas/bench-work';
+import { fixRefFromText, formNumber, formText, type FormFields } from '@/lib/form-fields';
+import { type HandoverNoteData } from '@/lib/schemas/handover-note';
+import { type JobStatus } from '@/lib/schemas/job-sheet';
 
 export interface NoteAuthor {
   id: number;

@@ -3,15 +3,8 @@ import { fieldErrors } from '../http/responses';
 import { refuse, succeed, type Failure, type Outcome } from '../http/result';
 import { applyFixToJob, deleteJobSheet, removeFixFromJob, updateJobSheet } from './job-sheets';
 import { putJobPartsOnOrderList, takePartsFromOrderList } from './job-sheet-parts';
-import {
-  fixRefFromText,
-  formNumber,
-  formRows,
-  formText,
-  jobSheetCreateSchema,
-  jobSheetPatchSchema,
-  type FormFields,
-} from '@/lib/schemas/bench-work';
+import { fixRefFromText, formNumber, formRows, formText, type FormFields } from '@/lib/form-fields';
+import { jobSheetCreateSchema, jobSheetPatchSchema } from '@/lib/schemas/job-sheet';
 
 export const partFields = ['ref', 'kind', 'value', 'rating', 'quantity', 'notes', 'source'] as const;
 

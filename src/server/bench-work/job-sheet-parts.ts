@@ -5,7 +5,7 @@ import { db } from '../core/db';
 import { addToOrderList, lockedList, writeLines } from './order-lists';
 import type { WriteResult } from './job-sheets';
 import { appendUsedParts, usedPartsFromList, type UsedPart } from '@/lib/bench/job-parts';
-import { jobPartSchema } from '@/lib/schemas/bench-work';
+import { jobPartSchema } from '@/lib/schemas/job-sheet';
 import { z } from 'zod';
 
 const notFound = { ok: false as const, code: 'not_found' as const, message: 'No job sheet with that number.' };

@@ -7,7 +7,8 @@ import { can, type SessionUser } from '@/lib/permissions';
 import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { config } from '../core/config';
 import { listOwnNotes } from './handover-notes';
-import type { JobPart, JobSheetCreate, JobSheetListQuery, JobSheetPatch, JobStatus } from '@/lib/schemas/bench-work';
+import type { JobPart, JobSheetCreate, JobSheetPatch, JobStatus } from '@/lib/schemas/job-sheet';
+import type { JobSheetListQuery } from '@/lib/schemas/job-sheet-list';
 
 export interface JobMachine {
   id: number;

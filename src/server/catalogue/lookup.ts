@@ -1,12 +1,7 @@
 // The writing island's type-ahead over the catalogue: machines and chassis families matching what is typed.
-import { z } from 'zod';
+import type { LookupQuery } from '@/lib/schemas/catalogue-lookup';
 import { normaliseCode } from '@/lib/schemas/catalogue';
 import { db } from '../core/db';
-
-export const lookupQuerySchema = z.object({
-  q: z.string().trim().min(1, 'Type part of a model number, maker or chassis name.').max(60),
-  kind: z.enum(['machine', 'chassis', 'all']).default('all'),
-});
 
 export interface LookupHit {
   kind: 'machine' | 'chassis';
@@ -16,7 +11,7 @@ export interface LookupHit {
 }
 
 /** Model numbers match loosely ("dr410" finds "DR-410K"); words match makers and family names. */
-export async function lookupCatalogue(query: z.infer<typeof lookupQuerySchema>): Promise<LookupHit[]> {
+export async function lookupCatalogue(query: LookupQuery): Promise<LookupHit[]> {
   const knex = db();
   const code = normaliseCode(query.q);
   const words = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;

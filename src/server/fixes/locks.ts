@@ -1,17 +1,10 @@
 // Moderators lock a fix against new revisions or hide it from readers (and search); every change is audited.
-import { z } from 'zod';
 import { can } from '@/lib/permissions';
+import type { FixFlag, FixFlagAction } from '@/lib/schemas/fix-flag';
 import { db } from '../core/db';
 import { writeAudit } from '../proofing/audit';
 import { refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { refreshFixSearchRow } from '../search/fix-search-row';
-
-export const fixFlagActions = ['lock', 'unlock', 'hide', 'unhide'] as const;
-export type FixFlagAction = (typeof fixFlagActions)[number];
-export const fixFlagSchema = z.object({
-  action: z.enum(fixFlagActions, { error: 'Choose lock, unlock, hide or unhide.' }),
-  note: z.string().trim().max(2000).default(''),
-});
 
 const columns: Record<FixFlagAction, { at: string; by: string; set: boolean }> = {
   lock: { at: 'locked_at', by: 'locked_by', set: true },
@@ -23,7 +16,7 @@ const columns: Record<FixFlagAction, { at: string; by: string; set: boolean }> =
 export async function setFixFlag(
   moderator: Writer,
   fixSlug: string,
-  input: z.infer<typeof fixFlagSchema>,
+  input: FixFlag,
 ): Promise<Outcome<{ fixId: number }>> {
   const permission = input.action === 'lock' || input.action === 'unlock' ? 'lock_fix' : 'hide_fix';
   if (!can(moderator, permission)) return refuse('forbidden', 'Only moderators lock or hide fixes.');

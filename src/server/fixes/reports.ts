@@ -1,21 +1,11 @@
 // Reports on fixes (wrong, dangerous, spam, duplicate): members file them, moderators resolve or dismiss them.
-import { z } from 'zod';
 import { reportReasons } from '@/lib/schemas/fix-report';
+import type { ReportInput } from '@/lib/schemas/fix-report-input';
+import type { Resolution } from '@/lib/schemas/report-resolution';
 import { can } from '@/lib/permissions';
 import { db } from '../core/db';
 import { writeAudit } from '../proofing/audit';
 import { refuse, succeed, type Outcome, type Writer } from '../http/result';
-
-export const reportInputSchema = z
-  .object({
-    reason: z.enum(reportReasons, { error: 'Choose why you are reporting this fix.' }),
-    detail: z.string().trim().max(2000, 'The detail is at most 2000 characters.').default(''),
-  })
-  .refine((r) => r.reason === 'spam' || r.detail.length >= 10, {
-    path: ['detail'],
-    message: 'Say in a sentence what is wrong, so a moderator can check it.',
-  });
-export type ReportInput = z.infer<typeof reportInputSchema>;
 
 /** Files a report on a live fix; a second open report for the same reason by the same member is refused. */
 export async function createReport(reporter: Writer, fixSlug: string, input: ReportInput): Promise<Outcome<{ id: number }>> {
@@ -85,13 +75,8 @@ export async function listOpenReports(): Promise<OpenReport[]> {
   }));
 }
 
-export const resolutionSchema = z.object({
-  outcome: z.enum(['resolved', 'dismissed'], { error: 'Choose to resolve or dismiss the report.' }),
-  note: z.string().trim().max(2000).default(''),
-});
-
 /** A moderator closes a report: resolved (acted on) or dismissed (nothing to do). */
-export async function closeReport(moderator: Writer, reportId: number, input: z.infer<typeof resolutionSchema>): Promise<Outcome<null>> {
+export async function closeReport(moderator: Writer, reportId: number, input: Resolution): Promise<Outcome<null>> {
   if (!can(moderator, 'moderate')) return refuse('forbidden', 'Only moderators handle reports.');
   return db().transaction(async (trx) => {
     const report = await trx('reports').where({ id: reportId }).forUpdate().first('state');

@@ -1,21 +1,11 @@
 // Takes in an uploaded photo: checks type, size and pixels, refuses duplicates, and queues its renditions.
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
-import { z } from 'zod';
+import { photoTextSchema } from '@/lib/schemas/photo-text';
 import { issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { MAX_INPUT_PIXELS, openImage, readImageHeader } from './sharp-factory';
 import { sniffPhotoType } from './sniff';
 import { photoRef, type PhotoRef } from './photo-refs';
-import { MAX_ALT_LENGTH, MAX_CAPTION_LENGTH } from './upload-limits';
-
-export const photoTextSchema = z.object({
-  alt: z
-    .string()
-    .trim()
-    .min(1, 'Describe what the photo shows (alt text), for readers who cannot see it.')
-    .max(MAX_ALT_LENGTH, `Alt text is at most ${MAX_ALT_LENGTH} characters.`),
-  caption: z.string().trim().max(MAX_CAPTION_LENGTH, `The caption is at most ${MAX_CAPTION_LENGTH} characters.`).default(''),
-});
 
 export type IntakeOutcome = Outcome<PhotoRef>;
 

@@ -2,7 +2,8 @@
 import { Readable } from 'node:stream';
 import busboy from 'busboy';
 import { refuse, succeed, type Outcome } from '../http/result';
-import { MAX_CAPTION_LENGTH, MAX_PHOTO_BYTES, MAX_UPLOAD_REQUEST_BYTES } from './upload-limits';
+import { MAX_CAPTION_LENGTH } from '@/lib/schemas/photo-text';
+import { MAX_PHOTO_BYTES, MAX_UPLOAD_REQUEST_BYTES } from './upload-limits';
 
 export interface PhotoUpload {
   bytes: Buffer;

@@ -1,24 +1,15 @@
 // Deciding on a waiting revision: proofing it (it goes live) or returning it to its author (with a note).
 import type { Knex } from 'knex';
-import { z } from 'zod';
 import { can } from '@/lib/permissions';
 import { submissionIssues } from '@/lib/schemas/fix-draft';
+import { proofNoteSchema } from '@/lib/schemas/proof-note';
+import { returnNoteSchema } from '@/lib/schemas/return-note';
 import { db } from '../core/db';
 import { writeAudit } from './audit';
 import { notifyAuthorOf } from './mail';
 import { publishRevision } from './publish';
 import { issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { loadRevision, type RevisionRecord } from '../writing/revisions';
-
-export const proofNoteSchema = z.string().trim().max(2000, 'The note is at most 2000 characters.');
-export const returnNoteSchema = proofNoteSchema.pipe(
-  z
-    .string()
-    .min(
-      1,
-      'Say what the author should change, for example “Give the polarity of C512 and the reading at TP12.” A returned revision always carries a note.',
-    ),
-);
 
 type Decision = 'proof' | 'return';
 

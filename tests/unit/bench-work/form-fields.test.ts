@@ -1,6 +1,6 @@
 // Unit tests of the plain-form readers: repeated rows, blank rows dropped, numbers, fields kept as typed.
 import { describe, expect, it } from 'vitest';
-import { fixRefFromText, formNumber, formRows, formText, typedFields } from '@/lib/schemas/bench-work';
+import { fixRefFromText, formNumber, formRows, formText, typedFields } from '@/lib/form-fields';
 
 describe('formText and formNumber', () => {
   it('trims text and treats a blank field as missing', () => {

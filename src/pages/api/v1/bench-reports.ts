@@ -7,7 +7,7 @@ import { listOwnBenchReports, saveBenchReport } from '@/server/bench-work/bench-
 import { readBody } from '@/server/http/body';
 import { consume } from '@/server/http/rate-limit';
 import { respond, parseSearchParams } from '@/server/http/result';
-import { benchReportInputSchema } from '@/lib/schemas/bench-work';
+import { benchReportInputSchema } from '@/lib/schemas/bench-report';
 import { slugSchema } from '@/lib/schemas/slug';
 
 const listQuery = z.object({ fix: slugSchema.optional() });

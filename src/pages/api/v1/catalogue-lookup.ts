@@ -2,7 +2,8 @@
 import type { APIRoute } from 'astro';
 import { parseSearchParams, respond } from '@/server/http/result';
 import { json } from '@/server/http/responses';
-import { lookupCatalogue, lookupQuerySchema } from '@/server/catalogue/lookup';
+import { lookupCatalogue } from '@/server/catalogue/lookup';
+import { lookupQuerySchema } from '@/lib/schemas/catalogue-lookup';
 
 export const GET: APIRoute = async ({ url }) => {
   const query = parseSearchParams(lookupQuerySchema, url);

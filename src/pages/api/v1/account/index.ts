@@ -1,7 +1,7 @@
 // The signed-in account as JSON: who you are and what you may do; PATCH changes the name and shop name.
 import type { APIRoute } from 'astro';
 import { allowedActions } from '@/lib/permissions';
-import { profileSchema } from '@/lib/schemas/account';
+import { profileSchema } from '@/lib/schemas/profile';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { readBody } from '@/server/http/body';
 import { respond } from '@/server/http/result';

@@ -6,7 +6,7 @@ import { readBody } from '@/server/http/body';
 import { consume } from '@/server/http/rate-limit';
 import { respond } from '@/server/http/result';
 import { createHandoverNote, getOwnNote, listOwnNotes } from '@/server/bench-work/handover-notes';
-import { handoverNoteInputSchema } from '@/lib/schemas/bench-work';
+import { handoverNoteInputSchema } from '@/lib/schemas/handover-note';
 
 export const GET: APIRoute = async ({ locals }) => {
   const user = locals.user;

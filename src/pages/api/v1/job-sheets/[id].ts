@@ -4,7 +4,7 @@ import { respond } from '@/server/http/result';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { readBody } from '@/server/http/body';
 import { deleteJobSheet, getJobSheet, jobSheetMissing, jobSheetRequest, updateJobSheet } from '@/server/bench-work/job-sheets';
-import { jobSheetPatchSchema } from '@/lib/schemas/bench-work';
+import { jobSheetPatchSchema } from '@/lib/schemas/job-sheet';
 
 export const GET: APIRoute = async ({ locals, params }) => {
   const job = jobSheetRequest(locals.user, params.id);

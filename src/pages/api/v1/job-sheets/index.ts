@@ -5,7 +5,8 @@ import { can } from '@/lib/permissions';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { readBody } from '@/server/http/body';
 import { createJobSheet, getJobSheet, listJobSheets } from '@/server/bench-work/job-sheets';
-import { jobSheetCreateSchema, jobSheetListQuerySchema } from '@/lib/schemas/bench-work';
+import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
+import { jobSheetListQuerySchema } from '@/lib/schemas/job-sheet-list';
 
 export const GET: APIRoute = async ({ locals, url }) => {
   const user = locals.user;

@@ -5,7 +5,7 @@ import { db } from '@/server/core/db';
 import { updatePhotoText } from '@/server/photos/photo-text';
 import { photoRef } from '@/server/photos/photo-refs';
 import { kickPhotoWork } from '@/server/photos/worker';
-import { photoTextSchema } from '@/server/photos/intake';
+import { photoTextSchema } from '@/lib/schemas/photo-text';
 import { idParam, requireUser } from '@/server/http/endpoint';
 import { readBody, writingInput } from '@/server/http/body';
 import { respond } from '@/server/http/result';

@@ -5,7 +5,8 @@ import { slugSchema } from '@/lib/schemas/slug';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { answer, requireUser } from '@/server/http/endpoint';
 import { readBody, writingInput } from '@/server/http/body';
-import { createReport, reportInputSchema } from '@/server/fixes/reports';
+import { createReport } from '@/server/fixes/reports';
+import { reportInputSchema } from '@/lib/schemas/fix-report-input';
 import { respond, refuse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {

@@ -5,7 +5,7 @@ import { z } from 'zod';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { readBody } from '@/server/http/body';
 import { applyFixToJob, getJobSheet, jobSheetMissing, jobSheetRequest, removeFixFromJob } from '@/server/bench-work/job-sheets';
-import { applyFixSchema } from '@/lib/schemas/bench-work';
+import { applyFixSchema } from '@/lib/schemas/job-fix';
 import { slugSchema } from '@/lib/schemas/slug';
 
 export const POST: APIRoute = async ({ locals, params, request }) => {

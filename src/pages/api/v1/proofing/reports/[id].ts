@@ -4,7 +4,8 @@ import { can } from '@/lib/permissions';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { answer, idParam, requireUser } from '@/server/http/endpoint';
 import { readBody, writingInput } from '@/server/http/body';
-import { closeReport, resolutionSchema } from '@/server/fixes/reports';
+import { closeReport } from '@/server/fixes/reports';
+import { resolutionSchema } from '@/lib/schemas/report-resolution';
 import { respond, refuse } from '@/server/http/result';
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
