@@ -13,11 +13,7 @@ const columns: Record<FixFlagAction, { at: string; by: string; set: boolean }> =
   unhide: { at: 'hidden_at', by: 'hidden_by', set: false },
 };
 
-export async function setFixFlag(
-  moderator: Writer,
-  fixSlug: string,
-  input: FixFlag,
-): Promise<Outcome<{ fixId: number }>> {
+export async function setFixFlag(moderator: Writer, fixSlug: string, input: FixFlag): Promise<Outcome<{ fixId: number }>> {
   const permission = input.action === 'lock' || input.action === 'unlock' ? 'lock_fix' : 'hide_fix';
   if (!can(moderator, permission)) return refuse('forbidden', 'Only moderators lock or hide fixes.');
   const column = columns[input.action];
