@@ -70,5 +70,17 @@ export function typedFields(form: FormFields, names: readonly string[]): TypedFo
  * The answer of a form Action, rendered by the page that posted it: saved, or refused with the message,
  * the messages by field and everything typed, so nothing travels through the address and nothing is lost.
  */
-export type FormActionResult<Saved> =
-  ({ saved: true } & Saved) | { saved: false; status: number; message: string; fields: Record<string, string[]>; typed: TypedForm };
+export type FormActionResult<Saved> = ({ saved: true } & Saved) | FormRefusal;
+
+/** A refused form as its page shows it again. */
+export interface FormRefusal {
+  saved: false;
+  status: number;
+  message: string;
+  fields: Record<string, string[]>;
+  typed: TypedForm;
+  /** Values the handler read from the form (e.g. a job sheet's parts rows), to fill the fields in again. */
+  values?: Record<string, unknown>;
+  /** For a rate limit: seconds until the next try counts (the page's Retry-After header). */
+  retryAfterSeconds?: number;
+}

@@ -10,7 +10,7 @@ const knex = testDb();
 afterAll(() => knex.destroy());
 
 function accountForm(cookie: string, fields: Record<string, string>): Promise<Response> {
-  return postForm(base, '/account', fields, { cookie, ip: uniqueClientIp() });
+  return postForm(base, '/account?_action=account', fields, { cookie, ip: uniqueClientIp() });
 }
 
 describe('account page', () => {
@@ -46,7 +46,7 @@ describe('account page', () => {
     const user = await createUser(knex, { tag: 'intent' });
     const cookie = await signIn(base, user.email, user.password);
     expect((await accountForm(cookie, { intent: 'launch' })).status).toBe(400);
-    expect((await postForm(base, '/account', {}, { cookie })).status).toBe(400);
+    expect((await postForm(base, '/account?_action=account', {}, { cookie })).status).toBe(400);
   });
 
   it('changes the password only with the current one, then ends every session', async () => {

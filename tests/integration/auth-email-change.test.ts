@@ -11,7 +11,7 @@ const knex = testDb();
 afterAll(() => knex.destroy());
 
 const accountForm = (cookie: string, fields: Record<string, string>) =>
-  postForm(base, '/account', fields, { cookie, ip: uniqueClientIp() });
+  postForm(base, '/account?_action=account', fields, { cookie, ip: uniqueClientIp() });
 
 async function askForChange(tag: string) {
   const user = await createUser(knex, { tag });

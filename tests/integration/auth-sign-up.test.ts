@@ -168,7 +168,7 @@ describe('joining with an address', () => {
     await signUp({ name: 'Resend Please', email, password: STRONG_PASSWORD });
     const oldLink = linkIn(await waitForMail(INTEGRATION_PORT, email), '/verify');
     const cookie = await signIn(base, email, STRONG_PASSWORD);
-    const res = await postForm(base, '/account', { intent: 'resend-confirmation' }, { cookie, ip: uniqueClientIp() });
+    const res = await postForm(base, '/account?_action=account', { intent: 'resend-confirmation' }, { cookie, ip: uniqueClientIp() });
     expect(res.status).toBe(303);
     expect(res.headers.get('location')).toBe('/account?notice=confirmation-sent');
     const newMail = await waitForMail(INTEGRATION_PORT, email, { count: 2 });
