@@ -5,5 +5,7 @@ import { runFormAction, type PageFormResult } from '@/server/http/forms';
 import { requestClientKey } from '@/server/http/rate-limit';
 
 export function submitAccountForm(form: FormData, context: ActionAPIContext): Promise<PageFormResult> {
-  return runFormAction(form, context.locals, 'manage_account', (user, fields) => handleAccountForm(user, fields, requestClientKey(context)));
+  return runFormAction(form, context.locals, 'manage_account', (user, fields) =>
+    handleAccountForm(user, fields, requestClientKey(context)),
+  );
 }

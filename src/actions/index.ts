@@ -4,6 +4,8 @@ import { defineAction } from 'astro:actions';
 import { submitBenchReportForm } from './bench-report';
 import { submitReportFixForm } from './report-fix';
 import { submitAccountForm } from './account';
+import { submitDecisionForm, submitFixFlagForm, submitReportResolutionForm } from './proofing';
+import { submitAmendForm, submitDiscardForm, submitWithdrawForm } from './writing';
 
 // No `input` schema: Astro 5's form reader unwraps schemas with zod 3 classes, and this project's zod 4
 // schemas (resolved in the server bundle) make it throw. Each handler takes the FormData and checks it with
@@ -12,4 +14,10 @@ export const server = {
   benchReport: defineAction({ accept: 'form', handler: submitBenchReportForm }),
   reportFix: defineAction({ accept: 'form', handler: submitReportFixForm }),
   account: defineAction({ accept: 'form', handler: submitAccountForm }),
+  proofingDecision: defineAction({ accept: 'form', handler: submitDecisionForm }),
+  fixFlag: defineAction({ accept: 'form', handler: submitFixFlagForm }),
+  reportResolution: defineAction({ accept: 'form', handler: submitReportResolutionForm }),
+  amend: defineAction({ accept: 'form', handler: submitAmendForm }),
+  withdraw: defineAction({ accept: 'form', handler: submitWithdrawForm }),
+  discardDraft: defineAction({ accept: 'form', handler: submitDiscardForm }),
 };

@@ -35,7 +35,12 @@ async function submitNew(who: Session, overrides: Parameters<typeof completeValu
 
 /** The decision form on the revision page, as a browser sends it without JavaScript. */
 function decide(revisionId: number, decision: string, note: string): Promise<Response> {
-  return postForm(base, `/proofing/${revisionId}`, { decision, note }, { cookie: moderator.cookie });
+  return postForm(
+    base,
+    `/proofing/${revisionId}?_action=proofingDecision`,
+    { revision: String(revisionId), decision, note },
+    { cookie: moderator.cookie },
+  );
 }
 
 /** The rows of the desk's waiting table: revision ids in the order shown. */

@@ -225,7 +225,7 @@ describe('locking and hiding a fix without a report', () => {
     for (const viewer of ['anonymous', 'otherMember', 'editor', 'author'] as const)
       expect(await (await page(`/fixes/${slug}/history`, viewer)).text(), viewer).not.toContain('data-moderation');
     const html = await (await page(`/fixes/${slug}/history`, 'moderator')).text();
-    expect(html).toMatch(/<form method="post" action="\/api\/v1\/proofing\/fixes\/[^"]+"[\s\S]*name="action" value="lock"/);
+    expect(html).toMatch(/<form method="post" action="\/fixes\/[^"]+\/history\?_action=fixFlag"[\s\S]*name="action" value="lock"/);
     expect(html).toMatch(/name="action" value="hide"/);
     expect(html).toContain('name="from" value="history"');
 

@@ -81,7 +81,7 @@ describe('proofing', () => {
     expect(review.status).toBe(200);
     const html = await review.text();
     expect(html).toContain('Everything in this new fix');
-    expect(html).toContain(`action="/proofing/${id}"`);
+    expect(html).toContain(`action="/proofing/${id}?_action=proofingDecision"`);
     expect(html).toContain('name="decision" value="proof"');
   });
 

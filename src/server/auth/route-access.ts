@@ -39,7 +39,8 @@ export const routeAccess: Record<string, RouteRule> = {
   '/chassis/[slug]': read,
   // POST: the page's form Actions (bench report, report a fix), which check who may send them.
   '/fixes/[slug]': { methods: { GET: 'public', POST: 'public' } },
-  '/fixes/[slug]/history': read,
+  // Its moderation panel posts to the fixFlag Action.
+  '/fixes/[slug]/history': { methods: { GET: 'public', POST: 'lock_fix' } },
   '/fixes/[slug]/r/[number]': read,
   '/help': read,
   '/help/content-licence': read,
@@ -101,10 +102,10 @@ export const routeAccess: Record<string, RouteRule> = {
 
   // Writing and proofing: verified members write and report; moderators proof (never their own, checked per revision).
   '/write': { methods: { GET: 'write_fix' } },
-  '/write/mine': { methods: { GET: 'write_fix' } },
+  '/write/mine': { methods: { GET: 'write_fix', POST: 'write_fix' } },
   '/fixes/[slug]/edit': { methods: { GET: 'write_fix' } },
   '/fixes/[slug]/compare': read,
-  '/proofing': { methods: { GET: 'proof' } },
+  '/proofing': { methods: { GET: 'proof', POST: 'proof' } },
   // The decision form posts to its own page, which shows a refusal with the note as typed.
   '/proofing/[id]': { methods: { GET: 'proof', POST: 'proof' }, noStore: true },
   '/api/v1/catalogue-lookup': read,
