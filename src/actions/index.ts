@@ -4,6 +4,8 @@ import { defineAction } from 'astro:actions';
 import { submitBenchReportForm } from './bench-report';
 import { submitReportFixForm } from './report-fix';
 import { submitAccountForm } from './account';
+import { submitAdminUserForm, submitWordFamilyForm } from './admin';
+import { submitHandoverNoteForm, submitJobSheetForm, submitNewJobForm, submitWithdrawNoteForm } from './bench-work';
 import { submitDecisionForm, submitFixFlagForm, submitReportResolutionForm } from './proofing';
 import { submitAmendForm, submitDiscardForm, submitWithdrawForm } from './writing';
 
@@ -20,4 +22,10 @@ export const server = {
   amend: defineAction({ accept: 'form', handler: submitAmendForm }),
   withdraw: defineAction({ accept: 'form', handler: submitWithdrawForm }),
   discardDraft: defineAction({ accept: 'form', handler: submitDiscardForm }),
+  adminUser: defineAction({ accept: 'form', handler: submitAdminUserForm }),
+  wordFamily: defineAction({ accept: 'form', handler: submitWordFamilyForm }),
+  newJob: defineAction({ accept: 'form', handler: submitNewJobForm }),
+  jobSheet: defineAction({ accept: 'form', handler: submitJobSheetForm }),
+  handoverNote: defineAction({ accept: 'form', handler: submitHandoverNoteForm }),
+  withdrawNote: defineAction({ accept: 'form', handler: submitWithdrawNoteForm }),
 };

@@ -20,7 +20,7 @@ beforeAll(async () => {
 afterAll(() => knex.destroy());
 
 function adminForm(cookie: string, fields: Record<string, string>): Promise<Response> {
-  return postForm(base, '/admin/users', fields, { cookie, ip: uniqueClientIp() });
+  return postForm(base, '/admin/users?_action=adminUser', fields, { cookie, ip: uniqueClientIp() });
 }
 
 async function auditFor(userId: number, action: string): Promise<any[]> {

@@ -193,7 +193,7 @@ describe('wanted fixes', () => {
 
 describe('word families', () => {
   const form = (fields: Record<string, string>, cookie = editorCookie) =>
-    postForm(base, '/admin/word-families', fields, { cookie, ip: uniqueClientIp() });
+    postForm(base, '/admin/word-families?_action=wordFamily', fields, { cookie, ip: uniqueClientIp() });
   const made: number[] = [];
   afterAll(async () => {
     if (made.length) await knex('word_families').whereIn('id', made).delete();

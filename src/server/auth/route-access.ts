@@ -128,7 +128,7 @@ export const routeAccess: Record<string, RouteRule> = {
   '/n/[code]': read,
   '/notes': { methods: { GET: 'write_handover_note' } },
   '/notes/new': { methods: { GET: 'write_handover_note', POST: 'write_handover_note' } },
-  '/notes/[code]': { methods: { GET: 'write_handover_note' } },
+  '/notes/[code]': { methods: { GET: 'write_handover_note', POST: 'write_handover_note' } },
   '/jobs': { methods: { GET: 'own_job_sheets' } },
   '/jobs/new': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
   '/jobs/[id]': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
