@@ -186,7 +186,7 @@ describe('server-rendered textareas', () => {
       if ((control.type === 'radio' || control.type === 'checkbox') && !control.checked) continue;
       body.append(control.name, control.value);
     }
-    const saved = await me.form(`/jobs/${id}`, [...body.entries()]);
+    const saved = await me.form(form.getAttribute('action')!, [...body.entries()]);
     expect(saved.status).toBe(303);
     expect((await knex('job_sheets').where({ id }).first('findings')).findings).toBe(findings);
   });

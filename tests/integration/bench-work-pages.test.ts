@@ -122,7 +122,7 @@ describe('customer’s note page', () => {
   });
 
   it('writes a note from the plain form and sends the member to it', async () => {
-    const res = await me.form('/notes/new', {
+    const res = await me.form('/notes/new?_action=handoverNote', {
       fix: `${base}/fixes/${fix.slug}/r/1`,
       shopName: '',
       message: 'All done.',
@@ -138,7 +138,7 @@ describe('customer’s note page', () => {
 
 describe('job sheet pages', () => {
   it('books in a machine, applies a fix, records a bench report and lists the sheet, all without script', async () => {
-    const created = await me.form('/jobs/new', {
+    const created = await me.form('/jobs/new?_action=newJob', {
       customerRef: 'Walk-in 44',
       machine: world.machines[1]!.slug,
       serialNumber: 'S-1',
@@ -148,7 +148,12 @@ describe('job sheet pages', () => {
     expect(created.status).toBe(303);
     const jobPath = (created.headers.get('location') ?? '').split('?')[0]!;
     expect(jobPath).toMatch(/^\/jobs\/\d+$/);
-    const applied = await me.form(jobPath, { intent: 'apply_fix', fix: fix.slug, fixLink: '' });
+    const applied = await me.form(`${jobPath}?_action=jobSheet`, {
+      job: jobPath.split('/').pop()!,
+      intent: 'apply_fix',
+      fix: fix.slug,
+      fixLink: '',
+    });
     expect(applied.headers.get('location')).toBe(`${jobPath}?job=fix_applied#applied-fixes`);
     const page = await html(await me.get(jobPath));
     expect(page).toContain('pinned to r2');
@@ -170,9 +175,10 @@ describe('job sheet pages', () => {
   });
 
   it('saves findings, parts and labour from the form, and shows field messages for bad values', async () => {
-    const created = await me.form('/jobs/new', { customerRef: 'Walk-in 45', status: 'booked_in' });
+    const created = await me.form('/jobs/new?_action=newJob', { customerRef: 'Walk-in 45', status: 'booked_in' });
     const jobPath = (created.headers.get('location') ?? '').split('?')[0]!;
-    const bad = await me.form(jobPath, {
+    const bad = await me.form(`${jobPath}?_action=jobSheet`, {
+      job: jobPath.split('/').pop()!,
       intent: 'save',
       customerRef: 'Walk-in 45',
       status: 'diagnosing',
@@ -186,7 +192,8 @@ describe('job sheet pages', () => {
     expect(badPage).toContain('Give labour in whole minutes.');
     expect(badPage).toMatch(/quantity: [^<]*/);
     expect(badPage).toContain('value="470uF"');
-    const good = await me.form(jobPath, {
+    const good = await me.form(`${jobPath}?_action=jobSheet`, {
+      job: jobPath.split('/').pop()!,
       intent: 'save',
       customerRef: 'Walk-in 45',
       status: 'repaired',

@@ -82,7 +82,7 @@ describe('another member’s job sheet', () => {
     const id = jobSheet.id as number;
     const answers = [
       await stranger.get(`/jobs/${id}`),
-      await stranger.form(`/jobs/${id}`, { intent: 'delete', confirm: 'yes' }),
+      await stranger.form(`/jobs/${id}?_action=jobSheet`, { job: String(id), intent: 'delete', confirm: 'yes' }),
       await stranger.get(`/api/v1/job-sheets/${id}`),
       await stranger.patch(`/api/v1/job-sheets/${id}`, { status: 'collected' }),
       await stranger.delete(`/api/v1/job-sheets/${id}`),
@@ -133,7 +133,7 @@ describe('deleting a job sheet', () => {
 
 describe('invalid fields', () => {
   it('shows field messages on the new job sheet form', async () => {
-    const res = await owner.form('/jobs/new', { customerRef: '   ', machine: 'no-such-machine', status: 'lost' });
+    const res = await owner.form('/jobs/new?_action=newJob', { customerRef: '   ', machine: 'no-such-machine', status: 'lost' });
     expect(res.status).toBe(400);
     const page = await res.text();
     expect(page).toContain('Give a customer reference, e.g. an invoice or ticket number.');
@@ -142,7 +142,11 @@ describe('invalid fields', () => {
   });
 
   it('shows field messages on the note form and keeps what was typed', async () => {
-    const res = await owner.form('/notes/new', { fix: 'Tray will not open', message: 'Typed message stays', warranty: 'w'.repeat(301) });
+    const res = await owner.form('/notes/new?_action=handoverNote', {
+      fix: 'Tray will not open',
+      message: 'Typed message stays',
+      warranty: 'w'.repeat(301),
+    });
     expect(res.status).toBe(400);
     const page = await res.text();
     expect(page).toContain('Use lower-case letters, digits and dashes.');
