@@ -1,5 +1,6 @@
 // A moderator at the proofing desk: reads a new fix with its author's summary, returns it with a note, then checks
-// the resubmission against the returned revision and proofs it live.
+// the resubmission against the returned revision and proofs it live. An empty return is refused beside the note,
+// with JavaScript on and off.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from '../support/browser';
@@ -60,6 +61,27 @@ describe('a moderator', () => {
       await sees(page.getByText('First write-up of the capstan stall.'));
       await sees(page.getByRole('heading', { name: 'The remedy as readers will see it' }));
     });
+
+    const noScript = await journey.page({ as: moderator, javaScriptEnabled: false });
+    await journey.step('with JavaScript off, tries to return it without a note and is told why beside the note field', async () => {
+      await journey.goto(noScript, page.url().replace(base, ''));
+      await journey.navigates(noScript, /\/proofing\/\d+\?_action=proofingDecision$/, () =>
+        noScript.getByRole('button', { name: 'Return it with this note' }).click(),
+      );
+      await sees(noScript.locator('#decision-note-error').getByText(/Say what the author should change/));
+      await expect(noScript.getByLabel('Note to the author').getAttribute('aria-invalid')).resolves.toBe('true');
+      await noScript.screenshot({ path: '/tmp/journeys-moderator-decision-no-script.png', fullPage: true });
+    });
+
+    await journey.step(
+      'with JavaScript on, the same empty return comes back on the same page with the message beside the note',
+      async () => {
+        await journey.navigates(page, /\/proofing\/\d+\?_action=proofingDecision$/, () =>
+          page.getByRole('button', { name: 'Return it with this note' }).click(),
+        );
+        await sees(page.locator('#decision-note-error').getByText(/Say what the author should change/));
+      },
+    );
 
     await journey.step('returns it, giving the note in one place', async () => {
       await expect(page.getByLabel('Note to the author').count()).resolves.toBe(1);

@@ -1,11 +1,12 @@
 // A bench technician on a phone: finds the fix for a deck that will not rewind, orders its parts, reports back from
-// the bench (one refused field, a long note), books the job in and hands the customer a note they open and print.
+// the bench (one refused field, a long note), books the job in, hands the customer a note they open and print, and
+// corrects the shop name on their account page with JavaScript on and off.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from '../support/browser';
 import { testDb } from '../support/db';
 import { createUser, type TestUser } from '../support/sign-in';
-import { Journey, PHONE_WIDTH, sees } from './support/journey';
+import { Journey, PHONE_WIDTH, base, sees } from './support/journey';
 
 const knex = testDb();
 let browser: Browser;
@@ -151,6 +152,45 @@ describe('a bench technician', () => {
       const line = await page.getByLabel('Line for the invoice').inputValue();
       noteUrl = line.replace(/^Repair notes: /, '');
       expect(noteUrl).toMatch(/\/n\/[A-Z0-9]{10}$/);
+    });
+
+    await journey.step('changes the shop name on the account page: an emptied name is refused beside its field, nothing lost', async () => {
+      const shop = 'Wrenfield Bench Repairs and Tape Decks';
+      await journey.goto(page, '/account');
+      await page.getByLabel('Your name').fill('');
+      await page.getByLabel('Shop name (optional)').fill(shop);
+      // With JavaScript on, the server's zod check runs before sending: the message sits under the field, nothing is sent.
+      await page.getByRole('button', { name: 'Save', exact: true }).click();
+      await sees(page.locator('#name-error'));
+      await expect(page.getByLabel('Shop name (optional)').inputValue()).resolves.toBe(shop);
+      expect(page.url()).toBe(`${base}/account`);
+      await page.getByLabel('Your name').fill('Tamsin Wrenfield');
+      await journey.navigates(page, /\/account\?notice=profile-saved$/, () =>
+        page.getByRole('button', { name: 'Save', exact: true }).click(),
+      );
+      await sees(page.getByText('Your name and shop name are saved.'));
+    });
+
+    const noScript = await journey.page({ as: technician, width: PHONE_WIDTH, javaScriptEnabled: false });
+    await journey.step('does the same with JavaScript off: the server refuses it on the same page, as typed', async () => {
+      const shop = 'Wrenfield Bench Repairs, counter by the station';
+      await journey.goto(noScript, '/account');
+      await noScript.getByLabel('Your name').fill('');
+      await noScript.getByLabel('Shop name (optional)').fill(shop);
+      await journey.navigates(noScript, /\/account\?_action=account$/, () =>
+        noScript.getByRole('button', { name: 'Save', exact: true }).click(),
+      );
+      await sees(noScript.locator('#name-error'));
+      await expect(noScript.getByLabel('Your name').getAttribute('aria-invalid')).resolves.toBe('true');
+      await expect(noScript.getByLabel('Shop name (optional)').inputValue()).resolves.toBe(shop);
+      expect(decodeURIComponent(noScript.url())).not.toContain('counter by the station');
+      await noScript.getByLabel('Your name').fill('Tamsin Wrenfield');
+      await noScript.getByLabel('Shop name (optional)').fill('Wrenfield Bench Repairs');
+      await journey.navigates(noScript, /\/account\?notice=profile-saved$/, () =>
+        noScript.getByRole('button', { name: 'Save', exact: true }).click(),
+      );
+      await sees(noScript.getByText('Your name and shop name are saved.'));
+      await noScript.screenshot({ path: '/tmp/journeys-technician-account-no-script.png', fullPage: true });
     });
 
     const customerPage = await journey.page({ width: PHONE_WIDTH });
