@@ -163,7 +163,9 @@ describe('discarding a draft', () => {
     const id = created.body.revision.id as number;
     const list = await call(base, '/write/mine', { cookie: writer.cookie });
     // The discard form posts to its Action with the draft named in a hidden field.
-    const discardForm = new RegExp(`action="/write/mine\\?_action=discardDraft"[^>]*>\\s*<input type="hidden" name="revision" value="${id}"`);
+    const discardForm = new RegExp(
+      `action="/write/mine\\?_action=discardDraft"[^>]*>\\s*<input type="hidden" name="revision" value="${id}"`,
+    );
     expect(list.body).toMatch(discardForm);
     const discarded = await postForm(base, '/write/mine?_action=discardDraft', { revision: String(id) }, { cookie: writer.cookie });
     expect(discarded.status).toBe(303);
