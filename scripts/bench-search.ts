@@ -1,7 +1,7 @@
 // `npm run bench:search`: PostgreSQL search latency at 10,000 and 100,000 synthetic fixes, beside a naive ILIKE scan.
 /*
-  Creates (and afterwards keeps, for inspection) a database of its own, benchlore_bench, on the local cluster;
-  never the app's or a test database. Fixes come from a seeded generator, so every run builds the same world.
+  Creates (and afterwards keeps, for inspection) a database of its own, benchlore_bench (or BENCHLORE_BENCH_DB),
+  on the local cluster; never the app's or a test database. Fixes come from a seeded generator, so every run builds the same world.
   Each size runs the same query set (broad one-word queries matching a large share of all fixes, narrow
   phrases, codes, misspellings, a named machine) once to warm up and then ROUNDS times, timing:
     provider – PostgresSearchProvider.search(): analysis, candidates, ranking, facets, highlights, hydration
@@ -10,7 +10,7 @@
 */
 import { run, useOwnDatabase } from './lib/prepare.ts';
 
-const DB = 'benchlore_bench';
+const DB = process.env.BENCHLORE_BENCH_DB ?? 'benchlore_bench';
 const arg = (name: string, fallback: string) => {
   const at = process.argv.indexOf(`--${name}`);
   return at >= 0 ? (process.argv[at + 1] ?? fallback) : fallback;

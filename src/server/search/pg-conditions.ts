@@ -31,6 +31,9 @@ export function filterCondition(query: SearchQuery, context: SearchContext, anal
   return allOf(parts);
 }
 
+/** Title and symptoms as written (the 'simple' dictionary keeps "no", "not", "off"), built only for candidates. */
+const SUMMARY_AS_WRITTEN = `to_tsvector('simple', benchlore_unaccent(s.title || ' ' || s.symptoms))`;
+
 /** The same query with every phrase loosened to "all these words": a necessary condition, cheaper to test. */
 export function withoutPhrases(tsquery: string): string {
   return tsquery.replace(/<\d*-?>/g, '&');
@@ -105,7 +108,8 @@ export function neighbourQueries(analysed: AnalysedQuery): string[] {
 }
 
 /**
- * The clause levels of a row, as an int[]: hard text, codes, soft text, then the neighbour bonuses.
+ * The clause levels of a row, as an int[]: hard text, codes, soft text, then the neighbour bonuses and the
+ * bonuses for a family phrase's words found as typed.
  * `known` is a boolean SQL expression saying the row already matched every hard clause.
  */
 export function levelsExpression(analysed: AnalysedQuery, known: string): Fragment {
@@ -113,7 +117,9 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     const whens: Fragment[] = [];
     const alternative = c.clause.dictionary ? clauseLevel.summaryDictionary : clauseLevel.summaryAlternative;
     if (c.typed) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.summary}`, c.typed));
-    if (c.alternatives) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${alternative}`, c.alternatives));
+    if (c.meantAlternatives) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${alternative}`, c.meantAlternatives));
+    // Terms the English index cannot search as meant ("no power", "switches off") count as written.
+    if (c.asWritten) whens.push(frag(`WHEN ${SUMMARY_AS_WRITTEN} @@ ?::tsquery THEN ${clauseLevel.summaryAlternative}`, c.asWritten));
     // A full match is known to hold the clause's words; only a clause matched by its words alone, not its
     // phrases ("won't … close" apart), is tested again as written.
     if (isHard && matchQuery(c) === c.any) whens.push(frag(`WHEN ${known} THEN ${clauseLevel.body}`));
@@ -131,6 +137,9 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     ...analysed.codes.map(codeLevel),
     ...analysed.softText.map((c) => textLevel(c, false)),
     ...neighbourQueries(analysed).map((q) => frag(`CASE WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.body} ELSE 0 END`, q)),
+    ...analysed.hardText
+      .filter((c) => c.literal !== '')
+      .map((c) => frag(`CASE WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.body} ELSE 0 END`, c.literal)),
   ];
   if (levels.length === 0) return frag(`'{}'::int[]`);
   return frag(`ARRAY[${levels.map((l) => l.sql).join(', ')}]::int[]`, ...levels.flatMap((l) => l.bindings));
