@@ -50,10 +50,24 @@ export function codeCondition(code: CodeClause): Fragment {
  */
 export const matchQuery = (c: CompiledTextClause): string => (c.clause.exact ? c.any : withoutPhrases(c.any));
 
-/** Every hard clause, each searched in `column` (the whole document, or doc_a: title and symptoms). */
+/**
+ * Title and symptoms tested while walking the bench-order index: from the copy the index carries (no table
+ * row read), or, for the rare fix whose copy is empty (very long symptoms), from its row.
+ */
+const walkedSummary = (q: string) =>
+  frag(
+    `CASE WHEN s.doc_a_inline IS NULL THEN (SELECT x.doc_a @@ ?::tsquery FROM fix_search x WHERE x.fix_id = s.fix_id) ELSE s.doc_a_inline @@ ?::tsquery END`,
+    q,
+    q,
+  );
+
+/**
+ * Every hard clause, each searched in `column`: the whole document, or title and symptoms (doc_a, through
+ * its text index; 'walked summary' while walking the bench-order index).
+ */
 export function allClauses(
   analysed: AnalysedQuery,
-  column: 'document' | 'doc_a',
+  column: 'document' | 'doc_a' | 'walked summary',
   text: CompiledTextClause[] = analysed.hardText,
   codes: CodeClause[] = analysed.codes,
   testTextOnly = false,
@@ -62,7 +76,10 @@ export function allClauses(
   const textQuery = andQuery(text.map(matchQuery));
   // "IS TRUE" makes the text a test on rows found otherwise (by a code, a machine): scanning the text
   // index for a broad word would cost more than the rows it is tested on.
-  const test = (q: string) => frag(testTextOnly ? `(s.${column} @@ ?::tsquery) IS TRUE` : `s.${column} @@ ?::tsquery`, q);
+  const test = (q: string) => {
+    const found = column === 'walked summary' ? walkedSummary(q) : frag(`s.${column} @@ ?::tsquery`, q);
+    return testTextOnly ? frag(`(${found.sql}) IS TRUE`, ...found.bindings) : found;
+  };
   if (textQuery) {
     // Phrases need word positions, which costs about twice as much per fix: words-present first, so most
     // fixes are turned away by the cheaper test.
