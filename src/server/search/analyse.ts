@@ -148,8 +148,13 @@ function compileClause(
   const alternativeText = orQuery(alternativeQueries);
   // "switches off" searched as switch would count "mode switch" as the concept: such terms count only as written.
   const lossy = new Set([...clause.terms, ...clause.alternatives].filter((t) => asWrittenOf.has(t)));
-  const meantQueries = new Set(alternatives.filter((t) => !lossy.has(t)).map((t) => compiled.get(t) ?? ''));
-  const lossyQueries = new Set([...lossy].map((t) => compiled.get(t) ?? ''));
+  // Subsumption is judged among these alone: "can't record" searched as record must not hide "record fails".
+  const meantQueries = withoutSubsumed(
+    typedQueries,
+    [...new Set(alternatives.filter((t) => !lossy.has(t)).map((t) => compiled.get(t) ?? ''))].filter(
+      (q) => q !== '' && !typedQueries.includes(q),
+    ),
+  );
   const asTyped = clause.terms.map((t) => compiled.get(t) ?? '');
   const shownAlternatives = alternatives.filter((t) => !clause.terms.includes(t));
   return {
@@ -157,7 +162,7 @@ function compileClause(
     typed,
     alternatives: alternativeText,
     any: orQuery([typed, alternativeText]),
-    meantAlternatives: orQuery(alternativeQueries.filter((q) => meantQueries.has(q) || !lossyQueries.has(q))),
+    meantAlternatives: orQuery(meantQueries),
     asWritten: orQuery([...lossy].map((t) => asWrittenOf.get(t) ?? '')),
     literal: literalWords(clause, stems),
     shownTyped: orQuery([...new Set([...typedQueries, ...asTyped])]),
