@@ -1,24 +1,27 @@
 // `npm run bench:search`: PostgreSQL search latency at 10,000 and 100,000 synthetic fixes, beside a naive ILIKE scan.
 /*
-  Creates (and afterwards keeps, for inspection) a database of its own, benchlore_bench, on the local cluster;
-  never the app's or a test database. Fixes come from a seeded generator, so every run builds the same world.
+  Creates (and afterwards keeps, for inspection) a database of its own, benchlore_bench (or BENCHLORE_BENCH_DB),
+  on the local cluster; never the app's or a test database. Fixes come from a seeded generator, so every run builds the same world.
   Each size runs the same query set (broad one-word queries matching a large share of all fixes, narrow
   phrases, codes, misspellings, a named machine) once to warm up and then ROUNDS times, timing:
     provider – PostgresSearchProvider.search(): analysis, candidates, ranking, facets, highlights, hydration
     naive    – one ILIKE per word over the text columns, AND-ed, best bench score first, LIMIT 10 (no facets)
-  Usage: npm run bench:search [-- --sizes 10000,100000 --rounds 5]
+  Usage: npm run bench:search [-- --sizes 10000,100000 --rounds 5] [-- --reuse]
+  --reuse measures again, at the largest size only, the database a previous run left (no generation): for
+  comparing code changes side by side on the same data.
 */
 import { run, useOwnDatabase } from './lib/prepare.ts';
 
-const DB = 'benchlore_bench';
+const DB = process.env.BENCHLORE_BENCH_DB ?? 'benchlore_bench';
 const arg = (name: string, fallback: string) => {
   const at = process.argv.indexOf(`--${name}`);
   return at >= 0 ? (process.argv[at + 1] ?? fallback) : fallback;
 };
 const SIZES = arg('sizes', '10000,100000').split(',').map(Number);
 const ROUNDS = Number(arg('rounds', '5'));
+const REUSE = process.argv.includes('--reuse');
 
-const env = await useOwnDatabase(DB);
+const env = await useOwnDatabase(DB, {}, { fresh: !REUSE });
 run(process.execPath, ['--import', 'tsx', 'scripts/migrate.ts'], env);
 
 // Imported only now: the app's Knex reads BENCHLORE_DB_NAME when it is first loaded.
@@ -144,6 +147,22 @@ async function syntheticCatalogue(): Promise<Machine[]> {
     };
   });
   await knex.batchInsert('machines', rows, 200);
+  const machines = await knex('machines as m')
+    .join('makers as mk', 'mk.id', 'm.maker_id')
+    .select('m.id', 'm.maker_id', 'mk.name as maker_name', 'm.chassis_family_id', 'm.model_number', 'm.device_type', 'm.formats');
+  return machines.map((m) => ({
+    id: m.id,
+    makerId: m.maker_id,
+    makerName: m.maker_name,
+    chassisId: m.chassis_family_id,
+    model: m.model_number,
+    deviceType: m.device_type,
+    formats: m.formats,
+  }));
+}
+
+/** The catalogue a previous run built (--reuse). */
+async function existingCatalogue(): Promise<Machine[]> {
   const machines = await knex('machines as m')
     .join('makers as mk', 'mk.id', 'm.maker_id')
     .select('m.id', 'm.maker_id', 'mk.name as maker_name', 'm.chassis_family_id', 'm.model_number', 'm.device_type', 'm.formats');
@@ -343,7 +362,7 @@ async function measure(size: number, queries: Named[]) {
   return { size, timings, broadMatches, slowest };
 }
 
-const machines = await syntheticCatalogue();
+const machines = REUSE ? await existingCatalogue() : await syntheticCatalogue();
 const users = {
   author: (await knex('users').where({ email: 'member@example.test' }).first('id')).id as number,
   proofer: (await knex('users').where({ email: 'moderator@example.test' }).first('id')).id as number,
@@ -351,7 +370,14 @@ const users = {
 const queries = querySet(machines);
 const results = [];
 let have = 0;
-for (const size of SIZES) {
+if (REUSE) {
+  const size = Number((await knex('fix_search').count<{ n: string }[]>('* as n'))[0]?.n ?? 0);
+  console.log(`Measuring the ${size} fixes a previous run left in ${DB}…`);
+  // A migration may have rewritten the table: the visibility map lets walks read the index alone.
+  await knex.raw('VACUUM ANALYZE fix_search');
+  results.push(await measure(size, queries));
+}
+for (const size of REUSE ? [] : SIZES) {
   console.log(`Generating fixes up to ${size}…`);
   const t = performance.now();
   await addFixes(have, size, machines, users);

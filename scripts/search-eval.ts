@@ -28,7 +28,7 @@ const { MeiliSearchProvider } = await import('../src/server/search/meili/meili-p
 const { MeiliIndex } = await import('../src/server/search/meili/index-client.ts');
 const { reindexMeili } = await import('../src/server/search/reindex.ts');
 const { startFakeMeili } = await import('../tests/support/fake-meili.ts');
-const { loadCases, querySets, readFloor, reportLines, runEval, figuresOf } = await import('../tests/search-eval/eval.ts');
+const { loadCases, querySets, floorOf, reportLines, runEval, figuresOf } = await import('../tests/search-eval/eval.ts');
 
 const knex = db();
 try {
@@ -39,14 +39,14 @@ try {
     if (providers.includes('postgres')) {
       const run = await runEval(knex, new PostgresSearchProvider(knex), cases, scopes);
       console.log(reportLines('PostgreSQL provider', run).join('\n'));
-      if (set === 'tuned') {
-        const floor = readFloor();
+      {
+        const floor = floorOf(set);
         const noMachine = figuresOf(run.results.filter((r) => r.group === 'noMachine')).at3;
         const named = figuresOf(run.results.filter((r) => r.group === 'machineNamed')).at3;
         console.log(
-          `  committed floor (tests/search-eval/floor.json, top-3): no machine ${(100 * floor.noMachine).toFixed(1)} %, machine named ${(100 * floor.machineNamed).toFixed(1)} %; this run ${(100 * noMachine).toFixed(1)} %, ${(100 * named).toFixed(1)} %\n`,
+          `  committed floor (tests/search-eval/floor.json, ${set} set, top-3): no machine ${(100 * floor.noMachine).toFixed(1)} %, machine named ${(100 * floor.machineNamed).toFixed(1)} %; this run ${(100 * noMachine).toFixed(1)} %, ${(100 * named).toFixed(1)} %\n`,
         );
-      } else console.log('');
+      }
     }
     if (providers.includes('meilisearch')) {
       const fake = await startFakeMeili('eval-key');

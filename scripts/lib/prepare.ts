@@ -39,10 +39,10 @@ export function buildIfStale(env: NodeJS.ProcessEnv): void {
 
 /**
  * For a script that works in a database of its own (benchmarks, the search evaluation): never the app's or a
- * test database, never Meilisearch, a fresh database every run. Sets this process's environment too, so the
- * app's Knex, imported after this, connects to it.
+ * test database, never Meilisearch, a fresh database every run (unless `fresh: false`, to measure again what a
+ * previous run built). Sets this process's environment too, so the app's Knex, imported after this, connects to it.
  */
-export async function useOwnDatabase(name: string, extra: NodeJS.ProcessEnv = {}): Promise<NodeJS.ProcessEnv> {
+export async function useOwnDatabase(name: string, extra: NodeJS.ProcessEnv = {}, { fresh = true } = {}): Promise<NodeJS.ProcessEnv> {
   const env: NodeJS.ProcessEnv = {
     ...process.env,
     BENCHLORE_DB_NAME: name,
@@ -56,6 +56,6 @@ export async function useOwnDatabase(name: string, extra: NodeJS.ProcessEnv = {}
   Object.assign(process.env, env);
   delete process.env.MEILI_URL;
   readConfig(env);
-  await ensureDatabase(env, { fresh: true });
+  await ensureDatabase(env, { fresh });
   return env;
 }

@@ -29,11 +29,12 @@ export interface EvalCase {
 /**
  * The two sets of blind queries over the same descriptions: "tuned" (queries.json, the set search was tuned
  * against: its failures were read while choosing word families) and "held out" (queries-holdout.json, written
- * later by another blind writer and never looked at while changing search: the honest figure).
+ * later by another blind writer; never looked at while search was first tuned, its failures were then read to
+ * choose the general changes of the third round, so it is no longer an untouched figure: see the README).
  */
 export const querySets = {
   tuned: { file: './queries.json', dropped: './dropped.json', label: 'tuned set (search was tuned against it)' },
-  holdout: { file: './queries-holdout.json', dropped: null, label: 'held-out set (never tuned against)' },
+  holdout: { file: './queries-holdout.json', dropped: null, label: 'held-out set (second blind writer; read from the third round on)' },
 } as const;
 export type QuerySet = keyof typeof querySets;
 
@@ -52,12 +53,19 @@ export function loadCases(set: QuerySet = 'tuned'): EvalCase[] {
 }
 
 /** The figures the regression test holds: top-3 recall per group, only ever raised. */
-export interface Floor {
+export interface SetFloor {
   noMachine: number;
   machineNamed: number;
 }
+/** The tuned set's floor at the top level (as first committed), the held-out set's under `holdout`. */
+export interface Floor extends SetFloor {
+  holdout: SetFloor;
+}
 export function readFloor(): Floor {
   return JSON.parse(readFileSync(here('./floor.json'), 'utf8')) as Floor;
+}
+export function floorOf(set: QuerySet, floor: Floor = readFloor()): SetFloor {
+  return set === 'holdout' ? floor.holdout : floor;
 }
 
 export const goals = { noMachine: 0.9, machineNamed: 0.97 } as const;

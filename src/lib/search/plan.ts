@@ -20,6 +20,8 @@ export interface Vocabulary {
   related?: ReadonlyMap<string, readonly string[]>;
   /** Typed words that are two stored words run together: "takeup" → "take up", "autoreverse" → "auto reverse". */
   compounds?: ReadonlyMap<string, string>;
+  /** Typed words no fix uses whose dictionary base form a fix uses: "skiping" → "skip", "cds" → "cd". */
+  inflections?: ReadonlyMap<string, string>;
 }
 
 /** Words that only negate: alone they name no fault, so they rank (beside the word they negate) but never exclude. */
@@ -184,6 +186,11 @@ function wordsOf(
     if (vocabulary.known.has(text) || familyWords.has(text)) return words.push({ text, stop: false });
     const compound = vocabulary.compounds?.get(text);
     if (compound) return compound.split(' ').forEach((part) => words.push({ text: part, stop: vocabulary.stopwords.has(part) }));
+    const base = vocabulary.inflections?.get(text);
+    if (base) {
+      plan.corrections.push({ from: text, to: base });
+      return words.push({ text: base, stop: false });
+    }
     if (vocabulary.english?.has(text)) {
       // A real word no fix uses: searched through its dictionary relatives the fixes use, or left out.
       const related = vocabulary.related?.get(text) ?? [];

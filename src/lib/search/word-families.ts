@@ -30,12 +30,43 @@ interface IndexedTerm {
   families: WordFamily[];
 }
 
+/** Stands for any way of saying "not" when family terms are matched by meaning ("no spin" as "won't spin"). */
+const NEGATED = '¬';
+const NEGATING_WORDS = new Set([
+  'no',
+  'not',
+  'never',
+  'wont',
+  'dont',
+  'doesnt',
+  'didnt',
+  'cant',
+  'cannot',
+  'isnt',
+  'wasnt',
+  'wouldnt',
+  'aint',
+]);
+/** Two-word ways of saying "not", as folded words. */
+const NEGATING_PAIRS = new Set(['will not', 'does not', 'do not', 'did not', 'is not', 'can not', 'would not', 'fails to', 'fail to']);
+
+/** Words with every way of saying "not" as one token, each token with the place of its first word. */
+export function negationTokens(words: readonly string[]): { token: string; at: number; length: number }[] {
+  const tokens: { token: string; at: number; length: number }[] = [];
+  for (let i = 0; i < words.length; i++) {
+    const pair = `${words[i]} ${words[i + 1] ?? ''}`;
+    if (NEGATING_PAIRS.has(pair)) tokens.push({ token: NEGATED, at: i++, length: 2 });
+    else tokens.push({ token: NEGATING_WORDS.has(words[i] ?? '') ? NEGATED : (words[i] ?? ''), at: i, length: 1 });
+  }
+  return tokens;
+}
+
 /** Terms keyed by their first word; longer terms first so the longest match wins. */
-function indexTerms(families: readonly WordFamily[]): Map<string, IndexedTerm[]> {
+function indexTerms(families: readonly WordFamily[], keyOf: (words: string[]) => string[]): Map<string, IndexedTerm[]> {
   const byKey = new Map<string, IndexedTerm>();
   for (const family of families) {
     for (const term of family.terms) {
-      const words = termWords(term);
+      const words = keyOf(termWords(term));
       if (words.length === 0) continue;
       const key = words.join(' ');
       const entry = byKey.get(key) ?? { words, term, families: [] };
@@ -52,12 +83,14 @@ function indexTerms(families: readonly WordFamily[]): Map<string, IndexedTerm[]>
   return byFirst;
 }
 
+const asNegationTokens = (words: string[]) => negationTokens(words).map((t) => t.token);
+
 function startsAt(words: readonly string[], at: number, candidate: readonly string[]): boolean {
   return candidate.every((w, i) => words[at + i] === w);
 }
 
 function alternativesOf(entry: IndexedTerm): string[] {
-  const own = entry.words.join(' ');
+  const own = termWords(entry.term).join(' ');
   const seen = new Set<string>([own]);
   const alternatives: string[] = [];
   for (const family of entry.families) {
@@ -71,25 +104,40 @@ function alternativesOf(entry: IndexedTerm): string[] {
   return alternatives;
 }
 
-/** Finds family terms among folded words, longest first and left to right; a word joins at most one span. */
+/**
+ * Finds family terms among folded words, longest first and left to right; a word joins at most one span.
+ * A stretch no term spells as typed may still say a term with another "not" ("no spin", "does not spin"
+ * for "won't spin"): it matches by meaning, and the family's spelling stands for it.
+ */
 export function matchFamilies(words: readonly string[], families: readonly WordFamily[]): FamilySpan[] {
-  const index = indexTerms(families);
+  const index = indexTerms(families, (w) => w);
+  const byMeaning = indexTerms(families, asNegationTokens);
+  const tokens = negationTokens(words);
+  const tokenAt = new Map(tokens.map((t, i) => [t.at, i]));
+  const tokenTexts = tokens.map((t) => t.token);
   const spans: FamilySpan[] = [];
   let at = 0;
   while (at < words.length) {
-    const entry = (index.get(words[at] ?? '') ?? []).find((candidate) => startsAt(words, at, candidate.words));
+    let entry = (index.get(words[at] ?? '') ?? []).find((candidate) => startsAt(words, at, candidate.words));
+    let length = entry?.words.length ?? 0;
+    const k = tokenAt.get(at);
+    if (!entry && k !== undefined) {
+      entry = (byMeaning.get(tokenTexts[k] ?? '') ?? []).find((candidate) => startsAt(tokenTexts, k, candidate.words));
+      const last = entry ? tokens[k + entry.words.length - 1] : undefined;
+      length = last ? last.at + last.length - at : 0;
+    }
     if (!entry) {
       at++;
       continue;
     }
     spans.push({
       from: at,
-      to: at + entry.words.length,
+      to: at + length,
       term: entry.term,
       alternatives: alternativesOf(entry),
       familyNames: [...new Set(entry.families.map((f) => f.name))],
     });
-    at += entry.words.length;
+    at += length;
   }
   return spans;
 }

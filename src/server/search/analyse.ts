@@ -16,6 +16,12 @@ export interface CompiledTextClause {
   alternatives: string;
   /** typed OR alternatives. */
   any: string;
+  /** The alternatives that keep their meaning in the English index: what counts as the concept found. */
+  meantAlternatives: string;
+  /** The content words typed in a family phrase, all found ("power" in "wont power on"); '' for one word. */
+  literal: string;
+  /** 'simple' tsquery finding, as written, the clause's terms the English index cannot search as meant; '' when none. */
+  asWritten: string;
   /** What highlights mark as typed: the typed terms, and what was typed when negated terms stand for it. */
   shownTyped: string;
   /** What highlights mark as the concept, with the terms' words for lining up phrases. */
@@ -103,7 +109,26 @@ function withoutSubsumed(typed: string[], alternatives: string[]): string[] {
 const NEGATING = new Set([...NEGATIONS, 'fails']);
 const keepsANegation = (term: string) => termWords(term.replace(/"/g, '')).some((w) => NEGATING.has(w) && !UNINDEXED_NEGATIONS.has(w));
 
-function compileClause(clause: TextClause, compiled: Map<string, string>): CompiledTextClause {
+/**
+ * A family phrase is searched through its family, where "dead" finds as much as "won't power on"; the
+ * content words typed ("power"), found in the title or symptoms, then rank a fix above one that only shares
+ * the concept.
+ */
+function literalWords(clause: TextClause, stems: Map<string, string>): string {
+  const words = clause.label.split(' ');
+  if (clause.exact || words.length < 2) return '';
+  const content = words.filter((w) => !NEGATIONS.has(w) && (stems.get(w) ?? '') !== '');
+  // A phrase of content words only ("disc tray") already ranks as typed, through its own phrase.
+  if (content.length === 0 || content.length === words.length) return '';
+  return andQuery(content.map((w) => lexemeQuery(stems.get(w) ?? w)));
+}
+
+function compileClause(
+  clause: TextClause,
+  compiled: Map<string, string>,
+  asWrittenOf: Map<string, string>,
+  stems: Map<string, string>,
+): CompiledTextClause {
   let terms = clause.terms;
   let alternatives = clause.alternatives.filter(keepsItsMeaning);
   // "will not open" is searched as open, which also finds "opens then closes": its family's terms that
@@ -121,6 +146,15 @@ function compileClause(clause: TextClause, compiled: Map<string, string>): Compi
   );
   const typed = orQuery(typedQueries);
   const alternativeText = orQuery(alternativeQueries);
+  // "switches off" searched as switch would count "mode switch" as the concept: such terms count only as written.
+  const lossy = new Set([...clause.terms, ...clause.alternatives].filter((t) => asWrittenOf.has(t)));
+  // Subsumption is judged among these alone: "can't record" searched as record must not hide "record fails".
+  const meantQueries = withoutSubsumed(
+    typedQueries,
+    [...new Set(alternatives.filter((t) => !lossy.has(t)).map((t) => compiled.get(t) ?? ''))].filter(
+      (q) => q !== '' && !typedQueries.includes(q),
+    ),
+  );
   const asTyped = clause.terms.map((t) => compiled.get(t) ?? '');
   const shownAlternatives = alternatives.filter((t) => !clause.terms.includes(t));
   return {
@@ -128,6 +162,9 @@ function compileClause(clause: TextClause, compiled: Map<string, string>): Compi
     typed,
     alternatives: alternativeText,
     any: orQuery([typed, alternativeText]),
+    meantAlternatives: orQuery(meantQueries),
+    asWritten: orQuery([...lossy].map((t) => asWrittenOf.get(t) ?? '')),
+    literal: literalWords(clause, stems),
     shownTyped: orQuery([...new Set([...typedQueries, ...asTyped])]),
     shownAlternatives: orQuery(
       [...new Set(shownAlternatives.map((t) => compiled.get(t) ?? ''))].filter((q) => !asTyped.includes(q) && !typedQueries.includes(q)),
@@ -138,7 +175,7 @@ function compileClause(clause: TextClause, compiled: Map<string, string>): Compi
 
 export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQuery> {
   const parsed = parseQuery(text);
-  const [{ vocabulary, stems, relatedCandidates }, { families, termQueries }] = await Promise.all([
+  const [{ vocabulary, stems, relatedCandidates }, { families, termQueries, asWritten }] = await Promise.all([
     lookupVocabulary(knex, parsed),
     compiledWordFamilies(knex),
   ]);
@@ -152,7 +189,9 @@ export async function analyseQuery(knex: Knex, text: string): Promise<AnalysedQu
   );
   const plan = buildPlan(parsed, { ...vocabulary, related }, families);
   const compiled = compileTerms(plan, termQueries, stems);
-  const textClauses = plan.clauses.filter((c): c is TextClause => c.kind === 'text').map((c) => compileClause(c, compiled));
+  const textClauses = plan.clauses
+    .filter((c): c is TextClause => c.kind === 'text')
+    .map((c) => compileClause(c, compiled, asWritten, stems));
   const hardText = textClauses.filter((c) => c.any !== '' && !(c.clause.soft || c.typed === ''));
   const softText = textClauses.filter((c) => c.any !== '' && (c.clause.soft || c.typed === ''));
   const codes = plan.clauses.filter((c): c is CodeClause => c.kind === 'code');

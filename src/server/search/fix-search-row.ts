@@ -55,10 +55,10 @@ async function appliesTo(knex: Knex, fixId: number): Promise<{ machines: Machine
   return { machines, chassis };
 }
 
-/** Maker names, model numbers, chassis codes and device types: the words typed beside a symptom. */
+/** Maker names, model numbers, chassis codes, device types and media ("vhs won't eject"): the words typed beside a symptom. */
 function machinesText(machines: MachineRow[], chassis: ChassisRow[]): string {
   return unique([
-    ...machines.flatMap((m) => [m.maker_name, m.model_number, m.chassis_code ?? '', deviceTypeLabels[m.device_type]]),
+    ...machines.flatMap((m) => [m.maker_name, m.model_number, m.chassis_code ?? '', deviceTypeLabels[m.device_type], ...m.formats]),
     ...chassis.flatMap((c) => [c.maker_name, c.code, deviceTypeLabels[c.device_type]]),
   ])
     .filter(Boolean)

@@ -102,6 +102,16 @@ function baseForms(lex: Lexicon, word: string): { pos: Pos; lemma: string }[] {
   return forms;
 }
 
+/**
+ * The base forms WordNet finds for each word by its regular endings, the word itself left out: "skiping" →
+ * "skip", "cds" → "cd". A slip in an ending ("skiping") still leads to the word the fixes use.
+ */
+export async function baseFormsOf(words: readonly string[]): Promise<Map<string, string[]>> {
+  if (words.length === 0) return new Map();
+  const lex = await lexicon();
+  return new Map(words.map((w) => [w, [...new Set(baseForms(lex, w).map((f) => f.lemma))].filter((l) => l !== w)]));
+}
+
 /** Whether WordNet knows the word, as written or by a regular ending. */
 export async function englishWords(words: readonly string[]): Promise<Set<string>> {
   if (words.length === 0) return new Set();

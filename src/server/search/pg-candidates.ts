@@ -33,8 +33,10 @@ const WALK_ORDER = 'ORDER BY s.bench_score DESC NULLS LAST, s.fix_id';
 const COLLECT_ORDER = 'ORDER BY coalesce(s.bench_score, -1) DESC, s.fix_id';
 /** A first walk reads this many fixes: enough to finish a broad query, and a sample of how dense the matches are. */
 export const PROBE = 400;
-/** No walk reads more than this (some 40 ms on a 2-core machine): past it, collecting is cheaper. */
+/** No walk of whole documents reads more than this (some 40 ms on a 2-core machine): past it, collecting is cheaper. */
 export const MAX_WALK = 8000;
+/** A walk of titles and symptoms reads them from the bench-order index, forty to a page: it may read further. */
+export const MAX_SUMMARY_WALK = 32000;
 /** Partial matches are a courtesy after the full ones: their walks stop early. */
 const PARTIAL_WALK = 1500;
 const SUMMARY_STAGE = 0;
@@ -42,7 +44,11 @@ const SUMMARY_STAGE = 0;
 const ANYWHERE_STAGE = 1;
 const NEAR_STAGE = 2;
 
-function stage(filter: Fragment, match: Fragment, limit: number, way: ReadWay, number = NEAR_STAGE, budget = PROBE): Fragment {
+/** A stage's test, or a test per way when a walk applies it differently (title and symptoms from the index). */
+type StageMatch = Fragment | Record<ReadWay, Fragment>;
+
+function stage(filter: Fragment, matches: StageMatch, limit: number, way: ReadWay, number = NEAR_STAGE, budget = PROBE): Fragment {
+  const match = 'sql' in matches ? matches : matches[way];
   if (way === 'collect') {
     return frag(
       `(SELECT s.fix_id, ${number} AS stage FROM fix_search s WHERE (${filter.sql}) AND (${match.sql}) ${COLLECT_ORDER} LIMIT ${limit})`,
@@ -153,6 +159,49 @@ export interface FullMatches {
   lowerBound: boolean;
 }
 
+/** How one stage is read: its test, the way the plan chose, and when walking on beats collecting. */
+interface StageRead {
+  number: number;
+  match: StageMatch;
+  way: ReadWay;
+  walkShare: number;
+  maxWalk: number;
+}
+
+/**
+ * Reads stages together (with any extra stages, read once), then walks on or collects each stage whose
+ * probe ran out of fixes to read: its hits tell how dense the matches are. Gives the rows and the final
+ * number of rows per stage.
+ */
+async function readStages(
+  knex: Knex,
+  analysed: AnalysedQuery,
+  filter: Fragment,
+  limit: number,
+  tableRows: number,
+  reads: StageRead[],
+  extra: Fragment[] = [],
+): Promise<{ rows: CandidateRow[]; byStage: Map<number, number> }> {
+  const stages = [...reads.map((r) => stage(filter, r.match, limit, r.way, r.number)), ...extra];
+  // Every row here matched all hard clauses, so "found in the body" needs no second look at the document.
+  const first = await featuresOf(knex, analysed, stages, 'TRUE');
+  const ranOut = (r: StageRead) => r.way === 'walk' && (first.byStage.get(r.number) ?? 0) < limit && tableRows > PROBE;
+  const again = (r: StageRead): Fragment => {
+    const share = (first.byStage.get(r.number) ?? 0) / PROBE;
+    const budget = share > 0 ? Math.ceil((1.5 * limit) / share) : Number.POSITIVE_INFINITY;
+    return share >= r.walkShare && budget <= r.maxWalk
+      ? stage(filter, r.match, limit, 'walk', r.number, budget)
+      : stage(filter, r.match, limit, 'collect', r.number);
+  };
+  const redo = reads.filter(ranOut);
+  if (redo.length === 0) return first;
+  const second = await featuresOf(knex, analysed, redo.map(again), 'TRUE');
+  const seen = new Set(first.rows.map((r) => r.fix_id));
+  const byStage = new Map(first.byStage);
+  for (const r of redo) byStage.set(r.number, second.byStage.get(r.number) ?? 0);
+  return { rows: [...first.rows, ...second.rows.filter((r) => !seen.has(r.fix_id))], byStage };
+}
+
 /** Fixes matching every hard clause: in the title and symptoms, anywhere, and near the named machine. */
 export async function fullMatches(
   knex: Knex,
@@ -164,38 +213,44 @@ export async function fullMatches(
 ): Promise<FullMatches> {
   // A code or a narrow scope picks few fixes through its own index; a broad text is then only tested.
   const narrowed = plan.narrowed || analysed.codes.length > 0;
-  const inSummary = allClauses(analysed, 'doc_a', analysed.hardText, analysed.codes, narrowed && plan.textBroad);
-  const anywhere = allClauses(analysed, 'document', analysed.hardText, analysed.codes, narrowed && plan.textBroad);
+  const testTextOnly = narrowed && plan.textBroad;
+  const inSummary = allClauses(analysed, 'doc_a', analysed.hardText, analysed.codes, testTextOnly);
+  const anywhere = allClauses(analysed, 'document', analysed.hardText, analysed.codes, testTextOnly);
   if (narrowed) plan = { ...plan, summary: 'collect', anywhere: 'collect' };
-  const stages = [
-    stage(filter, inSummary, limit, plan.summary, SUMMARY_STAGE),
-    stage(filter, anywhere, limit, plan.anywhere, ANYWHERE_STAGE),
-    ...nearStages(filter, inSummary, anywhere, near, limit, plan),
-  ];
-  // Every row here matched all hard clauses, so "found in the body" needs no second look at the document.
-  const first = await featuresOf(knex, analysed, stages, 'TRUE');
-  // A probe that came back short ran out of fixes to read, not of matches. Its hits tell how dense the
-  // matches are: dense enough, walk on as far as the page needs; otherwise collect.
-  const ranOut = (number: number, way: ReadWay) => way === 'walk' && (first.byStage.get(number) ?? 0) < limit && plan.tableRows > PROBE;
-  const again = (number: number, match: Fragment, walkShare: number): Fragment => {
-    const share = (first.byStage.get(number) ?? 0) / PROBE;
-    const budget = share > 0 ? Math.ceil((1.5 * limit) / share) : Number.POSITIVE_INFINITY;
-    return share >= walkShare && budget <= MAX_WALK
-      ? stage(filter, match, limit, 'walk', number, budget)
-      : stage(filter, match, limit, 'collect', number);
+  const summary: StageRead = {
+    number: SUMMARY_STAGE,
+    match: { collect: inSummary, walk: allClauses(analysed, 'walked summary', analysed.hardText, analysed.codes, testTextOnly) },
+    way: plan.summary,
+    walkShare: plan.summaryWalkShare,
+    maxWalk: MAX_SUMMARY_WALK,
   };
-  const redo: Fragment[] = [];
-  if (ranOut(SUMMARY_STAGE, plan.summary)) redo.push(again(SUMMARY_STAGE, inSummary, plan.summaryWalkShare));
-  if (ranOut(ANYWHERE_STAGE, plan.anywhere)) redo.push(again(ANYWHERE_STAGE, anywhere, plan.anywhereWalkShare));
-  let rows = first.rows;
-  let counted = first.byStage.get(ANYWHERE_STAGE) ?? 0;
-  if (redo.length) {
-    const second = await featuresOf(knex, analysed, redo, 'TRUE');
-    const seen = new Set(rows.map((r) => r.fix_id));
-    rows = [...rows, ...second.rows.filter((r) => !seen.has(r.fix_id))];
-    if (ranOut(ANYWHERE_STAGE, plan.anywhere)) counted = second.byStage.get(ANYWHERE_STAGE) ?? 0;
+  const inDocument: StageRead = {
+    number: ANYWHERE_STAGE,
+    match: anywhere,
+    way: plan.anywhere,
+    walkShare: plan.anywhereWalkShare,
+    maxWalk: MAX_WALK,
+  };
+  const read = (reads: StageRead[], extra: Fragment[] = []) => readStages(knex, analysed, filter, limit, plan.tableRows, reads, extra);
+  if (near === null) {
+    // With no machine named, a fix holding every clause in its title or symptoms always ranks above one that
+    // holds some only in the body: when those fill the candidates, the bodies (large, read from the table's
+    // side storage) are not read at all.
+    const bySummary = await read([summary]);
+    const found = bySummary.byStage.get(SUMMARY_STAGE) ?? 0;
+    if (found >= limit) return { rows: bySummary.rows, total: found, lowerBound: true };
+    const byDocument = await read([inDocument]);
+    const seen = new Set(bySummary.rows.map((r) => r.fix_id));
+    const counted = byDocument.byStage.get(ANYWHERE_STAGE) ?? 0;
+    return {
+      rows: [...bySummary.rows, ...byDocument.rows.filter((r) => !seen.has(r.fix_id))],
+      total: counted,
+      lowerBound: counted >= limit,
+    };
   }
-  return { rows, total: counted, lowerBound: counted >= limit };
+  const all = await read([summary, inDocument], nearStages(filter, inSummary, anywhere, near, limit, plan));
+  const counted = all.byStage.get(ANYWHERE_STAGE) ?? 0;
+  return { rows: all.rows, total: counted, lowerBound: counted >= limit };
 }
 
 /** Fixes matching all hard clauses but one, then any clause at all: shown after the full matches. */

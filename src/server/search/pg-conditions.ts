@@ -31,6 +31,9 @@ export function filterCondition(query: SearchQuery, context: SearchContext, anal
   return allOf(parts);
 }
 
+/** Title and symptoms as written (the 'simple' dictionary keeps "no", "not", "off"), built only for candidates. */
+const SUMMARY_AS_WRITTEN = `to_tsvector('simple', benchlore_unaccent(s.title || ' ' || s.symptoms))`;
+
 /** The same query with every phrase loosened to "all these words": a necessary condition, cheaper to test. */
 export function withoutPhrases(tsquery: string): string {
   return tsquery.replace(/<\d*-?>/g, '&');
@@ -47,10 +50,24 @@ export function codeCondition(code: CodeClause): Fragment {
  */
 export const matchQuery = (c: CompiledTextClause): string => (c.clause.exact ? c.any : withoutPhrases(c.any));
 
-/** Every hard clause, each searched in `column` (the whole document, or doc_a: title and symptoms). */
+/**
+ * Title and symptoms tested while walking the bench-order index: from the copy the index carries (no table
+ * row read), or, for the rare fix whose copy is empty (very long symptoms), from its row.
+ */
+const walkedSummary = (q: string) =>
+  frag(
+    `CASE WHEN s.doc_a_inline IS NULL THEN (SELECT x.doc_a @@ ?::tsquery FROM fix_search x WHERE x.fix_id = s.fix_id) ELSE s.doc_a_inline @@ ?::tsquery END`,
+    q,
+    q,
+  );
+
+/**
+ * Every hard clause, each searched in `column`: the whole document, or title and symptoms (doc_a, through
+ * its text index; 'walked summary' while walking the bench-order index).
+ */
 export function allClauses(
   analysed: AnalysedQuery,
-  column: 'document' | 'doc_a',
+  column: 'document' | 'doc_a' | 'walked summary',
   text: CompiledTextClause[] = analysed.hardText,
   codes: CodeClause[] = analysed.codes,
   testTextOnly = false,
@@ -59,7 +76,10 @@ export function allClauses(
   const textQuery = andQuery(text.map(matchQuery));
   // "IS TRUE" makes the text a test on rows found otherwise (by a code, a machine): scanning the text
   // index for a broad word would cost more than the rows it is tested on.
-  const test = (q: string) => frag(testTextOnly ? `(s.${column} @@ ?::tsquery) IS TRUE` : `s.${column} @@ ?::tsquery`, q);
+  const test = (q: string) => {
+    const found = column === 'walked summary' ? walkedSummary(q) : frag(`s.${column} @@ ?::tsquery`, q);
+    return testTextOnly ? frag(`(${found.sql}) IS TRUE`, ...found.bindings) : found;
+  };
   if (textQuery) {
     // Phrases need word positions, which costs about twice as much per fix: words-present first, so most
     // fixes are turned away by the cheaper test.
@@ -105,7 +125,8 @@ export function neighbourQueries(analysed: AnalysedQuery): string[] {
 }
 
 /**
- * The clause levels of a row, as an int[]: hard text, codes, soft text, then the neighbour bonuses.
+ * The clause levels of a row, as an int[]: hard text, codes, soft text, then the neighbour bonuses and the
+ * bonuses for a family phrase's words found as typed.
  * `known` is a boolean SQL expression saying the row already matched every hard clause.
  */
 export function levelsExpression(analysed: AnalysedQuery, known: string): Fragment {
@@ -113,7 +134,9 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     const whens: Fragment[] = [];
     const alternative = c.clause.dictionary ? clauseLevel.summaryDictionary : clauseLevel.summaryAlternative;
     if (c.typed) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.summary}`, c.typed));
-    if (c.alternatives) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${alternative}`, c.alternatives));
+    if (c.meantAlternatives) whens.push(frag(`WHEN s.doc_a @@ ?::tsquery THEN ${alternative}`, c.meantAlternatives));
+    // Terms the English index cannot search as meant ("no power", "switches off") count as written.
+    if (c.asWritten) whens.push(frag(`WHEN ${SUMMARY_AS_WRITTEN} @@ ?::tsquery THEN ${clauseLevel.summaryAlternative}`, c.asWritten));
     // A full match is known to hold the clause's words; only a clause matched by its words alone, not its
     // phrases ("won't … close" apart), is tested again as written.
     if (isHard && matchQuery(c) === c.any) whens.push(frag(`WHEN ${known} THEN ${clauseLevel.body}`));
@@ -131,6 +154,9 @@ export function levelsExpression(analysed: AnalysedQuery, known: string): Fragme
     ...analysed.codes.map(codeLevel),
     ...analysed.softText.map((c) => textLevel(c, false)),
     ...neighbourQueries(analysed).map((q) => frag(`CASE WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.body} ELSE 0 END`, q)),
+    ...analysed.hardText
+      .filter((c) => c.literal !== '')
+      .map((c) => frag(`CASE WHEN s.doc_a @@ ?::tsquery THEN ${clauseLevel.body} ELSE 0 END`, c.literal)),
   ];
   if (levels.length === 0) return frag(`'{}'::int[]`);
   return frag(`ARRAY[${levels.map((l) => l.sql).join(', ')}]::int[]`, ...levels.flatMap((l) => l.bindings));

@@ -7,13 +7,14 @@ import { lexemeStats, type LexemeStats } from './vocabulary';
 
 /**
  * Costs per fix read in µs, measured with EXPLAIN ANALYZE on the bench:search database (2 cores): testing
- * the small title-and-symptoms vector while walking, about 1; testing the whole document (stored
- * compressed), about 4. Collecting through the index costs about 1 per match, unless the query holds a
+ * the title-and-symptoms vector while walking, about 0.25 since the bench-order index carries it (an
+ * index-only scan, some forty fixes a page; it was about 1 read from the table, more when the table is
+ * not in memory); testing the whole document (stored compressed), about 4. Collecting through the index costs about 1 per match, unless the query holds a
  * phrase ("disc tray"): then each match is read back and rechecked, about 2.6 for the small vector and 7
  * for the whole document.
  */
 const COSTS = {
-  summary: { walk: 1, collect: 1, collectPhrase: 2.6 },
+  summary: { walk: 0.25, collect: 1, collectPhrase: 2.6 },
   anywhere: { walk: 4, collect: 1, collectPhrase: 7 },
 } as const;
 

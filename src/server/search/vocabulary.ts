@@ -4,7 +4,7 @@ import type { Vocabulary } from '@/lib/search/plan';
 import { codeGroups, codeWindows, digitKeysOf } from '@/lib/search/code-match';
 import type { ParsedQuery } from '@/lib/search/tokens';
 import { pgArray } from './sql-fragment';
-import { englishWords, relatedWords } from './lexicon';
+import { baseFormsOf, englishWords, relatedWords } from './lexicon';
 
 /** Every text column of fix_search, as the 'simple' dictionary splits it (unstemmed, lower case). */
 const SIMPLE_DOCUMENT = `to_tsvector('simple', benchlore_unaccent(title || ' ' || symptoms || ' ' || cause || ' ' || remedy || ' ' || parts || ' ' || machines_text))`;
@@ -111,28 +111,45 @@ async function dictionaryLookup(
   english: Set<string>;
   related: Map<string, string[]>;
   compounds: Map<string, string>;
+  inflections: Map<string, string>;
   stems: Map<string, string>;
   stored: Set<string>;
 }> {
   const english = await englishWords(unknown);
+  const bases = await baseFormsOf([...english]);
   const related = new Map<string, string[]>();
   for (const word of english) related.set(word, await relatedWords(word));
   const compoundWords = unknown.filter((w) => !english.has(w) && w.length >= MIN_COMPOUND);
   const asked = [
-    ...new Set([...[...related.values()].flat().flatMap((w) => [w, ...w.split(' ')]), ...compoundWords.flatMap((w) => splits(w).flat())]),
+    ...new Set([
+      ...[...related.values()].flat().flatMap((w) => [w, ...w.split(' ')]),
+      ...compoundWords.flatMap((w) => splits(w).flat()),
+      ...[...bases.values()].flat(),
+    ]),
   ];
   const stems = new Map<string, string>();
   const stored = new Set<string>();
+  /** Words some fix uses, as written or through their stem. */
+  const used = new Set<string>();
   if (asked.length) {
-    const { rows } = await knex.raw<{ rows: { word: string; stem: string; stored: boolean }[] }>(
-      `SELECT t.word, ${STEM_OF('t.word')} AS stem, EXISTS (SELECT 1 FROM search_words w WHERE w.word = t.word) AS stored
-       FROM unnest(?::text[]) AS t(word)`,
+    const { rows } = await knex.raw<{ rows: { word: string; stem: string; stored: boolean; used: boolean }[] }>(
+      `WITH t AS (SELECT word, ${STEM_OF('word')} AS stem FROM unnest(?::text[]) AS word)
+       SELECT t.word, t.stem, EXISTS (SELECT 1 FROM search_words w WHERE w.word = t.word) AS stored,
+              EXISTS (SELECT 1 FROM search_words w WHERE w.word = t.word OR (t.stem <> '' AND w.stem = t.stem)) AS used
+       FROM t`,
       [pgArray(asked)],
     );
     for (const row of rows) {
       stems.set(row.word, row.stem);
       if (row.stored) stored.add(row.word);
+      if (row.used) used.add(row.word);
     }
+  }
+  // A typed form no fix uses whose base form some fix does: searched as the base form ("skiping" → skip).
+  const inflections = new Map<string, string>();
+  for (const [word, forms] of bases) {
+    const base = forms.find((f) => used.has(f));
+    if (base) inflections.set(word, base);
   }
   const compounds = new Map<string, string>();
   for (const word of compoundWords) {
@@ -142,7 +159,7 @@ async function dictionaryLookup(
       .sort((x, y) => Math.min(y[0].length, y[1].length) - Math.min(x[0].length, x[1].length))[0];
     if (cut) compounds.set(word, cut.join(' '));
   }
-  return { english, related, compounds, stems, stored };
+  return { english, related, compounds, inflections, stems, stored };
 }
 
 /** Up to this many stored words are compared with each unknown word (same first letter, near length). */
@@ -214,6 +231,7 @@ export async function lookupVocabulary(knex: Knex, parsed: ParsedQuery): Promise
       codes: codeRows as string[],
       english: dictionary?.english ?? new Set(),
       compounds: dictionary?.compounds ?? new Map(),
+      inflections: dictionary?.inflections ?? new Map(),
     },
     stems,
     relatedCandidates,

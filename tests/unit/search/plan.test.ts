@@ -145,6 +145,24 @@ describe('words a dictionary knows are never corrected into other words', () => 
     expect(buildPlan(parseQuery('tary'), withDictionary(['gobbles']), []).corrections).toEqual([{ from: 'tary', to: 'tray' }]);
   });
 
+  it('searches a misspelt ending through the base form a fix uses: "skiping" as skip', () => {
+    const plan = buildPlan(
+      parseQuery('skiping cds'),
+      withDictionary(['skiping', 'cds'], [], {
+        inflections: new Map([
+          ['skiping', 'skip'],
+          ['cds', 'cd'],
+        ]),
+      }),
+      [],
+    );
+    expect(plan.corrections).toEqual([
+      { from: 'skiping', to: 'skip' },
+      { from: 'cds', to: 'cd' },
+    ]);
+    expect(texts(plan.clauses).map((c) => c.terms)).toEqual([['skip'], ['cd']]);
+  });
+
   it('reads two stored words run together as both words', () => {
     const plan = buildPlan(parseQuery('takeup tray'), withDictionary([], [], { compounds: new Map([['takeup', 'take up']]) }), []);
     expect(texts(plan.clauses).map((c) => c.label)).toEqual(['take', 'up', 'tray']);

@@ -34,6 +34,25 @@ describe('matchFamilies', () => {
     expect(matchFamilies(['tray', 'will', 'not', 'open'], families).map((s) => s.term)).toEqual(['tray', 'will not']);
   });
 
+  it('matches a family phrase said with another "not": "no spin" and "does not spin" as "won\'t spin"', () => {
+    const spinning: WordFamily[] = [{ id: 4, name: 'not spinning', terms: ["won't spin", 'not spinning', "doesn't rotate"] }];
+    const noSpin = matchFamilies(['cd', 'no', 'spin'], spinning);
+    expect(noSpin).toEqual([
+      { from: 1, to: 3, term: "won't spin", alternatives: ['not spinning', "doesn't rotate"], familyNames: ['not spinning'] },
+    ]);
+    expect(matchFamilies(['disc', 'does', 'not', 'spin'], spinning)).toMatchObject([{ from: 1, to: 4, term: "won't spin" }]);
+  });
+
+  it('keeps the spelling typed when a term spells it exactly', () => {
+    expect(matchFamilies(['not', 'spinning'], [{ id: 4, name: 'not spinning', terms: ["won't spin", 'not spinning'] }])).toMatchObject([
+      { from: 0, to: 2, term: 'not spinning', alternatives: ["won't spin"] },
+    ]);
+  });
+
+  it('never reads "no" alone as a phrase of the family', () => {
+    expect(matchFamilies(['no', 'picture'], [{ id: 4, name: 'not spinning', terms: ["won't spin"] }])).toEqual([]);
+  });
+
   it('ignores retired families simply by not being given them', () => {
     expect(matchFamilies(['drawer'], [])).toEqual([]);
   });

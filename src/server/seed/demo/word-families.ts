@@ -109,7 +109,33 @@ export const demoWordFamilies: DemoWordFamily[] = [
   },
   {
     name: 'will not open',
-    terms: ["won't open", 'will not open', "doesn't open", "won't eject", 'will not eject', 'stays shut', 'stuck shut', 'fails to open'],
+    terms: [
+      "won't open",
+      'will not open',
+      "doesn't open",
+      "won't eject",
+      'will not eject',
+      'stays shut',
+      'stuck shut',
+      'fails to open',
+      'stuck inside',
+      "won't come out",
+      'will not come out',
+      'jammed inside',
+    ],
+  },
+  {
+    name: 'spits out',
+    terms: [
+      'spits out',
+      'spits it out',
+      'spits it back out',
+      'rejects',
+      'ejects',
+      'throws it out',
+      'pushes it back out',
+      'ejects by itself',
+    ],
   },
   {
     name: 'opens then closes',
@@ -190,5 +216,9 @@ export const demoWordFamilies: DemoWordFamily[] = [
   { name: 'video recorder', terms: ['VCR', 'video cassette recorder', 'video recorder', 'VHS recorder', 'video deck'] },
   { name: 'cassette deck', terms: ['cassette deck', 'tape deck', 'cassette player', 'cassette recorder'] },
   { name: 'CD player', terms: ['CD player', 'CD deck', 'compact disc player'] },
+  {
+    name: 'smell',
+    terms: ['smell', 'smells', 'odour', 'odor', 'stink', 'stinks', 'whiff', 'fishy smell', 'burning smell', 'smells burnt'],
+  },
   { name: 'camcorder', terms: ['camcorder', 'video camera', 'camera'] },
 ];
