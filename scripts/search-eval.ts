@@ -5,8 +5,8 @@
   the PostgreSQL provider and through the Meilisearch provider against the local fake of its HTTP API
   (tests/support/fake-meili.ts), and prints recall in the top 1, 3 and 10, mean reciprocal rank, the goals
   beside them, and every failing case.
-  Usage: npm run search:eval [-- --provider postgres|meilisearch] [-- --scopes machine,all] [-- --set tuned,holdout]
-  Both query sets run by default: the tuned set (search was tuned against it) and the held-out set.
+  Usage: npm run search:eval [-- --provider postgres|meilisearch] [-- --scopes machine,all] [-- --set tuned,holdout,fresh]
+  All three query sets run by default: tuned (search was tuned against it), held-out, and fresh (never read).
 */
 import { migrateAndSeed, useOwnDatabase } from './lib/prepare.ts';
 
@@ -16,7 +16,7 @@ const arg = (name: string, fallback: string) => {
 };
 const providers = arg('provider', 'postgres,meilisearch').split(',');
 const scopes = arg('scopes', 'machine,all').split(',') as ('machine' | 'family' | 'all')[];
-const sets = arg('set', 'tuned,holdout').split(',') as ('tuned' | 'holdout')[];
+const sets = arg('set', 'tuned,holdout,fresh').split(',') as ('tuned' | 'holdout' | 'fresh')[];
 
 const env = await useOwnDatabase(process.env.BENCHLORE_EVAL_DB ?? 'benchlore_search_eval');
 migrateAndSeed(env);

@@ -6,7 +6,7 @@ import { demoFixes } from '@/server/seed/demo/fixes';
 import { figuresOf, floorOf, loadCases, reportLines, runEval, type QuerySet } from '../search-eval/eval';
 
 describe('the blind evaluation sets (tests/search-eval)', () => {
-  it.each<QuerySet>(['tuned', 'holdout'])(
+  it.each<QuerySet>(['tuned', 'holdout', 'fresh'])(
     'keeps top-3 recall on the %s set at or above the committed floor, with and without a machine named',
     async (set) => {
       const knex = db();
