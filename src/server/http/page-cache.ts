@@ -16,11 +16,15 @@ export function pageEtag(build: string, address: string, key: string): string {
   return etag(`${build}\n${address}\n${key}`, { weak: true });
 }
 
-/** Whether the reader's copy is current: If-None-Match against our ETag (RFC 9110 §13.1.2, via `fresh`). */
+/**
+ * Whether the reader's copy is current: If-None-Match against our ETag (RFC 9110 §13.1.2, weak comparison, via
+ * `fresh`). The request's Cache-Control is left out on purpose: `no-cache` asks caches on the way to revalidate
+ * with the origin, and this is the origin (fetch() itself adds `no-cache` whenever it sends If-None-Match).
+ */
 export function readerHasCurrent(requestHeaders: Headers, tag: string): boolean {
   const ifNoneMatch = requestHeaders.get('if-none-match');
   if (!ifNoneMatch) return false;
-  return fresh({ 'if-none-match': ifNoneMatch, 'cache-control': requestHeaders.get('cache-control') ?? undefined }, { etag: tag });
+  return fresh({ 'if-none-match': ifNoneMatch }, { etag: tag });
 }
 
 interface Kept {
