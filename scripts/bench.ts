@@ -45,7 +45,12 @@ if (only.has('pages') || only.has('photos')) {
   const { benchPhoto, photoTable } = await import('./bench/photos.ts');
   const { signIn } = await import('../tests/support/sign-in.ts');
   const { db, closeDb } = await import('../src/server/core/db.ts');
-  const server = await startBenchServer(PORT, env, 'dist', values['cpu-prof'] ? ['--require', './scripts/bench/exit-on-signal.cjs', '--cpu-prof', '--cpu-prof-dir', values['cpu-prof']] : []);
+  const server = await startBenchServer(
+    PORT,
+    env,
+    'dist',
+    values['cpu-prof'] ? ['--require', './scripts/bench/exit-on-signal.cjs', '--cpu-prof', '--cpu-prof-dir', values['cpu-prof']] : [],
+  );
   try {
     const cookie = await signIn(server.base, 'member@example.test', 'bench-demo-2026', '127.0.0.1');
     if (only.has('pages')) {

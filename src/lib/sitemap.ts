@@ -39,6 +39,9 @@ export function sitemapXml(origin: string, entries: SitemapEntry[]): string {
 
 /** The index: one entry per file, /sitemaps/1.xml, /sitemaps/2.xml, … */
 export function sitemapIndexXml(origin: string, files: number): string {
-  const items = Array.from({ length: files }, (_, i) => `<sitemap><loc>${escapeXml(new URL(`/sitemaps/${i + 1}.xml`, origin).href)}</loc></sitemap>`);
+  const items = Array.from(
+    { length: files },
+    (_, i) => `<sitemap><loc>${escapeXml(new URL(`/sitemaps/${i + 1}.xml`, origin).href)}</loc></sitemap>`,
+  );
   return `<?xml version="1.0" encoding="UTF-8"?>\n<sitemapindex xmlns="http://www.sitemaps.org/schemas/sitemap/0.9">\n${items.join('\n')}\n</sitemapindex>\n`;
 }

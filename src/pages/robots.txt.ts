@@ -4,7 +4,22 @@ import type { APIRoute } from 'astro';
 import { config } from '@/server/core/config';
 import { cachePolicies } from '@/server/http/responses';
 
-const closed = ['/api/', '/search', '/account', '/admin', '/proofing', '/write', '/jobs', '/notes', '/n/', '/order-list', '/sign-in', '/sign-up', '/reset', '/dev/'];
+const closed = [
+  '/api/',
+  '/search',
+  '/account',
+  '/admin',
+  '/proofing',
+  '/write',
+  '/jobs',
+  '/notes',
+  '/n/',
+  '/order-list',
+  '/sign-in',
+  '/sign-up',
+  '/reset',
+  '/dev/',
+];
 
 export const GET: APIRoute = () => {
   const lines = [
@@ -15,5 +30,7 @@ export const GET: APIRoute = () => {
     `Sitemap: ${new URL('/sitemap.xml', config().PUBLIC_ORIGIN).href}`,
     '',
   ];
-  return new Response(lines.join('\n'), { headers: { 'Content-Type': 'text/plain; charset=utf-8', 'Cache-Control': cachePolicies.public } });
+  return new Response(lines.join('\n'), {
+    headers: { 'Content-Type': 'text/plain; charset=utf-8', 'Cache-Control': cachePolicies.public },
+  });
 };

@@ -55,7 +55,12 @@ describe('validators on public pages', () => {
   });
 
   it('validates machine, chassis, maker pages and revision permalinks', async () => {
-    for (const path of [`/machines/${world.machines[0]!.slug}`, `/chassis/${world.chassisSlug}`, `/makers/${world.makerSlug}`, `/fixes/${fix.slug}/r/1`]) {
+    for (const path of [
+      `/machines/${world.machines[0]!.slug}`,
+      `/chassis/${world.chassisSlug}`,
+      `/makers/${world.makerSlug}`,
+      `/fixes/${fix.slug}/r/1`,
+    ]) {
       const { tag, again } = await revalidate(path);
       expect(tag, path).toMatch(/^W\//);
       expect(again?.status, path).toBe(304);

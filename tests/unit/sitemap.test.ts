@@ -35,7 +35,10 @@ describe('splitting', () => {
 
 describe('XML', () => {
   it('writes absolute, escaped addresses with the day of last change', () => {
-    const xml = sitemapXml('https://bench.example', [{ path: '/fixes/a', lastModified: new Date('2026-12-01T23:00:00Z') }, { path: '/makers/x?y=1&z=2' }]);
+    const xml = sitemapXml('https://bench.example', [
+      { path: '/fixes/a', lastModified: new Date('2026-12-01T23:00:00Z') },
+      { path: '/makers/x?y=1&z=2' },
+    ]);
     expect(xml).toContain('<urlset xmlns="http://www.sitemaps.org/schemas/sitemap/0.9">');
     expect(xml).toContain('<url><loc>https://bench.example/fixes/a</loc><lastmod>2026-12-01</lastmod></url>');
     expect(xml).toContain('<loc>https://bench.example/makers/x?y=1&amp;z=2</loc>');

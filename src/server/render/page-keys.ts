@@ -43,7 +43,12 @@ export const fixKey: PageKey = async ({ slug }) => {
   return fixKeyOf(row);
 };
 
-export function fixKeyOf(row: { id: number | null; current_revision_id: number | null; locked_at: Date | null; versions: string | null }): string {
+export function fixKeyOf(row: {
+  id: number | null;
+  current_revision_id: number | null;
+  locked_at: Date | null;
+  versions: string | null;
+}): string {
   return `fix.${row.id}.r${row.current_revision_id}.${row.locked_at ? `locked${row.locked_at.getTime()}` : 'open'},${row.versions ?? ''}`;
 }
 

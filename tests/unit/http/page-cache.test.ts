@@ -3,7 +3,13 @@
 import { describe, expect, it, vi } from 'vitest';
 import { RenderCache, answerPublicPage, pageEtag, readerHasCurrent } from '@/server/http/page-cache';
 
-const kept = (key: string, size: number) => ({ key, tag: `W/"${key}"`, status: 200, headers: [] as [string, string][], body: new Uint8Array(size) });
+const kept = (key: string, size: number) => ({
+  key,
+  tag: `W/"${key}"`,
+  status: 200,
+  headers: [] as [string, string][],
+  body: new Uint8Array(size),
+});
 
 describe('pageEtag', () => {
   it('is a weak ETag that changes with the build, the address and the key, and only with them', () => {
@@ -88,7 +94,15 @@ describe('answerPublicPage', () => {
 
   it('answers a current If-None-Match with 304 and no body, without rendering', async () => {
     const cache = new RenderCache({ entries: 10, bytes: 10_000 });
-    const first = await answerPublicPage({ request: request(), address: '/a', key: 'k1', policy: 'public', render: async () => page('x'), mayKeep: () => true, cache });
+    const first = await answerPublicPage({
+      request: request(),
+      address: '/a',
+      key: 'k1',
+      policy: 'public',
+      render: async () => page('x'),
+      mayKeep: () => true,
+      cache,
+    });
     const render = vi.fn(async () => page('y'));
     const again = await answerPublicPage({
       request: request({ 'If-None-Match': first.headers.get('etag')! }),
@@ -110,7 +124,12 @@ describe('answerPublicPage', () => {
     const cache = new RenderCache({ entries: 10, bytes: 10_000 });
     const base = { address: '/a', policy: 'public' as const, mayKeep: () => true, cache };
     const old = await answerPublicPage({ ...base, request: request(), key: 'r1', render: async () => page('old text') });
-    const fresh = await answerPublicPage({ ...base, request: request({ 'If-None-Match': old.headers.get('etag')! }), key: 'r2', render: async () => page('new text') });
+    const fresh = await answerPublicPage({
+      ...base,
+      request: request({ 'If-None-Match': old.headers.get('etag')! }),
+      key: 'r2',
+      render: async () => page('new text'),
+    });
     expect(fresh.status).toBe(200);
     expect(await fresh.text()).toBe('new text');
   });
@@ -124,7 +143,15 @@ describe('answerPublicPage', () => {
     ];
     for (const [response, mayKeep] of cases) {
       const cache = new RenderCache({ entries: 10, bytes: 10_000 });
-      await answerPublicPage({ request: request(), address: '/a', key: 'k', policy: 'public', render: async () => response, mayKeep: () => mayKeep, cache });
+      await answerPublicPage({
+        request: request(),
+        address: '/a',
+        key: 'k',
+        policy: 'public',
+        render: async () => response,
+        mayKeep: () => mayKeep,
+        cache,
+      });
       expect(cache.size.entries).toBe(0);
     }
   });

@@ -21,7 +21,17 @@ describe('fixKeyOf', () => {
 
 describe('pageKeys', () => {
   it('covers every public read page the validators are promised on, and no page that depends on who reads', () => {
-    for (const route of ['/', '/machines', '/machines/[slug]', '/makers', '/makers/[slug]', '/chassis/[slug]', '/fixes/[slug]', '/fixes/[slug]/r/[number]', '/help']) {
+    for (const route of [
+      '/',
+      '/machines',
+      '/machines/[slug]',
+      '/makers',
+      '/makers/[slug]',
+      '/chassis/[slug]',
+      '/fixes/[slug]',
+      '/fixes/[slug]/r/[number]',
+      '/help',
+    ]) {
       expect(pageKeys[route], route).toBeDefined();
     }
     for (const route of ['/search', '/n/[code]', '/account', '/jobs', '/proofing', '/write', '/fixes/[slug]/edit']) {
