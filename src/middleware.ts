@@ -8,7 +8,7 @@ import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
 import { startBackgroundWork } from '@/server/core/background';
-import { answerPublicPage } from '@/server/http/page-cache';
+import { answerPublicPage, sharedKeyRead } from '@/server/http/page-cache';
 import { pageKeys } from '@/server/render/page-keys';
 
 /** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
@@ -80,7 +80,7 @@ const background = defineMiddleware((context, next) => {
 const publicPages = defineMiddleware(async (context, next) => {
   const page = pageKeys[context.routePattern];
   if (!page || context.request.method !== 'GET' || context.locals.user !== null || sessionWasCleared(context.request)) return next();
-  const key = await page.key(context.params);
+  const key = await sharedKeyRead(context.routePattern + JSON.stringify(context.params), () => page.key(context.params));
   if (key === null) return next();
   return answerPublicPage({
     request: context.request,
