@@ -7,6 +7,8 @@
   2. Photos: one 12-megapixel JPEG through the upload API: answered, renditions ready, server peak RSS.
   3. Search: scripts/bench-search.ts (10,000 and 100,000 synthetic fixes beside a naive ILIKE scan).
   Usage: npm run bench [-- --only pages,photos,search --seconds 10 --connections 50 --sizes 10000,100000]
+         [--port 4480] (the app; the floors take the next two ports; another port also means a database of its own)
+         [--cpu-prof DIR] (runs the app under `node --cpu-prof`, writing its V8 profile into DIR when it stops)
   The machine matters: the figures are for comparing side by side in one run, not absolute.
 */
 import { spawnSync } from 'node:child_process';
@@ -21,17 +23,19 @@ const { values } = parseArgs({
     connections: { type: 'string', default: '50' },
     sizes: { type: 'string' },
     rounds: { type: 'string' },
+    port: { type: 'string', default: '4480' },
+    'cpu-prof': { type: 'string' },
   },
 });
 const only = new Set(values.only.split(','));
 const seconds = Number(values.seconds);
 const connections = Number(values.connections);
-const PORT = 4480;
+const PORT = Number(values.port);
 
 console.log(`Machine: ${cpus().length} × ${cpus()[0]?.model.trim()}, ${(totalmem() / 2 ** 30).toFixed(0)} GB, Node ${process.version}\n`);
 
 if (only.has('pages') || only.has('photos')) {
-  const env = await useOwnDatabase('benchlore_bench_pages', {
+  const env = await useOwnDatabase(PORT === 4480 ? 'benchlore_bench_pages' : `benchlore_bench_pages_${PORT}`, {
     AUTH_SECRET: process.env.AUTH_SECRET ?? 'bench-secret-not-for-production-0123456789',
   });
   migrateAndSeed(env);
@@ -41,7 +45,12 @@ if (only.has('pages') || only.has('photos')) {
   const { benchPhoto, photoTable } = await import('./bench/photos.ts');
   const { signIn } = await import('../tests/support/sign-in.ts');
   const { db, closeDb } = await import('../src/server/core/db.ts');
-  const server = await startBenchServer(PORT, env);
+  const server = await startBenchServer(
+    PORT,
+    env,
+    'dist',
+    values['cpu-prof'] ? ['--require', './scripts/bench/exit-on-signal.cjs', '--cpu-prof', '--cpu-prof-dir', values['cpu-prof']] : [],
+  );
   try {
     const cookie = await signIn(server.base, 'member@example.test', 'bench-demo-2026', '127.0.0.1');
     if (only.has('pages')) {

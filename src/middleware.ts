@@ -1,4 +1,5 @@
-// Request pipeline: background work started once, security headers, no 500 page leaking a stack trace, who is asking, the route guard.
+// Request pipeline: background work started once, security headers, no 500 page leaking a stack trace, who is asking, the route guard,
+// and public pages answered from their validators or kept renders for anonymous readers.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/http/security-headers';
 import { apiError } from '@/server/http/responses';
@@ -7,6 +8,8 @@ import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
 import { startBackgroundWork } from '@/server/core/background';
+import { answerPublicPage, sharedKeyRead } from '@/server/http/page-cache';
+import { pageKeys } from '@/server/render/page-keys';
 
 /** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
 function editable(response: Response): Response {
@@ -70,4 +73,24 @@ const background = defineMiddleware((context, next) => {
   return next();
 });
 
-export const onRequest = sequence(securityHeaders, errorBoundary, background, identify, privateWhenSignedIn, guard);
+/**
+ * Anonymous GETs of public pages: If-None-Match answered with 304 before rendering, or the render kept for the page's
+ * current key. Anyone signed in (or whose session was just cleared) is rendered for, never served a kept body.
+ */
+const publicPages = defineMiddleware(async (context, next) => {
+  const page = pageKeys[context.routePattern];
+  if (!page || context.request.method !== 'GET' || context.locals.user !== null || sessionWasCleared(context.request)) return next();
+  const key = await sharedKeyRead(context.routePattern + JSON.stringify(context.params), () => page.key(context.params));
+  if (key === null) return next();
+  return answerPublicPage({
+    request: context.request,
+    address: context.url.pathname + context.url.search,
+    key,
+    policy: page.policy,
+    render: () => next(),
+    // A page that set a cookie on the way answered one reader, not everyone.
+    mayKeep: () => context.cookies.headers().next().done === true,
+  });
+});
+
+export const onRequest = sequence(securityHeaders, errorBoundary, background, identify, privateWhenSignedIn, guard, publicPages);

@@ -52,19 +52,21 @@ export async function benchPages(
   const page = await fetch(`${base}${fix.path}`);
   if (page.status !== 200) throw new Error(`${fix.path} answered ${page.status}`);
   const bytes = await page.text();
-  mkdirSync(`${DATA}/bench-floor`, { recursive: true });
-  const bytesFile = `${DATA}/bench-floor/fix-page.html`;
+  // A folder per port, so two benchmarks on one machine never build into each other's floor.
+  const folder = `${DATA}/bench-floor-${options.floorPort}`;
+  mkdirSync(folder, { recursive: true });
+  const bytesFile = `${folder}/fix-page.html`;
   writeFileSync(bytesFile, bytes);
   const env = {
     ...process.env,
     BENCH_BYTES_FILE: bytesFile,
-    BENCH_FLOOR_OUT: `${DATA}/bench-floor/dist`,
-    BENCH_FLOOR_CACHE: `${DATA}/bench-floor/cache`,
+    BENCH_FLOOR_OUT: `${folder}/dist`,
+    BENCH_FLOOR_CACHE: `${folder}/cache`,
     NODE_ENV: 'production',
     HOST: '127.0.0.1',
   };
   await build(env);
-  const floorServer = spawn(process.execPath, [`${DATA}/bench-floor/dist/server/entry.mjs`], {
+  const floorServer = spawn(process.execPath, [`${folder}/dist/server/entry.mjs`], {
     env: { ...env, PORT: String(options.floorPort) },
     stdio: 'ignore',
   });

@@ -7,8 +7,13 @@ export interface BenchServer {
   stop(): Promise<void>;
 }
 
-export async function startBenchServer(port: number, env: NodeJS.ProcessEnv, distDir = 'dist'): Promise<BenchServer> {
-  const child = spawn(process.execPath, [`${distDir}/server/entry.mjs`], {
+export async function startBenchServer(
+  port: number,
+  env: NodeJS.ProcessEnv,
+  distDir = 'dist',
+  nodeArgs: string[] = [],
+): Promise<BenchServer> {
+  const child = spawn(process.execPath, [...nodeArgs, `${distDir}/server/entry.mjs`], {
     env: { ...env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(port), PUBLIC_ORIGIN: `http://127.0.0.1:${port}` },
     stdio: ['ignore', 'ignore', 'pipe'],
   });

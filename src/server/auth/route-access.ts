@@ -49,6 +49,10 @@ export const routeAccess: Record<string, RouteRule> = {
   '/help/working-safely': read,
   '/help/writing-a-good-fix': read,
   '/media/[...key]': { methods: { GET: 'public' }, sharedCache: true },
+  // Found and shared: the same bytes for everyone.
+  '/robots.txt': { methods: { GET: 'public' }, sharedCache: true },
+  '/sitemap.xml': { methods: { GET: 'public' }, sharedCache: true },
+  '/sitemaps/[file].xml': { methods: { GET: 'public' }, sharedCache: true },
   '/api/v1/machines': read,
   '/api/v1/machines/[slug]': read,
   '/api/v1/chassis/[slug]': read,

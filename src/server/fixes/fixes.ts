@@ -33,6 +33,8 @@ export interface FixView {
   /** Always null unless the fix was read with `includeHidden`. */
   hiddenAt: Date | null;
   createdBy: number;
+  /** When the fix was first written (its first revision). */
+  createdAt: Date;
   revision: RevisionView;
   /** True when `revision` is the fix's current live revision. */
   isLive: boolean;
@@ -123,6 +125,7 @@ export async function getFix(slug: string, revisionNumber?: number, options: { i
     'f.locked_at',
     'f.hidden_at',
     'f.created_by',
+    'f.created_at',
     'f.current_revision_id',
     'cur.number as live_number',
   );
@@ -155,6 +158,7 @@ export async function getFix(slug: string, revisionNumber?: number, options: { i
     lockedAt: fix.locked_at,
     hiddenAt: fix.hidden_at,
     createdBy: fix.created_by,
+    createdAt: fix.created_at,
     revision: toRevision(row),
     isLive: row.id === fix.current_revision_id,
     liveRevisionNumber: fix.live_number,

@@ -1,5 +1,5 @@
 // Responsive renditions of a photo: a few widths, WebP with a JPEG fallback.
-import { openImage } from './sharp-factory';
+import { openImage, openPixels, readImageHeader } from './sharp-factory';
 
 export const RENDITION_WIDTHS = [480, 960, 1600] as const;
 
@@ -21,16 +21,28 @@ export function widthsFor(originalWidth: number): number[] {
   return widths.length > 0 ? widths : [originalWidth];
 }
 
+/**
+ * Decodes the upload once, straight to the largest rendition's size (JPEG shrink-on-load keeps a 12-megapixel photo
+ * from ever being held at full size more than once), then makes every width and format from those pixels.
+ */
 export async function makeRenditions(
   input: Buffer,
   keyPrefix: string,
 ): Promise<{ width: number; height: number; renditions: RenditionOutput[] }> {
-  const meta = await openImage(input).toBuffer({ resolveWithObject: true });
-  const { width, height } = meta.info;
+  const header = await readImageHeader(input);
+  if (!header) throw new Error('the image header could not be read');
+  const widths = widthsFor(header.width);
+  const largest = Math.max(...widths);
+  const pixels = await openImage(input)
+    .resize({ width: largest, withoutEnlargement: true })
+    .toColourspace('srgb')
+    .raw({ depth: 'uchar' })
+    .toBuffer({ resolveWithObject: true });
+  const info = { width: pixels.info.width, height: pixels.info.height, channels: pixels.info.channels };
   const renditions: RenditionOutput[] = [];
-  for (const w of widthsFor(width)) {
+  for (const w of widths) {
     for (const format of ['webp', 'jpeg'] as const) {
-      const pipeline = openImage(input).resize({ width: w, withoutEnlargement: true });
+      const pipeline = openPixels(pixels.data, info).resize({ width: w, withoutEnlargement: true });
       const out = await (format === 'webp' ? pipeline.webp({ quality: 80 }) : pipeline.jpeg({ quality: 82, mozjpeg: true })).toBuffer({
         resolveWithObject: true,
       });
@@ -45,5 +57,5 @@ export async function makeRenditions(
       });
     }
   }
-  return { width, height, renditions };
+  return { width: header.width, height: header.height, renditions };
 }

@@ -1,5 +1,11 @@
-// The one place sharp is created for uploads: pixel limit, no metadata kept, EXIF orientation applied.
+// The one place sharp is created for uploads: pixel limit, no metadata kept, EXIF orientation applied, no cache.
 import sharp from 'sharp';
+
+// Every upload is a different image, so libvips' operation cache (up to 50 MB by default) only held on to decoded
+// pixels after each photo was done: off. Renditions are made one after another, so one libvips thread per
+// operation is enough and keeps fewer thread arenas of memory alive (a peak-RSS choice; see `npm run bench`).
+sharp.cache(false);
+sharp.concurrency(1);
 
 /** About 40 megapixels: larger than any phone photo, small enough to refuse decompression bombs. */
 export const MAX_INPUT_PIXELS = 40_000_000;
@@ -20,4 +26,9 @@ export async function readImageHeader(input: Buffer): Promise<{ width: number; h
   } catch {
     return null;
   }
+}
+
+/** Pixels already decoded and oriented (by `openImage(...).raw()`), opened again to make a smaller copy. */
+export function openPixels(data: Buffer, info: { width: number; height: number; channels: 1 | 2 | 3 | 4 }): ReturnType<typeof sharp> {
+  return sharp(data, { raw: { width: info.width, height: info.height, channels: info.channels } });
 }

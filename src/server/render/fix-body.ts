@@ -1,7 +1,8 @@
 // renderFixBody: the one way a stored fix body becomes HTML. Sanitises, renders without a DOM, never throws.
-import { getSchema, type Extensions } from '@tiptap/core';
-import type { Schema } from '@tiptap/pm/model';
-import { renderToHTMLString } from '@tiptap/static-renderer/pm/html-string';
+import { getSchema } from '@tiptap/core';
+import type { Mark as PMMark, Node as PMNode, Schema } from '@tiptap/pm/model';
+import { renderJSONContentToString } from '@tiptap/static-renderer/json/html-string';
+import { domOutputSpecToHTMLString, renderToElement, serializeChildrenToHTMLString } from '@tiptap/static-renderer/pm/html-string';
 import { sanitiseBody } from '@/lib/tiptap/allowlist';
 import { bodyExtensions } from '@/lib/tiptap/extensions';
 import { cautionHtml, cautionPointerHtml, figureHtml, imageHtml, readingHtml } from './body-node-html';
@@ -23,7 +24,7 @@ export interface RenderFixBodyOptions {
 
 export const renderFailedHtml = '<div class="render-failed" role="note">This section could not be shown.</div>';
 
-const nodeMapping = {
+const bodyNodeMapping = {
   text: textHtml,
   caution: cautionHtml,
   reading: readingHtml,
@@ -36,14 +37,39 @@ const nodeMapping = {
 };
 const markMapping = { link: linkHtml };
 
-// Built once per process: resolving extensions and building the schema is the slow part.
-let renderer: { extensions: Extensions; schema: Schema } | null = null;
-function bodyRenderer(): { extensions: Extensions; schema: Schema } {
-  if (!renderer) {
-    const extensions = bodyExtensions();
-    renderer = { extensions, schema: getSchema(extensions) };
+type RenderBody = (context: { content: PMNode }) => string;
+
+/**
+ * Builds a string renderer for one node mapping. `renderToHTMLString` resolves the extensions and rebuilds its
+ * node and mark mappings on every call (the slow part of a fix page); `renderToElement` hands us the renderer it
+ * builds, so we keep that and call it per body.
+ */
+function buildRenderer(schema: Schema, nodeMapping: typeof bodyNodeMapping): RenderBody {
+  let render: RenderBody | null = null;
+  renderToElement<string>({
+    renderer: (options) => (render = renderJSONContentToString<PMMark, PMNode>(options)),
+    domOutputSpecToElement: domOutputSpecToHTMLString,
+    mapDefinedTypes: { doc: ({ children }) => serializeChildrenToHTMLString(children), text: textHtml },
+    content: schema.topNodeType.createAndFill()!,
+    extensions: bodyExtensions(),
+    options: { nodeMapping, markMapping },
+  });
+  if (!render) throw new Error('the static renderer did not build a renderer');
+  return render;
+}
+
+// Built once per process: the schema, and one renderer for each way a page shows cautions.
+let renderers: { schema: Schema; plain: RenderBody; cautionsAbove: RenderBody } | null = null;
+function bodyRenderers(): { schema: Schema; plain: RenderBody; cautionsAbove: RenderBody } {
+  if (!renderers) {
+    const schema = getSchema(bodyExtensions());
+    renderers = {
+      schema,
+      plain: buildRenderer(schema, bodyNodeMapping),
+      cautionsAbove: buildRenderer(schema, { ...bodyNodeMapping, caution: cautionPointerHtml }),
+    };
   }
-  return renderer;
+  return renderers;
 }
 
 function failed(reason: string, options: RenderFixBodyOptions | undefined): FixBodyHtml {
@@ -59,12 +85,11 @@ export function renderFixBody(json: unknown, options?: RenderFixBodyOptions): Fi
   try {
     const sanitised = sanitiseBody(json);
     if ('error' in sanitised) return failed(sanitised.error, options);
-    const { extensions, schema } = bodyRenderer();
+    const { schema, plain, cautionsAbove } = bodyRenderers();
     const doc = schema.nodeFromJSON(sanitised.doc);
     // The sanitiser shapes bodies to the schema; if one still does not fit, show nothing rather than guess.
     doc.check();
-    const mapping = options?.cautionsShownAbove ? { ...nodeMapping, caution: cautionPointerHtml } : nodeMapping;
-    const html = renderToHTMLString({ content: doc, extensions, options: { nodeMapping: mapping, markMapping } });
+    const html = (options?.cautionsShownAbove ? cautionsAbove : plain)({ content: doc });
     return { ok: true, html };
   } catch (error) {
     return failed(error instanceof Error ? error.message : 'the renderer failed', options);

@@ -173,3 +173,38 @@ describe('renderFixBody', () => {
     expect(unsafeFindings(result.html)).toEqual([]);
   });
 });
+
+describe('renderFixBody, built once', () => {
+  it('renders exactly what the static renderer renders when it resolves everything afresh', async () => {
+    const { renderToHTMLString } = await import('@tiptap/static-renderer/pm/html-string');
+    const { getSchema } = await import('@tiptap/core');
+    const { bodyExtensions } = await import('@/lib/tiptap/extensions');
+    const { sanitiseBody } = await import('@/lib/tiptap/allowlist');
+    const { textHtml, linkHtml } = await import('@/server/render/inline-html');
+    const nodes = await import('@/server/render/body-node-html');
+    const tables = await import('@/server/render/table-html');
+    const sanitised = sanitiseBody(realisticBody);
+    if ('error' in sanitised) throw new Error(sanitised.error);
+    const extensions = bodyExtensions();
+    const doc = getSchema(extensions).nodeFromJSON(sanitised.doc);
+    const nodeMapping = {
+      text: textHtml,
+      caution: nodes.cautionHtml,
+      reading: nodes.readingHtml,
+      figure: nodes.figureHtml,
+      image: nodes.imageHtml,
+      table: tables.tableHtml,
+      tableRow: tables.tableRowHtml,
+      tableHeader: tables.tableHeaderHtml,
+      tableCell: tables.tableCellHtml,
+    };
+    const afresh = renderToHTMLString({ content: doc, extensions, options: { nodeMapping, markMapping: { link: linkHtml } } });
+    expect(renderFixBody(realisticBody).html).toBe(afresh);
+    const pointers = renderToHTMLString({
+      content: doc,
+      extensions,
+      options: { nodeMapping: { ...nodeMapping, caution: nodes.cautionPointerHtml }, markMapping: { link: linkHtml } },
+    });
+    expect(renderFixBody(realisticBody, { cautionsShownAbove: true }).html).toBe(pointers);
+  });
+});

@@ -1,0 +1,204 @@
+// Public pages' validators through the built server: an anonymous repeat is answered 304 from the page's key; a
+// proofing, a lock, a hide, a bench report or a catalogue edit changes the key and the text; signed-in readers
+// get their own private render, never the anonymous kept one.
+import type { Knex } from 'knex';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { client } from '../support/http';
+import { INTEGRATION_PORT } from '../support/test-env';
+import { testDb } from '../support/db';
+import { DEMO_PASSWORD, signIn, uniqueClientIp } from '../support/sign-in';
+import { PASSWORD, as, makeFix, makeMember, makeWorld, proofNewRevision, type TestFix, type TestWorld } from './bench-work-support';
+
+const site = client(INTEGRATION_PORT);
+let knex: Knex;
+let world: TestWorld;
+let author: { id: number };
+let fix: TestFix;
+
+beforeAll(async () => {
+  knex = testDb();
+  world = await makeWorld(knex);
+  author = await makeMember(knex);
+  fix = await makeFix(knex, { authorId: author.id, machineIds: [world.machines[0]!.id], title: 'Validator fault' });
+});
+afterAll(() => knex.destroy());
+
+async function get(path: string, headers: Record<string, string> = {}) {
+  const res = await site.get(path, { headers });
+  return { status: res.status, headers: res.headers, text: await res.text() };
+}
+
+/** The ETag of a first anonymous read, and the answer to repeating it with If-None-Match. */
+async function revalidate(path: string) {
+  const first = await get(path);
+  const tag = first.headers.get('etag');
+  const again = tag ? await get(path, { 'If-None-Match': tag }) : null;
+  return { first, tag, again };
+}
+
+describe('validators on public pages', () => {
+  it('answers a repeated anonymous fix page with 304 and no body', async () => {
+    const { first, tag, again } = await revalidate(`/fixes/${fix.slug}`);
+    expect(first.status).toBe(200);
+    expect(tag).toMatch(/^W\/"[^"]+"$/);
+    expect(first.headers.get('cache-control')).toContain('public');
+    expect(again?.status).toBe(304);
+    expect(again?.text).toBe('');
+    expect(again?.headers.get('etag')).toBe(tag);
+  });
+
+  it.each(['/', '/machines', '/makers', '/help', '/help/working-safely', '/sitemap.xml'])('validates %s as well', async (path) => {
+    const { first, tag, again } = await revalidate(path);
+    expect(first.status).toBe(200);
+    expect(tag).toMatch(/^W\//);
+    expect(again?.status).toBe(304);
+  });
+
+  it('validates machine, chassis, maker pages and revision permalinks', async () => {
+    for (const path of [
+      `/machines/${world.machines[0]!.slug}`,
+      `/chassis/${world.chassisSlug}`,
+      `/makers/${world.makerSlug}`,
+      `/fixes/${fix.slug}/r/1`,
+    ]) {
+      const { tag, again } = await revalidate(path);
+      expect(tag, path).toMatch(/^W\//);
+      expect(again?.status, path).toBe(304);
+    }
+  });
+
+  it('answers 200 with the new text after a proofing, and the old ETag no longer matches', async () => {
+    const path = `/fixes/${fix.slug}`;
+    const { tag } = await revalidate(path);
+    await proofNewRevision(knex, fix, author.id);
+    const after = await get(path, { 'If-None-Match': tag! });
+    expect(after.status).toBe(200);
+    expect(after.text).toContain(`Rewritten fault r${fix.revisionIds.length}`);
+    expect(after.headers.get('etag')).not.toBe(tag);
+    // The new text is what is kept now.
+    expect((await get(path)).text).toContain(`Rewritten fault r${fix.revisionIds.length}`);
+  });
+
+  it('changes the key when a moderator locks the fix, and shows the lock', async () => {
+    const path = `/fixes/${fix.slug}`;
+    const { tag } = await revalidate(path);
+    const moderator = as(site.base, await signIn(site.base, 'moderator@example.test', DEMO_PASSWORD, uniqueClientIp()));
+    expect((await moderator.post(`/api/v1/proofing/fixes/${fix.slug}`, { action: 'lock' })).status).toBe(200);
+    const after = await get(path, { 'If-None-Match': tag! });
+    expect(after.status).toBe(200);
+    expect(after.text).toContain('Locked against edits by a moderator');
+    expect((await moderator.post(`/api/v1/proofing/fixes/${fix.slug}`, { action: 'unlock' })).status).toBe(200);
+    expect((await get(path, { 'If-None-Match': after.headers.get('etag')! })).status).toBe(200);
+  });
+
+  it('stops answering a hidden fix from validators or the kept render', async () => {
+    const hidden = await makeFix(knex, { authorId: author.id, machineIds: [world.machines[1]!.id] });
+    const path = `/fixes/${hidden.slug}`;
+    const { tag, again } = await revalidate(path);
+    expect(again?.status).toBe(304);
+    const moderator = as(site.base, await signIn(site.base, 'moderator@example.test', DEMO_PASSWORD, uniqueClientIp()));
+    expect((await moderator.post(`/api/v1/proofing/fixes/${hidden.slug}`, { action: 'hide' })).status).toBe(200);
+    expect((await get(path, { 'If-None-Match': tag! })).status).toBe(404);
+    expect((await get(path)).status).toBe(404);
+  });
+
+  it('changes the key with a bench report, and the page shows it', async () => {
+    const path = `/fixes/${fix.slug}`;
+    const { tag, first } = await revalidate(path);
+    expect(first.text).not.toContain('A bench report for the validators');
+    const reporter = await makeMember(knex);
+    const member = as(site.base, await signIn(site.base, reporter.email, PASSWORD, uniqueClientIp()));
+    const sent = await member.post('/api/v1/bench-reports', {
+      fix: fix.slug,
+      machine: world.machines[0]!.slug,
+      outcome: 'fixed',
+      note: 'A bench report for the validators',
+    });
+    expect(sent.status).toBeLessThan(300);
+    const after = await get(path, { 'If-None-Match': tag! });
+    expect(after.status).toBe(200);
+    expect(after.text).toContain('A bench report for the validators');
+  });
+
+  it('changes the key of fix and machine pages with a catalogue edit', async () => {
+    const machine = world.machines[0]!;
+    const fixPage = await revalidate(`/fixes/${fix.slug}`);
+    const machinePage = await revalidate(`/machines/${machine.slug}`);
+    const renamed = `TM-RENAMED-${Date.now().toString(36)}`.toUpperCase();
+    await knex('machines').where({ id: machine.id }).update({ model_number: renamed });
+    for (const [path, tag] of [
+      [`/fixes/${fix.slug}`, fixPage.tag],
+      [`/machines/${machine.slug}`, machinePage.tag],
+    ] as const) {
+      const after = await get(path, { 'If-None-Match': tag! });
+      expect(after.status, path).toBe(200);
+      expect(after.text, path).toContain(renamed);
+    }
+  });
+});
+
+describe('signed-in readers', () => {
+  it('get a private answer rendered for them: no ETag, no 304, never the anonymous kept body', async () => {
+    const path = `/fixes/${fix.slug}`;
+    const anonymous = await revalidate(path);
+    expect(anonymous.again?.status).toBe(304);
+    expect(anonymous.first.text).not.toContain('Sign out');
+    const reader = await makeMember(knex, { name: 'Validator Reader' });
+    const cookie = await signIn(site.base, reader.email, PASSWORD, uniqueClientIp());
+    const mine = await get(path, { cookie, 'If-None-Match': anonymous.tag! });
+    expect(mine.status).toBe(200);
+    expect(mine.headers.get('cache-control')).toBe('private, no-store');
+    expect(mine.headers.get('etag')).toBeNull();
+    expect(mine.text).toContain('Sign out');
+    expect(mine.text).toContain('Save the bench report');
+    // And the signed-in render is never handed to the next anonymous reader.
+    const next = await get(path);
+    expect(next.text).not.toContain('Sign out');
+    expect(next.headers.get('etag')).toBe(anonymous.tag);
+  });
+});
+
+describe('found and shared', () => {
+  it('names the sitemap in robots.txt and keeps private areas out', async () => {
+    const robots = await get('/robots.txt');
+    expect(robots.status).toBe(200);
+    expect(robots.text).toMatch(/^Sitemap: http:\/\/[^\n]+\/sitemap\.xml$/m);
+    for (const path of ['/api/', '/account', '/proofing', '/jobs', '/n/']) expect(robots.text).toContain(`Disallow: ${path}\n`);
+    expect(robots.text).not.toMatch(/Disallow: \/fixes/);
+  });
+
+  it('lists live fixes and the catalogue in the sitemap files the index names, and not hidden fixes', async () => {
+    const index = await get('/sitemap.xml');
+    expect(index.headers.get('content-type')).toContain('application/xml');
+    const files = [...index.text.matchAll(/<loc>[^<]*(\/sitemaps\/\d+\.xml)<\/loc>/g)].map((m) => m[1]!);
+    expect(files[0]).toBe('/sitemaps/1.xml');
+    const all = (await Promise.all(files.map((f) => get(f)))).map((r) => r.text).join('\n');
+    expect(all).toContain(`/fixes/${fix.slug}</loc>`);
+    expect(all).toContain(`/machines/${world.machines[0]!.slug}</loc>`);
+    expect(all).toContain(`/chassis/${world.chassisSlug}</loc>`);
+    expect(all).toContain('/help/working-safely</loc>');
+    const hidden = await knex('fixes').whereNotNull('hidden_at').first('slug');
+    if (hidden) expect(all).not.toContain(`/fixes/${hidden.slug}</loc>`);
+    expect((await get(`/sitemaps/${files.length + 1}.xml`)).status).toBe(404);
+    expect((await get('/sitemaps/0.xml')).status).toBe(404);
+  });
+
+  it('gives a fix page its canonical address, Open Graph tags and JSON-LD that names the fix', async () => {
+    const shared = await makeFix(knex, { authorId: author.id, machineIds: [world.machines[1]!.id], title: 'Shared fault' });
+    const page = await get(`/fixes/${shared.slug}`);
+    const canonical = /<link rel="canonical" href="([^"]+)"/.exec(page.text)?.[1];
+    expect(canonical).toMatch(new RegExp(`/fixes/${shared.slug}$`));
+    expect(page.text).toContain(`<meta property="og:url" content="${canonical}">`);
+    expect(page.text).toContain('<meta property="og:type" content="article">');
+    const title = /<h1[^>]*>([^<]+)<\/h1>/.exec(page.text)?.[1];
+    expect(page.text).toContain(`<meta property="og:title" content="${title}">`);
+    const blocks = [...page.text.matchAll(/<script type="application\/ld\+json">([\s\S]*?)<\/script>/g)];
+    expect(blocks).toHaveLength(1);
+    const data = JSON.parse(blocks[0]![1]!);
+    expect(data).toMatchObject({ '@context': 'https://schema.org', '@type': 'TechArticle', headline: title, url: canonical });
+    expect(data.name).toBe(title);
+    expect(data.about[0].brand.name).toMatch(/^Testmark /);
+    // No script that runs: the JSON-LD block is data.
+    expect(page.text.match(/<script\b[^>]*>/g)).toEqual(['<script type="application/ld+json">']);
+  });
+});
