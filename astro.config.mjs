@@ -17,7 +17,9 @@ export default defineConfig({
   adapter: node({ mode: 'standalone', experimentalStaticHeaders: true }),
   integrations: [react(), tailwind({ applyBaseStyles: false }), mdx(), auth()],
   security: {
-    checkOrigin: true,
+    // Astro's origin check runs from src/middleware.ts instead (src/server/http/origin-check.ts), so that its 403
+    // answers carry the security headers; Astro would run it before any middleware of ours.
+    checkOrigin: false,
     allowedDomains: [
       // No port: the same build serves `npm start`, the test servers and any PORT chosen at run time.
       { protocol: publicOrigin.protocol.replace(':', ''), hostname: publicOrigin.hostname },

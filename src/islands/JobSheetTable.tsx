@@ -1,5 +1,4 @@
 // The job sheet list as a table: rendered on the server for everyone; once hydrated, sortable and filterable in place.
-import '@/lib/schemas/zod-in-browser';
 import { useEffect, useMemo, useState } from 'react';
 import {
   flexRender,

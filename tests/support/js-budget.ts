@@ -18,6 +18,8 @@ export interface ScriptCost {
   lateFiles: string[];
   /** The text of every counted file and inline script, for checks of what they contain. */
   text: string;
+  /** The text of the inline scripts and the first-paint files only. */
+  firstText: string;
 }
 
 const gzipCache = new Map<string, { gz: number; text: string }>();
@@ -89,6 +91,7 @@ export function scriptCost(html: string): ScriptCost {
     files: [...first].sort(),
     lateFiles: [...late].sort(),
     text: [...inline, ...[...first, ...late].map((path) => asset(path).text)].join('\n'),
+    firstText: [...inline, ...[...first].map((path) => asset(path).text)].join('\n'),
   };
 }
 
