@@ -21,11 +21,12 @@ const env = await useOwnDatabase('benchlore_lighthouse', {
 migrateAndSeed(env);
 buildIfStale(env);
 const { startBenchServer } = await import('./bench/server.ts');
+const { distDir } = await import('./lib/build-stamp.ts');
 const { signIn } = await import('../tests/support/sign-in.ts');
 const { db, closeDb } = await import('../src/server/core/db.ts');
 const { categoryIds, launchChrome, runLighthouse } = await import('./lighthouse/run.ts');
 
-const server = await startBenchServer(PORT, env);
+const server = await startBenchServer(PORT, env, distDir);
 const chrome = await launchChrome();
 try {
   const fix = await db()('fixes')

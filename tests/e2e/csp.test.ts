@@ -109,6 +109,10 @@ describe('pages in Chromium under the policy', () => {
     await page.locator('[data-live-search][data-enhanced]').waitFor({ state: 'attached' });
     await page.getByRole('combobox').pressSequentially('no rewind', { delay: 20 });
     await page.getByRole('option').first().waitFor({ state: 'visible' });
+    // Escape closes the list and keeps what was typed (Chromium would empty a search field).
+    await page.keyboard.press('Escape');
+    await expect(page.getByRole('combobox').inputValue()).resolves.toBe('no rewind');
+    await expect(page.getByRole('combobox').getAttribute('aria-expanded')).resolves.toBe('false');
 
     await visit(page, '/tools/bleed-down');
     await page.waitForSelector('astro-island:not([ssr])', { state: 'attached' });

@@ -135,6 +135,8 @@ function enhance(root: HTMLElement): void {
       event.preventDefault();
       choose(hit);
     } else if (event.key === 'Escape') {
+      // The first Escape only closes the list; Chromium would also empty a search field, losing what was typed.
+      if (open && hits.length > 0) event.preventDefault();
       open = false;
       active = -1;
       render();
