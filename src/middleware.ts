@@ -1,7 +1,8 @@
-// Request pipeline: background work started once, security headers, no 500 page leaking a stack trace, who is asking, the route guard,
-// and public pages answered from their validators or kept renders for anonymous readers.
+// Request pipeline: background work started once, security headers, the origin check, no 500 page leaking a stack trace, who is asking,
+// the route guard, and public pages answered from their validators or kept renders for anonymous readers.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/http/security-headers';
+import { originCheck } from '@/server/http/origin-check';
 import { apiError } from '@/server/http/responses';
 import { logger } from '@/server/core/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
@@ -93,4 +94,5 @@ const publicPages = defineMiddleware(async (context, next) => {
   });
 });
 
-export const onRequest = sequence(securityHeaders, errorBoundary, background, identify, privateWhenSignedIn, guard, publicPages);
+// Astro's origin check runs inside the security headers, so its 403 carries them (security.checkOrigin is off).
+export const onRequest = sequence(securityHeaders, originCheck, errorBoundary, background, identify, privateWhenSignedIn, guard, publicPages);

@@ -1,4 +1,5 @@
 // The writing island: structured fields, the remedy editor, parts and photos, with autosave and submission.
+import '@/lib/schemas/zod-in-browser';
 import { useState } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { FixForm } from './editor/FixForm';

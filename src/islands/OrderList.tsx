@@ -1,4 +1,5 @@
 // Order list island: the parts to buy, merged by canonical spec, kept in this browser or with the member's account.
+import '@/lib/schemas/zod-in-browser';
 import type { ReactElement } from 'react';
 import type { StoredLine } from '../lib/tools/order-list';
 import type { SaveState } from './tools/order-list/account-store';

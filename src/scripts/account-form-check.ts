@@ -1,5 +1,6 @@
 // Checks an account form in the browser with the server's own zod schema before it is sent, and shows
 // the messages where the server would. Without JavaScript the server does the same check.
+import '@/lib/schemas/zod-in-browser';
 import { checkAccountForm, isAccountFormName } from '@/lib/schemas/account-forms';
 
 function stringFields(form: HTMLFormElement): Record<string, string> {

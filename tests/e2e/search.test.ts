@@ -36,8 +36,8 @@ describe('the search box with JavaScript', () => {
       if (r.url().includes('/api/v1/search?')) requests.push(r.url());
     });
     await page.goto(`${base}/search`);
-    // Wait until the island has hydrated: React then owns the input.
-    await page.waitForFunction(() => !document.querySelector('astro-island[ssr]'));
+    // Wait until the box's script has taken over the input.
+    await page.locator('[data-live-search][data-enhanced]').waitFor({ state: 'attached' });
     const box = page.getByRole('combobox');
     await page.locator('h1').click();
     await page.keyboard.press('/');
@@ -72,7 +72,7 @@ describe('the search box with JavaScript', () => {
       await route.continue().catch(() => undefined);
     });
     await page.goto(`${base}/search`);
-    await page.waitForFunction(() => !document.querySelector('astro-island[ssr]'));
+    await page.locator('[data-live-search][data-enhanced]').waitFor({ state: 'attached' });
     const box = page.getByRole('combobox');
     await box.click();
     await page.keyboard.type('tray');

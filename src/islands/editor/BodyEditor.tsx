@@ -2,6 +2,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { EditorContent, useEditor, type Editor } from '@tiptap/react';
 import { bodyExtensions } from '@/lib/tiptap/extensions';
+import '@/styles/editor-base.css';
 import type { BodyDoc } from '@/lib/tiptap/allowlist';
 import { BodyToolbar } from './BodyToolbar';
 import { CautionPanel, FigurePanel, LinkPanel, ReadingPanel, type PanelName } from './body-panels';
@@ -32,6 +33,8 @@ export function BodyEditor({ initial, onChange, photos, onImageFiles, onReady, e
     extensions: bodyExtensions(),
     content: initial as BodyDoc,
     immediatelyRender: true,
+    // Its base rules come from editor-base.css: an injected <style> element would break the Content-Security-Policy.
+    injectCSS: false,
     editorProps: {
       attributes: {
         id: editorId,

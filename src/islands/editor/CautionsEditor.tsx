@@ -1,7 +1,7 @@
 // The fix's cautions: one per kind of hazard, each with what this fix asks the reader to watch for.
 import { useFieldArray, useWatch, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import type { FixDraftInput } from '@/lib/schemas/fix-draft';
-import { cautionKinds, cautionLabels, type CautionKind } from '@/lib/schemas/revision';
+import { cautionKinds, cautionLabels, type CautionKind } from '@/lib/schemas/revision-values';
 
 interface CautionsEditorProps {
   control: Control<FixDraftInput>;

@@ -1,16 +1,13 @@
 // The fix form: every field of a revision, autosaved; submission with field messages and the stale-base comparison.
-import { useCallback, useEffect, useRef, useState, type KeyboardEvent } from 'react';
+import { Suspense, useCallback, useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import { Controller, useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import type { Editor } from '@tiptap/react';
-import { fixDraftLimits, fixSubmissionSchema, type FixDraft, type FixDraftInput, type HeldFields } from '@/lib/schemas/fix-draft';
-import { difficulties, difficultyLabels } from '@/lib/schemas/revision';
-import { readableErrors } from '@/lib/schemas/field-errors';
+import type { FixDraft, FixDraftInput, HeldFields } from '@/lib/schemas/fix-draft';
+import { fixDraftLimits } from '@/lib/schemas/fix-draft-values';
+import { difficulties, difficultyLabels } from '@/lib/schemas/revision-values';
 import type { BodyDoc } from '@/lib/tiptap/allowlist';
 import PhotoUploader, { type IncomingFiles } from '../PhotoUploader';
 import { AppliesTo } from './AppliesTo';
-import { BodyEditor } from './BodyEditor';
-import { insertFigure } from './body-panels';
 import { CautionsEditor } from './CautionsEditor';
 import { ErrorSummary, type SummaryItem } from './ErrorSummary';
 import { sectionFields, serverFieldItems } from './form-helpers';
@@ -21,7 +18,7 @@ import { PhotoList } from './PhotoList';
 import { ReadingsEditor } from './ReadingsEditor';
 import { SaveIndicator } from './SaveIndicator';
 import { SimilarFixes } from './SimilarFixes';
-import { StaleBasePanel } from './StaleBasePanel';
+import { insertFigureLater as insertFigure, LazyBodyEditor, LazyStaleBasePanel, preloadLaterParts, submissionResolver } from './later';
 import { useAutosave } from './useAutosave';
 import { useRestoredStart } from './useRestoredStart';
 import { useSubmission } from './useSubmission';
@@ -34,14 +31,25 @@ function keepEnterFromSubmitting(event: KeyboardEvent<HTMLFormElement>): void {
   if (!['submit', 'button', 'file'].includes(target.type)) event.preventDefault();
 }
 
+/** Where the remedy editor will be, the same height, while its code loads. */
+function RemedyLoading() {
+  return (
+    <div className="min-h-[17rem] rounded border border-rule-strong bg-paper p-3 font-sans text-sm text-ink-soft" role="status">
+      Loading the remedy editor…
+    </div>
+  );
+}
+
 export function FixForm(props: FixEditorProps) {
   const start = useRestoredStart(props);
   const form = useForm<FixDraftInput, unknown, FixDraft>({
     defaultValues: start.values,
-    resolver: zodResolver(fixSubmissionSchema, readableErrors),
+    resolver: submissionResolver,
     mode: 'onSubmit',
   });
   const { register, control, setValue, getValues, formState } = form;
+  // The editor and the submission check load while the writer reads the form.
+  useEffect(preloadLaterParts, []);
   const [machines, setMachines] = useState<LabelledRefData[]>(start.machines);
   const [chassis, setChassis] = useState<LabelledRefData[]>(start.chassis);
   const [photos, setPhotos] = useState<PhotoRefData[]>(start.photos);
@@ -169,13 +177,15 @@ export function FixForm(props: FixEditorProps) {
       {baseNote && <p className="rounded bg-amber-wash p-3 font-sans text-sm">{baseNote}</p>}
       {summary && <ErrorSummary title={summary.title} items={summary.items} tone={summary.tone ?? 'error'} />}
       {submission.conflict && (
-        <StaleBasePanel
-          live={submission.conflict}
-          yours={{ values: getValues() as FixDraft, machines, chassis, photos }}
-          onTakeLive={(section) => takeLive(submission.conflict!, sectionFields[section])}
-          onRebase={() => void submission.rebase()}
-          busy={submission.busy}
-        />
+        <Suspense fallback={<p className="font-sans text-sm">Loading the comparison…</p>}>
+          <LazyStaleBasePanel
+            live={submission.conflict}
+            yours={{ values: getValues() as FixDraft, machines, chassis, photos }}
+            onTakeLive={(section) => takeLive(submission.conflict!, sectionFields[section])}
+            onRebase={() => void submission.rebase()}
+            busy={submission.busy}
+          />
+        </Suspense>
       )}
 
       <Field
@@ -266,14 +276,16 @@ export function FixForm(props: FixEditorProps) {
           The steps, in order. Put caution boxes before the steps they guard. Paste from a word processor keeps lists and tables; pasted
           pictures are uploaded as photos.
         </p>
-        <BodyEditor
-          initial={start.values.body}
-          onChange={onBodyChange}
-          photos={photos}
-          onImageFiles={(files) => setIncoming({ files, insert: true, batch: Date.now() })}
-          onReady={onEditorReady}
-          error={errors.body?.message}
-        />
+        <Suspense fallback={<RemedyLoading />}>
+          <LazyBodyEditor
+            initial={start.values.body}
+            onChange={onBodyChange}
+            photos={photos}
+            onImageFiles={(files) => setIncoming({ files, insert: true, batch: Date.now() })}
+            onReady={onEditorReady}
+            error={errors.body?.message}
+          />
+        </Suspense>
       </div>
       <PartsEditor control={control} register={register} errors={errors} />
       <ReadingsEditor control={control} register={register} errors={errors} />

@@ -1,8 +1,9 @@
 // The parts list as a table: ref, kind, value, rating, quantity, notes; each value read by the value decoder as typed.
+import { useEffect, useState } from 'react';
 import { useFieldArray, useWatch, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
-import { emptyPartRow, fixDraftLimits, type FixDraftInput } from '@/lib/schemas/fix-draft';
-import { partKinds, type PartKind } from '@/lib/schemas/revision';
-import { describePart } from '@/lib/values';
+import type { FixDraftInput } from '@/lib/schemas/fix-draft';
+import { emptyPartRow, fixDraftLimits } from '@/lib/schemas/fix-draft-values';
+import { partKinds, type PartKind } from '@/lib/schemas/revision-values';
 
 interface PartsEditorProps {
   control: Control<FixDraftInput>;
@@ -12,9 +13,25 @@ interface PartsEditorProps {
 
 const kindLabel = (k: PartKind) => k.replace(/_/g, ' ');
 
+type DescribePart = (typeof import('@/lib/values'))['describePart'];
+let describeLoaded: DescribePart | null = null;
+
+/** The value decoder, loaded after the form has painted (the rows read "Reads as …" once it is here). */
+function useDescribePart(): DescribePart | null {
+  const [describe, setDescribe] = useState<DescribePart | null>(() => describeLoaded);
+  useEffect(() => {
+    if (describe) return;
+    void import('@/lib/values').then((values) => {
+      describeLoaded = values.describePart;
+      setDescribe(() => values.describePart);
+    });
+  }, [describe]);
+  return describe;
+}
+
 /** What the decoder makes of a value as typed: its canonical label, or its message with an example. */
-function decoded(value: string, rating: string, kind: PartKind): { ok: boolean; text: string } | null {
-  if (value.trim() === '') return null;
+function decoded(describePart: DescribePart | null, value: string, rating: string, kind: PartKind): { ok: boolean; text: string } | null {
+  if (value.trim() === '' || !describePart) return null;
   const result = describePart(value, rating, { kind });
   return result.ok
     ? { ok: true, text: `Reads as ${result.value.label}` }
@@ -24,6 +41,7 @@ function decoded(value: string, rating: string, kind: PartKind): { ok: boolean; 
 export function PartsEditor({ control, register, errors }: PartsEditorProps) {
   const { fields, append, remove, move } = useFieldArray({ control, name: 'parts' });
   const rows = useWatch({ control, name: 'parts' }) ?? [];
+  const describePart = useDescribePart();
   return (
     // Positioned, so the visually hidden header text stays inside the scrolling box instead of widening a phone's page.
     <div id="field-parts" className="relative overflow-x-auto">
@@ -57,7 +75,7 @@ export function PartsEditor({ control, register, errors }: PartsEditorProps) {
         <tbody>
           {fields.map((field, i) => {
             const row = rows[i] ?? field;
-            const check = decoded(row.value ?? '', row.rating ?? '', row.kind);
+            const check = decoded(describePart, row.value ?? '', row.rating ?? '', row.kind);
             const serverError = errors.parts?.[i]?.value?.message;
             const quantityError = errors.parts?.[i]?.quantity?.message;
             const n = i + 1;

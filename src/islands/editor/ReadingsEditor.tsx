@@ -1,6 +1,7 @@
 // The readings table: where to measure, what a good unit shows, what a faulty one typically shows, a note.
 import { useFieldArray, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
-import { fixDraftLimits, type FixDraftInput } from '@/lib/schemas/fix-draft';
+import type { FixDraftInput } from '@/lib/schemas/fix-draft';
+import { fixDraftLimits } from '@/lib/schemas/fix-draft-values';
 
 interface ReadingsEditorProps {
   control: Control<FixDraftInput>;

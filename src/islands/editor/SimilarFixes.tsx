@@ -6,7 +6,7 @@ import type { FixDraft, FixDraftInput } from '@/lib/schemas/fix-draft';
 import { benchScoreText } from '@/lib/search/bench-label';
 import type { SimilarFix } from '@/lib/search/result-types';
 import { mergeSimilar, similarHeading, similarPath, similarRequests, type SimilarRequest } from '@/lib/search/similar-request';
-import { useDebounced } from '../search/use-live-search';
+import { useDebounced } from './use-debounced';
 import { callApi } from './api';
 import type { LabelledRefData } from '../../lib/writing/editor-data';
 

@@ -1,7 +1,7 @@
 // After a 409: the live revision and the writer's own side by side, section by section; nothing typed is lost.
 import { comparableFrom, diffRevisions, type ComparableRevision } from '@/lib/diff';
 import type { FixDraft } from '@/lib/schemas/fix-draft';
-import { cautionLabels, difficultyLabels } from '@/lib/schemas/revision';
+import { cautionLabels, difficultyLabels } from '@/lib/schemas/revision-values';
 import type { EditorRevisionData, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 
 export type SectionName =

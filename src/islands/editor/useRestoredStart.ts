@@ -1,6 +1,7 @@
 // Where the form starts: the server's draft (or the live text), unless this browser holds newer unsaved edits.
 import { useState } from 'react';
-import { withHeldFields, type FixDraftInput, type HeldFields } from '@/lib/schemas/fix-draft';
+import type { FixDraftInput } from '@/lib/schemas/fix-draft';
+import { withHeldFields, type HeldFields } from '@/lib/schemas/fix-draft-values';
 import { journalScope, readJournal, shouldRestore } from './journal';
 import type { FixEditorProps, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 

@@ -1,4 +1,5 @@
 // Bench tool island: bleed-down time of a stored charge through a resistor, with the decay drawn and tabled.
+import '@/lib/schemas/zod-in-browser';
 import type { ReactElement } from 'react';
 import { bleedExample, bleedOutcome, type BleedField, type BleedOutcomeResult } from '../../lib/tools/bleed-down';
 import { queryFromFields } from '../../lib/tools/form-reader';

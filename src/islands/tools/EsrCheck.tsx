@@ -1,4 +1,5 @@
 // Bench tool island: the ESR a new general-purpose electrolytic may have, and a measured ESR judged against it.
+import '@/lib/schemas/zod-in-browser';
 import type { ReactElement } from 'react';
 import { esrOutcome, type EsrField, type EsrResult } from '../../lib/tools/esr';
 import { tableVoltagesText, type EsrReference } from '@/lib/bench/esr';

@@ -1,4 +1,5 @@
 // Bench tool island: electrolytic life by the 10-kelvin rule, with life against temperature drawn and tabled.
+import '@/lib/schemas/zod-in-browser';
 import type { ReactElement } from 'react';
 import { queryFromFields } from '../../lib/tools/form-reader';
 import { celsius, hours, significant, years } from '../../lib/tools/format';

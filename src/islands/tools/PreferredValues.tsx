@@ -1,4 +1,5 @@
 // Bench tool island: the nearest IEC 60063 preferred value (E3 to E192) to a value, with its neighbours.
+import '@/lib/schemas/zod-in-browser';
 import type { ReactElement } from 'react';
 import { inDecade, seriesNames } from '@/lib/bench/preferred-values';
 import {

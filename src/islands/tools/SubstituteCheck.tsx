@@ -1,4 +1,5 @@
 // Bench tool island: can this electrolytic replace the original? Each rule with its reason, the worst one wins.
+import '@/lib/schemas/zod-in-browser';
 import type { ReactElement } from 'react';
 import type { CheckName, SubstituteResult } from '@/lib/bench/substitute';
 import { queryFromFields } from '../../lib/tools/form-reader';

@@ -1,4 +1,5 @@
 // Bench tool island: a component value and rating as written, read into one canonical form.
+import '@/lib/schemas/zod-in-browser';
 import type { ReactElement } from 'react';
 import type { PartSpec } from '@/lib/values/part-spec';
 import { formatValue } from '@/lib/values/format-value';

@@ -3,25 +3,13 @@ import { z } from 'zod';
 import { cautionSchema, difficultySchema, partKindSchema } from './revision';
 import { sanitiseBody, bodyPlainText, type BodyDoc, type BodyNode } from '@/lib/tiptap/allowlist';
 import { describePart } from '@/lib/values';
+import { emptyPartRow, fixDraftLimits, getAt, isRecord, setAt, type HeldFields, type Path } from './fix-draft-values';
+
+// The plain values (limits, an empty parts row, held fields) live apart from zod, so the editor paints without it.
+export { emptyPartRow, fixDraftLimits, withHeldFields, type HeldField, type HeldFields } from './fix-draft-values';
 
 const quantityMessage = 'Quantity is a whole number from 1 to 999, e.g. 2.';
 const timeMessage = 'Bench time is a whole number of minutes from 1 to 10000, e.g. 45.';
-
-export const fixDraftLimits = {
-  title: 160,
-  symptom: 200,
-  symptoms: 20,
-  errorCode: 40,
-  errorCodes: 20,
-  cause: 2000,
-  parts: 100,
-  readings: 50,
-  cautions: 6,
-  editSummary: 300,
-  machines: 50,
-  chassis: 20,
-  photos: 30,
-} as const;
 
 /** A text field whose messages name it and show good input: "A reference is text…", "…at most 40 characters…". */
 const text = (max: number, what: string, example: string) =>
@@ -214,38 +202,12 @@ export function emptyDraft(prefill: { symptom?: string; machineIds?: number[] } 
   };
 }
 
-export function emptyPartRow(): DraftPartRow {
-  return { ref: '', kind: 'capacitor', value: '', rating: '', quantity: 1, notes: '' };
-}
-
-/** A field of a draft that failed its check: kept as the writer typed it, with what to change. */
-export interface HeldField {
-  typed: unknown;
-  message: string;
-}
-/** Held fields by dotted path, e.g. "timeMinutes" or "parts.2.quantity". */
-export type HeldFields = Record<string, HeldField>;
-
 export type DraftSplit =
   { ok: true; values: FixDraft; held: HeldFields } | { ok: false; message: string; fields: Record<string, string[]> };
 
-type Path = (string | number)[];
 const emptyReading = (): DraftReading => ({ testPoint: '', expected: '', measured: '', note: '' });
 /** Lists whose rows are held cell by cell; any other field is held whole. */
 const rowFallbacks: Record<string, () => Record<string, unknown>> = { parts: emptyPartRow, readings: emptyReading };
-
-function isRecord(value: unknown): value is Record<string | number, unknown> {
-  return typeof value === 'object' && value !== null;
-}
-
-function getAt(root: unknown, path: Path): unknown {
-  return path.reduce<unknown>((node, key) => (isRecord(node) ? node[key] : undefined), root);
-}
-
-function setAt(root: unknown, path: Path, value: unknown): void {
-  const parent = getAt(root, path.slice(0, -1));
-  if (isRecord(parent)) parent[path[path.length - 1]!] = value;
-}
 
 /** Where an issue is held: a cell of a parts or readings row, or else the whole top-level field. */
 function holdPathOf(issuePath: PropertyKey[], input: Record<string, unknown>): Path {
@@ -289,14 +251,4 @@ export function splitDraft(raw: unknown): DraftSplit {
     }
   }
   return { ok: false, message: 'The draft could not be read; reload the page and try again.', fields: {} };
-}
-
-/** The values with every held field put back as it was typed, for the form to show. Pure. */
-export function withHeldFields<T extends object>(values: T, held: HeldFields | undefined): T {
-  const out = structuredClone(values);
-  for (const [key, field] of Object.entries(held ?? {})) {
-    const path: Path = key.split('.').map((part) => (/^\d+$/.test(part) ? Number(part) : part));
-    if (path.length === 1 || getAt(out, path.slice(0, -1)) !== undefined) setAt(out, path, field.typed);
-  }
-  return out;
 }

@@ -1,48 +1,16 @@
 // The structured fields of a revision: parts rows, readings, cautions, difficulty. One schema for all sides.
 import { z } from 'zod';
+import { cautionKinds, difficulties, partKinds } from './revision-values';
 
-export const cautionKinds = ['mains', 'stored_charge', 'laser', 'heat', 'sharp_edges', 'spring'] as const;
+// The kinds and their labels live apart from zod, so the editor paints without it.
+export { cautionKinds, cautionLabels, difficulties, difficultyLabels, partKinds } from './revision-values';
+
 export const cautionKindSchema = z.enum(cautionKinds, { error: 'Pick the hazard from the list, e.g. mains voltage.' });
 export type CautionKind = z.infer<typeof cautionKindSchema>;
 
-export const cautionLabels: Record<CautionKind, string> = {
-  mains: 'Mains voltage',
-  stored_charge: 'Stored charge',
-  laser: 'Laser radiation',
-  heat: 'Hot parts',
-  sharp_edges: 'Sharp edges',
-  spring: 'Spring under tension',
-};
-
-export const difficulties = ['routine', 'careful', 'skilled', 'specialist'] as const;
 export const difficultySchema = z.enum(difficulties, { error: 'Pick a difficulty from the list, e.g. “Careful: some disassembly”.' });
 export type Difficulty = z.infer<typeof difficultySchema>;
 
-export const difficultyLabels: Record<Difficulty, string> = {
-  routine: 'Routine: basic hand tools',
-  careful: 'Careful: some disassembly',
-  skilled: 'Skilled: soldering and measuring',
-  specialist: 'Specialist: alignment or live work',
-};
-
-export const partKinds = [
-  'capacitor',
-  'resistor',
-  'diode',
-  'transistor',
-  'ic',
-  'fuse',
-  'belt',
-  'idler_tyre',
-  'pinch_roller',
-  'switch',
-  'motor',
-  'optical_pickup',
-  'lamp',
-  'connector',
-  'mechanical',
-  'other',
-] as const;
 export const partKindSchema = z.enum(partKinds, { error: 'Pick the kind of part from the list, e.g. capacitor or belt.' });
 export type PartKind = z.infer<typeof partKindSchema>;
 
