@@ -57,6 +57,8 @@ let slug = '';
 let revisionId = 0;
 let jobId = 0;
 let noteCode = '';
+let title0: number[] = [];
+let cause0: number[] = [];
 const refusals: string[] = [];
 
 async function setName(cookie: string, who: string, n: number, withShop: boolean): Promise<number[]> {
@@ -146,6 +148,8 @@ beforeAll(async () => {
     editSummary: editSummary.text,
     photoIds: [photo.id],
   });
+  title0 = title.used;
+  cause0 = cause.used;
   const created = await call(base, '/api/v1/drafts', { body: { values }, cookie: authorCookie });
   if (created.status !== 201) throw new Error(`draft: ${created.status} ${JSON.stringify(created.body).slice(0, 2000)}`);
   revisionId = created.body.revision.id;
@@ -188,7 +192,7 @@ interface PageReport {
 }
 
 /** Opens a page, counts dialogs, looks for anything injected, and checks every expected payload is there as typed. */
-async function inspect(context: BrowserContext, path: string, label: string): Promise<PageReport> {
+async function inspect(context: BrowserContext, path: string, label: string, waitFor?: string): Promise<PageReport> {
   const page = await context.newPage();
   const dialogs: string[] = [];
   page.on('dialog', (dialog) => {
@@ -197,7 +201,8 @@ async function inspect(context: BrowserContext, path: string, label: string): Pr
   });
   const response = await page.goto(`${base}${path}`, { waitUntil: 'load' });
   expect(response?.status(), `${label} (${path})`).toBe(200);
-  await page.waitForTimeout(300);
+  if (waitFor) await page.waitForSelector(waitFor, { timeout: 20_000 });
+  await page.waitForTimeout(waitFor ? 1_000 : 300);
   const found = await page.evaluate((marker) => {
     const texts = [document.body.textContent ?? ''];
     for (const el of document.querySelectorAll('[alt], [title], [aria-label], input, textarea')) {
@@ -281,6 +286,14 @@ describe('hostile text, rendered in Chromium', () => {
     reports['members page'] = await inspect(moderatorContext, '/admin/users', 'members page');
     reports['account page'] = await inspect(authorContext, '/account', 'account page');
     reports['search'] = await inspect(anonymous, `/search?q=${encodeURIComponent(hostilePayloads[0]!)}`, 'search');
+    // The editor island loads the live revision into its fields and the rich-text editor.
+    for (const [field, used] of [
+      ['title', title0],
+      ['cause', cause0],
+      ['body', all],
+    ] as const)
+      expectOn(['editor'], field, [...used]);
+    reports['editor'] = await inspect(authorContext, `/fixes/${slug}/edit`, 'editor', '.ProseMirror');
   });
 
   it('shows job sheets and hand-over notes to their owner and the note to the customer', async () => {
