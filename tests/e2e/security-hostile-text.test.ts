@@ -81,9 +81,13 @@ beforeAll(async () => {
     createUser(knex, { role: 'editor', tag: 'hostile-editor' }),
     createUser(knex, { tag: 'hostile-reporter' }),
   ]);
-  [authorCookie, moderatorCookie, editorCookie, reporterCookie] = await Promise.all(
-    [author, moderator, editor, reporter].map((u) => signIn(base, u.email, u.password)),
-  );
+  const signIns = (users: TestUser[]) => Promise.all(users.map((u) => signIn(base, u.email, u.password)));
+  [authorCookie, moderatorCookie, editorCookie, reporterCookie] = (await signIns([author, moderator, editor, reporter])) as [
+    string,
+    string,
+    string,
+    string,
+  ];
 
   // Names and shop names.
   const authorName = await setName(authorCookie, 'author', 3, true);
