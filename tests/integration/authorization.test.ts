@@ -3,10 +3,10 @@ import { readdirSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { can, type Actor } from '@/lib/permissions';
-import { routeAccess, type Access, type RouteMethod } from '@/server/auth/route-access';
+import { decideRoute, routeAccess, routeMethods, type Access, type RouteMethod } from '@/server/auth/route-access';
 import { INTEGRATION_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
-import { createUser, signIn } from '../support/sign-in';
+import { createUser, signIn, uniqueClientIp } from '../support/sign-in';
 
 const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
 const pagesDir = join(process.cwd(), 'src', 'pages');
@@ -99,8 +99,9 @@ function guardedProbes(): Probe[] {
   );
 }
 
-async function ask(probe: Probe, persona: Persona): Promise<Response> {
+async function ask(probe: Probe, persona: Persona, ip?: string): Promise<Response> {
   const headers: Record<string, string> = { origin: base };
+  if (ip) headers['x-forwarded-for'] = ip;
   const cookie = cookies[persona];
   if (cookie) headers.cookie = cookie;
   let body: string | undefined;
@@ -112,6 +113,49 @@ async function ask(probe: Probe, persona: Persona): Promise<Response> {
   }
   return fetch(`${base}${samplePath(probe.pattern)}`, { method: probe.method, headers, body, redirect: 'manual' });
 }
+
+/** Every route (files and injected) × every method the guard knows, with what the table decides for it. */
+function everyProbe(): { pattern: string; method: RouteMethod; decision: ReturnType<typeof decideRoute> }[] {
+  return Object.keys(routeAccess).flatMap((pattern) =>
+    routeMethods.map((method) => ({ pattern, method, decision: decideRoute(pattern, method) })),
+  );
+}
+
+describe('the whole matrix: every route × every method × every kind of user', () => {
+  const probes = everyProbe();
+  const personaCount = personas.length;
+
+  it(`covers ${Object.keys(routeAccess).length} routes × ${routeMethods.length} methods × ${personaCount} kinds of user`, () => {
+    expect(new Set(probes.map((p) => p.pattern)).size).toBe(Object.keys(routeAccess).length);
+    expect(probes.length).toBe(Object.keys(routeAccess).length * routeMethods.length);
+  });
+
+  for (const pattern of Object.keys(routeAccess)) {
+    it(`answers ${pattern} as the table says, for each method and each kind of user`, async () => {
+      const api = pattern.startsWith('/api/');
+      for (const { method, decision } of probes.filter((p) => p.pattern === pattern)) {
+        const access = decision.kind === 'access' ? decision.access : 'closed';
+        // Guarded methods are asked of every kind of user in 'route guard' below.
+        if (access !== 'public' && access !== 'closed') continue;
+        for (const persona of personas) {
+          // Each request from an address of its own, so the public forms' rate limits never answer instead.
+          const res = await ask({ pattern, method, access }, persona, uniqueClientIp());
+          const context = `${method} ${pattern} as ${persona}: ${res.status}`;
+          expect(res.status, context).toBeLessThan(500);
+          if (access === 'closed') {
+            expect(res.status, context).toBe(405);
+            expect(res.headers.get('allow'), context).toBeTruthy();
+            if (api) expect((await res.json()).error.code, context).toBe('method_not_allowed');
+          } else if (access === 'public') {
+            expect([401, 403, 405], context).not.toContain(res.status);
+            expect(res.headers.get('location') ?? '', context).not.toMatch(/^\/sign-in\?next=/);
+          }
+          if (!res.bodyUsed) await res.arrayBuffer();
+        }
+      }
+    });
+  }
+});
 
 describe('route guard', () => {
   const probes = guardedProbes();

@@ -9,7 +9,8 @@ export function splitTerms(raw: string): string[] {
   const seen = new Set<string>();
   const terms: string[] = [];
   for (const piece of raw.split(/[\n,;]+/)) {
-    const term = piece.replace(/\s+/g, ' ').trim();
+    // JavaScript's \s counts U+FEFF (zero-width no-break space) as a space: fold only visible spacing, keep the rest as typed.
+    const term = piece.replace(/[^\S\uFEFF]+/g, ' ').trim();
     const key = term.toLowerCase();
     if (term && !seen.has(key)) {
       seen.add(key);

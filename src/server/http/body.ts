@@ -107,6 +107,41 @@ function unsupported(accept: Accept) {
   return refuse('unsupported_media_type', message);
 }
 
+/** Deeper than any fix body the editor makes (lists in lists stay well under it); PostgreSQL refuses much deeper JSON. */
+const MAX_JSON_DEPTH = 100;
+
+/**
+ * Text PostgreSQL cannot store (the NUL character) or JSON nested past MAX_JSON_DEPTH, found without recursion: such a
+ * body is refused whole rather than failing later in the database.
+ */
+function unstorable(data: unknown): Failure | null {
+  const stack: [unknown, number][] = [[data, 0]];
+  while (stack.length > 0) {
+    const [value, depth] = stack.pop()!;
+    if (typeof value === 'string') {
+      if (value.includes('\u0000')) return nulRefusal();
+    } else if (value !== null && typeof value === 'object') {
+      if (depth >= MAX_JSON_DEPTH)
+        return refuse(
+          'bad_request',
+          `The body nests deeper than ${MAX_JSON_DEPTH} levels; send flatter data, e.g. {"parts": [{"ref": "C12"}]}.`,
+        );
+      for (const [key, child] of Object.entries(value)) {
+        if (key.includes('\u0000')) return nulRefusal();
+        stack.push([child, depth + 1]);
+      }
+    }
+  }
+  return null;
+}
+
+function nulRefusal(): Failure {
+  return refuse(
+    'bad_request',
+    'The text holds a NUL character (U+0000), which cannot be stored; remove it, e.g. paste the text again as plain text.',
+  );
+}
+
 /**
  * Reads a JSON body or a URL-encoded form, as the route accepts, each kind with its named cap. An empty JSON body
  * reads as `{}` (a button that posts no fields); JSON with a syntax error is a 400 that says where to look.
@@ -121,17 +156,20 @@ export async function readBody(request: Request, accept: Accept): Promise<Outcom
   if (!text.ok) return text;
   if (isForm) {
     const form = new URLSearchParams(text.value);
-    return succeed({ kind: 'form', form, data: Object.fromEntries(form) });
+    const data = Object.fromEntries(form);
+    return unstorable([...form]) ?? succeed({ kind: 'form', form, data });
   }
   if (text.value.trim() === '') return succeed({ kind: 'json', data: {} });
+  let data: unknown;
   try {
-    return succeed({ kind: 'json', data: JSON.parse(text.value) as unknown });
+    data = JSON.parse(text.value) as unknown;
   } catch (error) {
     const where = error instanceof SyntaxError ? `${error.message}. ` : '';
     return refuse('bad_request', 'The body is not valid JSON.', {
       _: [`${where}Send one JSON object, e.g. {"note": "Replaced C12", "quantity": 2}.`],
     });
   }
+  return unstorable(data) ?? succeed({ kind: 'json', data });
 }
 
 /** The writing and proofing endpoints: a draft as JSON from the editor, or a small plain form from a page. */

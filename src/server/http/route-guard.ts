@@ -52,6 +52,17 @@ function allowed(access: Access, user: SessionUser | null): boolean {
   return can(user, access);
 }
 
+/** The Auth.js actions auth-astro serves; for any other path under /api/auth it answers nothing, which Astro turns into a 500. */
+const authActions = new Set(['providers', 'session', 'csrf', 'signin', 'signout', 'callback', 'verify-request', 'error']);
+
+function unknownAuthAction(context: GuardContext): Response | null {
+  if (context.routePattern !== '/api/auth/[...auth]') return null;
+  const action = context.url.pathname.slice('/api/auth/'.length).split('/')[0] ?? '';
+  return authActions.has(action)
+    ? null
+    : errorJson('not_found', 'There is nothing at this address; the sign-in service answers e.g. /api/auth/session.');
+}
+
 /** A response when the request may not go on; null when it may. */
 export function guardRequest(context: GuardContext, user: SessionUser | null): Response | null {
   const decision = decideRoute(context.routePattern, context.request.method);
@@ -66,5 +77,5 @@ export function guardRequest(context: GuardContext, user: SessionUser | null): R
     const headers = { Allow: allow.join(', ') };
     return api ? errorJson('method_not_allowed', 'This address does not take that method.', headers) : html(405, notServedPage(), headers);
   }
-  return allowed(decision.access, user) ? null : denied(context, user);
+  return allowed(decision.access, user) ? unknownAuthAction(context) : denied(context, user);
 }

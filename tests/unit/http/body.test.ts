@@ -34,6 +34,26 @@ describe('readBody', () => {
     expect(asForm.ok && asForm.value.kind === 'form' && asForm.value.form.getAll('note')).toEqual(['two words', 'last']);
   });
 
+  it('refuses a NUL character (PostgreSQL cannot store it) in JSON or a form, with a sentence saying what to do', async () => {
+    for (const request of [
+      post(JSON.stringify({ values: { title: 'Tray\u0000closes' } }), 'application/json'),
+      post(JSON.stringify({ ['key\u0000']: 'x' }), 'application/json'),
+      post('note=a%00b', 'application/x-www-form-urlencoded'),
+    ]) {
+      const read = await readBody(request, { json: 'tools', form: 'pageForm' });
+      expect(read.ok).toBe(false);
+      expect(!read.ok && read.code).toBe('bad_request');
+      expect(!read.ok && read.message).toMatch(/NUL character \(U\+0000\)[\s\S]*e\.g\./);
+    }
+  });
+
+  it('refuses JSON nested deeper than 100 levels without recursing, and takes 99', async () => {
+    const nest = (depth: number) => '['.repeat(depth) + ']'.repeat(depth);
+    const deep = await readBody(post(nest(5000), 'application/json'), { json: 'tools' });
+    expect(!deep.ok && deep.message).toMatch(/deeper than 100 levels[\s\S]*e\.g\./);
+    expect((await readBody(post(nest(99), 'application/json'), { json: 'tools' })).ok).toBe(true);
+  });
+
   it('reads an empty JSON body as an empty object', async () => {
     expect(await readBody(post('', 'application/json'), writingInput)).toEqual({ ok: true, value: { kind: 'json', data: {} } });
   });

@@ -18,6 +18,9 @@ describe('word family form', () => {
   it('splits terms on lines and commas, trims and drops repeats whatever their case', () => {
     expect(splitTerms(' Tray \n drawer, DRAWER;;  disc   tray \n')).toEqual(['Tray', 'drawer', 'disc tray']);
   });
+  it('keeps an invisible zero-width no-break space inside a term as typed rather than turning it into a space', () => {
+    expect(splitTerms('E\uFEFF31\nE31')).toEqual(['E\uFEFF31', 'E31']);
+  });
   it('asks for two terms at least and names the field', () => {
     const parsed = wordFamilyFormSchema.safeParse({ intent: 'create', name: 'tray', terms: 'tray' });
     expect(parsed.success).toBe(false);

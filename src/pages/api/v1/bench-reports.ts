@@ -10,7 +10,7 @@ import { respond, parseSearchParams } from '@/server/http/result';
 import { benchReportInputSchema } from '@/lib/schemas/bench-report';
 import { slugSchema } from '@/lib/schemas/slug';
 
-const listQuery = z.object({ fix: slugSchema.optional() });
+export const listQuery = z.object({ fix: slugSchema.optional() });
 
 export const GET: APIRoute = async ({ locals, url }) => {
   const user = locals.user;

@@ -9,7 +9,7 @@ import { orderListOwner } from '@/server/bench-work/order-list-owner';
 import { readBody } from '@/server/http/body';
 import { respond, schemaRefusal, parseSearchParams } from '@/server/http/result';
 
-const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
+export const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 
 const EXAMPLE =
   '{ "lines": [{ "key": "capacitance:470 µF 16 V", "label": "470 µF 16 V", "kind": "capacitor", "quantity": 2, "spares": 1 }] }';

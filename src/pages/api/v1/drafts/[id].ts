@@ -10,7 +10,7 @@ import { readBody, writingInput } from '@/server/http/body';
 import { respond } from '@/server/http/result';
 import { loadRevision } from '@/server/writing/revisions';
 
-const bodySchema = z.object({ values: z.unknown(), baseRevisionId: z.number().int().positive().nullable().optional() });
+export const bodySchema = z.object({ values: z.unknown(), baseRevisionId: z.number().int().positive().nullable().optional() });
 
 export const GET: APIRoute = async ({ params, locals }) => {
   const user = requireUser(locals);

@@ -10,7 +10,7 @@ import { answer, requireUser } from '@/server/http/endpoint';
 import { readBody, writingInput } from '@/server/http/body';
 import { respond } from '@/server/http/result';
 
-const bodySchema = z.object({ fixSlug: slugSchema.nullish(), values: z.unknown() });
+export const bodySchema = z.object({ fixSlug: slugSchema.nullish(), values: z.unknown() });
 
 export const POST: APIRoute = async ({ request, locals }) => {
   const user = requireUser(locals);

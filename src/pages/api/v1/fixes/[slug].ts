@@ -6,7 +6,7 @@ import { getFix } from '@/server/fixes/fixes';
 import { apiError, json } from '@/server/http/responses';
 import { slugSchema } from '@/lib/schemas/slug';
 
-const querySchema = z.object({ revision: z.coerce.number().int().min(1).max(100_000).optional() });
+export const querySchema = z.object({ revision: z.coerce.number().int().min(1).max(100_000).optional() });
 
 export const GET: APIRoute = async ({ params, url }) => {
   const slug = slugSchema.safeParse(params.slug);

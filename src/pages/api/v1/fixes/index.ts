@@ -8,7 +8,7 @@ import { apiError, json } from '@/server/http/responses';
 import { pageQuerySchema, toPage } from '@/server/core/pagination';
 import { slugSchema } from '@/lib/schemas/slug';
 
-const querySchema = pageQuerySchema.extend({ machine: slugSchema.optional(), chassis: slugSchema.optional() });
+export const querySchema = pageQuerySchema.extend({ machine: slugSchema.optional(), chassis: slugSchema.optional() });
 
 export const GET: APIRoute = async ({ url }) => {
   const query = parseSearchParams(querySchema, url);

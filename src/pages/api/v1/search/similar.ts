@@ -28,7 +28,7 @@ import { findNamedChassis, findNamedMachine } from '@/server/search/context';
 import { similarFixes } from '@/server/search/similar';
 
 const oneTarget = 'Name a machine or a chassis family (one of them).';
-const querySchema = z
+export const querySchema = z
   .object({
     symptom: z.string({ error: 'Say what the fault looks like.' }).trim().min(1, 'Say what the fault looks like.').max(MAX_QUERY_LENGTH),
     machine: slugSchema.optional(),

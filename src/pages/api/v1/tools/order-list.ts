@@ -8,7 +8,7 @@ import { csvResponse } from '@/server/http/csv-response';
 import { readBody } from '@/server/http/body';
 import { respond, inputRefusal, schemaRefusal, parseSearchParams } from '@/server/http/result';
 
-const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
+export const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 
 const EXAMPLE =
   '{ "lines": [{ "source": "Tray will not close", "ref": "C512", "kind": "capacitor", "value": "470uF", "rating": "16V 105C", "quantity": 1 }], "spares": { "percent": 10 } }';

@@ -8,7 +8,7 @@ import { readBody, writingInput } from '@/server/http/body';
 import { submitDraft } from '@/server/writing/submit';
 import { respond } from '@/server/http/result';
 
-const bodySchema = z.object({ values: z.unknown().optional() });
+export const bodySchema = z.object({ values: z.unknown().optional() });
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);

@@ -22,7 +22,7 @@ export const POST: APIRoute = async ({ locals, params, request }) => {
   return json({ jobSheet: await getJobSheet(job.value.ownerId, job.value.id) }, { cache: 'private' });
 };
 
-const removeQuery = z.object({ fix: slugSchema });
+export const removeQuery = z.object({ fix: slugSchema });
 
 export const DELETE: APIRoute = async ({ locals, params, url }) => {
   const job = jobSheetRequest(locals.user, params.id);

@@ -19,7 +19,8 @@ export const POST: APIRoute = async ({ params, request, locals }) => {
   if (!read.ok) return respond(read);
   const input = read.value;
   const outcome = await amendRevision(user, id);
-  if (!outcome.ok) return answer(outcome, input, { back: localPathOr((input.data as Record<string, unknown>).back, '/write/mine') });
+  if (!outcome.ok)
+    return answer(outcome, input, { back: localPathOr((input.data as Record<string, unknown> | null)?.back, '/write/mine') });
   const path = editorPath(outcome.value.revision);
   return answer(succeed({ ...outcome.value, editorPath: path }), input, { status: 201, back: '/write/mine', done: path });
 };
