@@ -4,6 +4,7 @@ import { testDb } from '../support/db';
 import { INTEGRATION_PORT } from '../support/test-env';
 import { signIn } from '../support/sign-in';
 import { as, makeFix, makeMember, makeWorld, PASSWORD, type TestFix, type TestWorld } from './bench-work-support';
+import { withoutJsonLd } from '../support/scripts';
 
 const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
 const knex = testDb();
@@ -48,8 +49,7 @@ afterAll(() => knex.destroy());
 describe('fix page bench report form', () => {
   it('offers verified members a plain form for the fix’s machines and family, with no script on the page', async () => {
     const page = await html(await me.get(`/fixes/${fix.slug}`));
-    // The one script element is JSON-LD, data that never runs.
-    expect(page.replace(/<script type="application\/ld\+json">[^<]*<\/script>/, '')).not.toMatch(/<script/i);
+    expect(withoutJsonLd(page)).not.toMatch(/<script/i);
     expect(page).toContain(`action="/fixes/${fix.slug}?_action=benchReport"`);
     for (const m of world.machines) expect(page).toContain(`value="${m.slug}"`);
     expect(page).not.toContain(`value="${world.outsider.slug}"`);

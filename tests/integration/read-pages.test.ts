@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { client } from '../support/http';
 import { INTEGRATION_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
+import { withoutJsonLd } from '../support/scripts';
 
 const site = client(INTEGRATION_PORT);
 
@@ -29,8 +30,7 @@ describe('fix page', () => {
     const slug = await fixWithCautions();
     const { status, html, headers } = await page(`/fixes/${slug}`);
     expect(status).toBe(200);
-    // The one script element is JSON-LD, data that never runs.
-    expect(html.replace(/<script type="application\/ld\+json">[^<]*<\/script>/, '')).not.toMatch(/<script/i);
+    expect(withoutJsonLd(html)).not.toMatch(/<script/i);
     const order = ['id="symptoms"', 'id="cause"', 'id="cautions"', 'id="remedy"'].map((marker) => html.indexOf(marker));
     expect(order.every((i) => i > 0)).toBe(true);
     expect([...order].sort((a, b) => a - b)).toEqual(order);
