@@ -48,6 +48,9 @@ export const routeAccess: Record<string, RouteRule> = {
   '/help/working-safely': read,
   '/help/writing-a-good-fix': read,
   '/media/[...key]': { methods: { GET: 'public' }, sharedCache: true },
+  // Built once and stored by the service worker: the offline page and the list of fixes kept on this device.
+  '/offline': read,
+  '/kept': read,
   '/api/v1/machines': read,
   '/api/v1/machines/[slug]': read,
   '/api/v1/chassis/[slug]': read,
