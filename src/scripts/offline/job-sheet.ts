@@ -75,6 +75,7 @@ function chooser(item: SheetEdit, sheet: Record<string, unknown>, ask: string[],
       ['theirs', theirs[field] ?? ''],
     ] as const) {
       const cell = document.createElement('td');
+      cell.dataset.side = side === 'mine' ? 'Yours, waiting on this device' : 'Saved from the other device';
       const choice = document.createElement('label');
       const radio = document.createElement('input');
       radio.type = 'radio';

@@ -10,7 +10,8 @@ if ('serviceWorker' in navigator) {
 
 /** Offline, the page came from a cache: say so, with the date the saved copy was made. */
 async function markSavedCopy(): Promise<void> {
-  if (navigator.onLine || !('caches' in window)) return;
+  // The offline page itself says so in its heading.
+  if (navigator.onLine || !('caches' in window) || document.querySelector('[data-offline-page]')) return;
   const saved = await caches.match(location.href);
   const stamp = saved?.headers.get('date');
   const line = document.createElement('p');
