@@ -18,7 +18,15 @@ const base = `http://127.0.0.1:${E2E_PORT}`;
 const knex = testDb();
 let browser: Browser;
 /** A live fix with cautions, parts and readings: the fullest bench sheet of the demo world. */
-let fix: { slug: string; number: number; title: string; parts: { ref: string; value: string }[]; readings: { testPoint: string }[]; cautions: number; machine: string };
+let fix: {
+  slug: string;
+  number: number;
+  title: string;
+  parts: { ref: string; value: string }[];
+  readings: { testPoint: string }[];
+  cautions: number;
+  machine: string;
+};
 
 beforeAll(async () => {
   browser = await launchBrowser();
@@ -27,9 +35,17 @@ beforeAll(async () => {
     .join('fix_machines as fm', 'fm.fix_id', 'f.id')
     .join('machines as m', 'm.id', 'fm.machine_id')
     .whereNull('f.hidden_at')
-    .whereRaw("jsonb_array_length(r.cautions) > 0 AND jsonb_array_length(r.parts) > 0 AND jsonb_array_length(r.readings) > 0")
+    .whereRaw('jsonb_array_length(r.cautions) > 0 AND jsonb_array_length(r.parts) > 0 AND jsonb_array_length(r.readings) > 0')
     .orderBy('f.id')
-    .first('f.slug', 'r.number', 'r.title', 'r.parts', 'r.readings', knex.raw('jsonb_array_length(r.cautions) AS cautions'), 'm.slug as machine');
+    .first(
+      'f.slug',
+      'r.number',
+      'r.title',
+      'r.parts',
+      'r.readings',
+      knex.raw('jsonb_array_length(r.cautions) AS cautions'),
+      'm.slug as machine',
+    );
   if (!fix) throw new Error('The demo world needs a live fix with cautions, parts and readings.');
 });
 afterAll(async () => {
@@ -63,7 +79,9 @@ describe('the bench view', () => {
       const size = await dialog.locator('.bench-view__step').evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
       expect(size).toBeGreaterThanOrEqual(21);
       // The screen lock is asked for; whether headless Chromium grants it, the page says which.
-      expect(await dialog.locator('.bench-view__awake').textContent()).toMatch(/^(The screen stays on while this is open\.|The screen could not be kept on \(battery saver\?\)\.)$/);
+      expect(await dialog.locator('.bench-view__awake').textContent()).toMatch(
+        /^(The screen stays on while this is open\.|The screen could not be kept on \(battery saver\?\)\.)$/,
+      );
       await page.keyboard.press('ArrowRight');
       expect(await count.textContent()).toBe(`Step 2 of ${total}`);
       await dialog.getByRole('button', { name: 'Next step' }).click();
@@ -99,9 +117,9 @@ describe('on paper', () => {
     for (const part of fix.parts) expect(partsText).toContain(part.value);
     expect(await shown(page, '.parts-table td.parts-check')).toBe(fix.parts.length);
     // Every reading, in the readings table or in the remedy's steps, has an empty "measured here" to write on.
-    const tableCells = await page.locator('table:has(th:text-is("Measured here")) tbody tr').evaluateAll((rows) =>
-      rows.map((row) => (row.querySelector('td.reading-measured') as HTMLElement | null)?.innerText ?? 'missing'),
-    );
+    const tableCells = await page
+      .locator('table:has(th:text-is("Measured here")) tbody tr')
+      .evaluateAll((rows) => rows.map((row) => (row.querySelector('td.reading-measured') as HTMLElement | null)?.innerText ?? 'missing'));
     const inline = await page
       .locator('.prose-fix .reading dl')
       .evaluateAll((dls) => dls.map((dl) => getComputedStyle(dl, '::after').content));
@@ -116,7 +134,8 @@ describe('on paper', () => {
     // A long value wraps inside its cell on paper: its first words are checked in the PDF, all of it in the DOM above.
     for (const part of fix.parts) expect(text).toContain(part.value.split(' ').slice(0, 2).join(' '));
     expect(text).toContain('Measured here');
-    for (const absent of ['Keep for the bench', 'Bench view', 'Skip to content', 'Add to order list', 'Search']) expect(text).not.toContain(absent);
+    for (const absent of ['Keep for the bench', 'Bench view', 'Skip to content', 'Add to order list', 'Search'])
+      expect(text).not.toContain(absent);
     // The caution's label (set in capitals on paper) comes before the remedy.
     const firstCaution = (await page.locator('#cautions .caution').first().innerText()).split('\n')[0]!.trim().toLowerCase();
     const lower = text.toLowerCase();
@@ -148,8 +167,12 @@ describe('on paper', () => {
     await page.emulateMedia({ media: 'print' });
     expect(await shown(page, 'nav, button, form, input, select, textarea')).toBe(0);
     const ticket = (await page.locator('.job-ticket').innerText()).replace(/\s+/g, ' ');
-    for (const text of ['Workshop ticket: Ticket 5512', 'SN-44-1099', 'Tray opens by itself', 'C12', '470 µF', '16 V']) expect(ticket).toContain(text);
-    const machine = await knex('machines as m').join('makers as mk', 'mk.id', 'm.maker_id').where('m.slug', fix.machine).first('mk.name', 'm.model_number');
+    for (const text of ['Workshop ticket: Ticket 5512', 'SN-44-1099', 'Tray opens by itself', 'C12', '470 µF', '16 V'])
+      expect(ticket).toContain(text);
+    const machine = await knex('machines as m')
+      .join('makers as mk', 'mk.id', 'm.maker_id')
+      .where('m.slug', fix.machine)
+      .first('mk.name', 'm.model_number');
     expect(ticket).toContain(`${machine.name} ${machine.model_number}`);
     await page.screenshot({ path: '/tmp/pwa-print-job.png', fullPage: true });
     await context.close();

@@ -63,7 +63,9 @@ async function photosShown(page: Page): Promise<{ count: number; broken: string[
   const count = await images.count();
   for (let i = 0; i < count; i++) await images.nth(i).scrollIntoViewIfNeeded();
   await page.waitForFunction(() => [...document.querySelectorAll<HTMLImageElement>('figure.photo img')].every((img) => img.complete));
-  const broken = await images.evaluateAll((imgs) => (imgs as HTMLImageElement[]).filter((img) => img.naturalWidth === 0).map((img) => img.currentSrc));
+  const broken = await images.evaluateAll((imgs) =>
+    (imgs as HTMLImageElement[]).filter((img) => img.naturalWidth === 0).map((img) => img.currentSrc),
+  );
   return { count, broken };
 }
 
@@ -112,7 +114,9 @@ describe('reading offline', () => {
     const page = await installed(context);
     const fix = photoFixes[0]!;
     await page.goto(`${base}/fixes/${fix.slug}`);
-    const toolLinks = await page.locator('article.fix a[href^="/tools/"]').evaluateAll((links) => links.map((a) => a.getAttribute('href')!));
+    const toolLinks = await page
+      .locator('article.fix a[href^="/tools/"]')
+      .evaluateAll((links) => links.map((a) => a.getAttribute('href')!));
     await page.getByRole('button', { name: 'Keep for the bench' }).click();
     await expect(page.locator('[data-keep-status]').textContent()).resolves.toBeTruthy();
     await page.waitForFunction(() => document.querySelector('[data-keep-status]')?.textContent?.startsWith('Kept on this device'));
@@ -201,7 +205,10 @@ describe('a job sheet offline', () => {
 
   it('meets a sheet changed on another device: takes the untouched field, shows both copies of the other, saves the choice', async () => {
     const member = await makeMember(knex);
-    const job = await createJobSheet(member.id, jobSheetCreateSchema.parse({ customerRef: 'Ticket SW-3', findings: 'Hum', labourMinutes: 30 }));
+    const job = await createJobSheet(
+      member.id,
+      jobSheetCreateSchema.parse({ customerRef: 'Ticket SW-3', findings: 'Hum', labourMinutes: 30 }),
+    );
     if (!job.ok) throw new Error(job.message);
     const context = await signedInContext(browser, base, member.email, PASSWORD, { viewport: { width: 360, height: 740 } });
     const page = await installed(context);

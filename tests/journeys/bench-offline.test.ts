@@ -94,14 +94,20 @@ describe('a bench technician with a dropping connection', () => {
       await jobPage.getByLabel('Findings').fill('Back tension band glazed; fitted a new band, verticals straight again');
       await jobPage.getByLabel('Labour (minutes)').fill('50');
       await jobPage.getByRole('button', { name: 'Save the job sheet' }).click();
-      await sees(jobPage.getByText(/One change is waiting to be sent from this device: your changes to job sheet Counter ticket 8127\. You are offline/));
+      await sees(
+        jobPage.getByText(
+          /One change is waiting to be sent from this device: your changes to job sheet Counter ticket 8127\. You are offline/,
+        ),
+      );
       expect(await knex('job_sheets').where({ id: jobId }).first('findings')).toEqual({ findings: '' });
     });
 
     await journey.step('gets the connection back and finds the job sheet saved', async () => {
       await journey.navigates(jobPage, /\?job=saved$/, () => context.setOffline(false));
       await sees(jobPage.getByText('Saved.'));
-      await expect(jobPage.getByLabel('Findings').inputValue()).resolves.toBe('Back tension band glazed; fitted a new band, verticals straight again');
+      await expect(jobPage.getByLabel('Findings').inputValue()).resolves.toBe(
+        'Back tension band glazed; fitted a new band, verticals straight again',
+      );
       expect(await knex('job_sheets').where({ id: jobId }).first('findings', 'labour_minutes')).toEqual({
         findings: 'Back tension band glazed; fitted a new band, verticals straight again',
         labour_minutes: 50,

@@ -42,7 +42,14 @@ function edit(id: string, sheetId: number, changes: Record<string, string>, base
     queuedAt: '2026-12-02T10:00:00Z',
   };
 }
-const post = (id: string): FormPost => ({ kind: 'form-post', id, url: '/jobs/1', fields: [['intent', 'to_order_list']], label: `post ${id}`, queuedAt: '' });
+const post = (id: string): FormPost => ({
+  kind: 'form-post',
+  id,
+  url: '/jobs/1',
+  fields: [['intent', 'to_order_list']],
+  label: `post ${id}`,
+  queuedAt: '',
+});
 
 describe('enqueue', () => {
   it('keeps items in the order they were made', () => {
@@ -95,7 +102,13 @@ describe('comparable field texts', () => {
       serialNumber: null,
     };
     const values = sheetValues(sheet);
-    expect(values).toMatchObject({ customerRef: 'Ticket 77', machine: 'orvale-tc-40', labourMinutes: '30', serialNumber: '', status: 'diagnosing' });
+    expect(values).toMatchObject({
+      customerRef: 'Ticket 77',
+      machine: 'orvale-tc-40',
+      labourMinutes: '30',
+      serialNumber: '',
+      status: 'diagnosing',
+    });
     expect(values.partsUsed).toBe(formValues(loaded).partsUsed);
     expect(sheetValues({ machine: null }).machine).toBe('');
   });

@@ -14,7 +14,8 @@ function collectSteps(): HTMLElement[] {
   }
   const remedy = document.querySelector<HTMLElement>('#remedy-section .prose-fix');
   for (const block of remedy ? Array.from(remedy.children) : []) {
-    if (block instanceof HTMLOListElement || block instanceof HTMLUListElement) steps.push(...(Array.from(block.children) as HTMLElement[]));
+    if (block instanceof HTMLOListElement || block instanceof HTMLUListElement)
+      steps.push(...(Array.from(block.children) as HTMLElement[]));
     else steps.push(block as HTMLElement);
   }
   return steps;

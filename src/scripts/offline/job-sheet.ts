@@ -1,11 +1,26 @@
 // The job sheet page's outbox: a save, bench report or order-list change made without a connection is kept on this
 // device (IndexedDB) and sent in order when the connection returns; the sheet's save carries the version it was made
 // on, and a sheet changed meanwhile elsewhere is merged field by field, asking only where both sides changed a field.
-import { entriesFor, formValues, mergeSheet, sheetFieldLabels, sheetValues, waitingSummary, type FormEntries, type FormPost, type SheetEdit, type Waiting } from '@/lib/offline/queue';
+import {
+  entriesFor,
+  formValues,
+  mergeSheet,
+  sheetFieldLabels,
+  sheetValues,
+  waitingSummary,
+  type FormEntries,
+  type FormPost,
+  type SheetEdit,
+  type Waiting,
+} from '@/lib/offline/queue';
 import { ifMatchFor } from '@/lib/offline/job-sheet-version';
 import { addToOutbox, readOutbox, removeFromOutbox, replaceInOutbox } from './outbox-store';
 
-type Sent = { result: 'sent' } | { result: 'offline' } | { result: 'refused'; message: string } | { result: 'conflict'; sheet: Record<string, unknown> };
+type Sent =
+  | { result: 'sent' }
+  | { result: 'offline' }
+  | { result: 'refused'; message: string }
+  | { result: 'conflict'; sheet: Record<string, unknown> };
 
 const sheetForm = document.querySelector<HTMLFormElement>('form[data-offline-sheet]');
 const box = document.querySelector<HTMLElement>('[data-outbox]');
@@ -21,7 +36,11 @@ async function send(item: Waiting): Promise<Sent> {
       item.kind === 'job-sheet'
         ? await fetch(`/api/v1/job-sheets/${item.sheetId}`, {
             method: 'PATCH',
-            headers: { 'Content-Type': 'application/x-www-form-urlencoded', 'If-Match': ifMatchFor(item.baseVersion), Accept: 'application/json' },
+            headers: {
+              'Content-Type': 'application/x-www-form-urlencoded',
+              'If-Match': ifMatchFor(item.baseVersion),
+              Accept: 'application/json',
+            },
             body: new URLSearchParams(item.fields),
           })
         : await fetch(item.url, { method: 'POST', body: new URLSearchParams(item.fields), redirect: 'manual' });
@@ -30,7 +49,8 @@ async function send(item: Waiting): Promise<Sent> {
       const answer = (await response.json()) as { jobSheet: Record<string, unknown> };
       return { result: 'conflict', sheet: answer.jobSheet };
     }
-    const answer = item.kind === 'job-sheet' ? ((await response.json().catch(() => null)) as { error?: { message?: string } } | null) : null;
+    const answer =
+      item.kind === 'job-sheet' ? ((await response.json().catch(() => null)) as { error?: { message?: string } } | null) : null;
     return { result: 'refused', message: answer?.error?.message ?? `The server answered ${response.status}.` };
   } catch {
     return { result: 'offline' };
@@ -126,7 +146,10 @@ async function flush(): Promise<void> {
         }
         return chooser(item, sent.sheet, merge.ask, merge.mine);
       } else {
-        const why = sent.result === 'refused' ? ` “${item.label}” was refused: ${sent.message} It stays waiting; change it on the page and save again, or sign out to drop it.` : '';
+        const why =
+          sent.result === 'refused'
+            ? ` “${item.label}” was refused: ${sent.message} It stays waiting; change it on the page and save again, or sign out to drop it.`
+            : '';
         return render(await readOutbox(), why);
       }
     }
@@ -177,7 +200,14 @@ for (const form of document.querySelectorAll<HTMLFormElement>('main form[method=
       return;
     }
     const label = (event.submitter?.textContent ?? form.querySelector('button')?.textContent ?? 'a form').trim();
-    const item: FormPost = { kind: 'form-post', id: newId(), url: form.action, fields, label: `“${label}”`, queuedAt: new Date().toISOString() };
+    const item: FormPost = {
+      kind: 'form-post',
+      id: newId(),
+      url: form.action,
+      fields,
+      label: `“${label}”`,
+      queuedAt: new Date().toISOString(),
+    };
     void hold(item);
   });
 }

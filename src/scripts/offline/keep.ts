@@ -8,7 +8,10 @@ function neededAddresses(page: Document): string[] {
   const urls = new Set<string>();
   const article = page.querySelector('article.fix') ?? page;
   for (const img of article.querySelectorAll<HTMLImageElement | HTMLSourceElement>('img[src], img[srcset], source[srcset]')) {
-    const candidates = [img.getAttribute('src') ?? '', ...(img.getAttribute('srcset') ?? '').split(',').map((c) => c.trim().split(/\s+/)[0] ?? '')];
+    const candidates = [
+      img.getAttribute('src') ?? '',
+      ...(img.getAttribute('srcset') ?? '').split(',').map((c) => c.trim().split(/\s+/)[0] ?? ''),
+    ];
     for (const candidate of candidates) if (candidate.startsWith('/media/')) urls.add(candidate);
   }
   for (const link of article.querySelectorAll<HTMLAnchorElement>('a[href^="/tools/"]')) urls.add(link.getAttribute('href')!.split('#')[0]!);
