@@ -12,6 +12,7 @@ import { createJobSheet, updateJobSheet } from '@/server/bench-work/job-sheets';
 import { jobSheetCreateSchema } from '@/lib/schemas/bench-work';
 import { signIn } from '../support/sign-in';
 import { closeDb } from '@/server/core/db';
+import { hasRegistration, scriptsBesideRegistration } from '../support/scripts';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;
 const knex = testDb();
@@ -85,6 +86,17 @@ async function cacheKeys(page: Page, name: string): Promise<string[]> {
 }
 
 describe('reading offline', () => {
+  it('registers the worker from one bundled module script, the only script of a fix page, and serves the manifest', async () => {
+    const html = await (await fetch(`${base}/fixes/${photoFixes[0]!.slug}`)).text();
+    expect(hasRegistration(html)).toBe(true);
+    expect(scriptsBesideRegistration(html)).toEqual([]);
+    expect(html).toContain('<link rel="manifest" href="/manifest.webmanifest">');
+    const manifest = (await (await fetch(`${base}/manifest.webmanifest`)).json()) as Record<string, unknown>;
+    expect(manifest).toMatchObject({ name: 'Benchlore', display: 'standalone', theme_color: '#0f4c4a', background_color: '#f6f1e7' });
+    for (const icon of manifest.icons as { src: string }[])
+      expect((await fetch(`${base}${icon.src}`)).headers.get('content-type')).toBe('image/png');
+  });
+
   it('serves a visited fix and its photos from the saved copy, with the line, and the offline page for an unvisited page', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await installed(context);
