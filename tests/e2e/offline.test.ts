@@ -9,6 +9,7 @@ import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { makeMember, PASSWORD } from '../integration/bench-work-support';
 import { createJobSheet, updateJobSheet } from '@/server/bench-work/job-sheets';
+import { getOrderList } from '@/server/bench-work/order-lists';
 import { jobSheetCreateSchema } from '@/lib/schemas/bench-work';
 import { signIn } from '../support/sign-in';
 import { closeDb } from '@/server/core/db';
@@ -249,6 +250,41 @@ describe('a job sheet offline', () => {
       findings: 'Hum from the mains transformer',
       labour_minutes: 45,
     });
+    await context.close();
+  });
+
+  it('queues an order-list change made offline behind the sheet edit, refuses a delete, and sends both in order', async () => {
+    const member = await makeMember(knex);
+    const job = await createJobSheet(
+      member.id,
+      jobSheetCreateSchema.parse({
+        customerRef: 'Ticket SW-5',
+        partsUsed: [{ ref: 'C7', kind: 'capacitor', value: '220 µF', rating: '25 V', quantity: 1 }],
+      }),
+    );
+    if (!job.ok) throw new Error(job.message);
+    const context = await signedInContext(browser, base, member.email, PASSWORD);
+    const page = await installed(context);
+    await page.goto(`${base}/jobs/${job.value}`);
+
+    await context.setOffline(true);
+    await page.fill('textarea[name="findings"]', 'C7 bulged');
+    await page.getByRole('button', { name: 'Save the job sheet' }).click();
+    await page.getByRole('button', { name: 'Put these parts on my order list' }).click();
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('2 changes are waiting'));
+    expect(await page.locator('[data-outbox]').textContent()).toContain(
+      '2 changes are waiting to be sent from this device: your changes to job sheet Ticket SW-5; “Put these parts on my order list”.',
+    );
+    await page.getByLabel(/Delete it and the customer data/).check();
+    await page.getByRole('button', { name: 'Delete the job sheet' }).click();
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('nothing was deleted'));
+    expect((await getOrderList(member.id)).lines).toEqual([]);
+
+    await Promise.all([page.waitForURL(/\?job=saved$/), context.setOffline(false)]);
+    expect(await knex('job_sheets').where({ id: job.value }).first('findings')).toEqual({ findings: 'C7 bulged' });
+    const lines = (await getOrderList(member.id)).lines;
+    expect(lines).toHaveLength(1);
+    expect(lines[0]!.label).toContain('220 µF');
     await context.close();
   });
 
