@@ -6,6 +6,8 @@ import tailwind from '@astrojs/tailwind';
 import mdx from '@astrojs/mdx';
 import auth from 'auth-astro';
 import { astroCsp } from './src/server/http/security-headers.ts';
+import AstroPWA from '@vite-pwa/astro';
+import * as offline from './src/lib/offline/cache-rules.mjs';
 
 // @astrojs/node treats every request as coming from "localhost" unless the public hosts are listed,
 // which breaks Astro's origin check for real form posts. PUBLIC_ORIGIN names the site's address.
@@ -15,7 +17,7 @@ export default defineConfig({
   output: 'server',
   // Prerendered pages get their Content-Security-Policy as a header too (a <meta> policy cannot hold frame-ancestors).
   adapter: node({ mode: 'standalone', experimentalStaticHeaders: true }),
-  integrations: [react(), tailwind({ applyBaseStyles: false }), mdx(), auth()],
+  integrations: [react(), tailwind({ applyBaseStyles: false }), mdx(), auth(), AstroPWA(pwaOptions())],
   security: {
     // Astro's origin check runs from src/middleware.ts instead (src/server/http/origin-check.ts), so that its 403
     // answers carry the security headers; Astro would run it before any middleware of ours.
@@ -34,3 +36,82 @@ export default defineConfig({
     ssr: { external: ['sharp', 'pg', 'knex', '@node-rs/argon2', 'pg-boss'] },
   },
 });
+
+// The installable web app: manifest and service worker (see DEVELOPERS.md, "At the bench, offline"). With server
+// output the plugin's default would cache no page: pages are cached at run time, network first, by the rules in
+// src/lib/offline/cache-rules.mjs. src/scripts/offline/register.ts registers the worker (no script is injected).
+function pwaOptions() {
+  const { cacheNames, cacheBounds } = offline;
+  return {
+    injectRegister: null,
+    registerType: 'autoUpdate',
+    includeAssets: ['favicon.svg', 'icons/*.png'],
+    manifest: {
+      name: 'Benchlore',
+      short_name: 'Benchlore',
+      description: 'Faults and fixes for tape and disc recorders and players, readable at the bench.',
+      lang: 'en',
+      start_url: '/',
+      scope: '/',
+      display: 'standalone',
+      theme_color: '#0f4c4a',
+      background_color: '#f6f1e7',
+      icons: [
+        { src: '/icons/benchlore-192.png', sizes: '192x192', type: 'image/png' },
+        { src: '/icons/benchlore-512.png', sizes: '512x512', type: 'image/png' },
+        { src: '/icons/benchlore-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+      ],
+    },
+    workbox: {
+      navigateFallback: null,
+      // The offline and kept pages (prerendered) with the styles, fonts and small scripts they need; the rest is
+      // cached as used. The big islands (the editor, charts) are never stored ahead.
+      globPatterns: [
+        'offline/index.html',
+        'kept/index.html',
+        'manifest.webmanifest',
+        '_astro/*.css',
+        '_astro/*-latin-{400,600,700}-*.woff2',
+        '_astro/{BaseLayout,offline,kept}.astro_astro_type_script_*.js',
+        '_astro/{preload-helper,outbox-store,keep,cache-rules,sign-out,bench-view}.*.js',
+      ],
+      cleanupOutdatedCaches: true,
+      clientsClaim: true,
+      skipWaiting: true,
+      runtimeCaching: [
+        { urlPattern: offline.isSignOut, method: 'POST', handler: offline.signOutHandler },
+        {
+          urlPattern: offline.isPrivateNavigation,
+          handler: 'NetworkOnly',
+          options: { precacheFallback: { fallbackURL: '/offline' } },
+        },
+        {
+          urlPattern: offline.isNavigation,
+          handler: 'NetworkFirst',
+          options: {
+            cacheName: cacheNames.pages,
+            networkTimeoutSeconds: 3,
+            expiration: cacheBounds.pages,
+            cacheableResponse: offline.onlyOk,
+            plugins: [offline.keptOrOffline],
+          },
+        },
+        {
+          urlPattern: offline.isPhoto,
+          handler: 'CacheFirst',
+          options: {
+            cacheName: cacheNames.photos,
+            expiration: cacheBounds.photos,
+            cacheableResponse: offline.onlyOk,
+            plugins: [offline.keptOrOffline],
+          },
+        },
+        {
+          urlPattern: offline.isSiteFile,
+          handler: 'CacheFirst',
+          options: { cacheName: cacheNames.assets, expiration: cacheBounds.assets, cacheableResponse: offline.onlyOk },
+        },
+      ],
+    },
+  };
+}

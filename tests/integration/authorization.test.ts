@@ -7,6 +7,7 @@ import { decideRoute, routeAccess, routeMethods, type Access, type RouteMethod }
 import { INTEGRATION_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { createUser, signIn, uniqueClientIp } from '../support/sign-in';
+import { scriptsBesideRegistration } from '../support/scripts';
 
 const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
 const pagesDir = join(process.cwd(), 'src', 'pages');
@@ -274,7 +275,7 @@ describe('navigation by role', () => {
       const html = await res.text();
       for (const pattern of expectations[persona].shows) expect(html, `${persona} sees ${pattern}`).toMatch(pattern);
       for (const pattern of expectations[persona].hides) expect(html, `${persona} does not see ${pattern}`).not.toMatch(pattern);
-      expect(html, persona).not.toMatch(/<script/i);
+      expect(scriptsBesideRegistration(html), persona).toEqual([]);
       const signedIn = persona !== 'anonymous' && persona !== 'suspended';
       if (signedIn) expect(res.headers.get('cache-control'), persona).toBe('private, no-store');
       else if (persona === 'anonymous') expect(res.headers.get('cache-control'), persona).toContain('public');

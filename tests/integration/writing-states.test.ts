@@ -4,7 +4,7 @@ import { testDb } from '../support/db';
 import { INTEGRATION_PORT } from '../support/test-env';
 import { waitForMail } from '../support/mail';
 import { call, completeValues, publishFix, session, someMachineId, type Session } from '../fixtures/writing';
-import { withoutJsonLd } from '../support/scripts';
+import { scriptsBesideRegistration } from '../support/scripts';
 
 const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
 const knex = testDb();
@@ -64,7 +64,7 @@ describe('a new fix from draft to live', () => {
     expect(page.status).toBe(200);
     const html = await page.text();
     expect(html).toContain(values.title);
-    expect(withoutJsonLd(html)).not.toMatch(/<script/i);
+    expect(scriptsBesideRegistration(html)).toEqual([]);
 
     const live = await knex('fixes').where({ slug }).first('id', 'current_revision_id');
     expect(live.current_revision_id).toBe(id);

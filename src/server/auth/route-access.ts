@@ -53,6 +53,10 @@ export const routeAccess: Record<string, RouteRule> = {
   '/robots.txt': { methods: { GET: 'public' }, sharedCache: true },
   '/sitemap.xml': { methods: { GET: 'public' }, sharedCache: true },
   '/sitemaps/[file].xml': { methods: { GET: 'public' }, sharedCache: true },
+
+  // Built once and stored by the service worker: the offline page and the list of fixes kept on this device.
+  '/offline': read,
+  '/kept': read,
   '/api/v1/machines': read,
   '/api/v1/machines/[slug]': read,
   '/api/v1/chassis/[slug]': read,

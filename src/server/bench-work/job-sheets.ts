@@ -46,6 +46,8 @@ export interface JobSheetView extends Omit<JobSheetSummary, 'machine' | 'fixCoun
   labourMinutes: number;
   outcome: string;
   createdAt: Date;
+  /** Counted up by every change to the sheet; a write naming an older one is refused as a conflict. */
+  version: number;
   fixes: AppliedFix[];
 }
 
@@ -155,6 +157,7 @@ export async function getJobSheet(ownerId: number, id: number): Promise<JobSheet
     bookedInAt: row.booked_in_at,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
+    version: row.version,
     fixes: fixes.map((f) => ({
       slug: f.slug,
       title: f.title,
@@ -204,10 +207,21 @@ export async function createJobSheet(ownerId: number, data: JobSheetCreate): Pro
   return { ok: true, value: row.id };
 }
 
-export async function updateJobSheet(ownerId: number, id: number, patch: JobSheetPatch): Promise<WriteResult<number>> {
+/**
+ * Writes the fields given. With `expectedVersion`, only if the sheet is still at that version: otherwise a
+ * conflict, so the caller can show both copies (an edit made offline meets a change made on another device).
+ */
+export async function updateJobSheet(
+  ownerId: number,
+  id: number,
+  patch: JobSheetPatch,
+  expectedVersion?: number,
+): Promise<WriteResult<number>> {
   const knex = db();
-  const current = await knex('job_sheets').where({ id, owner_id: ownerId }).first('id', 'customer_ref');
+  const current = await knex('job_sheets').where({ id, owner_id: ownerId }).first('id', 'customer_ref', 'version');
   if (!current) return { ok: false, code: 'not_found', message: 'No job sheet with that number.' };
+  const stale = { ok: false as const, code: 'conflict' as const, message: 'This job sheet was changed on another device since your copy.' };
+  if (expectedVersion !== undefined && current.version !== expectedVersion) return stale;
   const changes: Record<string, unknown> = { updated_at: knex.fn.now() };
   if (patch.machine !== undefined) {
     const machineId = await machineIdOf(knex, patch.machine);
@@ -227,7 +241,10 @@ export async function updateJobSheet(ownerId: number, id: number, patch: JobShee
     if (patch[key] !== undefined) changes[column] = patch[key];
   }
   if (patch.partsUsed !== undefined) changes.parts_used = partsJson(patch.partsUsed, patch.customerRef ?? current.customer_ref);
-  await knex('job_sheets').where({ id, owner_id: ownerId }).update(changes);
+  const query = knex('job_sheets').where({ id, owner_id: ownerId });
+  // The version is checked again in the write itself, so a change landing between the read and here still counts.
+  if (expectedVersion !== undefined) query.andWhere({ version: expectedVersion });
+  if ((await query.update(changes)) === 0) return stale;
   return { ok: true, value: id };
 }
 

@@ -1,0 +1,39 @@
+// On every page: registers the service worker, marks a page served from this device's saved copies, and on
+// sign-out empties what holds personal data. Everything else loads only when used (a click, a sign-out).
+import { savedCopyLine } from '@/lib/offline/saved-copy';
+
+if ('serviceWorker' in navigator) {
+  void navigator.serviceWorker.register('/sw.js', { scope: '/' }).catch(() => {
+    // No worker (a private window, an old browser): the site works as before, only not offline.
+  });
+}
+
+/** Offline, the page came from a cache: say so, with the date the saved copy was made. */
+async function markSavedCopy(): Promise<void> {
+  // The offline page itself says so in its heading.
+  if (navigator.onLine || !('caches' in window) || document.querySelector('[data-offline-page]')) return;
+  const saved = await caches.match(location.href);
+  const stamp = saved?.headers.get('date');
+  const line = document.createElement('p');
+  line.setAttribute('role', 'status');
+  line.className = 'saved-copy';
+  line.textContent = savedCopyLine(stamp ? new Date(stamp) : null);
+  document.getElementById('main')?.prepend(line);
+}
+void markSavedCopy();
+
+// Controls that need this script show once it runs; "Keep for the bench" and "Bench view" load their code on the first click.
+for (const hidden of document.querySelectorAll<HTMLElement>('[data-needs-script]')) hidden.hidden = false;
+document.addEventListener('click', (event) => {
+  const target = event.target as Element | null;
+  const keep = target?.closest<HTMLButtonElement>('button[data-keep-fix]');
+  if (keep) void import('./keep').then(({ keepFix }) => keepFix(keep));
+  else if (target?.closest('button[data-bench-view]')) void import('./bench-view').then(({ openBenchView }) => openBenchView());
+});
+
+document.addEventListener('submit', (event) => {
+  const form = event.target as HTMLFormElement;
+  if (form.dataset.signedOut === 'yes' || new URL(form.action, location.href).pathname !== '/account/sign-out') return;
+  event.preventDefault();
+  void import('./sign-out').then(({ signOut }) => signOut(form));
+});
