@@ -114,8 +114,11 @@ describe('the account Action', () => {
     expect(messageBeside(refused.doc, '#newPassword')).toMatch(/at least 10 characters/);
   });
 
-  it('answers a post that names no Action with 405, and a signed-out call to the Action with a refusal', async () => {
-    expect((await post('/account', { intent: 'profile', name: 'Ada' }, member.cookie)).status).toBe(405);
+  it('answers a post that names no Action with 400 and changes nothing, and refuses a signed-out call to the Action', async () => {
+    const unnamed = await post('/account', { intent: 'profile', name: 'Ada', shopName: '' }, member.cookie);
+    expectRefusedInPlace(unnamed, 400);
+    expect(unnamed.html).toContain('please send the form from this page');
+    expect((await knex('users').where({ id: member.id }).first('name')).name).not.toBe('Ada');
     const rpc = await postForm(base, '/_actions/account', { intent: 'profile', name: 'Ada' }, { ip: uniqueClientIp() });
     const body = await rpc.text();
     expect(body).toMatch(/signed out/);

@@ -23,7 +23,7 @@ describe('the reason for a suspension', () => {
     const member = await createUser(knex, { tag: 'reason-mail' });
     const answer = await postForm(
       base,
-      '/admin/users',
+      '/admin/users?_action=adminUser',
       { intent: 'suspend', userId: String(member.id), reason },
       { cookie: moderatorCookie, ip: uniqueClientIp() },
     );
@@ -63,7 +63,7 @@ describe('the reason for a suspension', () => {
     const member = await createUser(knex, { tag: 'reason-short' });
     const refused = await postForm(
       base,
-      `/admin/users?q=${encodeURIComponent(member.email)}`,
+      `/admin/users?_action=adminUser&q=${encodeURIComponent(member.email)}`,
       { intent: 'suspend', userId: String(member.id), reason: 'no', q: member.email },
       { cookie: moderatorCookie, ip: uniqueClientIp() },
     );

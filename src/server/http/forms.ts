@@ -106,7 +106,7 @@ export interface ActionAnswer {
 /**
  * A page's next step after its form Actions ran: the 303 to a saved form's next page, the form to show again
  * (its status and Retry-After set on the page's response), or nothing on a GET. A POST that named no Action of
- * this page is answered 405: the page's forms all post to an Action.
+ * this page changes nothing and is answered 400 on the page: its forms all post to an Action.
  */
 export function formAnswer(
   answer: ActionAnswer | undefined,
@@ -114,7 +114,9 @@ export function formAnswer(
 ): { response: Response } | { shown: ShownForm | undefined } {
   if (!answer) {
     if (page.request.method !== 'POST') return { shown: undefined };
-    return { response: new Response(null, { status: 405, headers: { Allow: 'GET, HEAD' } }) };
+    const shown: ShownForm = { status: 400, fields: {}, values: {}, message: 'Nothing was saved: please send the form from this page.' };
+    applyShown(page.response, shown);
+    return { shown };
   }
   if (answer.error !== undefined) {
     const status = (answer.error as { status?: unknown }).status;
