@@ -130,6 +130,13 @@ function checkAnswer(status: number, contentType: string, text: string): string 
   return undefined;
 }
 
+const totals = { cases: 0, refused: 0, comparedRefused: 0, cut: 0, retried: 0 };
+
+function staleSocket(error: unknown): boolean {
+  const code = (error as { cause?: { code?: string } }).cause?.code;
+  return code === 'UND_ERR_SOCKET' || code === 'ECONNRESET';
+}
+
 async function send(method: string, path: string, role: Role, fuzz: FuzzCase): Promise<Outcome> {
   const headers: Record<string, string> = { origin: base, accept: 'application/json', 'x-forwarded-for': uniqueClientIp() };
   const cookie = cookies[role];
@@ -145,8 +152,18 @@ async function send(method: string, path: string, role: Role, fuzz: FuzzCase): P
     }
   }
   const query = fuzz.query.toString();
+  const url = `${base}${path}${query ? `?${query}` : ''}`;
   try {
-    const res = await fetch(`${base}${path}${query ? `?${query}` : ''}`, { method, headers, body, redirect: 'manual' });
+    let res: Response;
+    try {
+      res = await fetch(url, { method, headers, body, redirect: 'manual' });
+    } catch (error) {
+      // A pooled connection the server closed while idle (its keep-alive timeout passes while samples are made on a
+      // loaded machine) fails before any byte is sent: send once more on a fresh one. A server that is down fails again.
+      if (!staleSocket(error)) throw error;
+      totals.retried++;
+      res = await fetch(url, { method, headers, body, redirect: 'manual' });
+    }
     const text = await res.text();
     const problem = checkAnswer(res.status, res.headers.get('content-type') ?? '', text);
     return { status: res.status, problem: problem && `${method} ${path} as ${role} (${fuzz.mutation}): ${problem}` };
@@ -154,7 +171,11 @@ async function send(method: string, path: string, role: Role, fuzz: FuzzCase): P
     // The body reader cuts the connection once a body runs past eight times its cap (bodyLimits in http/body.ts), by
     // design: nothing larger is read. Any other dropped connection is a failure.
     if ((body?.length ?? 0) > cutOffBytes) return { status: 0, cut: true };
-    return { status: 0, problem: `${method} ${path} as ${role} (${fuzz.mutation}): no answer (${String(error)})` };
+    const cause = (error as { cause?: { code?: string; message?: string } }).cause;
+    return {
+      status: 0,
+      problem: `${method} ${path} as ${role} (${fuzz.mutation}): no answer (${String(error)}: ${cause?.code ?? ''} ${cause?.message ?? ''})`,
+    };
   }
 }
 
@@ -171,8 +192,6 @@ async function inParallel<T, R>(items: T[], limit: number, work: (item: T) => Pr
   );
   return results;
 }
-
-const totals = { cases: 0, refused: 0, comparedRefused: 0, cut: 0 };
 
 // Slow: about 8 minutes for 37,000 cases on a shared two-core machine (FUZZ_CASES=200 for a quick run).
 describe('every JSON endpoint, fuzzed from its own schemas (slow)', () => {
@@ -227,7 +246,7 @@ describe('every JSON endpoint, fuzzed from its own schemas (slow)', () => {
       }
     }
     console.info(
-      `fuzzed ${endpoints.length} endpoints: ${totals.cases} cases, ${totals.refused} refused, ${totals.comparedRefused} refused cases checked for changes, ${totals.cut} oversized bodies cut off, in ${Math.round((Date.now() - started) / 1000)} s (seed ${seed})`,
+      `fuzzed ${endpoints.length} endpoints: ${totals.cases} cases, ${totals.refused} refused, ${totals.comparedRefused} refused cases checked for changes, ${totals.cut} oversized bodies cut off, ${totals.retried} sent again after a stale connection, in ${Math.round((Date.now() - started) / 1000)} s (seed ${seed})`,
     );
     expect(problems, problems.join('\n')).toEqual([]);
     expect(totals.cases).toBeGreaterThanOrEqual(casesPerEndpoint * endpoints.length * 0.9);
