@@ -6,6 +6,7 @@
      and plain node:http serving the same bytes. autocannon, 50 connections, a warm-up then --seconds each.
   2. Photos: one 12-megapixel JPEG through the upload API: answered, renditions ready, server peak RSS.
   3. Search: scripts/bench-search.ts (10,000 and 100,000 synthetic fixes beside a naive ILIKE scan).
+  4. News: one proofing fanned out to 10,000 followers and their 10,000 weekly digests rendered (scripts/bench/notifications.ts).
   Usage: npm run bench [-- --only pages,photos,search --seconds 10 --connections 50 --sizes 10000,100000]
   The machine matters: the figures are for comparing side by side in one run, not absolute.
 */
@@ -16,7 +17,7 @@ import { buildIfStale, migrateAndSeed, useOwnDatabase } from './lib/prepare.ts';
 
 const { values } = parseArgs({
   options: {
-    only: { type: 'string', default: 'pages,photos,search' },
+    only: { type: 'string', default: 'pages,photos,search,news' },
     seconds: { type: 'string', default: '10' },
     connections: { type: 'string', default: '50' },
     sizes: { type: 'string' },
@@ -73,6 +74,11 @@ if (only.has('pages') || only.has('photos')) {
     await server.stop();
     await closeDb();
   }
+}
+
+if (only.has('news')) {
+  const res = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench/notifications.ts'], { stdio: 'inherit' });
+  if (res.status !== 0) process.exitCode = res.status ?? 1;
 }
 
 if (only.has('search')) {

@@ -7,6 +7,7 @@ import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
 import { startBackgroundWork } from '@/server/core/background';
+import { unreadCount } from '@/server/notifications/events';
 
 /** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
 function editable(response: Response): Response {
@@ -61,6 +62,14 @@ const privateWhenSignedIn = defineMiddleware(async (context, next) => {
   return response;
 });
 
+/** The header's unread count, for signed-in page views only (API calls and posts skip the query). */
+const news = defineMiddleware(async (context, next) => {
+  const user = context.locals.user;
+  if (user && context.request.method === 'GET' && !context.url.pathname.startsWith('/api/'))
+    context.locals.unreadNews = await unreadCount(user.id);
+  return next();
+});
+
 const guard = defineMiddleware((context, next) => guardRequest(context, context.locals.user) ?? next());
 
 /** Photo work and search sync start with the server's first request of any kind, not with the first that needs them. */
@@ -70,4 +79,4 @@ const background = defineMiddleware((context, next) => {
   return next();
 });
 
-export const onRequest = sequence(securityHeaders, errorBoundary, background, identify, privateWhenSignedIn, guard);
+export const onRequest = sequence(securityHeaders, errorBoundary, background, identify, privateWhenSignedIn, guard, news);

@@ -3,6 +3,7 @@
 import { defineAction } from 'astro:actions';
 import { submitBenchReportForm } from './bench-report';
 import { submitReportFixForm } from './report-fix';
+import { submitFollowForm, submitMarkReadForm, submitNotificationSettingsForm } from './following';
 
 // No `input` schema: Astro 5's form reader unwraps schemas with zod 3 classes, and this project's zod 4
 // schemas (resolved in the server bundle) make it throw. Each handler takes the FormData and checks it with
@@ -10,4 +11,7 @@ import { submitReportFixForm } from './report-fix';
 export const server = {
   benchReport: defineAction({ accept: 'form', handler: submitBenchReportForm }),
   reportFix: defineAction({ accept: 'form', handler: submitReportFixForm }),
+  follow: defineAction({ accept: 'form', handler: submitFollowForm }),
+  markNotificationsRead: defineAction({ accept: 'form', handler: submitMarkReadForm }),
+  notificationSettings: defineAction({ accept: 'form', handler: submitNotificationSettingsForm }),
 };

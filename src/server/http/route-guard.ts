@@ -52,10 +52,30 @@ function allowed(access: Access, user: SessionUser | null): boolean {
   return can(user, access);
 }
 
+const formTypes = ['application/x-www-form-urlencoded', 'multipart/form-data', 'text/plain'];
+const safeMethods = ['GET', 'HEAD', 'OPTIONS'];
+
+/**
+ * Cross-site request forgery: a form post (or a post with no content type) must come from our own origin.
+ * The same rule as Astro's `security.checkOrigin`, which is off so that this one can let the few routes
+ * that carry their own proof (see `crossSitePosts`) take posts from mail programs.
+ */
+export function crossSiteFormPost(request: Request, url: URL): boolean {
+  if (safeMethods.includes(request.method.toUpperCase())) return false;
+  if (request.headers.get('origin') === url.origin) return false;
+  const type = request.headers.get('content-type');
+  if (type === null) return true;
+  return formTypes.some((form) => type.toLowerCase().includes(form));
+}
+
 /** A response when the request may not go on; null when it may. */
 export function guardRequest(context: GuardContext, user: SessionUser | null): Response | null {
   const decision = decideRoute(context.routePattern, context.request.method);
   const api = isApi(context.routePattern);
+  if (crossSiteFormPost(context.request, context.url) && !(decision.kind === 'access' && decision.rule.crossSitePosts)) {
+    const message = 'Forms are only taken from this site: open the page here and send the form again.';
+    return api ? errorJson('forbidden', message) : html(403, `<!doctype html><title>Refused · Benchlore</title><p>${message}</p>`);
+  }
   if (decision.kind === 'unlisted') {
     logger().error({ route: context.routePattern }, 'route missing from src/server/auth/route-access.ts: refused');
     const message = `The route ${context.routePattern} has no entry in src/server/auth/route-access.ts.`;
