@@ -6,6 +6,7 @@
      and plain node:http serving the same bytes. autocannon, 50 connections, a warm-up then --seconds each.
   2. Photos: one 12-megapixel JPEG through the upload API: answered, renditions ready, server peak RSS.
   3. Search: scripts/bench-search.ts (10,000 and 100,000 synthetic fixes beside a naive ILIKE scan).
+  4. News: one proofing fanned out to 10,000 followers and their 10,000 weekly digests rendered (scripts/bench/notifications.ts).
   Usage: npm run bench [-- --only pages,photos,search --seconds 10 --connections 50 --sizes 10000,100000]
          [--port 4480] (the app; the floors take the next two ports; another port also means a database of its own)
          [--cpu-prof DIR] (runs the app under `node --cpu-prof`, writing its V8 profile into DIR when it stops)
@@ -18,7 +19,7 @@ import { buildIfStale, migrateAndSeed, useOwnDatabase } from './lib/prepare.ts';
 
 const { values } = parseArgs({
   options: {
-    only: { type: 'string', default: 'pages,photos,search' },
+    only: { type: 'string', default: 'pages,photos,search,news' },
     seconds: { type: 'string', default: '10' },
     connections: { type: 'string', default: '50' },
     sizes: { type: 'string' },
@@ -82,6 +83,11 @@ if (only.has('pages') || only.has('photos')) {
     await server.stop();
     await closeDb();
   }
+}
+
+if (only.has('news')) {
+  const res = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench/notifications.ts'], { stdio: 'inherit' });
+  if (res.status !== 0) process.exitCode = res.status ?? 1;
 }
 
 if (only.has('search')) {

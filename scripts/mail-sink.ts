@@ -33,6 +33,10 @@ const server = new SMTPServer({
           text: parsed.text ?? '',
           html: typeof parsed.html === 'string' ? parsed.html : '',
           date: (parsed.date ?? new Date()).toISOString(),
+          // The list headers as sent (e.g. one-click unsubscribe), so tests can follow them as a mail program would.
+          headers: Object.fromEntries(
+            parsed.headerLines.filter((h) => h.key.startsWith('list-')).map((h) => [h.key, h.line.slice(h.line.indexOf(':') + 1).trim()]),
+          ),
         });
         callback();
       })

@@ -6,5 +6,7 @@ declare namespace App {
   interface Locals {
     /** The signed-in, active account (read from the database on this request), or null. */
     user: import('./lib/permissions').SessionUser | null;
+    /** Unread notifications of the signed-in member, counted for page views; undefined otherwise. */
+    unreadNews?: number;
   }
 }

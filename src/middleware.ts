@@ -11,6 +11,7 @@ import { routeAccess } from '@/server/auth/route-access';
 import { startBackgroundWork } from '@/server/core/background';
 import { answerPublicPage, sharedKeyRead } from '@/server/http/page-cache';
 import { pageKeys } from '@/server/render/page-keys';
+import { unreadCount } from '@/server/notifications/events';
 
 /** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
 function editable(response: Response): Response {
@@ -65,6 +66,14 @@ const privateWhenSignedIn = defineMiddleware(async (context, next) => {
   return response;
 });
 
+/** The header's unread count, for signed-in page views only (API calls and posts skip the query). */
+const news = defineMiddleware(async (context, next) => {
+  const user = context.locals.user;
+  if (user && context.request.method === 'GET' && !context.url.pathname.startsWith('/api/'))
+    context.locals.unreadNews = await unreadCount(user.id);
+  return next();
+});
+
 const guard = defineMiddleware((context, next) => guardRequest(context, context.locals.user) ?? next());
 
 /** Photo work and search sync start with the server's first request of any kind, not with the first that needs them. */
@@ -95,4 +104,4 @@ const publicPages = defineMiddleware(async (context, next) => {
 });
 
 // Astro's origin check runs inside the security headers, so its 403 carries them (security.checkOrigin is off).
-export const onRequest = sequence(securityHeaders, originCheck, errorBoundary, background, identify, privateWhenSignedIn, guard, publicPages);
+export const onRequest = sequence(securityHeaders, originCheck, errorBoundary, background, identify, privateWhenSignedIn, guard, news, publicPages);

@@ -8,6 +8,7 @@ import { submitAdminUserForm, submitWordFamilyForm } from './admin';
 import { submitHandoverNoteForm, submitJobSheetForm, submitNewJobForm, submitWithdrawNoteForm } from './bench-work';
 import { submitDecisionForm, submitFixFlagForm, submitReportResolutionForm } from './proofing';
 import { submitAmendForm, submitDiscardForm, submitWithdrawForm } from './writing';
+import { submitFollowForm, submitMarkReadForm, submitNotificationSettingsForm } from './following';
 
 // No `input` schema: Astro 5's form reader unwraps schemas with zod 3 classes, and this project's zod 4
 // schemas (resolved in the server bundle) make it throw. Each handler takes the FormData and checks it with
@@ -28,4 +29,7 @@ export const server = {
   jobSheet: defineAction({ accept: 'form', handler: submitJobSheetForm }),
   handoverNote: defineAction({ accept: 'form', handler: submitHandoverNoteForm }),
   withdrawNote: defineAction({ accept: 'form', handler: submitWithdrawNoteForm }),
+  follow: defineAction({ accept: 'form', handler: submitFollowForm }),
+  markNotificationsRead: defineAction({ accept: 'form', handler: submitMarkReadForm }),
+  notificationSettings: defineAction({ accept: 'form', handler: submitNotificationSettingsForm }),
 };

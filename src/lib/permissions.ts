@@ -20,6 +20,7 @@ export type Actor = (Pick<SessionUser, 'id' | 'role' | 'verified'> & { suspended
 export const actions = [
   'read',
   'manage_account',
+  'follow',
   'view_dev_mail',
   'read_unproofed_revision',
   'write_fix',
@@ -63,6 +64,8 @@ const opensAt: Record<Action, Level> = {
   // their confirmation mail before they can sign in.
   view_dev_mail: 'anyone',
   manage_account: 'account',
+  // Following and the notification list are personal and in-app; mail goes only to confirmed addresses.
+  follow: 'account',
   // Checked per revision: its author, or a moderator (see resourceAllows).
   read_unproofed_revision: 'account',
   write_fix: 'verified',

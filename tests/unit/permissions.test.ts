@@ -19,6 +19,7 @@ const expected: Record<Action, Who[]> = {
   read: ['anonymous', 'unverified', 'suspended', 'member', 'editor', 'moderator', 'admin'],
   view_dev_mail: ['anonymous', 'unverified', 'suspended', 'member', 'editor', 'moderator', 'admin'],
   manage_account: ['unverified', 'member', 'editor', 'moderator', 'admin'],
+  follow: ['unverified', 'member', 'editor', 'moderator', 'admin'],
   read_unproofed_revision: ['unverified', 'member', 'editor', 'moderator', 'admin'],
   write_fix: ['member', 'editor', 'moderator', 'admin'],
   report_fix: ['member', 'editor', 'moderator', 'admin'],

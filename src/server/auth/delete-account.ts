@@ -21,6 +21,9 @@ export async function anonymiseAccount(userId: number, actorId: number | null, k
     if (!before) return false;
     // Unused sign-in links for the old address.
     await trx('verification_token').where({ identifier: before.email }).delete();
+    // What they followed and the news kept for them are theirs alone: gone with the account.
+    for (const table of ['follows', 'notification_events', 'notification_settings', 'notification_digests'])
+      await trx(table).where({ user_id: userId }).delete();
     const updated = await trx('users')
       .where({ id: userId })
       .whereNull('deleted_at')

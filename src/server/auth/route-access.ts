@@ -21,6 +21,11 @@ export interface RouteRule {
   sharedCache?: true;
   /** Account pages: never stored by any cache, signed in or not. */
   noStore?: true;
+  /**
+   * Takes form posts from other sites. Only for a route whose own token is the authority (one-click
+   * unsubscribe, RFC 8058: mail programs post from their own servers); every other route refuses them.
+   */
+  crossSitePosts?: true;
 }
 
 const read: RouteRule = { methods: { GET: 'public' } };
@@ -104,6 +109,11 @@ export const routeAccess: Record<string, RouteRule> = {
   // The link mailed to a new address: the token is the authority, signed in or not.
   '/account/email': accountForm,
   '/api/v1/account': { methods: { GET: 'manage_account', PATCH: 'manage_account' }, noStore: true },
+  // Following and news: personal; the unsubscribe link's signed token is its own authority (no sign-in).
+  '/account/notifications': { methods: { GET: 'follow', POST: 'follow' }, noStore: true },
+  '/following': { methods: { GET: 'follow', POST: 'follow' }, noStore: true },
+  '/notifications': { methods: { GET: 'follow', POST: 'follow' }, noStore: true },
+  '/unsubscribe/[token]': { methods: { GET: 'public', POST: 'public' }, noStore: true, crossSitePosts: true },
 
   // Members and roles: moderators suspend; only admins change roles (checked again per form).
   '/admin/users': { methods: { GET: 'suspend_user', POST: 'suspend_user' }, noStore: true },

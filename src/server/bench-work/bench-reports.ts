@@ -1,5 +1,6 @@
 // Bench reports: one per member per fix per machine, on the revision followed; saving refreshes the score.
 import type { Knex } from 'knex';
+import { recordBenchReportNews } from '../notifications/news';
 import { db } from '../core/db';
 import type { Failure } from '../http/result';
 import { benchScoresFor, emptyBenchScore, type BenchScoreView } from './bench-scores';
@@ -120,6 +121,8 @@ export async function saveBenchReport(memberId: number, data: BenchReportData): 
     .merge(values)
     .returning(['id', knex.raw('(xmax = 0) AS inserted')]);
   await refreshBenchScoreColumns(knex, [fix.id]);
+  // The fix's authors hear about reports from others (their own are shown, not counted, and not news).
+  if (fix.createdBy !== memberId) await recordBenchReportNews(row.id, knex);
   const scores = await benchScoresFor([fix.id]);
   return {
     ok: true,

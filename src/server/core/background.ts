@@ -1,6 +1,9 @@
 // Starts the app's own background work once per process: photo renditions and clean-up, and (with Meilisearch) search sync.
 import { ensurePhotoWorker } from '../photos/worker';
 import { ensureSearchSyncWorker } from '../search/provider';
+import { logger } from './logger';
+import { startNewsWorker } from '../notifications/news';
+import { startDigestTimer } from '../notifications/digest';
 
 let started = false;
 
@@ -13,4 +16,6 @@ export function startBackgroundWork(): void {
   started = true;
   ensurePhotoWorker();
   ensureSearchSyncWorker();
+  startNewsWorker().catch((error: unknown) => logger().error({ err: error }, 'news worker did not start'));
+  startDigestTimer();
 }

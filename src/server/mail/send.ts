@@ -8,6 +8,8 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html: string;
+  /** Extra headers, e.g. List-Unsubscribe on notification mail. */
+  headers?: Record<string, string>;
 }
 
 export async function sendMail(mail: OutgoingMail): Promise<void> {

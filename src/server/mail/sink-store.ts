@@ -13,6 +13,8 @@ export const storedMailSchema = z.object({
   text: z.string(),
   html: z.string(),
   date: z.string(),
+  /** Lower-case header name → value, for the headers the sink keeps (List-*). */
+  headers: z.record(z.string(), z.string()).optional(),
 });
 export type StoredMail = z.infer<typeof storedMailSchema>;
 

@@ -10,8 +10,13 @@ import { notifyAuthorOf } from './mail';
 import { publishRevision } from './publish';
 import { issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { loadRevision, type RevisionRecord } from '../writing/revisions';
+import { queueProofedNews, recordModeratorReply } from '../notifications/news';
 
 type Decision = 'proof' | 'return';
+
+function revisionFacts(record: RevisionRecord): { id: number; fixId: number; authorId: number; title: string; number: number } {
+  return { id: record.id, fixId: record.fixId, authorId: record.authorId, title: record.values.title, number: record.number };
+}
 
 /** Locks the revision and its fix and checks the moderator may decide on it now. */
 async function decidable(
@@ -62,6 +67,8 @@ export async function proofRevision(moderator: Writer, revisionId: number, rawNo
       .where({ id: revisionId })
       .update({ state: 'proofed', proofer_id: moderator.id, proofed_at: trx.fn.now(), proof_note: note.data || null });
     const published = await publishRevision(trx, record.fixId, revisionId);
+    // Followers hear about it from the job queue, and only if this transaction commits.
+    await queueProofedNews(trx, revisionId);
     await writeAudit(trx, {
       actorId: moderator.id,
       action: 'revision.proof',
@@ -81,6 +88,7 @@ export async function proofRevision(moderator: Writer, revisionId: number, rawNo
       note: note.data || null,
       path: `/fixes/${outcome.value.slug}`,
     });
+    if (note.data) await recordModeratorReply(revisionFacts(proofed), 'proofed', note.data, `/fixes/${outcome.value.slug}`);
   }
   return outcome;
 }
@@ -118,6 +126,7 @@ export async function returnRevision(moderator: Writer, revisionId: number, rawN
       note: note.data,
       path: '/write/mine',
     });
+    await recordModeratorReply(revisionFacts(returned), 'returned', note.data, '/write/mine');
   }
   return outcome;
 }
