@@ -8,7 +8,7 @@ import { setFollowing } from '@/server/notifications/follows';
 import { markRead } from '@/server/notifications/events';
 import { saveDeliveries } from '@/server/notifications/settings';
 import { localPathOr } from '@/lib/local-path';
-import { typedFields, type FormActionResult } from '@/lib/schemas/bench-work';
+import { typedFields, type FormActionResult } from '@/lib/form-fields';
 
 type Context = Pick<ActionAPIContext, 'locals'>;
 

@@ -10,7 +10,7 @@ import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { makeMember, PASSWORD } from '../integration/bench-work-support';
 import { createJobSheet } from '@/server/bench-work/job-sheets';
-import { jobSheetCreateSchema } from '@/lib/schemas/bench-work';
+import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
 import { horizontalOverflow } from '../support/overflow';
 import { closeDb } from '@/server/core/db';
 

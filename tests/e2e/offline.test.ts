@@ -10,7 +10,7 @@ import { testDb } from '../support/db';
 import { makeMember, PASSWORD } from '../integration/bench-work-support';
 import { createJobSheet, updateJobSheet } from '@/server/bench-work/job-sheets';
 import { getOrderList } from '@/server/bench-work/order-lists';
-import { jobSheetCreateSchema } from '@/lib/schemas/bench-work';
+import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
 import { signIn } from '../support/sign-in';
 import { closeDb } from '@/server/core/db';
 import { hasRegistration, scriptsBesideRegistration } from '../support/scripts';

@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeDb } from '@/server/core/db';
 import { createHandoverNote } from '@/server/bench-work/handover-notes';
-import { handoverNoteInputSchema } from '@/lib/schemas/bench-work';
+import { handoverNoteInputSchema } from '@/lib/schemas/handover-note';
 import { client } from '../support/http';
 import { testDb } from '../support/db';
 import { INTEGRATION_PORT } from '../support/test-env';

@@ -8,7 +8,7 @@ import { call, completeValues, publishFix, session, type Session } from '../fixt
 import { fanOutProofed } from '@/server/notifications/news';
 import { sendWeeklyDigests } from '@/server/notifications/digest';
 import { createHandoverNote } from '@/server/bench-work/handover-notes';
-import { handoverNoteInputSchema } from '@/lib/schemas/bench-work';
+import { handoverNoteInputSchema } from '@/lib/schemas/handover-note';
 import { weekStart } from '@/lib/notifications/kinds';
 import type { OutgoingMail } from '@/server/mail/send';
 

@@ -7,7 +7,7 @@ import { launchBrowser } from '../support/browser';
 import { testDb } from '../support/db';
 import { createUser, type TestUser } from '../support/sign-in';
 import { createJobSheet } from '@/server/bench-work/job-sheets';
-import { jobSheetCreateSchema } from '@/lib/schemas/bench-work';
+import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
 import { closeDb } from '@/server/core/db';
 import { Journey, PHONE_WIDTH, sees } from './support/journey';
 
