@@ -18,8 +18,9 @@ const cookies: Partial<Record<Persona, string>> = {};
 /** A value for every route parameter, taken from the demo world or made below. */
 const samples: Record<string, string> = {};
 
-/** Routes that are not pages a person opens: JSON endpoints, files, images and the framework's own routes. */
-const notPages = (pattern: string) => /^\/(api|media|_image|_server-islands|_actions)(\/|$)/.test(pattern);
+/** Routes that are not pages a person opens: JSON endpoints, files, images, crawlers' files and the framework's own routes. */
+const notPages = (pattern: string) =>
+  /^\/(api|media|_image|_server-islands|_actions|sitemaps)(\/|$)/.test(pattern) || /^\/(robots\.txt|sitemap\.xml)$/.test(pattern);
 
 /** Where a form opens while another is still open, in HTML as sent (scripts, styles and comments left out). */
 function nestedForms(html: string): string[] {
