@@ -186,6 +186,9 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await browser?.close();
+  // The hostile fix holds words with no break in them; later tests of the same server (the 360 px overflow check of
+  // listing pages) must not meet it, so it is taken down once this file is done.
+  if (slug) await knex('fixes').where({ slug }).update({ deleted_at: new Date() });
   await knex.destroy();
 });
 
