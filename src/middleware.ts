@@ -1,4 +1,4 @@
-// Request pipeline: background work started once, security headers, no 500 page leaking a stack trace, who is asking, the route guard.
+// Request pipeline: security headers, no 500 page leaking a stack trace, who is asking, the route guard.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/http/security-headers';
 import { apiError } from '@/server/http/responses';
@@ -6,7 +6,6 @@ import { logger } from '@/server/core/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
-import { startBackgroundWork } from '@/server/core/background';
 
 /** Some responses (Response.redirect) have read-only headers: copy them before changing anything. */
 function editable(response: Response): Response {
@@ -63,11 +62,4 @@ const privateWhenSignedIn = defineMiddleware(async (context, next) => {
 
 const guard = defineMiddleware((context, next) => guardRequest(context, context.locals.user) ?? next());
 
-/** Photo work and search sync start with the server's first request of any kind, not with the first that needs them. */
-const background = defineMiddleware((context, next) => {
-  // A page prerendered at build time is no server start.
-  if (!context.isPrerendered) startBackgroundWork();
-  return next();
-});
-
-export const onRequest = sequence(securityHeaders, errorBoundary, background, identify, privateWhenSignedIn, guard);
+export const onRequest = sequence(securityHeaders, errorBoundary, identify, privateWhenSignedIn, guard);

@@ -1,16 +1,43 @@
-// Starts the app's own background work once per process: photo renditions and clean-up, and (with Meilisearch) search sync.
-import { ensurePhotoWorker } from '../photos/worker';
+// The app's background work, started once at boot by the server entry (scripts/serve.ts) and stopped on SIGTERM.
+import { startMailOutbox, type MailOutbox } from '../mail/outbox-worker';
+import { startPhotoWorker } from '../photos/worker';
 import { ensureSearchSyncWorker } from '../search/provider';
+import { logger } from './logger';
 
-let started = false;
+export interface BackgroundWork {
+  /** Stops taking new work; work in hand is finished, or after `timeoutMs` returned to its queue. */
+  stop(timeoutMs?: number): Promise<void>;
+}
+
+/** How long to wait before trying again to start a queue worker when PostgreSQL did not answer at boot. */
+const RETRY_START_MS = 3_000;
 
 /**
- * Called by the middleware on every request; only the first does anything. Astro 5's Node adapter loads the
- * app lazily and offers no start-up hook, so the first request of any kind (a health check will do) starts it.
+ * Photo renditions and clean-up, search sync (with Meilisearch) and the mail outbox. A worker that cannot start
+ * because the database is down tries again every few seconds, so the server answers (with 503s) meanwhile.
  */
-export function startBackgroundWork(): void {
-  if (started) return;
-  started = true;
-  ensurePhotoWorker();
-  ensureSearchSyncWorker();
+export function startBackgroundWork(): BackgroundWork {
+  const photos = startPhotoWorker();
+  let stopping = false;
+  let retry: NodeJS.Timeout | undefined;
+  let outbox: Promise<MailOutbox | null> = Promise.resolve(null);
+
+  const startOutbox = (): void => {
+    outbox = startMailOutbox().catch((error: unknown) => {
+      if (stopping) return null;
+      logger().warn({ err: error }, 'mail outbox did not start; trying again shortly');
+      retry = setTimeout(startOutbox, RETRY_START_MS);
+      return null;
+    });
+  };
+  startOutbox();
+  const search = ensureSearchSyncWorker();
+
+  return {
+    async stop(timeoutMs = 10_000) {
+      stopping = true;
+      clearTimeout(retry);
+      await Promise.all([photos.stop(), outbox.then((worker) => worker?.stop(timeoutMs)), search.then((worker) => worker?.stop())]);
+    },
+  };
 }
