@@ -13,6 +13,8 @@ const STOP_GRACE_MS = Number(process.env.BENCHLORE_STOP_GRACE_MS ?? 10_000);
 // The adapter's standalone build starts a server of its own when loaded unless told not to (its preview server does the
 // same); we keep its handler, which serves the built static files as well as the pages.
 process.env.ASTRO_NODE_AUTOSTART = 'disabled';
+// A request waits at most this long for PostgreSQL, then is answered 503 (src/server/core/db.ts), never left hanging.
+process.env.BENCHLORE_DB_WAIT_MS ??= '1500';
 const entry = pathToFileURL(resolve(process.env.BENCHLORE_DIST ?? 'dist', 'server', 'entry.mjs')).href;
 const { handler } = (await import(entry)) as { handler: RequestListener };
 

@@ -1,7 +1,9 @@
-// Request pipeline: security headers, no 500 page leaking a stack trace, who is asking, the route guard.
+// Request pipeline: security headers, no 500 page leaking a stack trace (a 503 while the database is away), who is asking, the route guard.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/http/security-headers';
 import { apiError } from '@/server/http/responses';
+import { unavailableAnswer } from '@/server/http/unavailable';
+import { databaseUnavailable } from '@/server/core/db-errors';
 import { logger } from '@/server/core/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/http/route-guard';
@@ -31,6 +33,10 @@ const errorBoundary = defineMiddleware(async (context, next) => {
   try {
     return await next();
   } catch (error) {
+    if (databaseUnavailable(error)) {
+      logger().warn({ reason: error instanceof Error ? error.message : String(error), path: context.url.pathname }, 'database unavailable');
+      return unavailableAnswer(context.url.pathname);
+    }
     logger().error({ err: error, path: context.url.pathname }, 'unhandled error');
     if (context.url.pathname.startsWith('/api/'))
       return apiError('internal', 'Something went wrong on our side. Nothing you sent was lost; please try again.');

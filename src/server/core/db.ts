@@ -4,8 +4,21 @@ import knexConfig from '../../../knexfile.js';
 
 let instance: Knex | undefined;
 
+/**
+ * The server entry sets BENCHLORE_DB_WAIT_MS: how long a request may wait for PostgreSQL (a pooled connection, a new
+ * one, or a query's answer) before it fails and is answered 503. Scripts leave it unset and wait as long as it takes.
+ */
+export function knexSettings(waitMs = Number(process.env.BENCHLORE_DB_WAIT_MS ?? 0)): Knex.Config {
+  if (!(waitMs > 0)) return knexConfig;
+  return {
+    ...knexConfig,
+    acquireConnectionTimeout: waitMs,
+    connection: { connectionString: knexConfig.connection as string, connectionTimeoutMillis: waitMs, query_timeout: waitMs },
+  };
+}
+
 export function db(): Knex {
-  instance ??= knexFactory(knexConfig);
+  instance ??= knexFactory(knexSettings());
   return instance;
 }
 
