@@ -7,6 +7,8 @@
   2. Photos: one 12-megapixel JPEG through the upload API: answered, renditions ready, server peak RSS.
   3. Search: scripts/bench-search.ts (10,000 and 100,000 synthetic fixes beside a naive ILIKE scan).
   Usage: npm run bench [-- --only pages,photos,search --seconds 10 --connections 50 --sizes 10000,100000]
+  `npm run bench -- --load` runs only the mixed load benchmark instead (scripts/bench/mixed-load.ts; 100 connections,
+  60 s unless --connections/--seconds say otherwise).
   The machine matters: the figures are for comparing side by side in one run, not absolute.
 */
 import { spawnSync } from 'node:child_process';
@@ -21,8 +23,20 @@ const { values } = parseArgs({
     connections: { type: 'string', default: '50' },
     sizes: { type: 'string' },
     rounds: { type: 'string' },
+    load: { type: 'boolean', default: false },
   },
 });
+if (values.load) {
+  const { benchMixedLoad } = await import('./bench/mixed-load.ts');
+  const argv = process.argv.slice(2).join(' ');
+  const load = await benchMixedLoad({
+    connections: argv.includes('--connections') ? Number(values.connections) : 100,
+    seconds: argv.includes('--seconds') ? Number(values.seconds) : 60,
+    port: 4485,
+  });
+  console.log(load);
+  process.exit(0);
+}
 const only = new Set(values.only.split(','));
 const seconds = Number(values.seconds);
 const connections = Number(values.connections);
