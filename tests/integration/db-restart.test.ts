@@ -130,6 +130,7 @@ describe('the database going away under load', () => {
     await new Promise((r) => setTimeout(r, 6_000));
     await traffic.stop();
 
+    console.log(app.output().split('\n').filter((l) => l.includes('unhandled error')).slice(0, 3).join('\n').slice(0, 3000));
     expectCleanOutage(traffic.answers, stallAt, backAt);
     const back = recovery(traffic.answers, backAt);
     console.log(
