@@ -111,6 +111,12 @@ describe('the database going away under load', () => {
     await traffic.stop();
 
     expect(traffic.answers.filter((a) => a.startedAt < cutAt && a.status === 200).length).toBeGreaterThan(0);
+    // What the server logged for any answer that was not 200 or 503, so a failure says why.
+    for (const line of app
+      .output()
+      .split('\n')
+      .filter((l) => l.includes('unhandled error')))
+      console.log(line.slice(0, 1500));
     expectCleanOutage(traffic.answers, cutAt, backAt);
     const back = recovery(traffic.answers, backAt);
     console.log(
@@ -130,7 +136,15 @@ describe('the database going away under load', () => {
     await new Promise((r) => setTimeout(r, 6_000));
     await traffic.stop();
 
-    console.log(app.output().split('\n').filter((l) => l.includes('unhandled error')).slice(0, 3).join('\n').slice(0, 3000));
+    console.log(
+      app
+        .output()
+        .split('\n')
+        .filter((l) => l.includes('unhandled error'))
+        .slice(0, 3)
+        .join('\n')
+        .slice(0, 3000),
+    );
     expectCleanOutage(traffic.answers, stallAt, backAt);
     const back = recovery(traffic.answers, backAt);
     console.log(

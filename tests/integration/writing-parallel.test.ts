@@ -31,7 +31,7 @@ describe('twenty writers on one base revision', () => {
         }),
       ),
     );
-    for (const d of drafts) expect(d.body.revision.baseRevisionId).toBe(r1);
+    for (const d of drafts) expect(d.body.revision?.baseRevisionId, `${d.status} ${JSON.stringify(d.body).slice(0, 300)}`).toBe(r1);
     const ids: number[] = drafts.map((d) => d.body.revision.id);
 
     const submitted = await Promise.all(
@@ -45,6 +45,7 @@ describe('twenty writers on one base revision', () => {
     );
     const accepted = proofs.filter((p) => p.status === 200);
     const refused = proofs.filter((p) => p.status === 409);
+    expect(proofs.map((p) => p.status).sort()).toEqual([200, ...Array(WRITERS - 1).fill(409)]);
     expect(accepted).toHaveLength(1);
     expect(refused).toHaveLength(WRITERS - 1);
     const liveId = ids[proofs.findIndex((p) => p.status === 200)]!;
