@@ -10,6 +10,8 @@
   Usage: npm run bench [-- --only pages,photos,search --seconds 10 --connections 50 --sizes 10000,100000]
          [--port 4480] (the app; the floors take the next two ports; another port also means a database of its own)
          [--cpu-prof DIR] (runs the app under `node --cpu-prof`, writing its V8 profile into DIR when it stops)
+  `npm run bench -- --load` runs only the mixed load benchmark instead (scripts/bench/mixed-load.ts; 100 connections,
+  60 s unless --connections/--seconds say otherwise).
   The machine matters: the figures are for comparing side by side in one run, not absolute.
 */
 import { spawnSync } from 'node:child_process';
@@ -26,8 +28,20 @@ const { values } = parseArgs({
     rounds: { type: 'string' },
     port: { type: 'string', default: '4480' },
     'cpu-prof': { type: 'string' },
+    load: { type: 'boolean', default: false },
   },
 });
+if (values.load) {
+  const { benchMixedLoad } = await import('./bench/mixed-load.ts');
+  const argv = process.argv.slice(2).join(' ');
+  const load = await benchMixedLoad({
+    connections: argv.includes('--connections') ? Number(values.connections) : 100,
+    seconds: argv.includes('--seconds') ? Number(values.seconds) : 60,
+    port: 4485,
+  });
+  console.log(load);
+  process.exit(0);
+}
 const only = new Set(values.only.split(','));
 const seconds = Number(values.seconds);
 const connections = Number(values.connections);

@@ -1,4 +1,4 @@
-// `npm start`: local PostgreSQL, migrations, the demo world, a build when sources changed, then the server.
+// `npm start`: local PostgreSQL, migrations, the demo world, a build when sources changed, then the server (scripts/serve.ts).
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { randomBytes } from 'node:crypto';
@@ -21,7 +21,10 @@ const sink = config.SMTP_URL ? null : await startMailSink({ port: config.SMTP_SI
 const port = process.env.PORT ?? '4321';
 const host = process.env.HOST ?? '127.0.0.1';
 console.log(`\nBenchlore is starting on http://${host}:${port}  (Ctrl+C stops it; \`npm run db -- stop\` stops PostgreSQL)\n`);
-const server = spawn(process.execPath, ['dist/server/entry.mjs'], { stdio: 'inherit', env: { ...env, HOST: host, PORT: port } });
+const server = spawn(process.execPath, ['--import', 'tsx', 'scripts/serve.ts'], {
+  stdio: 'inherit',
+  env: { ...env, HOST: host, PORT: port },
+});
 for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => server.kill(signal));
 server.on('exit', (code) => {
   void (sink ? sink.stop() : Promise.resolve()).finally(() => process.exit(code ?? 0));

@@ -1,14 +1,15 @@
-// Request pipeline: background work started once, security headers, the origin check, no 500 page leaking a stack trace, who is asking,
-// the route guard, and public pages answered from their validators or kept renders for anonymous readers.
+// Request pipeline: security headers, the origin check, no 500 page leaking a stack trace (a 503 while the database is
+// away), who is asking, the route guard, and public pages answered from their validators or kept renders for anonymous readers.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/http/security-headers';
 import { originCheck } from '@/server/http/origin-check';
 import { apiError } from '@/server/http/responses';
+import { unavailableAnswer } from '@/server/http/unavailable';
+import { databaseUnavailable } from '@/server/core/db-errors';
 import { logger } from '@/server/core/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
-import { startBackgroundWork } from '@/server/core/background';
 import { answerPublicPage, sharedKeyRead } from '@/server/http/page-cache';
 import { pageKeys } from '@/server/render/page-keys';
 import { unreadCount } from '@/server/notifications/events';
@@ -37,6 +38,10 @@ const errorBoundary = defineMiddleware(async (context, next) => {
   try {
     return await next();
   } catch (error) {
+    if (databaseUnavailable(error)) {
+      logger().warn({ reason: error instanceof Error ? error.message : String(error), path: context.url.pathname }, 'database unavailable');
+      return unavailableAnswer(context.url.pathname);
+    }
     logger().error({ err: error, path: context.url.pathname }, 'unhandled error');
     if (context.url.pathname.startsWith('/api/'))
       return apiError('internal', 'Something went wrong on our side. Nothing you sent was lost; please try again.');
@@ -76,13 +81,6 @@ const news = defineMiddleware(async (context, next) => {
 
 const guard = defineMiddleware((context, next) => guardRequest(context, context.locals.user) ?? next());
 
-/** Photo work and search sync start with the server's first request of any kind, not with the first that needs them. */
-const background = defineMiddleware((context, next) => {
-  // A page prerendered at build time is no server start.
-  if (!context.isPrerendered) startBackgroundWork();
-  return next();
-});
-
 /**
  * Anonymous GETs of public pages: If-None-Match answered with 304 before rendering, or the render kept for the page's
  * current key. Anyone signed in (or whose session was just cleared) is rendered for, never served a kept body.
@@ -104,4 +102,4 @@ const publicPages = defineMiddleware(async (context, next) => {
 });
 
 // Astro's origin check runs inside the security headers, so its 403 carries them (security.checkOrigin is off).
-export const onRequest = sequence(securityHeaders, originCheck, errorBoundary, background, identify, privateWhenSignedIn, guard, news, publicPages);
+export const onRequest = sequence(securityHeaders, originCheck, errorBoundary, identify, privateWhenSignedIn, guard, news, publicPages);

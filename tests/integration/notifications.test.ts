@@ -267,7 +267,7 @@ describe('the weekly digest', () => {
     await knex('fixes').where({ id: fixes[2]!.id }).update({ hidden_at: knex.fn.now() });
     try {
       const sent: OutgoingMail[] = [];
-      const figures = await sendWeeklyDigests(past, { knex, send: (m) => sent.push(m), userIds: [reader.id, idle.id] });
+      const figures = await sendWeeklyDigests(past, { knex, send: (m) => void sent.push(m), userIds: [reader.id, idle.id] });
       expect(figures.weekStart).toBe('2026-11-16');
       expect(sent).toHaveLength(1);
       const [digest] = sent;
@@ -277,7 +277,7 @@ describe('the weekly digest', () => {
       expect(digest!.text).not.toContain('Digest fix 2');
       expect(digest!.html).toContain(`/fixes/${fixes[0]!.slug}`);
       expect(digest!.headers?.['List-Unsubscribe-Post']).toBe('List-Unsubscribe=One-Click');
-      const again = await sendWeeklyDigests(past, { knex, send: (m) => sent.push(m), userIds: [reader.id, idle.id] });
+      const again = await sendWeeklyDigests(past, { knex, send: (m) => void sent.push(m), userIds: [reader.id, idle.id] });
       expect(again.members).toBe(0);
       expect(sent).toHaveLength(1);
     } finally {

@@ -6,7 +6,8 @@ import { launchBrowser } from '../support/browser';
 import { testDb } from '../support/db';
 import { createUser, type TestUser } from '../support/sign-in';
 import { phoneJpeg } from '../fixtures/photo-files';
-import { Journey, sees } from './support/journey';
+import { Journey, base, sees } from './support/journey';
+import { call, completeValues, publishFix, session } from '../fixtures/writing';
 
 const knex = testDb();
 let browser: Browser;
@@ -227,4 +228,81 @@ describe('a writer', () => {
 
     await journey.close();
   });
+});
+
+describe('a writer whose fix changed meanwhile', () => {
+  it('adds a caution while someone else’s new part goes live, is shown both changes combined, takes them by keyboard and submits', async () => {
+    const journey = new Journey(browser);
+    const machineId = (await knex('machines').orderBy('id').offset(5).first('id')).id;
+    const [first, other, moderator] = await Promise.all([
+      session(knex, base, 'member', 'journey-merge-first'),
+      session(knex, base, 'member', 'journey-merge-other'),
+      session(knex, base, 'moderator', 'journey-merge-mod'),
+    ]);
+    const published = completeValues(machineId);
+    const { slug } = await publishFix(base, first, moderator, published);
+    const page = await journey.page({ as: writer });
+    const caution = 'The regulator heatsink stays hot for minutes after switching off.';
+
+    await journey.step('opens the live fix for editing and adds a caution about heat', async () => {
+      await journey.goto(page, `/fixes/${slug}/edit`);
+      await page.getByRole('button', { name: 'Add a caution' }).click();
+      await page.locator('#caution-1-kind').selectOption('heat');
+      await page.locator('#caution-1-detail').fill(caution);
+      await page.getByLabel('What you changed, for the proofer').fill('Warn about the heatsink');
+      await page.locator('[data-save-state="saved"]').waitFor({ timeout: 20_000 });
+    });
+
+    await journey.step('meanwhile another writer’s new part goes live', async () => {
+      const draft = await call(base, '/api/v1/drafts', { body: { fixSlug: slug, values: published }, cookie: other.cookie });
+      const values = {
+        ...draft.body.revision.values,
+        parts: [
+          ...draft.body.revision.values.parts,
+          { ref: 'R301', kind: 'resistor', value: '2k2', rating: '0.25W', quantity: 1, notes: 'Bias resistor' },
+        ],
+        editSummary: 'Add the bias resistor',
+      };
+      expect((await call(base, `/api/v1/drafts/${draft.body.revision.id}/submit`, { body: { values }, cookie: other.cookie })).status).toBe(
+        200,
+      );
+      expect((await call(base, `/api/v1/proofing/${draft.body.revision.id}/proof`, { body: {}, cookie: moderator.cookie })).status).toBe(
+        200,
+      );
+    });
+
+    await journey.step('submits and is shown how the new part and the caution fit together, before anything is saved', async () => {
+      await page.getByRole('button', { name: 'Submit for proofing' }).click();
+      const merge = page.locator('[data-merge]');
+      await sees(merge.getByRole('heading', { name: 'Both changes fit together' }));
+      await sees(merge.getByText('R301'));
+      await sees(merge.getByText(caution));
+      if (process.env.INFRA_SHOTS) {
+        await merge.scrollIntoViewIfNeeded();
+        await page.screenshot({ path: '/tmp/infra-merge-1280.png', fullPage: false });
+        await page.setViewportSize({ width: 360, height: 800 });
+        await merge.scrollIntoViewIfNeeded();
+        await page.screenshot({ path: '/tmp/infra-merge-360.png', fullPage: false });
+        await page.setViewportSize({ width: 1280, height: 900 });
+      }
+    });
+
+    await journey.step('combines them with the keyboard, sees the new part in the form, and submits', async () => {
+      await page.getByRole('button', { name: /Combine both and build on r\d+/ }).focus();
+      await page.keyboard.press('Enter');
+      await sees(page.getByText(/Combined: your changes on r\d+ with its own/));
+      await expect(page.getByLabel('Reference of part 2', { exact: true }).inputValue()).resolves.toBe('R301');
+      await page.locator('[data-save-state="saved"]').waitFor({ timeout: 20_000 });
+      await journey.navigates(page, /\/write\/mine\?submitted=\d+/, () =>
+        page.getByRole('button', { name: 'Submit for proofing' }).click(),
+      );
+    });
+    const submitted = await knex('revisions as r')
+      .join('fixes as f', 'f.id', 'r.fix_id')
+      .where({ 'f.slug': slug, 'r.author_id': writer.id, 'r.state': 'submitted' })
+      .first('r.parts', 'r.cautions');
+    expect(JSON.stringify(submitted.parts)).toContain('R301');
+    expect(JSON.stringify(submitted.cautions)).toContain(caution);
+    await journey.close();
+  }, 120_000);
 });

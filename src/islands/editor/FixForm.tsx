@@ -183,6 +183,13 @@ export function FixForm(props: FixEditorProps) {
             yours={{ values: getValues() as FixDraft, machines, chassis, photos }}
             onTakeLive={(section) => takeLive(submission.conflict!, sectionFields[section])}
             onRebase={() => void submission.rebase()}
+            merge={submission.merge}
+            onCombine={() => {
+              takeLive(submission.conflict!, submission.merge?.theirs ?? []);
+              void submission.rebase(
+                `Combined: your changes on r${submission.conflict!.number} with its own. The form shows the result; check it, then submit again.`,
+              );
+            }}
             busy={submission.busy}
           />
         </Suspense>

@@ -3,6 +3,8 @@ import { comparableFrom, diffRevisions, type ComparableRevision } from '@/lib/di
 import type { FixDraft } from '@/lib/schemas/fix-draft';
 import { cautionLabels, difficultyLabels } from '@/lib/schemas/revision-values';
 import type { EditorRevisionData, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
+import { sectionFields } from './form-helpers';
+import type { MergeProposal } from './useSubmission';
 
 export type SectionName =
   'Title' | 'Machines' | 'Symptoms' | 'Cause' | 'Difficulty and time' | 'Cautions' | 'Remedy' | 'Parts' | 'Readings' | 'Photos';
@@ -12,7 +14,56 @@ interface StaleBasePanelProps {
   yours: { values: FixDraft; machines: LabelledRefData[]; chassis: LabelledRefData[]; photos: PhotoRefData[] };
   onTakeLive: (section: SectionName) => void;
   onRebase: () => void;
+  /** The server's field merge, when it found one; `onCombine` takes it into the form and builds on the live revision. */
+  merge: MergeProposal | null;
+  onCombine: () => void;
   busy: boolean;
+}
+
+/** The sections a list of form fields belongs to, in the form's order. */
+function sectionsOf(fields: string[]): SectionName[] {
+  return (Object.keys(sectionFields) as SectionName[]).filter((section) => sectionFields[section].some((f) => fields.includes(f)));
+}
+
+interface CombinePanelProps {
+  liveNumber: number;
+  merge: MergeProposal;
+  liveSide: ComparableRevision;
+  mine: ComparableRevision;
+  onCombine: () => void;
+  busy: boolean;
+}
+
+/** Both edits changed different fields: the combined text, section by section, before anything is saved. */
+function CombinePanel({ liveNumber, merge, liveSide, mine, onCombine, busy }: CombinePanelProps) {
+  const rows = [
+    ...sectionsOf(merge.theirs).map((section) => ({ section, from: `r${liveNumber}, live`, text: sectionText(section, liveSide) })),
+    ...sectionsOf(merge.yours).map((section) => ({ section, from: 'your edit', text: sectionText(section, mine) })),
+  ];
+  return (
+    <div className="mt-3 rounded border border-teal bg-paper p-3" data-merge>
+      <h3 className="font-semibold">Both changes fit together</h3>
+      <p className="mt-1">
+        r{liveNumber} and your edit changed different parts of the fix, so nothing needs choosing. Combined, the fix reads as below in the
+        sections that changed; everything else stays as it was.
+      </p>
+      <dl className="mt-2 grid gap-2">
+        {rows.map((row) => (
+          <div key={`${row.from}-${row.section}`} className="border-t border-rule pt-2">
+            <dt className="font-semibold">
+              {row.section} <span className="font-normal text-ink-soft">(from {row.from})</span>
+            </dt>
+            <dd>
+              <pre className="mt-1 whitespace-pre-wrap font-sans">{row.text || '—'}</pre>
+            </dd>
+          </div>
+        ))}
+      </dl>
+      <button type="button" className="btn mt-3" disabled={busy} onClick={onCombine}>
+        Combine both and build on r{liveNumber}
+      </button>
+    </div>
+  );
 }
 
 /** A section as plain lines a writer can read and copy from. */
@@ -43,7 +94,7 @@ function sectionText(section: SectionName, c: ComparableRevision): string {
   }
 }
 
-export function StaleBasePanel({ live, yours, onTakeLive, onRebase, busy }: StaleBasePanelProps) {
+export function StaleBasePanel({ live, yours, onTakeLive, onRebase, merge, onCombine, busy }: StaleBasePanelProps) {
   const liveSide = comparableFrom({ ...live, values: live.values as FixDraft });
   const mine = comparableFrom(yours);
   const sections = diffRevisions(liveSide, mine).changedSections as SectionName[];
@@ -56,6 +107,9 @@ export function StaleBasePanel({ live, yours, onTakeLive, onRebase, busy }: Stal
         r{live.number} went live after you started. Your text is kept, in this form and on the server. Below are the sections where yours
         and the live one differ: keep yours, or take the live version of a section. Then build on r{live.number} and submit again.
       </p>
+      {merge?.values && (
+        <CombinePanel liveNumber={live.number} merge={merge} liveSide={liveSide} mine={mine} onCombine={onCombine} busy={busy} />
+      )}
       <div className="mt-3 grid gap-3">
         {sections.map((section) => (
           <div key={section} className="rounded border border-rule bg-paper p-3">

@@ -8,6 +8,14 @@ import { flattenErrors, serverFieldItems } from './form-helpers';
 import type { EditorRevisionData, LabelledRefData, PhotoRefData } from '../../lib/writing/editor-data';
 import type { Autosave } from './useAutosave';
 
+/** The server's field merge after a 409 (src/server/writing/merge.ts): which side changed what, and any clash. */
+export interface MergeProposal {
+  yours: (keyof FixDraftInput)[];
+  theirs: (keyof FixDraftInput)[];
+  clashes: (keyof FixDraftInput)[];
+  values: FixDraft | null;
+}
+
 interface SubmissionOptions {
   form: UseFormReturn<FixDraftInput, unknown, FixDraft>;
   autosave: Autosave;
@@ -19,6 +27,7 @@ interface SubmissionOptions {
 export function useSubmission({ form, autosave, doneHref, setSummary }: SubmissionOptions) {
   const [busy, setBusy] = useState(false);
   const [conflict, setConflict] = useState<EditorRevisionData | null>(null);
+  const [merge, setMerge] = useState<MergeProposal | null>(null);
 
   const send = async () => {
     setBusy(true);
@@ -43,6 +52,7 @@ export function useSubmission({ form, autosave, doneHref, setSummary }: Submissi
       const live = failure.extra.live as EditorRevisionData | null | undefined;
       if (failure.status === 409 && live) {
         setConflict(live);
+        setMerge((failure.extra.merge as MergeProposal | null | undefined) ?? null);
         return;
       }
       for (const [path, messages] of Object.entries(failure.fields)) form.setError(path as never, { type: 'server', message: messages[0] });
@@ -66,7 +76,7 @@ export function useSubmission({ form, autosave, doneHref, setSummary }: Submissi
   };
 
   /** Moves the draft onto the live revision, keeping every field as the writer has it now. */
-  const rebase = async () => {
+  const rebase = async (done = `Your draft now builds on r${conflict?.number}. Check it, then submit again.`) => {
     const draftId = autosave.draftIdNow();
     if (!conflict || draftId === null) return;
     setBusy(true);
@@ -76,9 +86,10 @@ export function useSubmission({ form, autosave, doneHref, setSummary }: Submissi
       setSummary({ title: `Could not build on r${conflict.number}: ${result.failure.message}`, items: [] });
       return;
     }
-    setSummary({ title: `Your draft now builds on r${conflict.number}. Check it, then submit again.`, items: [], tone: 'info' });
+    setSummary({ title: done, items: [], tone: 'info' });
     setConflict(null);
+    setMerge(null);
   };
 
-  return { submit, busy, conflict, rebase };
+  return { submit, busy, conflict, merge, rebase };
 }

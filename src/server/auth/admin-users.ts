@@ -7,7 +7,7 @@ import { unsuspendSchema } from '@/lib/schemas/unsuspend';
 import { db } from '../core/db';
 import { writeAudit } from '../core/audit';
 import { fieldErrors } from '../http/responses';
-import { sendInBackground } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { suspendedMail } from '../mail/templates';
 import { siteUrl } from './sign-up';
 import { invalid, redirectTo, refused, type FormOutcome } from './form-outcome';
@@ -111,7 +111,7 @@ async function suspend(actor: SessionUser, fields: Record<string, string>): Prom
   // As the form promises: the member is told why, once the suspension is stored.
   if (told) {
     const member: Subject = told;
-    sendInBackground(suspendedMail(member.email, member.name, reason, siteUrl('/help/house-rules')));
+    await enqueueMail(suspendedMail(member.email, member.name, reason, siteUrl('/help/house-rules')));
   }
   return outcome;
 }

@@ -3,7 +3,7 @@
 import { db } from '../core/db';
 import { writeAudit } from '../core/audit';
 import { consume } from '../http/rate-limit';
-import { sendInBackground } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { addressChangedMail, confirmNewAddressMail } from '../mail/templates';
 import type { SessionUser } from '@/lib/permissions';
 import { tokenSchema } from '@/lib/schemas/account-fields';
@@ -18,7 +18,7 @@ export async function requestEmailChange(user: SessionUser, newEmail: string, cl
   const limit = await consume('email_request', { ip: clientKey, account: user.email });
   if (!limit.ok) return tooMany(limit);
   const token = await issueToken(user.id, 'change_email', { newEmail });
-  sendInBackground(confirmNewAddressMail(newEmail, user.name, siteUrl(`/account/email?token=${token}`)));
+  await enqueueMail(confirmNewAddressMail(newEmail, user.name, siteUrl(`/account/email?token=${token}`)));
   return redirectTo('/account?notice=email-link-sent');
 }
 
@@ -58,6 +58,6 @@ export async function confirmEmailChange(rawToken: string | null): Promise<Email
     return { ok: true as const, email: newEmail, name: user.name as string, oldEmail: user.email as string };
   });
   if (!outcome.ok) return outcome;
-  sendInBackground(addressChangedMail(outcome.oldEmail, outcome.name, outcome.email, siteUrl('/reset')));
+  await enqueueMail(addressChangedMail(outcome.oldEmail, outcome.name, outcome.email, siteUrl('/reset')));
   return { ok: true, email: outcome.email };
 }

@@ -1,6 +1,6 @@
 // Confirming an e-mail address with our own single-use token, and sending a fresh confirmation mail.
 import { consume } from '../http/rate-limit';
-import { sendInBackground } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { confirmAddressMail } from '../mail/templates';
 import type { SessionUser } from '@/lib/permissions';
 import { tokenSchema } from '@/lib/schemas/account-fields';
@@ -25,6 +25,6 @@ export async function resendConfirmation(user: SessionUser, clientKey: string): 
   const limit = await consume('email_request', { ip: clientKey, account: user.email });
   if (!limit.ok) return tooMany(limit);
   const token = await issueToken(user.id, 'verify_email');
-  sendInBackground(confirmAddressMail(user.email, user.name, siteUrl(`/verify?token=${token}`)));
+  await enqueueMail(confirmAddressMail(user.email, user.name, siteUrl(`/verify?token=${token}`)));
   return redirectTo('/account?notice=confirmation-sent');
 }

@@ -4,7 +4,7 @@ import { resetPasswordSchema } from '@/lib/schemas/reset-password';
 import { db } from '../core/db';
 import { fieldErrors } from '../http/responses';
 import { consume } from '../http/rate-limit';
-import { sendInBackground } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { noAccountMail, resetPasswordMail } from '../mail/templates';
 import { invalid, redirectTo, refused, tooMany, type FormOutcome } from './form-outcome';
 import { passwordWeaknesses } from './password-strength';
@@ -21,10 +21,10 @@ export async function requestReset(fields: Record<string, string>, clientKey: st
   if (!limit.ok) return tooMany(limit);
   const user = await findUserByEmail(email);
   if (!user) {
-    sendInBackground(noAccountMail(email, 'a password reset', siteUrl('/sign-up')));
+    await enqueueMail(noAccountMail(email, 'a password reset', siteUrl('/sign-up')));
   } else if (!user.suspended_at) {
     const token = await issueToken(user.id, 'reset_password');
-    sendInBackground(resetPasswordMail(user.email, siteUrl(`/reset/password?token=${token}`)));
+    await enqueueMail(resetPasswordMail(user.email, siteUrl(`/reset/password?token=${token}`)));
   }
   // The same answer for every address.
   return redirectTo(`/reset?sent=${encodeURIComponent(email)}`);

@@ -1,7 +1,7 @@
 // The e-mailed sign-in link (Auth.js's Nodemailer provider): what to send, and where the link lands.
 import { localPathOr } from '@/lib/local-path';
 import { config } from '../core/config';
-import { sendInBackground } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { noAccountMail, signInLinkMail, suspendedMail } from '../mail/templates';
 import { findUserByEmail } from './users';
 
@@ -30,13 +30,13 @@ export function landingUrl(authUrl: string, origin: string = config().PUBLIC_ORI
 export async function sendSignInLink(params: { identifier: string; url: string }): Promise<void> {
   const user = await findUserByEmail(params.identifier);
   if (!user) {
-    sendInBackground(noAccountMail(params.identifier, 'a sign-in link', new URL('/sign-up', config().PUBLIC_ORIGIN).href));
+    await enqueueMail(noAccountMail(params.identifier, 'a sign-in link', new URL('/sign-up', config().PUBLIC_ORIGIN).href));
     return;
   }
   if (user.suspended_at) {
     const rules = new URL('/help/house-rules', config().PUBLIC_ORIGIN).href;
-    sendInBackground(suspendedMail(user.email, user.name, user.suspended_reason ?? '(none was recorded)', rules));
+    await enqueueMail(suspendedMail(user.email, user.name, user.suspended_reason ?? '(none was recorded)', rules));
     return;
   }
-  sendInBackground(signInLinkMail(user.email, landingUrl(params.url)));
+  await enqueueMail(signInLinkMail(user.email, landingUrl(params.url)));
 }

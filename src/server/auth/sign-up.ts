@@ -3,7 +3,7 @@ import { signUpSchema } from '@/lib/schemas/sign-up';
 import { config } from '../core/config';
 import { fieldErrors } from '../http/responses';
 import { consume } from '../http/rate-limit';
-import { sendInBackground } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { alreadyJoinedMail, confirmAddressMail } from '../mail/templates';
 import { formInput } from '@/lib/schemas/account-forms';
 import { signInWithPassword } from './auth-js';
@@ -34,12 +34,12 @@ export async function signUp(fields: Record<string, string>, asker: { clientKey:
   const existing = await findUserByEmail(email);
   const newId = existing ? null : await createMember({ name, email, passwordHash, shopName });
   if (newId === null) {
-    sendInBackground(alreadyJoinedMail(email, siteUrl('/sign-in'), siteUrl('/reset')));
+    await enqueueMail(alreadyJoinedMail(email, siteUrl('/sign-in'), siteUrl('/reset')));
     // The same page; the owner of the address hears of the attempt by mail, and nobody is signed in to their account.
     return redirectTo(JOINED_PATH);
   }
   const token = await issueToken(newId, 'verify_email');
-  sendInBackground(confirmAddressMail(email, name, siteUrl(`/verify?token=${token}`)));
+  await enqueueMail(confirmAddressMail(email, name, siteUrl(`/verify?token=${token}`)));
   // Joining signs the new member in, through the same Auth.js step as the sign-in form.
   const signedIn = await signInWithPassword(asker.origin, email, password, JOINED_PATH);
   return signedIn.ok ? redirectTo(JOINED_PATH, signedIn.setCookies) : redirectTo(JOINED_PATH);

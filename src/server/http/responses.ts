@@ -15,7 +15,8 @@ export type ErrorCode =
   | 'too_many_requests'
   | 'payload_too_large'
   | 'unsupported_media_type'
-  | 'internal';
+  | 'internal'
+  | 'unavailable';
 
 export const statusOf: Record<ErrorCode, number> = {
   bad_request: 400,
@@ -29,6 +30,7 @@ export const statusOf: Record<ErrorCode, number> = {
   unsupported_media_type: 415,
   too_many_requests: 429,
   internal: 500,
+  unavailable: 503,
 };
 
 export interface ApiError {

@@ -1,6 +1,5 @@
-// Sending our messages: always a plain-text and an HTML part, from MAIL_FROM.
+// Handing one message to the mail relay: always a plain-text and an HTML part, from MAIL_FROM. Only the outbox calls it.
 import { config } from '../core/config';
-import { logger } from '../core/logger';
 import { mailTransport } from './transport';
 
 export interface OutgoingMail {
@@ -12,17 +11,13 @@ export interface OutgoingMail {
   headers?: Record<string, string>;
 }
 
-export async function sendMail(mail: OutgoingMail): Promise<void> {
-  const info = await mailTransport().sendMail({ from: config().MAIL_FROM, ...mail });
+/** `messageId` is the outbox job's id, so a message the relay sees twice carries the same Message-ID both times. */
+export async function sendMail(mail: OutgoingMail, messageId?: string): Promise<void> {
+  const info = await mailTransport().sendMail({
+    from: config().MAIL_FROM,
+    ...mail,
+    ...(messageId ? { messageId: `<${messageId}@outbox.benchlore.invalid>` } : {}),
+  });
   const refused = [...info.rejected, ...(info.pending ?? [])];
   if (refused.length > 0) throw new Error(`The mail server refused ${refused.length} recipient(s).`);
-}
-
-/**
- * Sends without holding up the answer: a form that may or may not send mail (no account, suspended,
- * already registered) then answers in the same time either way. Failures are logged, never shown.
- */
-export function sendInBackground(mail: OutgoingMail | null): void {
-  if (!mail) return;
-  sendMail(mail).catch((error: unknown) => logger().error({ err: error, subject: mail.subject }, 'mail could not be sent'));
 }

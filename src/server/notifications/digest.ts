@@ -3,7 +3,8 @@
 import type { Knex } from 'knex';
 import { db } from '../core/db';
 import { logger } from '../core/logger';
-import { sendInBackground, type OutgoingMail } from '../mail/send';
+import type { OutgoingMail } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { digestMail, type MailEvent } from './mails';
 import { effectiveDeliveries, weekStart, type Delivery, type NotificationKind } from '@/lib/notifications/kinds';
 
@@ -72,10 +73,10 @@ export interface DigestFigures {
  */
 export async function sendWeeklyDigests(
   start: Date,
-  options: { knex?: Knex; send?: (mail: OutgoingMail) => void; userIds?: number[] } = {},
+  options: { knex?: Knex; send?: (mail: OutgoingMail) => Promise<unknown> | void; userIds?: number[] } = {},
 ): Promise<DigestFigures> {
   const knex = options.knex ?? db();
-  const send = options.send ?? sendInBackground;
+  const send = options.send ?? ((mail: OutgoingMail) => enqueueMail(mail, knex));
   const week = weekStart(start);
   const byUser = await weekEvents(knex, week, options.userIds);
   const deliveries = await deliveriesOf(knex, [...byUser.keys()]);
@@ -109,7 +110,7 @@ export async function sendWeeklyDigests(
     for (const { userId, user, wanted } of chunk) {
       if (!claimed.has(userId) || !user) continue;
       const events: MailEvent[] = wanted.map((row) => ({ kind: row.kind, title: row.title, line: row.line, path: row.path }));
-      send(await digestMail({ id: userId, email: user.email, name: user.name ?? 'there' }, events, week));
+      await send(await digestMail({ id: userId, email: user.email, name: user.name ?? 'there' }, events, week));
       figures.members++;
       figures.events += wanted.length;
     }
@@ -117,18 +118,22 @@ export async function sendWeeklyDigests(
   return figures;
 }
 
-let timer: NodeJS.Timeout | null = null;
-
 /** Once an hour, sends last week's digests if they are not sent yet (idempotent, so any instance may run it). */
-export function startDigestTimer(): void {
-  if (timer) return;
+export function startDigestTimer(): { stop(): void } {
   const tick = (): void => {
     const lastWeek = new Date(weekStart(new Date()).getTime() - 7 * DAY_MS);
     sendWeeklyDigests(lastWeek)
       .then((figures) => figures.members && logger().info(figures, 'weekly digests sent'))
       .catch((error: unknown) => logger().error({ err: error }, 'weekly digests failed'));
   };
-  timer = setInterval(tick, 60 * 60_000);
+  const timer = setInterval(tick, 60 * 60_000);
   timer.unref();
-  setTimeout(tick, 30_000).unref();
+  const first = setTimeout(tick, 30_000);
+  first.unref();
+  return {
+    stop() {
+      clearInterval(timer);
+      clearTimeout(first);
+    },
+  };
 }

@@ -4,8 +4,8 @@
 import type { Knex } from 'knex';
 import { db } from '../core/db';
 import { logger } from '../core/logger';
-import { sendJob, startWorker, type Worker } from '../core/jobs';
-import { sendInBackground } from '../mail/send';
+import { ensureQueue, sendJob, startQueueWorker, type QueueWorker, type RetryPolicy } from '../core/job-queue';
+import { enqueueMail } from '../mail/outbox';
 import { recordEvents, type NewEvent, type RecordedEvent } from './events';
 import { wantingNow } from './settings';
 import { eventMail } from './mails';
@@ -13,10 +13,13 @@ import { changedFieldsLine, type NotificationKind } from '@/lib/notifications/ki
 
 export const PROOFED_NEWS_QUEUE = 'news-proofed';
 export const FAN_OUT_BATCH = 1000;
+/** About a day of retries with back-off: a fan-out that meets an outage is done when the database is back. */
+const newsRetry: RetryPolicy = { retryLimit: 12, retryDelay: 5, retryBackoff: true };
 
 /** Called after a proofing commits (or inside its transaction: the job then appears only if it commits). */
 export async function queueProofedNews(knex: Knex, revisionId: number): Promise<void> {
-  await sendJob(knex, PROOFED_NEWS_QUEUE, { revisionId }, { singletonKey: `proofed:${revisionId}` });
+  await ensureQueue(PROOFED_NEWS_QUEUE, newsRetry);
+  await sendJob(knex, PROOFED_NEWS_QUEUE, { revisionId }, { ...newsRetry, singletonKey: `proofed:${revisionId}` });
 }
 
 interface ProofedRevision {
@@ -116,7 +119,7 @@ async function mailNow(knex: Knex, events: RecordedEvent[], kind: NotificationKi
     if (!recipient) continue;
     const followId = stopFollowOf?.get(event.userId);
     const mail = await eventMail(recipient, event, followId ? { follow: followId } : { kind });
-    sendInBackground(mail);
+    await enqueueMail(mail, knex);
     await knex('notification_events').where({ id: event.id }).update({ mailed_at: knex.fn.now() });
     sent++;
   }
@@ -294,12 +297,11 @@ export async function recordModeratorReply(
   ]);
 }
 
-let worker: Worker | null = null;
-
-/** The fan-out worker, started with the server's other background work. */
-export async function startNewsWorker(): Promise<Worker> {
-  worker ??= await startWorker<{ revisionId: number }>(
+/** The fan-out worker, started at boot with the server's other background work. */
+export async function startNewsWorker(): Promise<QueueWorker> {
+  return startQueueWorker<{ revisionId: number }>(
     PROOFED_NEWS_QUEUE,
+    newsRetry,
     async (jobs) => {
       for (const job of jobs) {
         const figures = await fanOutProofed(job.revisionId);
@@ -308,5 +310,4 @@ export async function startNewsWorker(): Promise<Worker> {
     },
     { batchSize: 5 },
   );
-  return worker;
 }

@@ -7,7 +7,6 @@ import { processPendingPhotos } from './processing';
 const SWEEP_MS = 15_000;
 const CLEANUP_MS = 60 * 60_000;
 
-let started = false;
 let running: Promise<void> | null = null;
 let kickedMeanwhile = false;
 
@@ -41,15 +40,19 @@ function cleanUp(): void {
 }
 
 /**
- * Starts the periodic sweep and cleanup once per process (the middleware calls it when the server answers its
- * first request). Both run at once too, so a restart never leaves photos waiting a full interval; timers never
- * keep the process alive.
+ * Starts the periodic sweep and cleanup (the server entry calls it at boot through core/background.ts). Both run at
+ * once too, so a restart never leaves photos waiting a full interval; timers never keep the process alive. `stop`
+ * ends the timers and waits for a sweep in progress, so no photo is left half processed.
  */
-export function ensurePhotoWorker(): void {
-  if (started) return;
-  started = true;
+export function startPhotoWorker(): { stop(): Promise<void> } {
   void kickPhotoWork();
   cleanUp();
-  setInterval(() => void kickPhotoWork(), SWEEP_MS).unref();
-  setInterval(cleanUp, CLEANUP_MS).unref();
+  const timers = [setInterval(() => void kickPhotoWork(), SWEEP_MS), setInterval(cleanUp, CLEANUP_MS)];
+  for (const timer of timers) timer.unref();
+  return {
+    async stop() {
+      for (const timer of timers) clearInterval(timer);
+      await running;
+    },
+  };
 }

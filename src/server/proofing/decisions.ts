@@ -41,9 +41,12 @@ async function decidable(
     );
   }
   if (decision === 'proof' && revision.baseRevisionId !== revision.liveRevisionId) {
+    const live = revision.liveRevisionId ? await loadRevision(trx, revision.liveRevisionId) : null;
     return refuse(
       'conflict',
       'The fix went live with another revision after this one was written. Return it so the author can carry their text over onto the live one.',
+      undefined,
+      { yours: revision, live },
     );
   }
   return succeed(revision);

@@ -1,7 +1,8 @@
 // Tells an author what became of their revision (proofed, returned with a note, amended by a moderator).
 import { config } from '../core/config';
 import { escapeHtml } from '../render/escape';
-import { sendInBackground, type OutgoingMail } from '../mail/send';
+import type { OutgoingMail } from '../mail/send';
+import { enqueueMail } from '../mail/outbox';
 import { db } from '../core/db';
 import { authorEmailOf } from '../writing/revisions';
 
@@ -61,13 +62,13 @@ export function authorNoticeMail(n: AuthorNotice): OutgoingMail {
   return { to: n.to, subject, text, html };
 }
 
-/** Sends the notice without holding up the moderator's answer; a failure is logged, the proofing stands. */
-export function notifyAuthor(notice: AuthorNotice): void {
-  sendInBackground(authorNoticeMail(notice));
+/** Puts the notice in the outbox: the relay being down never holds up the moderator's answer nor loses the notice. */
+export async function notifyAuthor(notice: AuthorNotice): Promise<void> {
+  await enqueueMail(authorNoticeMail(notice));
 }
 
 /** Looks up the author's address and sends; an author without one (deleted account) is simply not told. */
 export async function notifyAuthorOf(authorId: number, notice: Omit<AuthorNotice, 'to'>): Promise<void> {
   const to = await authorEmailOf(db(), authorId);
-  if (to) notifyAuthor({ ...notice, to });
+  if (to) await notifyAuthor({ ...notice, to });
 }

@@ -17,20 +17,21 @@ function meiliIndex(url: string, key: string | undefined): MeiliIndex {
   return meili;
 }
 
-/** Starts the app's own sync worker once when Meilisearch is configured (so a single `npm start` keeps it current). */
-export function ensureSearchSyncWorker(): void {
+/** Starts the app's own sync worker once when Meilisearch is configured (core/background.ts calls it at boot). */
+export function ensureSearchSyncWorker(): Promise<SyncWorker | null> {
   const { MEILI_URL, MEILI_KEY } = config();
-  if (!MEILI_URL || worker) return;
+  if (!MEILI_URL) return Promise.resolve(null);
+  if (worker) return worker;
   worker = startSearchSyncWorker(db(), meiliIndex(MEILI_URL, MEILI_KEY)).catch((error: unknown) => {
     logger().error({ err: error }, 'search sync worker did not start');
     return null;
   });
+  return worker;
 }
 
 export function searchProvider(): SearchProvider {
   if (provider) return provider;
   const { MEILI_URL, MEILI_KEY } = config();
   if (!MEILI_URL) return (provider = new PostgresSearchProvider(db()));
-  ensureSearchSyncWorker();
   return (provider = new MeiliSearchProvider(db(), meiliIndex(MEILI_URL, MEILI_KEY)));
 }

@@ -1,4 +1,4 @@
-// Moving a writer's revision along: submit (409 on a stale base), withdraw, and amend a returned or waiting revision.
+// Moving a writer's revision along: submit (409 on a stale base, with a field merge when the changes do not overlap), withdraw, and amend a returned or waiting revision.
 import type { Knex } from 'knex';
 import { can } from '@/lib/permissions';
 import { submissionIssues } from '@/lib/schemas/fix-draft';
@@ -8,6 +8,7 @@ import { writeAudit } from '../proofing/audit';
 import { notifyAuthorOf } from '../proofing/mail';
 import { issuesToFields, refuse, succeed, type Outcome, type Writer } from '../http/result';
 import { loadRevision, type RevisionRecord } from './revisions';
+import { mergeRevisions } from './merge';
 
 export interface Submitted {
   revision: RevisionRecord;
@@ -82,11 +83,15 @@ export async function submitDraft(writer: Writer, revisionId: number, input: { v
       );
     if (mine.baseRevisionId !== fix.current_revision_id) {
       const live = fix.current_revision_id ? await loadRevision(trx, fix.current_revision_id) : null;
+      const base = mine.baseRevisionId ? await loadRevision(trx, mine.baseRevisionId) : null;
+      const merge = base && live ? mergeRevisions(base.values, live.values, mine.values) : null;
       return refuse(
         'conflict',
-        'The fix changed since you started: another revision went live. Both versions are below; carry your text over onto the live one, then submit again.',
+        merge?.values
+          ? 'The fix changed since you started: another revision went live. Your changes and its changes are in different fields, so they can be combined: check the combined text, then submit again.'
+          : 'The fix changed since you started: another revision went live. Both versions are below; carry your text over onto the live one, then submit again.',
         undefined,
-        { yours: mine, live },
+        { yours: mine, live, merge },
       );
     }
     let replaced: number | null = null;
