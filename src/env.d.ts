@@ -6,5 +6,7 @@ declare namespace App {
   interface Locals {
     /** The signed-in, active account (read from the database on this request), or null. */
     user: import('./lib/permissions').SessionUser | null;
+    /** The personal API token the request was made with (Authorization: Bearer), when it was. */
+    apiToken?: import('./server/auth/api-tokens').RequestToken;
   }
 }

@@ -73,6 +73,13 @@ export const handoverNoteInputSchema = z.object({
 export type HandoverNoteInput = z.input<typeof handoverNoteInputSchema>;
 export type HandoverNoteData = z.output<typeof handoverNoteInputSchema>;
 
+/** What may change on a note once written: the words around the fix, never the fix or revision it is pinned to. */
+export const handoverNotePatchSchema = handoverNoteInputSchema
+  .pick({ includeJobDetails: true, shopName: true, message: true, partsReplaced: true, warranty: true })
+  .partial()
+  .strict();
+export type HandoverNotePatch = z.output<typeof handoverNotePatchSchema>;
+
 export const jobStatuses = ['booked_in', 'diagnosing', 'waiting_for_parts', 'repaired', 'collected', 'returned_unrepaired'] as const;
 export const jobStatusSchema = z.enum(jobStatuses, { error: 'Choose a status from the list.' });
 export type JobStatus = z.infer<typeof jobStatusSchema>;
@@ -142,6 +149,22 @@ export const jobSheetListQuerySchema = z.object({
   sort: z.enum(jobSheetSorts).default('updated'),
 });
 export type JobSheetListQuery = z.output<typeof jobSheetListQuerySchema>;
+
+/** The API's list: the same filters, a page at a time (page from 1, up to 100 a page). */
+export const jobSheetPagedQuerySchema = jobSheetListQuerySchema.extend({
+  page: z.coerce
+    .number({ error: 'Give the page as a whole number, e.g. 2.' })
+    .int('Give the page as a whole number, e.g. 2.')
+    .min(1, 'Pages start at 1.')
+    .max(10_000, 'Pages stop at 10000.')
+    .default(1),
+  perPage: z.coerce
+    .number({ error: 'Give perPage as a whole number, e.g. 50.' })
+    .int('Give perPage as a whole number, e.g. 50.')
+    .min(1, 'Ask for at least 1 per page, e.g. 50.')
+    .max(100, 'Ask for at most 100 per page, e.g. 50.')
+    .default(50),
+});
 
 /** What the form readers need of a submitted form: FormData and URLSearchParams both have it. */
 export interface FormFields {

@@ -8,6 +8,7 @@ import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { config } from '../core/config';
 import { listOwnNotes } from './handover-notes';
 import type { JobPart, JobSheetCreate, JobSheetListQuery, JobSheetPatch, JobStatus } from '@/lib/schemas/bench-work';
+import type { PageQuery } from '../core/pagination';
 
 export interface JobMachine {
   id: number;
@@ -46,6 +47,8 @@ export interface JobSheetView extends Omit<JobSheetSummary, 'machine' | 'fixCoun
   outcome: string;
   createdAt: Date;
   fixes: AppliedFix[];
+  /** Counts every change, from the browser or a program: the ETag and If-Match of the API. */
+  version: number;
 }
 
 /** What a job sheet write hands back: the sheet's number (or a count), or why not. */
@@ -76,23 +79,12 @@ const sortColumns: Record<JobSheetListQuery['sort'], { column: string; order: 'a
   ],
 };
 
-export async function listJobSheets(ownerId: number, query: JobSheetListQuery): Promise<JobSheetSummary[]> {
-  const knex = db();
+/** The owner's sheets matching the query's status and words, unsorted and unselected. */
+function matchingSheets(knex: Knex, ownerId: number, query: Pick<JobSheetListQuery, 'status' | 'q'>): Knex.QueryBuilder {
   const q = knex('job_sheets as j')
     .leftJoin('machines as m', 'm.id', 'j.machine_id')
     .leftJoin('makers as mk', 'mk.id', 'm.maker_id')
-    .where('j.owner_id', ownerId)
-    .select(
-      'j.id',
-      'j.customer_ref',
-      'j.status',
-      'j.booked_in_at',
-      'j.updated_at',
-      knex.raw(`${machineLabel} AS machine_label`),
-      knex.raw('(SELECT count(*) FROM job_sheet_fixes jf WHERE jf.job_sheet_id = j.id) AS fix_count'),
-    )
-    .orderBy([...sortColumns[query.sort], { column: 'j.id', order: 'desc' }])
-    .limit(500);
+    .where('j.owner_id', ownerId);
   if (query.status) q.where('j.status', query.status);
   if (query.q) {
     const like = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
@@ -104,7 +96,34 @@ export async function listJobSheets(ownerId: number, query: JobSheetListQuery): 
         .orWhereILike('j.reported_symptom', like),
     );
   }
-  const rows = await q;
+  return q;
+}
+
+/** The owner's sheets, sorted; at most 500 (the /jobs page), or one page of them (the API). */
+export async function listJobSheets(ownerId: number, query: JobSheetListQuery, page?: PageQuery): Promise<JobSheetSummary[]> {
+  const knex = db();
+  const q = matchingSheets(knex, ownerId, query)
+    .select(
+      'j.id',
+      'j.customer_ref',
+      'j.status',
+      'j.booked_in_at',
+      'j.updated_at',
+      knex.raw(`${machineLabel} AS machine_label`),
+      knex.raw('(SELECT count(*) FROM job_sheet_fixes jf WHERE jf.job_sheet_id = j.id) AS fix_count'),
+    )
+    .orderBy([...sortColumns[query.sort], { column: 'j.id', order: 'desc' }])
+    .limit(page ? page.perPage : 500)
+    .offset(page ? (page.page - 1) * page.perPage : 0);
+  const rows: {
+    id: number;
+    customer_ref: string;
+    status: JobStatus;
+    booked_in_at: Date;
+    updated_at: Date;
+    machine_label: string | null;
+    fix_count: string;
+  }[] = await q;
   return rows.map((r) => ({
     id: r.id,
     customerRef: r.customer_ref,
@@ -114,6 +133,12 @@ export async function listJobSheets(ownerId: number, query: JobSheetListQuery): 
     updatedAt: r.updated_at,
     fixCount: Number(r.fix_count),
   }));
+}
+
+/** How many of the owner's sheets match the query: the total beside a page. */
+export async function countJobSheets(ownerId: number, query: Pick<JobSheetListQuery, 'status' | 'q'>): Promise<number> {
+  const [row] = await matchingSheets(db(), ownerId, query).count<{ count: string }[]>('j.id as count');
+  return Number(row?.count ?? 0);
 }
 
 /** The owner's job sheet, or null: another member's sheet is indistinguishable from a missing one. */
@@ -154,6 +179,7 @@ export async function getJobSheet(ownerId: number, id: number): Promise<JobSheet
     bookedInAt: row.booked_in_at,
     createdAt: row.created_at,
     updatedAt: row.updated_at,
+    version: row.version,
     fixes: fixes.map((f) => ({
       slug: f.slug,
       title: f.title,
@@ -203,10 +229,20 @@ export async function createJobSheet(ownerId: number, data: JobSheetCreate): Pro
   return { ok: true, value: row.id };
 }
 
-export async function updateJobSheet(ownerId: number, id: number, patch: JobSheetPatch): Promise<WriteResult<number>> {
+/**
+ * Changes the fields given. With `expectedVersion` (a program's If-Match) the change happens only if nobody
+ * changed the sheet since that version: otherwise a 412 refusal carrying the current sheet.
+ */
+export async function updateJobSheet(
+  ownerId: number,
+  id: number,
+  patch: JobSheetPatch,
+  expectedVersion?: number,
+): Promise<WriteResult<number>> {
   const knex = db();
-  const current = await knex('job_sheets').where({ id, owner_id: ownerId }).first('id', 'customer_ref');
+  const current = await knex('job_sheets').where({ id, owner_id: ownerId }).first('id', 'customer_ref', 'version');
   if (!current) return { ok: false, code: 'not_found', message: 'No job sheet with that number.' };
+  if (expectedVersion !== undefined && current.version !== expectedVersion) return staleSheet(ownerId, id);
   const changes: Record<string, unknown> = { updated_at: knex.fn.now() };
   if (patch.machine !== undefined) {
     const machineId = await machineIdOf(knex, patch.machine);
@@ -226,8 +262,22 @@ export async function updateJobSheet(ownerId: number, id: number, patch: JobShee
     if (patch[key] !== undefined) changes[column] = patch[key];
   }
   if (patch.partsUsed !== undefined) changes.parts_used = partsJson(patch.partsUsed, patch.customerRef ?? current.customer_ref);
-  await knex('job_sheets').where({ id, owner_id: ownerId }).update(changes);
+  const write = knex('job_sheets').where({ id, owner_id: ownerId });
+  // The version is checked again in the write itself: an edit landing between the read and here still wins.
+  if (expectedVersion !== undefined) write.where({ version: expectedVersion });
+  if ((await write.update(changes)) === 0) return staleSheet(ownerId, id);
   return { ok: true, value: id };
+}
+
+async function staleSheet(ownerId: number, id: number): Promise<WriteResult<number>> {
+  const sheet = await getJobSheet(ownerId, id);
+  if (!sheet) return { ok: false, code: 'not_found', message: 'No job sheet with that number.' };
+  return refuse(
+    'precondition_failed',
+    `The job sheet changed since you read it: it is now version ${sheet.version}. Read it again, merge your change and send it with If-Match: "v${sheet.version}".`,
+    undefined,
+    { current: sheet },
+  );
 }
 
 /** Hard delete: the customer data goes; notes made from it keep working without it (SET NULL). */

@@ -1,30 +1,37 @@
 // GET, PATCH, DELETE /api/v1/job-sheets/:id: one of your job sheets. Another member's answers 404, never 403.
+// GET answers with the sheet's version as its ETag; PATCH with If-Match (required with an API token) answers 412
+// with the current sheet when someone changed it meanwhile.
 import type { APIRoute } from 'astro';
 import { respond } from '@/server/http/result';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { readBody } from '@/server/http/body';
 import { deleteJobSheet, getJobSheet, jobSheetMissing, jobSheetRequest, updateJobSheet } from '@/server/bench-work/job-sheets';
 import { jobSheetPatchSchema } from '@/lib/schemas/bench-work';
+import { ifMatchVersion, versionTag } from '@/server/http/if-match';
 
 export const GET: APIRoute = async ({ locals, params }) => {
   const job = jobSheetRequest(locals.user, params.id);
   if (!job.ok) return respond(job);
   const sheet = await getJobSheet(job.value.ownerId, job.value.id);
-  return sheet ? json({ jobSheet: sheet }, { cache: 'private' }) : respond(jobSheetMissing);
+  return sheet ? json({ jobSheet: sheet }, { cache: 'private', headers: { ETag: versionTag(sheet.version) } }) : respond(jobSheetMissing);
 };
 
 export const PATCH: APIRoute = async ({ locals, params, request }) => {
   const job = jobSheetRequest(locals.user, params.id);
   if (!job.ok) return respond(job);
+  const expected = ifMatchVersion(request, { required: locals.apiToken !== undefined });
+  if (!expected.ok) return respond(expected);
   const read = await readBody(request, { json: 'benchWork', form: 'benchWork' });
   if (!read.ok) return respond(read);
   const body = read.value;
   if (body.kind !== 'json') return apiError('unsupported_media_type', 'Send the changes as JSON.');
   const parsed = jobSheetPatchSchema.safeParse(body.data);
   if (!parsed.success) return apiError('bad_request', 'Some fields of the job sheet are not valid.', fieldErrors(parsed.error));
-  const updated = await updateJobSheet(job.value.ownerId, job.value.id, parsed.data);
+  const updated = await updateJobSheet(job.value.ownerId, job.value.id, parsed.data, expected.value);
   if (!updated.ok) return respond(updated.code === 'not_found' ? jobSheetMissing : updated);
-  return json({ jobSheet: await getJobSheet(job.value.ownerId, job.value.id) }, { cache: 'private' });
+  const sheet = await getJobSheet(job.value.ownerId, job.value.id);
+  if (!sheet) return respond(jobSheetMissing);
+  return json({ jobSheet: sheet }, { cache: 'private', headers: { ETag: versionTag(sheet.version) } });
 };
 
 /** Hard delete: the customer data in the sheet is gone; notes made from it keep working without it. */
