@@ -3,14 +3,14 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { INTEGRATION_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
-import { createUser, postForm, signIn } from '../support/sign-in';
+import { cookiesFrom, createUser, postForm, signIn } from '../support/sign-in';
 
 const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
 const knex = testDb();
 let cookie: string;
 let userId: number;
 
-/** Creates a token through the account page's form, as a member would, and reads it from the page shown once. */
+/** Creates a token through the account page's form, as a member would, and reads it from the page that shows it once. */
 async function createToken(name: string, scopes: string[]): Promise<string> {
   const body = new URLSearchParams({ intent: 'create', name });
   for (const scope of scopes) body.append('scopes', scope);
@@ -20,9 +20,14 @@ async function createToken(name: string, scopes: string[]): Promise<string> {
     body,
     redirect: 'manual',
   });
-  const html = await res.text();
-  expect(res.status, html.slice(0, 300)).toBe(201);
-  const token = /value="(blt_[A-Za-z0-9_-]+)"/.exec(html)?.[1];
+  expect(res.status, (await res.text()).slice(0, 300)).toBe(303);
+  expect(res.headers.get('location')).toBe('/account/api-tokens?notice=created');
+  const carried = cookiesFrom(res);
+  expect(carried).toMatch(/^blt_new=/);
+  const shown = await fetch(`${base}/account/api-tokens?notice=created`, { headers: { cookie: `${cookie}; ${carried}` } });
+  // Shown once: the page clears the cookie that carried it.
+  expect(shown.headers.getSetCookie().some((c) => c.startsWith('blt_new=') && /Expires=Thu, 01 Jan 1970|Max-Age=0/i.test(c))).toBe(true);
+  const token = /value="(blt_[A-Za-z0-9_-]+)"/.exec(await shown.text())?.[1];
   expect(token).toBeDefined();
   return token!;
 }
