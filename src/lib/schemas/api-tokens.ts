@@ -13,17 +13,22 @@ export const tokenScopeLabels: Record<TokenScope, string> = {
 
 export const tokenScopeSchema = z.enum(tokenScopes, { error: 'Choose scopes from the list: read, bench_work or order_list.' });
 
-export const apiTokenCreateSchema = z.object({
-  name: z
-    .string({ error: 'Name the token after the program that uses it, e.g. "Front desk invoicing".' })
-    .trim()
-    .min(1, 'Name the token after the program that uses it, e.g. "Front desk invoicing".')
-    .max(60, 'Keep the name under 60 characters, e.g. "Front desk invoicing".'),
-  scopes: z
-    .array(tokenScopeSchema)
-    .min(1, 'Tick at least one scope, e.g. "Job sheets and hand-over notes".')
-    .transform((scopes) => [...new Set(scopes)].sort()),
-});
+const scopesExample = 'Tick at least one scope, e.g. "Job sheets and hand-over notes".';
+
+export const apiTokenCreateSchema = z.object(
+  {
+    name: z
+      .string({ error: 'Name the token after the program that uses it, e.g. "Front desk invoicing".' })
+      .trim()
+      .min(1, 'Name the token after the program that uses it, e.g. "Front desk invoicing".')
+      .max(60, 'Keep the name under 60 characters, e.g. "Front desk invoicing".'),
+    scopes: z
+      .array(tokenScopeSchema, { error: scopesExample })
+      .min(1, scopesExample)
+      .transform((scopes) => [...new Set(scopes)].sort()),
+  },
+  { error: 'Send a name and the scopes, e.g. name "Front desk invoicing" with the scope bench_work.' },
+);
 export type ApiTokenCreate = z.output<typeof apiTokenCreateSchema>;
 
 /** Every token starts with this, so a leaked one is easy to recognise in logs and code. */

@@ -2,7 +2,7 @@
 import { OpenAPIRegistry, OpenApiGeneratorV31, type ResponseConfig, type RouteConfig } from '@asteasolutions/zod-to-openapi';
 import { z } from 'zod';
 import { routeAccess } from '../auth/route-access';
-import { errorResponseSchema } from '@/lib/schemas/api-responses';
+import { errorResponseSchema } from './responses';
 import { tokenScopeLabels, tokenScopes } from '@/lib/schemas/api-tokens';
 import { operations, type Operation } from './operations';
 

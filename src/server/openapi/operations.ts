@@ -1,7 +1,7 @@
 // Every operation under /api/v1, described once: the OpenAPI document (document.ts) is built from this list with the
 // same zod schemas the endpoints parse with. A route file without its operations here fails tests/unit/openapi.test.ts.
 import { z } from 'zod';
-import * as out from '@/lib/schemas/api-responses';
+import * as out from './responses';
 import { applyFixSchema, benchReportInputSchema, handoverNoteInputSchema, handoverNotePatchSchema } from '@/lib/schemas/bench-work';
 import { jobSheetCreateSchema, jobSheetPagedQuerySchema, jobSheetPatchSchema } from '@/lib/schemas/bench-work';
 import {
@@ -12,7 +12,7 @@ import {
   fixRevisionQuerySchema,
   formatQuerySchema,
   similarQuerySchema,
-} from '@/lib/schemas/api-inputs';
+} from './inputs';
 import { profileSchema } from '@/lib/schemas/account';
 import { slugSchema } from '@/lib/schemas/slug';
 import { searchParamsSchema } from '@/lib/search/query-schema';

@@ -1,6 +1,6 @@
 // GET/PUT /api/v1/order-list: the signed-in member's saved order list (GET ?format=csv answers the CSV).
 import type { APIRoute } from 'astro';
-import { formatQuerySchema as querySchema } from '@/lib/schemas/api-inputs';
+import { formatQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { storedListCsv, storedListSchema } from '@/lib/tools/order-list';
 import { apiError, json } from '@/server/http/responses';
 import { getOrderList, saveOrderList } from '@/server/bench-work/order-lists';

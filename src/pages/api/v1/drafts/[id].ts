@@ -1,6 +1,6 @@
 // GET, PUT and DELETE /api/v1/drafts/:id: read, save (autosave) and discard the writer's own draft.
 import type { APIRoute } from 'astro';
-import { draftSaveBodySchema as bodySchema } from '@/lib/schemas/api-inputs';
+import { draftSaveBodySchema as bodySchema } from '@/server/openapi/inputs';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { db } from '@/server/core/db';

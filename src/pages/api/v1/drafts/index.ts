@@ -1,6 +1,6 @@
 // POST /api/v1/drafts: starts the writer's draft of a new fix, or of a live fix (`fixSlug`) on top of its live revision.
 import type { APIRoute } from 'astro';
-import { draftCreateBodySchema as bodySchema } from '@/lib/schemas/api-inputs';
+import { draftCreateBodySchema as bodySchema } from '@/server/openapi/inputs';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { db } from '@/server/core/db';

@@ -1,6 +1,6 @@
 // GET /api/v1/fixes/:slug: the live proofed revision of a fix, or `?revision=n` for an older proofed one.
 import type { APIRoute } from 'astro';
-import { fixRevisionQuerySchema as querySchema } from '@/lib/schemas/api-inputs';
+import { fixRevisionQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { parseSearchParams, respond } from '@/server/http/result';
 import { getFix } from '@/server/fixes/fixes';
 import { apiError, json } from '@/server/http/responses';

@@ -1,6 +1,6 @@
 // GET /api/v1/fixes: live fixes, newest proofed first, optionally for one machine or chassis family.
 import type { APIRoute } from 'astro';
-import { fixListQuerySchema as querySchema } from '@/lib/schemas/api-inputs';
+import { fixListQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { parseSearchParams, respond } from '@/server/http/result';
 import { z } from 'zod';
 import { getChassis, getMachine } from '@/server/catalogue/catalogue';

@@ -18,7 +18,7 @@
   400 bad_request (with fields) for missing or bad parameters; 404 not_found for an unknown machine or family.
 */
 import type { APIRoute } from 'astro';
-import { similarQuerySchema as querySchema } from '@/lib/schemas/api-inputs';
+import { similarQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { parseSearchParams, respond } from '@/server/http/result';
 import { apiError, json } from '@/server/http/responses';
 import { db } from '@/server/core/db';

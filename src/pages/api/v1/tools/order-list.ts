@@ -1,6 +1,6 @@
 // POST /api/v1/tools/order-list: parts rows grouped by canonical spec with spares; ?format=csv answers the CSV.
 import type { APIRoute } from 'astro';
-import { formatQuerySchema as querySchema } from '@/lib/schemas/api-inputs';
+import { formatQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { buildOrderList, orderListInputSchema } from '@/lib/bench/order-list';
 import { orderListCsv } from '@/lib/bench/order-list-csv';
 import { json } from '@/server/http/responses';

@@ -1,6 +1,6 @@
 // POST /api/v1/drafts/:id/submit: sends the draft to the proofing desk (409 with both versions on a stale base).
 import type { APIRoute } from 'astro';
-import { draftSubmitBodySchema as bodySchema } from '@/lib/schemas/api-inputs';
+import { draftSubmitBodySchema as bodySchema } from '@/server/openapi/inputs';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { answer, idParam, requireUser } from '@/server/http/endpoint';

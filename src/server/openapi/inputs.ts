@@ -1,7 +1,7 @@
-// Query and body schemas of /api/v1 endpoints that have no other home: the endpoints parse with them and the
+// Query and body schemas of /api/v1 endpoints that have no other home (moved here from the endpoint files): the endpoints parse with them and the
 // OpenAPI document (src/server/openapi) describes them, so the two never drift apart.
 import { z } from 'zod';
-import { slugSchema } from './slug';
+import { slugSchema } from '@/lib/schemas/slug';
 import { MAX_QUERY_LENGTH } from '@/lib/search/tokens';
 
 /** Page numbers and sizes for list queries (the same bounds as src/server/core/pagination.ts). */

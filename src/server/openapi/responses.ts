@@ -1,8 +1,8 @@
 // What /api/v1 answers, as zod schemas: the OpenAPI document describes each response with these, and the
 // integration tests validate real answers against the document. Dates travel as ISO 8601 strings.
 import { z } from 'zod';
-import { jobPartSchema, jobStatusSchema } from './bench-work';
-import { tokenScopeSchema } from './api-tokens';
+import { jobPartSchema, jobStatusSchema } from '@/lib/schemas/bench-work';
+import { tokenScopeSchema } from '@/lib/schemas/api-tokens';
 
 const isoDate = z.string().meta({ format: 'date-time', example: '2026-11-03T09:41:00.000Z' });
 
