@@ -19,8 +19,9 @@ export function isoWeek(date: Date): string {
   return `${day.getUTCFullYear()}-W${String(week).padStart(2, '0')}`;
 }
 
-function weeklyRoot(): string {
-  return join(config().BENCHLORE_DATA_DIR, 'export', 'weekly');
+/** One folder per database, so databases sharing a data folder (tests, staging) never serve each other's file. */
+export function weeklyRoot(): string {
+  return join(config().BENCHLORE_DATA_DIR, 'export', 'weekly', config().BENCHLORE_DB_NAME);
 }
 
 let building: Promise<WeeklyExport> | null = null;
