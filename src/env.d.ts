@@ -8,5 +8,7 @@ declare namespace App {
     user: import('./lib/permissions').SessionUser | null;
     /** Unread notifications of the signed-in member, counted for page views; undefined otherwise. */
     unreadNews?: number;
+    /** The personal API token the request was made with (Authorization: Bearer), when it was. */
+    apiToken?: import('./server/auth/api-tokens').RequestToken;
   }
 }

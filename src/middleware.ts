@@ -8,6 +8,8 @@ import { unavailableAnswer } from '@/server/http/unavailable';
 import { databaseUnavailable } from '@/server/core/db-errors';
 import { logger } from '@/server/core/logger';
 import { resolveUser, sessionWasCleared } from '@/server/auth/request-user';
+import { authenticateBearer, bearerOf } from '@/server/auth/api-tokens';
+import { respond } from '@/server/http/result';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
 import { answerPublicPage, sharedKeyRead } from '@/server/http/page-cache';
@@ -53,6 +55,15 @@ const errorBoundary = defineMiddleware(async (context, next) => {
 
 /** Loads the signed-in user on every request (role and suspension are never taken from the token). */
 const identify = defineMiddleware(async (context, next) => {
+  // A program's personal API token (Authorization: Bearer) stands in for the cookie; it is refused here when not valid.
+  const bearer = bearerOf(context.request);
+  if (bearer !== null && context.url.pathname.startsWith('/api/v1/')) {
+    const outcome = await authenticateBearer(bearer, { pattern: context.routePattern, method: context.request.method });
+    if (!outcome.ok) return respond(outcome);
+    context.locals.user = outcome.value.user;
+    context.locals.apiToken = outcome.value.token;
+    return next();
+  }
   // Auth.js's own endpoints read the cookie themselves.
   context.locals.user = context.url.pathname.startsWith('/api/auth/') ? null : await resolveUser(context.request, context.cookies);
   return next();

@@ -288,7 +288,7 @@ describe('a job sheet offline', () => {
     await context.close();
   });
 
-  it('answers a stale If-Match with 409 and the sheet as it is now, and an unreadable one with 400', async () => {
+  it('answers a stale If-Match with 412 and the sheet as it is now, and an unreadable one with 400', async () => {
     const member = await makeMember(knex);
     const job = await createJobSheet(member.id, jobSheetCreateSchema.parse({ customerRef: 'Ticket SW-4' }));
     if (!job.ok) throw new Error(job.message);
@@ -303,10 +303,10 @@ describe('a job sheet offline', () => {
     expect(first.status).toBe(200);
     expect(((await first.json()) as { jobSheet: { version: number } }).jobSheet.version).toBe(2);
     const stale = await patch('"v1"', 'second');
-    expect(stale.status).toBe(409);
-    const body = (await stale.json()) as { error: { code: string }; jobSheet: { findings: string; version: number } };
-    expect(body.error.code).toBe('conflict');
-    expect(body.jobSheet).toMatchObject({ findings: 'first', version: 2 });
+    expect(stale.status).toBe(412);
+    const body = (await stale.json()) as { error: { code: string }; current: { findings: string; version: number } };
+    expect(body.error.code).toBe('precondition_failed');
+    expect(body.current).toMatchObject({ findings: 'first', version: 2 });
     const unreadable = await patch('2', 'third');
     expect(unreadable.status).toBe(400);
     expect(((await unreadable.json()) as { error: { message: string } }).error.message).toContain('If-Match: "v3"');

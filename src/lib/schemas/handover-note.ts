@@ -19,3 +19,10 @@ export const handoverNoteInputSchema = z.object({
 });
 export type HandoverNoteInput = z.input<typeof handoverNoteInputSchema>;
 export type HandoverNoteData = z.output<typeof handoverNoteInputSchema>;
+
+/** What may change on a note once written: the words around the fix, never the fix or revision it is pinned to. */
+export const handoverNotePatchSchema = handoverNoteInputSchema
+  .pick({ includeJobDetails: true, shopName: true, message: true, partsReplaced: true, warranty: true })
+  .partial()
+  .strict();
+export type HandoverNotePatch = z.output<typeof handoverNotePatchSchema>;

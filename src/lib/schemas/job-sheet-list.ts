@@ -10,3 +10,19 @@ export const jobSheetListQuerySchema = z.object({
 });
 export type JobSheetListQuery = z.output<typeof jobSheetListQuerySchema>;
 export type JobSheetListQueryInput = z.input<typeof jobSheetListQuerySchema>;
+
+/** The API's list: the same filters, a page at a time (page from 1, up to 100 a page). */
+export const jobSheetPagedQuerySchema = jobSheetListQuerySchema.extend({
+  page: z.coerce
+    .number({ error: 'Give the page as a whole number, e.g. 2.' })
+    .int('Give the page as a whole number, e.g. 2.')
+    .min(1, 'Pages start at 1.')
+    .max(10_000, 'Pages stop at 10000.')
+    .default(1),
+  perPage: z.coerce
+    .number({ error: 'Give perPage as a whole number, e.g. 50.' })
+    .int('Give perPage as a whole number, e.g. 50.')
+    .min(1, 'Ask for at least 1 per page, e.g. 50.')
+    .max(100, 'Ask for at most 100 per page, e.g. 50.')
+    .default(50),
+});

@@ -45,9 +45,10 @@ async function send(item: Waiting): Promise<Sent> {
           })
         : await fetch(item.url, { method: 'POST', body: new URLSearchParams(item.fields), redirect: 'manual' });
     if (response.type === 'opaqueredirect' || response.ok) return { result: 'sent' };
-    if (response.status === 409 && item.kind === 'job-sheet') {
-      const answer = (await response.json()) as { jobSheet: Record<string, unknown> };
-      return { result: 'conflict', sheet: answer.jobSheet };
+    // 412 Precondition Failed: the If-Match version is stale; the answer carries the sheet as it is now.
+    if (response.status === 412 && item.kind === 'job-sheet') {
+      const answer = (await response.json()) as { current: Record<string, unknown> };
+      return { result: 'conflict', sheet: answer.current };
     }
     const answer =
       item.kind === 'job-sheet' ? ((await response.json().catch(() => null)) as { error?: { message?: string } } | null) : null;

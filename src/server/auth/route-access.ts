@@ -4,10 +4,13 @@
   and names the file otherwise). Keys are Astro's route patterns: the file path under src/pages without
   its extension, "index" dropped, e.g. src/pages/fixes/[slug]/index.astro → '/fixes/[slug]'.
   Methods not listed answer 405. HEAD follows GET. '*' covers every method.
+  `token` says which methods a personal API token may call and with which scope (src/server/auth/api-tokens.ts
+  holds the rule); a route without it never takes a token, whatever the method.
   The guard checks the role level only; a rule that depends on the resource (nobody proofs their own
   revision, job sheets are private) is checked again by the endpoint with can(user, action, resource).
 */
 import type { Action } from '@/lib/permissions';
+import type { TokenScope } from '@/lib/schemas/api-tokens';
 
 export type Access = 'public' | 'closed' | Action;
 export const routeMethods = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
@@ -26,9 +29,13 @@ export interface RouteRule {
    * unsubscribe, RFC 8058: mail programs post from their own servers); every other route refuses them.
    */
   crossSitePosts?: true;
+  /** The methods a personal API token may call, each with the scope it needs; absent: tokens are refused. */
+  token?: Partial<Record<RouteMethod, TokenScope>>;
 }
 
 const read: RouteRule = { methods: { GET: 'public' } };
+/** A public read that programs may also call with a token of the read scope. */
+const apiRead: RouteRule = { methods: { GET: 'public' }, token: { GET: 'read' } };
 /** A public account form and its answer, never cached. */
 const accountForm: RouteRule = { methods: { GET: 'public', POST: 'public' }, noStore: true };
 const accountRead: RouteRule = { methods: { GET: 'public' }, noStore: true };
@@ -62,16 +69,16 @@ export const routeAccess: Record<string, RouteRule> = {
   // Built once and stored by the service worker: the offline page and the list of fixes kept on this device.
   '/offline': read,
   '/kept': read,
-  '/api/v1/machines': read,
-  '/api/v1/machines/[slug]': read,
-  '/api/v1/chassis/[slug]': read,
-  '/api/v1/fixes': read,
-  '/api/v1/fixes/[slug]': read,
+  '/api/v1/machines': apiRead,
+  '/api/v1/machines/[slug]': apiRead,
+  '/api/v1/chassis/[slug]': apiRead,
+  '/api/v1/fixes': apiRead,
+  '/api/v1/fixes/[slug]': apiRead,
 
   // Search: open to everyone; the wanted-fixes list and word families are for editors and above.
   '/search': read,
-  '/api/v1/search': read,
-  '/api/v1/search/similar': read,
+  '/api/v1/search': apiRead,
+  '/api/v1/search/similar': apiRead,
   '/admin/word-families': { methods: { GET: 'manage_word_families', POST: 'manage_word_families' } },
   '/admin/wanted-fixes': { methods: { GET: 'curate_catalogue' } },
 
@@ -86,10 +93,17 @@ export const routeAccess: Record<string, RouteRule> = {
   '/tools/bleed-down': read,
   '/order-list': read,
   '/order-list/add': { methods: { POST: 'public' } },
-  '/api/v1/tools/decode': { methods: { GET: 'public', POST: 'public' } },
-  '/api/v1/tools/substitute': { methods: { POST: 'public' } },
-  '/api/v1/tools/order-list': { methods: { POST: 'public' } },
-  '/api/v1/order-list': { methods: { GET: 'own_order_lists', PUT: 'own_order_lists' } },
+  '/api/v1/tools/decode': { methods: { GET: 'public', POST: 'public' }, token: { GET: 'read', POST: 'read' } },
+  '/api/v1/tools/substitute': { methods: { POST: 'public' }, token: { POST: 'read' } },
+  '/api/v1/tools/order-list': { methods: { POST: 'public' }, token: { POST: 'read' } },
+  '/api/v1/order-list': { methods: { GET: 'own_order_lists', PUT: 'own_order_lists' }, token: { GET: 'order_list', PUT: 'order_list' } },
+
+  // The API's own description and reference page, and the weekly export of the proofed knowledge.
+  '/api': read,
+  '/api/v1/openapi.json': apiRead,
+  '/export': read,
+  '/export/fixes.jsonl': read,
+  '/export/manifest.json': read,
 
   // Signing up and in: public forms, rate-limited by their handlers.
   '/sign-in': accountForm,
@@ -108,6 +122,8 @@ export const routeAccess: Record<string, RouteRule> = {
   '/account/deleted': accountRead,
   // The link mailed to a new address: the token is the authority, signed in or not.
   '/account/email': accountForm,
+  // Personal API tokens: created, listed and revoked in the browser only.
+  '/account/api-tokens': { methods: { GET: 'manage_account', POST: 'manage_account' }, noStore: true },
   '/api/v1/account': { methods: { GET: 'manage_account', PATCH: 'manage_account' }, noStore: true },
   // Following and news: personal; the unsubscribe link's signed token is its own authority (no sign-in).
   '/account/notifications': { methods: { GET: 'follow', POST: 'follow' }, noStore: true },
@@ -126,7 +142,7 @@ export const routeAccess: Record<string, RouteRule> = {
   '/proofing': { methods: { GET: 'proof', POST: 'proof' } },
   // The decision form posts to its own page, which shows a refusal with the note as typed.
   '/proofing/[id]': { methods: { GET: 'proof', POST: 'proof' }, noStore: true },
-  '/api/v1/catalogue-lookup': read,
+  '/api/v1/catalogue-lookup': apiRead,
   '/api/v1/drafts': { methods: { POST: 'write_fix' } },
   '/api/v1/drafts/[id]': { methods: { GET: 'write_fix', PUT: 'write_fix', DELETE: 'write_fix' } },
   '/api/v1/drafts/[id]/submit': { methods: { POST: 'write_fix' } },
@@ -151,16 +167,30 @@ export const routeAccess: Record<string, RouteRule> = {
   '/jobs/new': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
   '/jobs/[id]': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
   '/api/v1/bench-reports': { methods: { GET: 'bench_report', POST: 'bench_report' } },
-  '/api/v1/fixes/[slug]/bench-reports': read,
-  '/api/v1/handover-notes': { methods: { GET: 'write_handover_note', POST: 'write_handover_note' } },
-  '/api/v1/handover-notes/[code]': { methods: { GET: 'public', DELETE: 'write_handover_note', POST: 'write_handover_note' } },
-  '/api/v1/handover-notes/[code]/qr.svg': { methods: { GET: 'write_handover_note' } },
-  '/api/v1/handover-notes/[code]/qr.png': { methods: { GET: 'write_handover_note' } },
-  '/api/v1/job-sheets': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' } },
-  '/api/v1/job-sheets/[id]': { methods: { GET: 'own_job_sheets', PATCH: 'own_job_sheets', DELETE: 'own_job_sheets' } },
-  '/api/v1/job-sheets/[id]/fixes': { methods: { POST: 'own_job_sheets', DELETE: 'own_job_sheets' } },
-  '/api/v1/job-sheets/[id]/invoice-lines.csv': { methods: { GET: 'own_job_sheets' } },
-  '/api/v1/job-sheets/[id]/invoice-lines.json': { methods: { GET: 'own_job_sheets' } },
+  '/api/v1/fixes/[slug]/bench-reports': apiRead,
+  '/api/v1/handover-notes': {
+    methods: { GET: 'write_handover_note', POST: 'write_handover_note' },
+    token: { GET: 'bench_work', POST: 'bench_work' },
+  },
+  '/api/v1/handover-notes/[code]': {
+    methods: { GET: 'public', PATCH: 'write_handover_note', DELETE: 'write_handover_note', POST: 'write_handover_note' },
+    // GET with a token: the owner's own view of the note (with its version for If-Match), not the customer's page.
+    token: { GET: 'bench_work', PATCH: 'bench_work', DELETE: 'bench_work' },
+  },
+  '/api/v1/handover-notes/[code]/qr.svg': { methods: { GET: 'write_handover_note' }, token: { GET: 'bench_work' } },
+  '/api/v1/handover-notes/[code]/qr.png': { methods: { GET: 'write_handover_note' }, token: { GET: 'bench_work' } },
+  '/api/v1/job-sheets': { methods: { GET: 'own_job_sheets', POST: 'own_job_sheets' }, token: { GET: 'bench_work', POST: 'bench_work' } },
+  // Deleting a job sheet stays in the browser: a program creates, reads and updates.
+  '/api/v1/job-sheets/[id]': {
+    methods: { GET: 'own_job_sheets', PATCH: 'own_job_sheets', DELETE: 'own_job_sheets' },
+    token: { GET: 'bench_work', PATCH: 'bench_work' },
+  },
+  '/api/v1/job-sheets/[id]/fixes': {
+    methods: { POST: 'own_job_sheets', DELETE: 'own_job_sheets' },
+    token: { POST: 'bench_work', DELETE: 'bench_work' },
+  },
+  '/api/v1/job-sheets/[id]/invoice-lines.csv': { methods: { GET: 'own_job_sheets' }, token: { GET: 'bench_work' } },
+  '/api/v1/job-sheets/[id]/invoice-lines.json': { methods: { GET: 'own_job_sheets' }, token: { GET: 'bench_work' } },
 
   // The local mail sink's pages (they answer 404 in production).
   '/dev/mail': { methods: { GET: 'view_dev_mail' }, noStore: true },

@@ -1,13 +1,13 @@
 // Hand-over notes: a customer-facing page pinned to one proofed revision, behind a short random code.
 import type { Knex } from 'knex';
 import { db } from '../core/db';
-import type { Failure } from '../http/result';
+import { refuse, succeed, type Failure, type Outcome } from '../http/result';
 import { config } from '../core/config';
 import { liveFixBySlug, proofedRevisionId } from './bench-reports';
 import { generateHandoverCode, normaliseHandoverCode } from '@/lib/handover-code';
 import type { Caution, CautionKind } from '@/lib/schemas/revision';
 import { fixRefFromText, formNumber, formText, type FormFields } from '@/lib/form-fields';
-import { type HandoverNoteData } from '@/lib/schemas/handover-note';
+import { type HandoverNoteData, type HandoverNotePatch } from '@/lib/schemas/handover-note';
 import { type JobStatus } from '@/lib/schemas/job-sheet';
 
 export interface NoteAuthor {
@@ -201,6 +201,11 @@ export interface OwnNote {
   revisionNumber: number;
   jobSheetId: number | null;
   includeJobDetails: boolean;
+  message: string;
+  partsReplaced: string[];
+  warranty: string;
+  /** Counts every change: the ETag and If-Match of the API. */
+  version: number;
 }
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -217,6 +222,10 @@ function toOwnNote(row: any): OwnNote {
     revisionNumber: row.revision_number,
     jobSheetId: row.job_sheet_id,
     includeJobDetails: row.include_job_details,
+    message: row.message,
+    partsReplaced: row.parts_replaced,
+    warranty: row.warranty,
+    version: row.version,
   };
 }
 
@@ -238,6 +247,42 @@ export async function getOwnNote(memberId: number, input: string): Promise<OwnNo
   if (!code) return null;
   const row = await noteQuery(db()).where({ 'n.code': code, 'n.member_id': memberId }).first();
   return row ? toOwnNote(row) : null;
+}
+
+/**
+ * Changes what the customer reads beside the fix (message, parts, warranty, shop name, job details shown). With
+ * `expectedVersion` (If-Match) only if nobody changed the note since; otherwise a 412 carrying the current note.
+ */
+export async function updateOwnNote(
+  memberId: number,
+  input: string,
+  patch: HandoverNotePatch,
+  expectedVersion?: number,
+): Promise<Outcome<OwnNote>> {
+  const code = normaliseHandoverCode(input);
+  const missing = refuse('not_found', 'You have no hand-over note with that code.');
+  if (!code) return missing;
+  const knex = db();
+  const changes: Record<string, unknown> = {};
+  if (patch.message !== undefined) changes.message = patch.message;
+  if (patch.warranty !== undefined) changes.warranty = patch.warranty;
+  if (patch.shopName !== undefined) changes.shop_name = patch.shopName ?? '';
+  if (patch.includeJobDetails !== undefined) changes.include_job_details = patch.includeJobDetails;
+  if (patch.partsReplaced !== undefined) changes.parts_replaced = JSON.stringify(patch.partsReplaced);
+  const write = knex('handover_notes').where({ code, member_id: memberId });
+  if (expectedVersion !== undefined) write.where({ version: expectedVersion });
+  // An empty change still counts as a write, so a stale If-Match is refused the same way.
+  const updated = await write.update(Object.keys(changes).length > 0 ? changes : { version: knex.raw('version') });
+  const note = await getOwnNote(memberId, code);
+  if (!note) return missing;
+  if (updated === 0)
+    return refuse(
+      'precondition_failed',
+      `The note changed since you read it: it is now version ${note.version}. Read it again, merge your change and send it with If-Match: "v${note.version}".`,
+      undefined,
+      { current: note },
+    );
+  return succeed(note);
 }
 
 export type RevokeResult = 'revoked' | 'already_revoked' | 'not_found';

@@ -9,6 +9,7 @@ import { config } from '../core/config';
 import { listOwnNotes } from './handover-notes';
 import type { JobPart, JobSheetCreate, JobSheetPatch, JobStatus } from '@/lib/schemas/job-sheet';
 import type { JobSheetListQuery } from '@/lib/schemas/job-sheet-list';
+import type { PageQuery } from '../core/pagination';
 
 export interface JobMachine {
   id: number;
@@ -46,9 +47,9 @@ export interface JobSheetView extends Omit<JobSheetSummary, 'machine' | 'fixCoun
   labourMinutes: number;
   outcome: string;
   createdAt: Date;
-  /** Counted up by every change to the sheet; a write naming an older one is refused as a conflict. */
-  version: number;
   fixes: AppliedFix[];
+  /** Counts every change, from the browser or a program: the ETag and If-Match of the API. */
+  version: number;
 }
 
 /** What a job sheet write hands back: the sheet's number (or a count), or why not. */
@@ -79,23 +80,12 @@ const sortColumns: Record<JobSheetListQuery['sort'], { column: string; order: 'a
   ],
 };
 
-export async function listJobSheets(ownerId: number, query: JobSheetListQuery): Promise<JobSheetSummary[]> {
-  const knex = db();
+/** The owner's sheets matching the query's status and words, unsorted and unselected. */
+function matchingSheets(knex: Knex, ownerId: number, query: Pick<JobSheetListQuery, 'status' | 'q'>): Knex.QueryBuilder {
   const q = knex('job_sheets as j')
     .leftJoin('machines as m', 'm.id', 'j.machine_id')
     .leftJoin('makers as mk', 'mk.id', 'm.maker_id')
-    .where('j.owner_id', ownerId)
-    .select(
-      'j.id',
-      'j.customer_ref',
-      'j.status',
-      'j.booked_in_at',
-      'j.updated_at',
-      knex.raw(`${machineLabel} AS machine_label`),
-      knex.raw('(SELECT count(*) FROM job_sheet_fixes jf WHERE jf.job_sheet_id = j.id) AS fix_count'),
-    )
-    .orderBy([...sortColumns[query.sort], { column: 'j.id', order: 'desc' }])
-    .limit(500);
+    .where('j.owner_id', ownerId);
   if (query.status) q.where('j.status', query.status);
   if (query.q) {
     const like = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
@@ -107,7 +97,34 @@ export async function listJobSheets(ownerId: number, query: JobSheetListQuery): 
         .orWhereILike('j.reported_symptom', like),
     );
   }
-  const rows = await q;
+  return q;
+}
+
+/** The owner's sheets, sorted; at most 500 (the /jobs page), or one page of them (the API). */
+export async function listJobSheets(ownerId: number, query: JobSheetListQuery, page?: PageQuery): Promise<JobSheetSummary[]> {
+  const knex = db();
+  const q = matchingSheets(knex, ownerId, query)
+    .select(
+      'j.id',
+      'j.customer_ref',
+      'j.status',
+      'j.booked_in_at',
+      'j.updated_at',
+      knex.raw(`${machineLabel} AS machine_label`),
+      knex.raw('(SELECT count(*) FROM job_sheet_fixes jf WHERE jf.job_sheet_id = j.id) AS fix_count'),
+    )
+    .orderBy([...sortColumns[query.sort], { column: 'j.id', order: 'desc' }])
+    .limit(page ? page.perPage : 500)
+    .offset(page ? (page.page - 1) * page.perPage : 0);
+  const rows: {
+    id: number;
+    customer_ref: string;
+    status: JobStatus;
+    booked_in_at: Date;
+    updated_at: Date;
+    machine_label: string | null;
+    fix_count: string;
+  }[] = await q;
   return rows.map((r) => ({
     id: r.id,
     customerRef: r.customer_ref,
@@ -117,6 +134,12 @@ export async function listJobSheets(ownerId: number, query: JobSheetListQuery): 
     updatedAt: r.updated_at,
     fixCount: Number(r.fix_count),
   }));
+}
+
+/** How many of the owner's sheets match the query: the total beside a page. */
+export async function countJobSheets(ownerId: number, query: Pick<JobSheetListQuery, 'status' | 'q'>): Promise<number> {
+  const [row] = await matchingSheets(db(), ownerId, query).count<{ count: string }[]>('j.id as count');
+  return Number(row?.count ?? 0);
 }
 
 /** The owner's job sheet, or null: another member's sheet is indistinguishable from a missing one. */
@@ -208,8 +231,9 @@ export async function createJobSheet(ownerId: number, data: JobSheetCreate): Pro
 }
 
 /**
- * Writes the fields given. With `expectedVersion`, only if the sheet is still at that version: otherwise a
- * conflict, so the caller can show both copies (an edit made offline meets a change made on another device).
+ * Writes the fields given. With `expectedVersion` (the If-Match of a program or of an edit made offline), only if
+ * nobody changed the sheet since that version: otherwise a refusal carrying the current sheet, so the caller can
+ * show both copies (412 Precondition Failed, the standard answer to a failed If-Match).
  */
 export async function updateJobSheet(
   ownerId: number,
@@ -220,8 +244,7 @@ export async function updateJobSheet(
   const knex = db();
   const current = await knex('job_sheets').where({ id, owner_id: ownerId }).first('id', 'customer_ref', 'version');
   if (!current) return { ok: false, code: 'not_found', message: 'No job sheet with that number.' };
-  const stale = { ok: false as const, code: 'conflict' as const, message: 'This job sheet was changed on another device since your copy.' };
-  if (expectedVersion !== undefined && current.version !== expectedVersion) return stale;
+  if (expectedVersion !== undefined && current.version !== expectedVersion) return staleSheet(ownerId, id);
   const changes: Record<string, unknown> = { updated_at: knex.fn.now() };
   if (patch.machine !== undefined) {
     const machineId = await machineIdOf(knex, patch.machine);
@@ -241,11 +264,22 @@ export async function updateJobSheet(
     if (patch[key] !== undefined) changes[column] = patch[key];
   }
   if (patch.partsUsed !== undefined) changes.parts_used = partsJson(patch.partsUsed, patch.customerRef ?? current.customer_ref);
-  const query = knex('job_sheets').where({ id, owner_id: ownerId });
-  // The version is checked again in the write itself, so a change landing between the read and here still counts.
-  if (expectedVersion !== undefined) query.andWhere({ version: expectedVersion });
-  if ((await query.update(changes)) === 0) return stale;
+  const write = knex('job_sheets').where({ id, owner_id: ownerId });
+  // The version is checked again in the write itself: an edit landing between the read and here still wins.
+  if (expectedVersion !== undefined) write.where({ version: expectedVersion });
+  if ((await write.update(changes)) === 0) return staleSheet(ownerId, id);
   return { ok: true, value: id };
+}
+
+async function staleSheet(ownerId: number, id: number): Promise<WriteResult<number>> {
+  const sheet = await getJobSheet(ownerId, id);
+  if (!sheet) return { ok: false, code: 'not_found', message: 'No job sheet with that number.' };
+  return refuse(
+    'precondition_failed',
+    `The job sheet changed since you read it: it is now version ${sheet.version}. Read it again, merge your change and send it with If-Match: "v${sheet.version}".`,
+    undefined,
+    { current: sheet },
+  );
 }
 
 /** Hard delete: the customer data goes; notes made from it keep working without it (SET NULL). */

@@ -57,6 +57,11 @@ export const limits = {
     perAccount: { points: 60, windowSeconds: hour },
     message: 'You have written many hand-over notes in a short time. Try again in about {minutes}.',
   },
+  /** Requests made with one personal API token (counted per token: the account key is `token:<id>`). */
+  api_token: {
+    perAccount: { points: 600, windowSeconds: quarterHour },
+    message: 'This API token has made 600 requests in 15 minutes. Wait about {minutes}, then go on; spread a large sync out over time.',
+  },
   /** Codes looked up that do not exist, per client address: guessing stops after a short burst. */
   note_miss: {
     perIp: { points: 20, windowSeconds: quarterHour },

@@ -12,6 +12,8 @@ export type ErrorCode =
   | 'method_not_allowed'
   | 'conflict'
   | 'gone'
+  | 'precondition_failed'
+  | 'precondition_required'
   | 'too_many_requests'
   | 'payload_too_large'
   | 'unsupported_media_type'
@@ -26,6 +28,8 @@ export const statusOf: Record<ErrorCode, number> = {
   method_not_allowed: 405,
   conflict: 409,
   gone: 410,
+  precondition_failed: 412,
+  precondition_required: 428,
   payload_too_large: 413,
   unsupported_media_type: 415,
   too_many_requests: 429,

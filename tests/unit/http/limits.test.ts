@@ -5,6 +5,7 @@ import { limitRefusal, limits, limitSpecs } from '@/server/http/rate-limit';
 describe('the limits table', () => {
   it('names every limit of the site', () => {
     expect(Object.keys(limits).sort()).toEqual([
+      'api_token',
       'bench_report',
       'email_request',
       'note_create',

@@ -174,9 +174,13 @@ const awaitingOwners: readonly string[] = [
   'src/lib/schemas/job-fix.ts: applyFixSchema',
   'src/lib/schemas/bench-report.ts: benchReportInputSchema',
   'src/lib/schemas/handover-note.ts: handoverNoteInputSchema',
+  // Picked from handoverNoteInputSchema: its fields' messages are that schema's.
+  'src/lib/schemas/handover-note.ts: handoverNotePatchSchema',
   'src/lib/schemas/job-sheet.ts: jobPartSchema',
   'src/lib/schemas/job-sheet.ts: jobSheetCreateSchema',
   'src/lib/schemas/job-sheet-list.ts: jobSheetListQuerySchema',
+  // Extends jobSheetListQuerySchema: its status and sort messages are that schema's.
+  'src/lib/schemas/job-sheet-list.ts: jobSheetPagedQuerySchema',
   'src/lib/schemas/job-sheet.ts: jobSheetPatchSchema',
   'src/lib/schemas/catalogue.ts: deviceTypeSchema',
   'src/lib/schemas/catalogue.ts: mediaFormatSchema',

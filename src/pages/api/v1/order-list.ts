@@ -1,6 +1,6 @@
 // GET/PUT /api/v1/order-list: the signed-in member's saved order list (GET ?format=csv answers the CSV).
 import type { APIRoute } from 'astro';
-import { z } from 'zod';
+import { formatQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { storedListCsv, storedListSchema } from '@/lib/tools/order-list';
 import { apiError, json } from '@/server/http/responses';
 import { getOrderList, saveOrderList } from '@/server/bench-work/order-lists';
@@ -8,8 +8,6 @@ import { csvResponse } from '@/server/http/csv-response';
 import { orderListOwner } from '@/server/bench-work/order-list-owner';
 import { readBody } from '@/server/http/body';
 import { respond, schemaRefusal, parseSearchParams } from '@/server/http/result';
-
-export const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 
 const EXAMPLE =
   '{ "lines": [{ "key": "capacitance:470 µF 16 V", "label": "470 µF 16 V", "kind": "capacitor", "quantity": 2, "spares": 1 }] }';

@@ -1,6 +1,6 @@
 // GET, PUT and DELETE /api/v1/drafts/:id: read, save (autosave) and discard the writer's own draft.
 import type { APIRoute } from 'astro';
-import { z } from 'zod';
+import { draftSaveBodySchema as bodySchema } from '@/server/openapi/inputs';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { db } from '@/server/core/db';
@@ -9,8 +9,6 @@ import { answer, idParam, requireUser } from '@/server/http/endpoint';
 import { readBody, writingInput } from '@/server/http/body';
 import { respond } from '@/server/http/result';
 import { loadRevision } from '@/server/writing/revisions';
-
-export const bodySchema = z.object({ values: z.unknown(), baseRevisionId: z.number().int().positive().nullable().optional() });
 
 export const GET: APIRoute = async ({ params, locals }) => {
   const user = requireUser(locals);

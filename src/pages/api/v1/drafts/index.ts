@@ -1,16 +1,13 @@
 // POST /api/v1/drafts: starts the writer's draft of a new fix, or of a live fix (`fixSlug`) on top of its live revision.
 import type { APIRoute } from 'astro';
-import { z } from 'zod';
+import { draftCreateBodySchema as bodySchema } from '@/server/openapi/inputs';
 import { can } from '@/lib/permissions';
-import { slugSchema } from '@/lib/schemas/slug';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { db } from '@/server/core/db';
 import { createDraft } from '@/server/writing/drafts';
 import { answer, requireUser } from '@/server/http/endpoint';
 import { readBody, writingInput } from '@/server/http/body';
 import { respond } from '@/server/http/result';
-
-export const bodySchema = z.object({ fixSlug: slugSchema.nullish(), values: z.unknown() });
 
 export const POST: APIRoute = async ({ request, locals }) => {
   const user = requireUser(locals);

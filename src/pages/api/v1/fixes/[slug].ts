@@ -1,12 +1,10 @@
 // GET /api/v1/fixes/:slug: the live proofed revision of a fix, or `?revision=n` for an older proofed one.
 import type { APIRoute } from 'astro';
+import { fixRevisionQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { parseSearchParams, respond } from '@/server/http/result';
-import { z } from 'zod';
 import { getFix } from '@/server/fixes/fixes';
 import { apiError, json } from '@/server/http/responses';
 import { slugSchema } from '@/lib/schemas/slug';
-
-export const querySchema = z.object({ revision: z.coerce.number().int().min(1).max(100_000).optional() });
 
 export const GET: APIRoute = async ({ params, url }) => {
   const slug = slugSchema.safeParse(params.slug);

@@ -1,14 +1,12 @@
 // GET /api/v1/fixes: live fixes, newest proofed first, optionally for one machine or chassis family.
 import type { APIRoute } from 'astro';
+import { fixListQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { parseSearchParams, respond } from '@/server/http/result';
 import { z } from 'zod';
 import { getChassis, getMachine } from '@/server/catalogue/catalogue';
 import { countFixSummaries, listFixSummaries } from '@/server/fixes/fixes';
 import { apiError, json } from '@/server/http/responses';
-import { pageQuerySchema, toPage } from '@/server/core/pagination';
-import { slugSchema } from '@/lib/schemas/slug';
-
-export const querySchema = pageQuerySchema.extend({ machine: slugSchema.optional(), chassis: slugSchema.optional() });
+import { toPage } from '@/server/core/pagination';
 
 export const GET: APIRoute = async ({ url }) => {
   const query = parseSearchParams(querySchema, url);

@@ -1,20 +1,24 @@
-// GET /api/v1/job-sheets: your job sheets (status, q, sort). POST: open a new job sheet.
+// GET /api/v1/job-sheets: your job sheets (status, q, sort), a page at a time. POST: open a new job sheet.
 import type { APIRoute } from 'astro';
 import { respond, parseSearchParams } from '@/server/http/result';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors, json } from '@/server/http/responses';
 import { readBody } from '@/server/http/body';
-import { createJobSheet, getJobSheet, listJobSheets } from '@/server/bench-work/job-sheets';
+import { countJobSheets, createJobSheet, getJobSheet, listJobSheets } from '@/server/bench-work/job-sheets';
 import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
-import { jobSheetListQuerySchema } from '@/lib/schemas/job-sheet-list';
+import { jobSheetPagedQuerySchema } from '@/lib/schemas/job-sheet-list';
+import { toPage } from '@/server/core/pagination';
+import { versionTag } from '@/server/http/if-match';
 
 export const GET: APIRoute = async ({ locals, url }) => {
   const user = locals.user;
   if (!user) return apiError('unauthorised', 'Sign in to see your job sheets.');
   if (!can(user, 'own_job_sheets')) return apiError('forbidden', 'Confirm your e-mail address before you keep job sheets.');
-  const query = parseSearchParams(jobSheetListQuerySchema, url);
+  const query = parseSearchParams(jobSheetPagedQuerySchema, url);
   if (!query.ok) return respond(query);
-  return json({ jobSheets: await listJobSheets(user.id, query.value) }, { cache: 'private' });
+  const [sheets, total] = await Promise.all([listJobSheets(user.id, query.value, query.value), countJobSheets(user.id, query.value)]);
+  const { items, ...page } = toPage(sheets, total, query.value);
+  return json({ jobSheets: items, ...page }, { cache: 'private' });
 };
 
 export const POST: APIRoute = async ({ locals, request }) => {
@@ -30,8 +34,9 @@ export const POST: APIRoute = async ({ locals, request }) => {
   if (!parsed.success) return apiError('bad_request', 'Some fields of the job sheet are not valid.', fieldErrors(parsed.error));
   const created = await createJobSheet(user.id, parsed.data);
   if (!created.ok) return respond(created);
+  const sheet = await getJobSheet(user.id, created.value);
   return json(
-    { jobSheet: await getJobSheet(user.id, created.value) },
-    { status: 201, cache: 'private', headers: { Location: `/api/v1/job-sheets/${created.value}` } },
+    { jobSheet: sheet },
+    { status: 201, cache: 'private', headers: { Location: `/api/v1/job-sheets/${created.value}`, ETag: versionTag(sheet?.version ?? 1) } },
   );
 };

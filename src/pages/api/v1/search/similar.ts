@@ -18,23 +18,12 @@
   400 bad_request (with fields) for missing or bad parameters; 404 not_found for an unknown machine or family.
 */
 import type { APIRoute } from 'astro';
+import { similarQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { parseSearchParams, respond } from '@/server/http/result';
-import { z } from 'zod';
-import { slugSchema } from '@/lib/schemas/slug';
-import { MAX_QUERY_LENGTH } from '@/lib/search/tokens';
 import { apiError, json } from '@/server/http/responses';
 import { db } from '@/server/core/db';
 import { findNamedChassis, findNamedMachine } from '@/server/search/context';
 import { similarFixes } from '@/server/search/similar';
-
-const oneTarget = 'Name a machine or a chassis family (one of them).';
-export const querySchema = z
-  .object({
-    symptom: z.string({ error: 'Say what the fault looks like.' }).trim().min(1, 'Say what the fault looks like.').max(MAX_QUERY_LENGTH),
-    machine: slugSchema.optional(),
-    chassis: slugSchema.optional(),
-  })
-  .refine((q) => (q.machine === undefined) !== (q.chassis === undefined), { message: oneTarget, path: ['machine'] });
 
 export const GET: APIRoute = async ({ url }) => {
   const params = parseSearchParams(querySchema, url);

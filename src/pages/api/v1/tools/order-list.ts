@@ -1,14 +1,12 @@
 // POST /api/v1/tools/order-list: parts rows grouped by canonical spec with spares; ?format=csv answers the CSV.
 import type { APIRoute } from 'astro';
-import { z } from 'zod';
+import { formatQuerySchema as querySchema } from '@/server/openapi/inputs';
 import { buildOrderList, orderListInputSchema } from '@/lib/bench/order-list';
 import { orderListCsv } from '@/lib/bench/order-list-csv';
 import { json } from '@/server/http/responses';
 import { csvResponse } from '@/server/http/csv-response';
 import { readBody } from '@/server/http/body';
 import { respond, inputRefusal, schemaRefusal, parseSearchParams } from '@/server/http/result';
-
-export const querySchema = z.object({ format: z.enum(['json', 'csv'], { error: 'Give format=json or format=csv.' }).default('json') });
 
 const EXAMPLE =
   '{ "lines": [{ "source": "Tray will not close", "ref": "C512", "kind": "capacitor", "value": "470uF", "rating": "16V 105C", "quantity": 1 }], "spares": { "percent": 10 } }';

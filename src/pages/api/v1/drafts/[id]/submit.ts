@@ -1,14 +1,12 @@
 // POST /api/v1/drafts/:id/submit: sends the draft to the proofing desk (409 with both versions on a stale base).
 import type { APIRoute } from 'astro';
-import { z } from 'zod';
+import { draftSubmitBodySchema as bodySchema } from '@/server/openapi/inputs';
 import { can } from '@/lib/permissions';
 import { apiError, fieldErrors } from '@/server/http/responses';
 import { answer, idParam, requireUser } from '@/server/http/endpoint';
 import { readBody, writingInput } from '@/server/http/body';
 import { submitDraft } from '@/server/writing/submit';
 import { respond } from '@/server/http/result';
-
-export const bodySchema = z.object({ values: z.unknown().optional() });
 
 export const POST: APIRoute = async ({ params, request, locals }) => {
   const user = requireUser(locals);
