@@ -32,7 +32,7 @@ function editable(response: Response): Response {
 
 const securityHeaders = defineMiddleware(async (_context, next) => {
   const response = editable(await next());
-  applySecurityHeaders(response.headers);
+  applySecurityHeaders(response.headers, response.status);
   return response;
 });
 

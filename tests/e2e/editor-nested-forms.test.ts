@@ -6,6 +6,7 @@ import { routeAccess } from '@/server/auth/route-access';
 import { launchBrowser } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
+import { signUnsubscribe } from '@/lib/notifications/unsubscribe-token';
 import { createUser, postForm, signIn, uniqueClientIp } from '../support/sign-in';
 
 const base = `http://127.0.0.1:${E2E_PORT}`;
@@ -106,6 +107,8 @@ beforeAll(async () => {
     '/notes/[code]': { code: String(find(note, 'code')) },
     '/n/[code]': { code: String(find(note, 'code')) },
     '/proofing/[id]': { id: String(draftId) },
+    // A signed one-click unsubscribe link, as a notification mail carries (the test servers' AUTH_SECRET).
+    '/unsubscribe/[token]': { token: signUnsubscribe(process.env.AUTH_SECRET!, { userId: users.member!.id, what: { digest: true } }) },
   };
   Object.assign(routeSamples, pageSamples);
 

@@ -67,8 +67,10 @@ export const routeAccess: Record<string, RouteRule> = {
   '/sitemaps/[file].xml': { methods: { GET: 'public' }, sharedCache: true },
 
   // Built once and stored by the service worker: the offline page and the list of fixes kept on this device.
-  '/offline': read,
-  '/kept': read,
+  // Prerendered files: the adapter serves them for any method before our middleware runs, and they hold nothing
+  // personal, so the table says what happens: every method gets the same page.
+  '/offline': { methods: { '*': 'public' } },
+  '/kept': { methods: { '*': 'public' } },
   '/api/v1/machines': apiRead,
   '/api/v1/machines/[slug]': apiRead,
   '/api/v1/chassis/[slug]': apiRead,

@@ -50,8 +50,11 @@ export const astroCsp = {
  * Sets the security headers. A page's own policy (with its hashes, set by Astro) is kept; anything else gets
  * the strict one.
  */
-export function applySecurityHeaders(headers: Headers): void {
-  if (!headers.has('Content-Security-Policy')) headers.set('Content-Security-Policy', inDev ? devPolicy : contentSecurityPolicy);
+export function applySecurityHeaders(headers: Headers, status = 200): void {
+  // A 304 updates the headers the browser stored with the page (RFC 9111 §4.3.4): the page's own policy, with the
+  // hashes of its inline styles, must stay, so a 304 carries no policy of its own.
+  if (status !== 304 && !headers.has('Content-Security-Policy'))
+    headers.set('Content-Security-Policy', inDev ? devPolicy : contentSecurityPolicy);
   headers.set('X-Content-Type-Options', 'nosniff');
   headers.set('Referrer-Policy', 'strict-origin-when-cross-origin');
   headers.set('X-Frame-Options', 'DENY');

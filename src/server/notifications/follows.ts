@@ -119,3 +119,9 @@ export async function listFollows(userId: number, knex: Knex = db()): Promise<Fo
 export async function stopFollowById(userId: number, followId: number, knex: Knex = db()): Promise<boolean> {
   return (await knex('follows').where({ id: followId, user_id: userId }).delete()) > 0;
 }
+
+/** Whether the member follows the thing named by its address slug (false when there is no such thing). */
+export async function isFollowingSlug(userId: number, kind: FollowTargetKind, slug: string, knex: Knex = db()): Promise<boolean> {
+  const target = await findFollowTarget(kind, slug, knex);
+  return target ? isFollowing(userId, kind, target.id, knex) : false;
+}
