@@ -1,77 +1,55 @@
-// Following and the notification list as form Actions: plain HTML forms that work without JavaScript.
+// Following and the notification list as form Actions: plain HTML forms that work without JavaScript, on the
+// shared form runner (permission checked again, everything typed kept, a refusal shown where it was sent).
 import type { ActionAPIContext } from 'astro:actions';
-import { can } from '@/lib/permissions';
 import { followSchema } from '@/lib/schemas/follow';
 import { notificationSettingsSchema } from '@/lib/schemas/notification-settings';
+import { localPathOr } from '@/lib/local-path';
 import { fieldErrors } from '@/server/http/responses';
+import { runFormAction, type PageFormResult } from '@/server/http/forms';
+import { refuse, succeed } from '@/server/http/result';
 import { setFollowing } from '@/server/notifications/follows';
 import { markRead } from '@/server/notifications/events';
 import { saveDeliveries } from '@/server/notifications/settings';
-import { localPathOr } from '@/lib/local-path';
-import { typedFields, type FormActionResult } from '@/lib/form-fields';
 
 type Context = Pick<ActionAPIContext, 'locals'>;
 
-export type FollowFormResult = FormActionResult<{ following: boolean; name: string; back: string }>;
-
-export async function submitFollowForm(form: FormData, { locals }: Context): Promise<FollowFormResult> {
-  const typed = typedFields(form, ['kind', 'slug', 'follow', 'back']);
-  const refuse = (status: number, message: string, fields: Record<string, string[]> = {}): FollowFormResult => ({
-    saved: false,
-    status,
-    message,
-    fields,
-    typed,
+/** Follow or stop following; back to the page the button was on (the Following page says which way it went). */
+export function submitFollowForm(form: FormData, { locals }: Context): Promise<PageFormResult> {
+  return runFormAction(form, locals, 'follow', async (user, fields) => {
+    const parsed = followSchema.safeParse(fields);
+    if (!parsed.success) {
+      // The form's fields are hidden: the reader sees what was wrong in the message itself.
+      const messages = fieldErrors(parsed.error);
+      return refuse(
+        'bad_request',
+        `Nothing was changed: ${Object.values(messages).flat()[0] ?? 'the form did not say what to follow.'}`,
+        messages,
+      );
+    }
+    const outcome = await setFollowing(user.id, parsed.data.kind, parsed.data.slug, parsed.data.follow === 'yes');
+    if (!outcome.ok) return outcome;
+    const back = localPathOr(parsed.data.back, outcome.value.target.path);
+    return succeed({ location: back === '/following' ? `/following?${outcome.value.following ? 'followed' : 'stopped'}=1` : back });
   });
-  const user = locals.user;
-  if (!user) return refuse(401, 'Sign in to follow machines, chassis families, makers and fixes.');
-  if (!can(user, 'follow')) return refuse(403, 'Your account may not follow anything at the moment.');
-  const parsed = followSchema.safeParse(Object.fromEntries(form));
-  if (!parsed.success) {
-    // The form's fields are hidden: the reader sees what was wrong in the message itself.
-    const fields = fieldErrors(parsed.error);
-    return refuse(400, `Nothing was changed: ${Object.values(fields).flat()[0] ?? 'the form did not say what to follow.'}`, fields);
-  }
-  const outcome = await setFollowing(user.id, parsed.data.kind, parsed.data.slug, parsed.data.follow === 'yes');
-  if (!outcome.ok) return refuse(outcome.code === 'not_found' ? 404 : 400, outcome.message);
-  return {
-    saved: true,
-    following: outcome.value.following,
-    name: outcome.value.target.name,
-    back: localPathOr(parsed.data.back, outcome.value.target.path),
-  };
 }
 
-export type MarkReadResult = FormActionResult<{ marked: number }>;
-
-export async function submitMarkReadForm(form: FormData, { locals }: Context): Promise<MarkReadResult> {
-  const user = locals.user;
-  const typed = typedFields(form, ['id']);
-  if (!user || !can(user, 'follow')) return { saved: false, status: 401, message: 'Sign in to see your notifications.', fields: {}, typed };
-  const ids = form
-    .getAll('id')
-    .map((v) => Number(v))
-    .filter((n) => Number.isSafeInteger(n) && n > 0);
-  const marked = await markRead(user.id, ids.length ? ids : 'all');
-  return { saved: true, marked };
+export function submitMarkReadForm(form: FormData, { locals }: Context): Promise<PageFormResult> {
+  return runFormAction(form, locals, 'follow', async (user) => {
+    const ids = form
+      .getAll('id')
+      .map((v) => Number(v))
+      .filter((n) => Number.isSafeInteger(n) && n > 0);
+    await markRead(user.id, ids.length ? ids : 'all');
+    return succeed({ location: '/notifications?read=1' });
+  });
 }
 
-export type NotificationSettingsResult = FormActionResult<Record<never, never>>;
-
-export async function submitNotificationSettingsForm(form: FormData, { locals }: Context): Promise<NotificationSettingsResult> {
-  const user = locals.user;
-  const typed = typedFields(form, [...form.keys()]);
-  if (!user || !can(user, 'follow'))
-    return { saved: false, status: 401, message: 'Sign in to choose what reaches you.', fields: {}, typed };
-  const parsed = notificationSettingsSchema.safeParse(Object.fromEntries(form));
-  if (!parsed.success)
-    return {
-      saved: false,
-      status: 400,
-      message: 'Nothing was changed: choose one way for each kind of news.',
-      fields: fieldErrors(parsed.error),
-      typed,
-    };
-  await saveDeliveries(user.id, parsed.data);
-  return { saved: true };
+export function submitNotificationSettingsForm(form: FormData, { locals }: Context): Promise<PageFormResult> {
+  return runFormAction(form, locals, 'follow', async (user, fields) => {
+    const parsed = notificationSettingsSchema.safeParse(fields);
+    if (!parsed.success)
+      return refuse('bad_request', 'Nothing was changed: choose one way for each kind of news.', fieldErrors(parsed.error));
+    await saveDeliveries(user.id, parsed.data);
+    return succeed({ location: '/account/notifications?saved=1' });
+  });
 }

@@ -215,7 +215,8 @@ describe('news of a proofed fix', () => {
     expect(page).toContain(`/fixes/${second}`);
     expect(page).toMatch(/News\s*<span[^>]*>\s*1\s*<span class="sr-only"> unread/);
     const marked = await form('/notifications?_action=markNotificationsRead', {}, quiet.cookie);
-    expect(marked.status).toBe(200);
+    expect(marked.status).toBe(303);
+    expect(marked.headers.get('location')).toBe('/notifications?read=1');
     expect(await knex('notification_events').where({ user_id: quiet.id }).whereNull('read_at').count({ n: '*' })).toEqual([{ n: '0' }]);
   });
 });
