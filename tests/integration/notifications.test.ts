@@ -138,22 +138,26 @@ describe('news of a proofed fix', () => {
   let slug: string;
   let firstRevision: number;
 
-  it('tells a follower of the machine at once by mail (their choice), with one-click unsubscribe headers', async () => {
-    await setDelivery(follower.id, 'fix_proofed', 'now');
-    const published = await publishFix(base, author, moderator, completeValues(machine.id));
-    slug = published.slug;
-    firstRevision = published.revisionId;
-    const [event] = await waitForEvents(follower.id, 'fix_proofed');
-    expect(event!.line).toBe('A new fix.');
-    expect(event!.path).toBe(`/fixes/${slug}`);
-    const mail = await waitForMail(INTEGRATION_PORT, follower.email, { subject: 'A fix goes live' });
-    expect(mail.text).toContain(`/fixes/${slug}`);
-    expect(mail.html).toContain(`/fixes/${slug}`);
-    expect(mail.headers?.['list-unsubscribe-post']).toBe('List-Unsubscribe=One-Click');
-    expect(mail.headers?.['list-unsubscribe']).toMatch(/^<http:\/\/[^>]+\/unsubscribe\/[^>]+>$/);
-    // The author hears from the proofing desk, not from the fan-out.
-    expect(await eventsOf(author.id, 'fix_proofed')).toHaveLength(0);
-  });
+  it(
+    'tells a follower of the machine at once by mail (their choice), with one-click unsubscribe headers',
+    { timeout: 60_000 },
+    async () => {
+      await setDelivery(follower.id, 'fix_proofed', 'now');
+      const published = await publishFix(base, author, moderator, completeValues(machine.id));
+      slug = published.slug;
+      firstRevision = published.revisionId;
+      const [event] = await waitForEvents(follower.id, 'fix_proofed');
+      expect(event!.line).toBe('A new fix.');
+      expect(event!.path).toBe(`/fixes/${slug}`);
+      const mail = await waitForMail(INTEGRATION_PORT, follower.email, { subject: 'A fix goes live', timeoutMs: 30_000 });
+      expect(mail.text).toContain(`/fixes/${slug}`);
+      expect(mail.html).toContain(`/fixes/${slug}`);
+      expect(mail.headers?.['list-unsubscribe-post']).toBe('List-Unsubscribe=One-Click');
+      expect(mail.headers?.['list-unsubscribe']).toMatch(/^<http:\/\/[^>]+\/unsubscribe\/[^>]+>$/);
+      // The author hears from the proofing desk, not from the fan-out.
+      expect(await eventsOf(author.id, 'fix_proofed')).toHaveLength(0);
+    },
+  );
 
   it('says in one line what a new revision changed, and tells hand-over note writers whose note cites the old one', async () => {
     const noteWriter = await session(knex, base, 'member', 'news-notes');
@@ -222,7 +226,7 @@ describe('news of a proofed fix', () => {
 });
 
 describe('news for authors', () => {
-  it('records a bench report and, at once by mail, a fault that came back', async () => {
+  it('records a bench report and, at once by mail, a fault that came back', { timeout: 60_000 }, async () => {
     const { slug } = await publishFix(base, author, moderator, completeValues(machine.id));
     const reporter = await session(knex, base, 'member', 'news-reporter');
     const report = (outcome: string, extra: Record<string, unknown> = {}) =>
@@ -236,7 +240,7 @@ describe('news for authors', () => {
     expect((await report('came_back', { heldDays: 12 })).status).toBeLessThan(300);
     const [back] = await waitForEvents(author.id, 'fault_came_back');
     expect(back!.line).toContain('came back after 12 days');
-    await waitForMail(INTEGRATION_PORT, author.email, { subject: 'The fault came back' });
+    await waitForMail(INTEGRATION_PORT, author.email, { subject: 'The fault came back', timeoutMs: 30_000 });
     // Saving the same report again is not news again.
     await report('came_back', { heldDays: 12 });
     expect(await eventsOf(author.id, 'fault_came_back')).toHaveLength(1);
