@@ -1,5 +1,5 @@
-// A technician who restores one family of decks follows it, chooses to hear about it only in Benchlore, sees the
-// news of a new fix in the header, reads it, marks it read, and later stops following from a phone.
+// A technician who restores one family of decks follows it, chooses to hear about new fixes at once, finds the
+// news of a new fix by mail and in the header, reads it, marks it read, and later stops following from a phone.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from '../support/browser';
@@ -28,10 +28,11 @@ afterAll(async () => {
 });
 
 describe('a technician following a chassis family', () => {
-  it('follows it, hears about a new fix only in the app, reads it and stops following on a phone', async () => {
+  it('follows it, hears about a new fix by mail and in the app, reads it and stops following on a phone', async () => {
     const journey = new Journey(browser);
     const page = await journey.page({ as: technician });
     let fixSlug = '';
+    let fixTitle = '';
 
     await journey.step('follows the chassis family from its page, by keyboard', async () => {
       await journey.goto(page, `/chassis/${machine.chassis_slug}`);
@@ -41,24 +42,41 @@ describe('a technician following a chassis family', () => {
       await sees(page.getByRole('button', { name: `Stop following ${machine.chassis_name}` }));
     });
 
-    await journey.step('chooses to hear about new fixes only in Benchlore', async () => {
+    await journey.step('chooses to hear about new fixes at once by e-mail', async () => {
       await journey.goto(page, '/account/notifications');
       const group = page.getByRole('group', { name: 'A fix goes live for something you follow' });
-      await group.getByRole('radio', { name: 'Only here in Benchlore' }).check();
+      await group.getByRole('radio', { name: 'E-mail at once' }).check();
       await journey.navigates(page, /\/account\/notifications/, () => page.getByRole('button', { name: 'Save' }).click());
       await sees(page.getByRole('status').filter({ hasText: 'Saved.' }));
-      expect(await group.getByRole('radio', { name: 'Only here in Benchlore' }).isChecked()).toBe(true);
+      expect(await group.getByRole('radio', { name: 'E-mail at once' }).isChecked()).toBe(true);
     });
 
     await journey.step('a fix for a machine of the family goes live (written and proofed by others)', async () => {
       const author = await session(knex, base, 'member', 'journey-follow-author');
       const moderator = await session(knex, base, 'moderator', 'journey-follow-mod');
-      ({ slug: fixSlug } = await publishFix(base, author, moderator, completeValues(machine.id)));
+      const values = completeValues(machine.id);
+      fixTitle = values.title;
+      ({ slug: fixSlug } = await publishFix(base, author, moderator, values));
       // The job queue fans it out within a few seconds.
       const deadline = Date.now() + 15_000;
       while (!(await knex('notification_events').where({ user_id: technician.id, kind: 'fix_proofed' }).first('id'))) {
         if (Date.now() > deadline) throw new Error('no news recorded for the follower');
         await new Promise((resolve) => setTimeout(resolve, 200));
+      }
+    });
+
+    await journey.step('finds the mail about it in the mail sink, with a link to the fix', async () => {
+      const deadline = Date.now() + 30_000;
+      for (;;) {
+        await journey.goto(page, '/dev/mail');
+        const mail = page.getByRole('link', { name: `A fix goes live for something you follow: ${fixTitle}` });
+        if ((await mail.count()) > 0) {
+          await journey.navigates(page, /\/dev\/mail\//, () => mail.first().click());
+          expect(await page.content()).toContain(`/fixes/${fixSlug}`);
+          break;
+        }
+        if (Date.now() > deadline) throw new Error('no mail about the new fix in the sink');
+        await new Promise((resolve) => setTimeout(resolve, 1000));
       }
     });
 
