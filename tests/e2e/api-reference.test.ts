@@ -32,7 +32,7 @@ describe('the API reference page', () => {
       page.on('pageerror', (error) => errors.push(error.message));
       await page.goto(`${base}/api`);
       for (const guide of ['Authentication', 'Rate limits', 'Errors and versions', 'Paging'])
-        await expect(page.getByRole('heading', { name: guide, level: 2 }).isVisible()).resolves.toBe(true);
+        await page.getByRole('heading', { name: guide, level: 2 }).waitFor({ state: 'visible', timeout: 5_000 });
       await page.waitForSelector('.opblock-summary-control');
       const doc = await (await fetch(`${base}/api/v1/openapi.json`)).json();
       const documented = Object.values(doc.paths as Record<string, object>).reduce((n, methods) => n + Object.keys(methods).length, 0);
@@ -40,7 +40,8 @@ describe('the API reference page', () => {
       // Open one operation by keyboard: its token rule is shown.
       await page.locator('.opblock-summary-control').filter({ hasText: '/api/v1/job-sheets/{id}' }).first().focus();
       await page.keyboard.press('Enter');
-      await expect(page.getByText('An API token with the bench_work scope may call it.').first().isVisible()).resolves.toBe(true);
+      // The operation opens with an animation: wait for its text rather than asking once.
+      await page.getByText('An API token with the bench_work scope may call it.').first().waitFor({ state: 'visible', timeout: 5_000 });
       await page.waitForLoadState('networkidle');
       expect(outside).toEqual([]);
       expect(errors).toEqual([]);
