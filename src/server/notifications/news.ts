@@ -3,6 +3,7 @@
 // a revised fix for hand-over notes that cite it, a moderator's note for the author. Each is recorded once.
 import type { Knex } from 'knex';
 import { db } from '../core/db';
+import { config, type Config } from '../core/config';
 import { logger } from '../core/logger';
 import { ensureQueue, sendJob, startQueueWorker, type QueueWorker, type RetryPolicy } from '../core/job-queue';
 import { enqueueMail } from '../mail/outbox';
@@ -11,15 +12,21 @@ import { wantingNow } from './settings';
 import { eventMail } from './mails';
 import { changedFieldsLine, type NotificationKind } from '@/lib/notifications/kinds';
 
-export const PROOFED_NEWS_QUEUE = 'news-proofed';
+/**
+ * The fan-out queue. Like the mail outbox's, a server on a local mail sink has one of its own, so servers side by
+ * side on one database (the tests') each fan out, and mail, their own proofings; with SMTP_URL all share one.
+ */
+export function proofedNewsQueue(settings: Pick<Config, 'SMTP_URL' | 'SMTP_SINK_PORT'> = config()): string {
+  return settings.SMTP_URL ? 'news-proofed' : `news-proofed-sink-${settings.SMTP_SINK_PORT}`;
+}
 export const FAN_OUT_BATCH = 1000;
 /** About a day of retries with back-off: a fan-out that meets an outage is done when the database is back. */
 const newsRetry: RetryPolicy = { retryLimit: 12, retryDelay: 5, retryBackoff: true };
 
 /** Called after a proofing commits (or inside its transaction: the job then appears only if it commits). */
 export async function queueProofedNews(knex: Knex, revisionId: number): Promise<void> {
-  await ensureQueue(PROOFED_NEWS_QUEUE, newsRetry);
-  await sendJob(knex, PROOFED_NEWS_QUEUE, { revisionId }, { ...newsRetry, singletonKey: `proofed:${revisionId}` });
+  await ensureQueue(proofedNewsQueue(), newsRetry);
+  await sendJob(knex, proofedNewsQueue(), { revisionId }, { ...newsRetry, singletonKey: `proofed:${revisionId}` });
 }
 
 interface ProofedRevision {
@@ -300,7 +307,7 @@ export async function recordModeratorReply(
 /** The fan-out worker, started at boot with the server's other background work. */
 export async function startNewsWorker(): Promise<QueueWorker> {
   return startQueueWorker<{ revisionId: number }>(
-    PROOFED_NEWS_QUEUE,
+    proofedNewsQueue(),
     newsRetry,
     async (jobs) => {
       for (const job of jobs) {
