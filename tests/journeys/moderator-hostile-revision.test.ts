@@ -28,7 +28,17 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
   // Its unbroken markup words would widen the home page's recent list for the journeys after this one: take it down.
-  await knex('fixes').whereIn('current_revision_id', knex('revisions').select('id').where({ title })).update({ deleted_at: new Date() });
+  // Taken down as the app does it: the fix and its search row together (other files check the two agree).
+  const ids = await knex('fixes')
+    .whereIn('current_revision_id', knex('revisions').select('id').where({ title }))
+    .update({ deleted_at: new Date() })
+    .returning('id');
+  await knex('fix_search')
+    .whereIn(
+      'fix_id',
+      ids.map((r: { id: number }) => r.id),
+    )
+    .delete();
   await knex.destroy();
 });
 
