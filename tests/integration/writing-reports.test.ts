@@ -139,3 +139,25 @@ describe('locking and hiding', () => {
     expect(actions).toEqual(expect.arrayContaining(['fix.lock', 'fix.unlock', 'fix.hide', 'fix.unhide']));
   });
 });
+
+describe('reports on a deleted fix', () => {
+  it('leave the desk with the fix: nothing is left there for a moderator to act on', async () => {
+    const author = await session(knex, base, 'member', 'rep-gone-author');
+    const gone = await publishFix(base, author, moderator, completeValues(await someMachineId(knex, 4)));
+    const sent = await postForm(
+      base,
+      `/api/v1/fixes/${gone.slug}/reports`,
+      { reason: 'wrong', detail: 'The belt size in the parts list does not match the pulley.' },
+      { cookie: member.cookie },
+    );
+    expect(sent.status).toBe(303);
+    const report = await knex('reports as rp').join('fixes as f', 'f.id', 'rp.fix_id').where('f.slug', gone.slug).first('rp.id');
+    const before = await (await fetch(`${base}/proofing`, { headers: { cookie: moderator.cookie } })).text();
+    expect(before).toContain(`data-report="${report.id}"`);
+    // Deleted as the data rules have it: the fix row marked and its search row gone with it.
+    const [row] = await knex('fixes').where({ slug: gone.slug }).update({ deleted_at: new Date() }).returning('id');
+    await knex('fix_search').where({ fix_id: row.id }).delete();
+    const after = await (await fetch(`${base}/proofing`, { headers: { cookie: moderator.cookie } })).text();
+    expect(after).not.toContain(`data-report="${report.id}"`);
+  });
+});

@@ -59,6 +59,8 @@ export async function listOpenReports(): Promise<OpenReport[]> {
     .leftJoin('revisions as r', 'r.id', 'f.current_revision_id')
     .join('users as u', 'u.id', 'rp.reporter_id')
     .where('rp.state', 'open')
+    // A deleted fix leaves nothing for a moderator to act on: its reports leave the desk with it.
+    .whereNull('f.deleted_at')
     .orderBy('rp.created_at', 'asc')
     .limit(500)
     .select('rp.id', 'f.slug', 'r.title', 'rp.reason', 'rp.detail', 'u.name', 'rp.created_at', 'f.locked_at', 'f.hidden_at');
