@@ -28,6 +28,8 @@ interface IndexedTerm {
   words: string[];
   term: string;
   families: WordFamily[];
+  /** The other terms of its families, worked out once per family list (see `lookupOf`). */
+  alternatives?: string[];
 }
 
 /** Stands for any way of saying "not" when family terms are matched by meaning ("no spin" as "won't spin"). */
@@ -90,6 +92,7 @@ function startsAt(words: readonly string[], at: number, candidate: readonly stri
 }
 
 function alternativesOf(entry: IndexedTerm): string[] {
+  if (entry.alternatives) return entry.alternatives;
   const own = termWords(entry.term).join(' ');
   const seen = new Set<string>([own]);
   const alternatives: string[] = [];
@@ -101,7 +104,31 @@ function alternativesOf(entry: IndexedTerm): string[] {
       alternatives.push(term);
     }
   }
+  entry.alternatives = alternatives;
   return alternatives;
+}
+
+interface FamilyLookup {
+  index: Map<string, IndexedTerm[]>;
+  byMeaning: Map<string, IndexedTerm[]>;
+  vocabulary: Set<string>;
+}
+
+/**
+ * The indexes of one list of families, built on its first search and kept while that list lives: the server
+ * keeps one compiled list until an editor changes a family, so every search after the first reuses them.
+ */
+const lookups = new WeakMap<readonly WordFamily[], FamilyLookup>();
+
+function lookupOf(families: readonly WordFamily[]): FamilyLookup {
+  let lookup = lookups.get(families);
+  if (!lookup) {
+    const vocabulary = new Set<string>();
+    for (const family of families) for (const term of family.terms) for (const word of termWords(term)) vocabulary.add(word);
+    lookup = { index: indexTerms(families, (w) => w), byMeaning: indexTerms(families, asNegationTokens), vocabulary };
+    lookups.set(families, lookup);
+  }
+  return lookup;
 }
 
 /**
@@ -110,8 +137,7 @@ function alternativesOf(entry: IndexedTerm): string[] {
  * for "won't spin"): it matches by meaning, and the family's spelling stands for it.
  */
 export function matchFamilies(words: readonly string[], families: readonly WordFamily[]): FamilySpan[] {
-  const index = indexTerms(families, (w) => w);
-  const byMeaning = indexTerms(families, asNegationTokens);
+  const { index, byMeaning } = lookupOf(families);
   const tokens = negationTokens(words);
   const tokenAt = new Map(tokens.map((t, i) => [t.at, i]));
   const tokenTexts = tokens.map((t) => t.token);
@@ -143,8 +169,6 @@ export function matchFamilies(words: readonly string[], families: readonly WordF
 }
 
 /** Every single word that appears in some family term: such words are never "corrected" away. */
-export function familyVocabulary(families: readonly WordFamily[]): Set<string> {
-  const words = new Set<string>();
-  for (const family of families) for (const term of family.terms) for (const word of termWords(term)) words.add(word);
-  return words;
+export function familyVocabulary(families: readonly WordFamily[]): ReadonlySet<string> {
+  return lookupOf(families).vocabulary;
 }
