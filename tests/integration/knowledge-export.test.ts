@@ -9,7 +9,9 @@ import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ExportedFix, ExportManifest } from '@/server/export/knowledge-export';
 import { testDb } from '../support/db';
-import { testEnv } from '../support/test-env';
+import { INTEGRATION_PORT, testEnv } from '../support/test-env';
+import { postForm } from '../support/sign-in';
+import { completeValues, publishFix, session, someMachineId } from '../fixtures/writing';
 
 const run = promisify(execFile);
 
@@ -24,9 +26,14 @@ describe('npm run export', () => {
   beforeAll(async () => {
     dir = await mkdtemp(join(tmpdir(), 'benchlore-export-'));
     knex = testDb();
-    // One fix hidden by a moderator for the length of this file: the export must leave it out.
-    hiddenSlug = (await knex('fixes').whereNotNull('current_revision_id').whereNull('hidden_at').orderBy('id').first('slug')).slug;
-    await knex('fixes').where('slug', hiddenSlug).update({ hidden_at: knex.fn.now() });
+    // A fix of this file's own, proofed and then hidden by a moderator through the app: the export must leave it out.
+    // (Not one of the demo world's: other files read those while this one runs.)
+    const base = `http://127.0.0.1:${INTEGRATION_PORT}`;
+    const moderator = await session(knex, base, 'moderator', 'export-mod');
+    const author = await session(knex, base, 'member', 'export-author');
+    ({ slug: hiddenSlug } = await publishFix(base, author, moderator, completeValues(await someMachineId(knex, 2))));
+    const hidden = await postForm(base, `/api/v1/proofing/fixes/${hiddenSlug}`, { action: 'hide' }, { cookie: moderator.cookie });
+    expect(hidden.status).toBe(303);
     const { stdout } = await run(process.execPath, ['--import', 'tsx', 'scripts/export.ts', '--out', dir], {
       env: { ...testEnv(), LOG_LEVEL: 'silent', PUBLIC_ORIGIN: 'https://bench.example.test' },
       timeout: 120_000,
@@ -43,7 +50,6 @@ describe('npm run export', () => {
   });
 
   afterAll(async () => {
-    await knex('fixes').where('slug', hiddenSlug).update({ hidden_at: null });
     await knex.destroy();
     await rm(dir, { recursive: true, force: true });
   });
