@@ -11,6 +11,8 @@ interface MixedRequest {
   path: string;
   headers?: Record<string, string>;
   body?: string;
+  /** autocannon's per-request hook; `context` lives as long as the connection does. */
+  setupRequest?: (request: MixedRequest, context: Record<string, unknown>) => MixedRequest;
 }
 interface MixedResult {
   requests: { total: number; average: number };
@@ -55,8 +57,12 @@ async function startApp(port: number, env: NodeJS.ProcessEnv): Promise<{ base: s
   };
 }
 
-/** Reads (pages), searches (page and API) and a signed-in member's draft autosaves, in about 5 : 3 : 2. */
-async function mixOf(base: string, knex: import('knex').Knex): Promise<MixedRequest[]> {
+/**
+ * Reads (pages), searches (page and API) and a signed-in member's draft autosaves, in about 5 : 3 : 2. Each connection
+ * saves a draft of its own, as a writer's editor does (one save after another on their own draft): many connections
+ * saving one draft would only measure them queueing for its row lock.
+ */
+async function mixOf(base: string, knex: import('knex').Knex, connections: number): Promise<MixedRequest[]> {
   const fixes: { slug: string }[] = await knex('fixes')
     .whereNotNull('current_revision_id')
     .whereNull('hidden_at')
@@ -68,7 +74,7 @@ async function mixOf(base: string, knex: import('knex').Knex): Promise<MixedRequ
   const cookie = await signIn(base, 'member@example.test', PASSWORD, '127.0.0.1');
   const json = { cookie, origin: base, 'content-type': 'application/json', accept: 'application/json' };
   const drafts: number[] = [];
-  for (let i = 0; i < 2; i++) {
+  for (let i = 0; i < connections; i++) {
     const res = await fetch(`${base}/api/v1/drafts`, {
       method: 'POST',
       headers: json,
@@ -78,21 +84,26 @@ async function mixOf(base: string, knex: import('knex').Knex): Promise<MixedRequ
     if (!body.revision) throw new Error(`Could not start a draft: ${body.error?.message ?? res.status}`);
     drafts.push(body.revision.id);
   }
-  const save = (id: number): MixedRequest => ({
+  let handedOut = 0;
+  const save: MixedRequest = {
     method: 'PUT',
-    path: `/api/v1/drafts/${id}`,
+    path: '/api/v1/drafts/0',
     headers: json,
     body: JSON.stringify({ values: completeValues(machineId, { cause: 'Saved again by the load benchmark while typing.' }) }),
-  });
+    setupRequest: (request, context) => {
+      context.draft ??= drafts[handedOut++ % drafts.length];
+      return { ...request, path: `/api/v1/drafts/${context.draft as number}` };
+    },
+  };
   return [
     { method: 'GET', path: `/fixes/${fixes[0]!.slug}` },
     { method: 'GET', path: '/search?q=tray+will+not+close' },
     { method: 'GET', path: `/machines/${machine.slug}` },
-    save(drafts[0]!),
+    save,
     { method: 'GET', path: `/fixes/${fixes[1]!.slug}` },
     { method: 'GET', path: '/api/v1/search?q=capstan+speed' },
     { method: 'GET', path: '/machines' },
-    save(drafts[1]!),
+    save,
     { method: 'GET', path: `/fixes/${fixes[2]!.slug}` },
     { method: 'GET', path: '/search?q=hum+in+both+channels' },
   ];
@@ -107,7 +118,7 @@ export async function benchMixedLoad(options: LoadOptions): Promise<string> {
   const { db, closeDb } = await import('../../src/server/core/db.ts');
   const app = await startApp(options.port, env);
   try {
-    const requests = await mixOf(app.base, db());
+    const requests = await mixOf(app.base, db(), options.connections);
     const run = autocannon as unknown as Run;
     await run({ url: app.base, connections: options.connections, duration: 3, requests }); // warm-up, not counted
     const r = await run({ url: app.base, connections: options.connections, duration: options.seconds, requests });
