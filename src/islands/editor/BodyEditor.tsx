@@ -82,6 +82,9 @@ export function BodyEditor({ initial, onChange, photos, onImageFiles, onReady, e
 
   const close = () => {
     setPanel(null);
+    // At once, not a frame later as Tiptap's focus command does: a writer who types straight after "Insert caution"
+    // would otherwise lose the first keys to the panel's button as it goes away.
+    editor?.view.focus();
     editor?.commands.focus();
   };
 

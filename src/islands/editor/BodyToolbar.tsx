@@ -28,7 +28,12 @@ export function BodyToolbar({ editor, editorId, onOpenPanel }: BodyToolbarProps)
       canRedo: e.can().redo(),
     }),
   });
-  const run = (command: (chain: ReturnType<Editor['chain']>) => ReturnType<Editor['chain']>) => () => command(editor.chain().focus()).run();
+  const run = (command: (chain: ReturnType<Editor['chain']>) => ReturnType<Editor['chain']>) => () => {
+    command(editor.chain().focus()).run();
+    // Tiptap's focus waits for the next animation frame, and keys typed before it would land on this button and be
+    // lost: the remedy takes focus now, so a writer who types at once after a click loses nothing.
+    editor.view.focus();
+  };
   return (
     <Toolbar label="Remedy formatting" controls={editorId}>
       <ToolButton label="Bold" shortcut="Control+B" pressed={state.bold} onPress={run((c) => c.toggleBold())}>
