@@ -98,9 +98,14 @@ export async function writeRevisionContent(
       held_fields: JSON.stringify(held),
       updated_at: trx.fn.now(),
     });
-  await trx('revision_machines').where({ revision_id: revisionId }).delete();
-  await trx('revision_chassis').where({ revision_id: revisionId }).delete();
-  await trx('revision_photos').where({ revision_id: revisionId }).delete();
+  // What the draft applies to and the photos it holds are written afresh; the three old lists go in one statement
+  // (an autosave comes every few seconds while a writer types, and each statement is a round trip).
+  await trx.raw(
+    `WITH machines AS (DELETE FROM revision_machines WHERE revision_id = :id),
+          chassis AS (DELETE FROM revision_chassis WHERE revision_id = :id)
+     DELETE FROM revision_photos WHERE revision_id = :id`,
+    { id: revisionId },
+  );
   const unique = (ids: number[]) => [...new Set(ids)];
   if (values.machineIds.length)
     await trx('revision_machines').insert(unique(values.machineIds).map((machine_id) => ({ revision_id: revisionId, machine_id })));
@@ -191,13 +196,19 @@ async function saved(knex: Knex, revisionId: number): Promise<Outcome<DraftSaved
   return succeed({ revision, baseIsStale: revision.baseRevisionId !== revision.liveRevisionId });
 }
 
-/** The writer's own draft, or why it cannot be changed. */
+/**
+ * The writer's own draft, or why it cannot be changed. `lock` (inside a transaction) holds the revision row until it
+ * ends, read in the same statement, so a save or a submission of the same draft waits its turn.
+ */
 export async function ownDraft(
   knex: Knex,
   writer: Writer,
   revisionId: number,
+  options: { lock?: boolean } = {},
 ): Promise<Outcome<{ id: number; fixId: number; parentId: number | null }>> {
-  const row = await knex('revisions').where({ id: revisionId }).first('id', 'fix_id', 'author_id', 'state', 'parent_revision_id');
+  const query = knex('revisions').where({ id: revisionId });
+  if (options.lock) void query.forUpdate();
+  const row = await query.first('id', 'fix_id', 'author_id', 'state', 'parent_revision_id');
   if (!row || row.author_id !== writer.id) return refuse('not_found', 'There is no such draft among yours.');
   if (row.state !== 'draft')
     return refuse(
@@ -222,8 +233,7 @@ export async function saveDraft(
   const refs = await checkReferences(knex, writer, values.value.values);
   if (refs) return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', refs);
   const outcome = await knex.transaction(async (trx): Promise<Outcome<null>> => {
-    await trx('revisions').where({ id: revisionId }).forUpdate().first('id');
-    const draft = await ownDraft(trx, writer, revisionId);
+    const draft = await ownDraft(trx, writer, revisionId, { lock: true });
     if (!draft.ok) return draft;
     if (input.baseRevisionId !== undefined && input.baseRevisionId !== draft.value.parentId) {
       const fix = await trx('fixes').where({ id: draft.value.fixId }).first('current_revision_id');

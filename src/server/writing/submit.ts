@@ -52,8 +52,7 @@ export async function submitDraft(writer: Writer, revisionId: number, input: { v
   const knex = db();
   let amendedOriginal: RevisionRecord | null = null;
   const outcome = await knex.transaction(async (trx): Promise<Outcome<Submitted>> => {
-    await trx('revisions').where({ id: revisionId }).forUpdate().first('id');
-    const draft = await ownDraft(trx, writer, revisionId);
+    const draft = await ownDraft(trx, writer, revisionId, { lock: true });
     if (!draft.ok) return draft;
     const fix = await trx('fixes').where({ id: draft.value.fixId }).forUpdate().first('current_revision_id', 'locked_at');
     if (!can(writer, 'write_fix', { locked: fix.locked_at !== null }))
