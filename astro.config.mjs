@@ -93,7 +93,7 @@ function pwaOptions() {
             networkTimeoutSeconds: 3,
             expiration: cacheBounds.pages,
             cacheableResponse: offline.onlyOk,
-            plugins: [offline.keptOrOffline],
+            plugins: [offline.keptOrOffline, offline.markSavedCopy],
           },
         },
         {

@@ -1,5 +1,5 @@
 // Offline in Chromium, with the real service worker: a visited fix and its photos come from the saved copy with its
-// line, an unvisited page shows the offline page, a kept fix opens with its photos and bench tools, private pages are
+// line (offline, or online with a network too slow to answer in time), an unvisited page shows the offline page, a kept fix opens with its photos and bench tools, private pages are
 // never stored and sign-out empties the pages read signed in; a job sheet saved offline is sent on reconnect, and a
 // sheet changed meanwhile shows both copies field by field.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -131,6 +131,45 @@ describe('reading offline', () => {
     await page.goto(`${base}/machines/${fix.machine}?never-visited=1`);
     await expect(page.locator('h1').textContent()).resolves.toBe('You are offline');
     await page.screenshot({ path: '/tmp/pwa-offline-page.png' });
+    await context.close();
+  });
+
+  it('says a page came from the saved copy when the network is too slow to answer, and nothing on a normal reload', async () => {
+    const context = await browser.newContext({ viewport: { width: 360, height: 740 } });
+    const page = await installed(context);
+    const fix = photoFixes[1]!;
+    const address = `${base}/fixes/${fix.slug}`;
+    await page.goto(address);
+    expect(await cacheKeys(page, 'bl-pages')).toContain(`/fixes/${fix.slug}`);
+    await forgetHttpCache(page);
+    await page.reload();
+    expect(await page.locator('.saved-copy').count()).toBe(0);
+
+    // The network is up but slow: the page's answer is held well past the worker's 3 s timeout.
+    let held = 0;
+    await context.route(address, async (route) => {
+      held += 1;
+      await new Promise((resolve) => setTimeout(resolve, 8_000));
+      await route.continue().catch(() => {});
+    });
+    await forgetHttpCache(page);
+    await page.reload();
+    await expect(page.locator('h1').textContent()).resolves.toBe(fix.title);
+    const line = page.locator('.saved-copy');
+    await line.waitFor();
+    expect(await line.textContent()).toMatch(
+      /^Saved copy from \d{1,2} [A-Z][a-z]+ \d{4} at \d{2}:\d{2}; the connection is slow, so this may be out of date\.$/,
+    );
+    expect(held).toBeGreaterThan(0);
+    expect(await page.evaluate(() => navigator.onLine)).toBe(true);
+    await page.screenshot({ path: '/tmp/pwa-slow-360.png' });
+
+    // The connection is quick again: a reload shows the page from the network, with no line.
+    await context.unroute(address);
+    await forgetHttpCache(page);
+    await page.reload();
+    await expect(page.locator('h1').textContent()).resolves.toBe(fix.title);
+    expect(await page.locator('.saved-copy').count()).toBe(0);
     await context.close();
   });
 
