@@ -1,7 +1,8 @@
 // Offline in Chromium, with the real service worker: a visited fix and its photos come from the saved copy with its
-// line (offline, or online with a network too slow to answer in time), an unvisited page shows the offline page, a kept fix opens with its photos and bench tools, private pages are
-// never stored and sign-out empties the pages read signed in; a job sheet saved offline is sent on reconnect, and a
-// sheet changed meanwhile shows both copies field by field.
+// line (offline, or online with a network too slow to answer in time), an unvisited page shows the offline page, a
+// kept fix opens with its photos and bench tools, private pages are never stored and sign-out empties the pages read
+// signed in; a job sheet saved offline is sent on reconnect, and a sheet changed meanwhile shows both copies field by
+// field; a bench report filed offline on a fix page waits in the same queue and is sent.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { launchBrowser, signedInContext } from '../support/browser';
@@ -361,5 +362,44 @@ describe('a job sheet offline', () => {
     const unreadable = await patch('2', 'third');
     expect(unreadable.status).toBe(400);
     expect(((await unreadable.json()) as { error: { message: string } }).error.message).toContain('If-Match: "v3"');
+  });
+});
+
+describe('a bench report offline', () => {
+  it('waits on the device with a plain line saying so, and is saved when the connection returns', async () => {
+    const member = await makeMember(knex);
+    const fix = photoFixes[0]!;
+    const note = `Filed offline ${Date.now()}: cleaned the mode switch, held a week`;
+    const context = await signedInContext(browser, base, member.email, PASSWORD, { viewport: { width: 360, height: 740 } });
+    try {
+      const page = await installed(context);
+      await page.goto(`${base}/fixes/${fix.slug}`);
+      const form = page.locator('#bench-report-form');
+      await page.waitForFunction(() => document.querySelector<HTMLElement>('#bench-report-form')?.dataset.outboxReady === 'yes');
+
+      await context.setOffline(true);
+      await form.getByLabel('Partly fixed').check();
+      await form.locator('textarea[name="note"]').fill(note);
+      await form.getByRole('button', { name: 'Save the bench report' }).click();
+      const box = page.locator('[data-outbox]');
+      await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('waiting to be sent'));
+      expect(await box.textContent()).toBe(
+        `One change is waiting to be sent from this device: your bench report on “${fix.title}”. You are offline: they are sent, in order, when the connection comes back.`,
+      );
+      await page.screenshot({ path: '/tmp/pwa-bench-report-waiting-360.png', fullPage: false });
+      expect(await knex('bench_reports').where({ member_id: member.id })).toEqual([]);
+
+      await context.setOffline(false);
+      await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.startsWith('Sent from this device'));
+      expect(await box.textContent()).toBe(`Sent from this device: your bench report on “${fix.title}”.`);
+      const saved = await knex('bench_reports').where({ member_id: member.id }).select('outcome', 'note');
+      expect(saved).toEqual([{ outcome: 'partly', note }]);
+      await page.reload();
+      await expect(page.locator('.bench-note', { hasText: note }).count()).resolves.toBe(1);
+    } finally {
+      await context.close();
+      // The demo fix's bench score goes back to what other test files expect.
+      await knex('bench_reports').where({ member_id: member.id }).delete();
+    }
   });
 });

@@ -35,6 +35,10 @@ async function markSavedCopy(): Promise<void> {
 }
 void markSavedCopy();
 
+// A form that may wait offline (a fix page's bench report): the outbox loads with the page, to send what waits.
+if (document.querySelector('form[data-offline-queue]') && !document.querySelector('form[data-offline-sheet]'))
+  void import('./outbox').then(({ start }) => start('form[data-offline-queue]'));
+
 // Controls that need this script show once it runs; "Keep for the bench" and "Bench view" load their code on the first click.
 for (const hidden of document.querySelectorAll<HTMLElement>('[data-needs-script]')) hidden.hidden = false;
 document.addEventListener('click', (event) => {
