@@ -75,7 +75,8 @@ export async function smallTargets(page: Page): Promise<SmallTarget[]> {
       // (A link in an SVG chart is never inside running text.)
       if (el instanceof HTMLAnchorElement && !el.classList.contains('btn')) {
         // A link with words of running text beside it in its line box is inline (exempt); alone there, it is a control.
-        if (lineWords(blockOf(el)) !== words(el)) continue;
+        // A link laid out as a block (or as a flex or grid item) is never inside running text.
+        if (getComputedStyle(el).display.startsWith('inline') && lineWords(blockOf(el)) !== words(el)) continue;
       }
       if (el instanceof HTMLInputElement && (el.type === 'checkbox' || el.type === 'radio')) {
         const label = el.labels?.[0];
