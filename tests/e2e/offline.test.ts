@@ -381,8 +381,11 @@ describe('a bench report offline', () => {
       await form.getByLabel('Partly fixed').check();
       await form.locator('textarea[name="note"]').fill(note);
       await form.getByRole('button', { name: 'Save the bench report' }).click();
-      const box = page.locator('[data-outbox]');
-      await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('waiting to be sent'));
+      // The line under the form (the parts table has one of its own, saying the same).
+      const box = page.locator('#bench-report-form + [data-outbox]');
+      await page.waitForFunction(() =>
+        document.querySelector('#bench-report-form + [data-outbox]')?.textContent?.includes('waiting to be sent'),
+      );
       expect(await box.textContent()).toBe(
         `One change is waiting to be sent from this device: your bench report on “${fix.title}”. You are offline: they are sent, in order, when the connection comes back.`,
       );
@@ -390,8 +393,11 @@ describe('a bench report offline', () => {
       expect(await knex('bench_reports').where({ member_id: member.id })).toEqual([]);
 
       await context.setOffline(false);
-      await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.startsWith('Sent from this device'));
+      await page.waitForFunction(() =>
+        document.querySelector('#bench-report-form + [data-outbox]')?.textContent?.startsWith('Sent from this device'),
+      );
       expect(await box.textContent()).toBe(`Sent from this device: your bench report on “${fix.title}”.`);
+      expect(await box.isVisible()).toBe(true);
       const saved = await knex('bench_reports').where({ member_id: member.id }).select('outcome', 'note');
       expect(saved).toEqual([{ outcome: 'partly', note }]);
       await page.reload();
@@ -401,5 +407,69 @@ describe('a bench report offline', () => {
       // The demo fix's bench score goes back to what other test files expect.
       await knex('bench_reports').where({ member_id: member.id }).delete();
     }
+  });
+
+  it('queues a part added to the order list from a fix page the same way, and adds it on reconnect', async () => {
+    const member = await makeMember(knex);
+    const fix = photoFixes[0]!;
+    const context = await signedInContext(browser, base, member.email, PASSWORD, { viewport: { width: 360, height: 740 } });
+    const page = await installed(context);
+    await page.goto(`${base}/fixes/${fix.slug}`);
+    const add = page.getByRole('button', { name: /^Add to order list/ }).first();
+    const part = ((await add.textContent()) ?? '')
+      .replace(/\s+/g, ' ')
+      .trim()
+      .replace(/^Add to order list : /, '');
+    await page.waitForFunction(() =>
+      [...document.querySelectorAll<HTMLElement>('form[data-offline-queue]')].every((form) => form.dataset.outboxReady === 'yes'),
+    );
+
+    await context.setOffline(true);
+    await add.click();
+    const line = page.locator('[data-outbox]').first();
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('waiting to be sent'));
+    expect(await line.textContent()).toBe(
+      `One change is waiting to be sent from this device: adding ${part} to your order list. You are offline: they are sent, in order, when the connection comes back.`,
+    );
+    expect(await line.isVisible()).toBe(true);
+    expect((await getOrderList(member.id)).lines).toEqual([]);
+
+    await context.setOffline(false);
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.startsWith('Sent from this device'));
+    const lines = (await getOrderList(member.id)).lines;
+    expect(lines).toHaveLength(1);
+    // The part's reference ("C851" of "C851 1000uF") is on the one line now on the list.
+    expect(lines[0]!.refs).toEqual([part.split(' ')[0]]);
+    await context.close();
+  });
+
+  it('says plainly when a waiting order-list addition is refused on reconnect, and adds nothing', async () => {
+    const member = await makeMember(knex);
+    const fix = photoFixes[0]!;
+    const context = await signedInContext(browser, base, member.email, PASSWORD);
+    const page = await installed(context);
+    await page.goto(`${base}/fixes/${fix.slug}`);
+    await page.waitForFunction(() =>
+      [...document.querySelectorAll<HTMLElement>('form[data-offline-queue]')].every((form) => form.dataset.outboxReady === 'yes'),
+    );
+    // The saved page names a part row the fix no longer has (as after a new revision with fewer parts).
+    await page.evaluate(() => {
+      const row = document.querySelector<HTMLInputElement>('form[action="/order-list/add"] input[name="row"]');
+      if (row) row.value = '999';
+    });
+
+    await context.setOffline(true);
+    await page
+      .getByRole('button', { name: /^Add to order list/ })
+      .first()
+      .click();
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('waiting to be sent'));
+    await context.setOffline(false);
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('was refused'));
+    expect(await page.locator('[data-outbox]').first().textContent()).toMatch(
+      /^One change is waiting to be sent from this device: adding .+ to your order list\. “adding .+ to your order list” was refused: Nothing was added; open your order list to see why\. It stays waiting/,
+    );
+    expect((await getOrderList(member.id)).lines).toEqual([]);
+    await context.close();
   });
 });

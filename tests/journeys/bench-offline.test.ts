@@ -15,7 +15,7 @@ import { base, Journey, PHONE_WIDTH, sees } from './support/journey';
 const knex = testDb();
 let browser: Browser;
 let technician: TestUser;
-let fix: { slug: string; title: string; number: number; machine: string };
+let fix: { slug: string; title: string; number: number; machine: string; parts: number };
 let jobId: number;
 
 beforeAll(async () => {
@@ -27,9 +27,10 @@ beforeAll(async () => {
     .join('machines as m', 'm.id', 'fm.machine_id')
     .whereNull('f.hidden_at')
     .whereRaw('jsonb_array_length(r.cautions) > 0')
+    .whereRaw('jsonb_array_length(r.parts) > 0')
     .whereExists(knex('revision_photos as rp').whereRaw('rp.revision_id = r.id'))
     .orderBy('f.id')
-    .first('f.slug', 'r.title', 'r.number', 'm.slug as machine');
+    .first('f.slug', 'r.title', 'r.number', 'm.slug as machine', knex.raw('jsonb_array_length(r.parts)::int as parts'));
   // Booked in at the counter this morning, before the technician took the deck to the bench.
   const job = await createJobSheet(
     technician.id,
@@ -164,10 +165,26 @@ describe('a bench technician with a dropping connection', () => {
       await form.getByLabel('Fixed', { exact: true }).check();
       await form.getByLabel(/Note for other technicians/).fill(note);
       await form.getByRole('button', { name: 'Save the bench report' }).click();
+      // The line under the form's button (the parts table has one of its own).
       await sees(
-        page.getByText(
-          `One change is waiting to be sent from this device: your bench report on “${fix.title}”. You are offline: they are sent, in order, when the connection comes back.`,
-        ),
+        page
+          .locator('#bench-report-form + [role="status"]')
+          .getByText(
+            `One change is waiting to be sent from this device: your bench report on “${fix.title}”. You are offline: they are sent, in order, when the connection comes back.`,
+            { exact: true },
+          ),
+      );
+    });
+
+    await journey.step('still offline, puts the fix’s parts on the order list and sees both changes waiting', async () => {
+      await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
+      await sees(
+        page
+          .locator('[aria-labelledby="parts"] [role="status"]')
+          .getByText(
+            `2 changes are waiting to be sent from this device: your bench report on “${fix.title}”; adding all parts of this fix to your order list. You are offline: they are sent, in order, when the connection comes back.`,
+            { exact: true },
+          ),
       );
       expect(await knex('bench_reports').where({ member_id: technician.id }).count({ n: '*' })).toEqual([{ n: '0' }]);
       await page.screenshot({ path: '/tmp/pwa-journey-bench-report-waiting-360.png' });
@@ -175,7 +192,15 @@ describe('a bench technician with a dropping connection', () => {
 
     await journey.step('gets the connection back, sees the report sent and finds it among what other benches found', async () => {
       await context.setOffline(false);
-      await sees(page.getByText(`Sent from this device: your bench report on “${fix.title}”.`));
+      await sees(
+        page
+          .locator('#bench-report-form + [role="status"]')
+          .getByText(`Sent from this device: your bench report on “${fix.title}”; adding all parts of this fix to your order list.`, {
+            exact: true,
+          }),
+      );
+      const list = await knex('order_lists').where({ owner_id: technician.id }).first('lines');
+      expect((list?.lines as unknown[] | undefined)?.length).toBe(fix.parts);
       await page.screenshot({ path: '/tmp/pwa-journey-bench-report-sent-360.png' });
       await journey.reload(page);
       await sees(page.locator('.bench-note', { hasText: note }));

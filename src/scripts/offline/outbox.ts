@@ -19,6 +19,11 @@ export interface OutboxHooks {
 }
 
 export const box = (): HTMLElement | null => document.querySelector<HTMLElement>('[data-outbox]');
+/** The page's line about what waits nearest after a form (a page may have one under each kind of form). */
+const boxAfter = (form: HTMLFormElement): HTMLElement | null =>
+  [...document.querySelectorAll<HTMLElement>('[data-outbox]')].find(
+    (shown) => form.compareDocumentPosition(shown) & Node.DOCUMENT_POSITION_FOLLOWING,
+  ) ?? box();
 export const entriesOf = (form: HTMLFormElement, submitter?: HTMLElement | null): FormEntries =>
   [...new FormData(form, submitter ?? null)].filter((pair): pair is [string, string] => typeof pair[1] === 'string');
 export const newId = (): string => `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
@@ -37,8 +42,12 @@ export async function send(item: Waiting): Promise<Sent> {
             },
             body: new URLSearchParams(item.fields),
           })
-        : await fetch(item.url, { method: 'POST', body: new URLSearchParams(item.fields), redirect: 'manual' });
-    if (response.type === 'opaqueredirect' || response.ok) return { result: 'sent' };
+        : await fetch(item.url, { method: 'POST', body: new URLSearchParams(item.fields) });
+    // A page form answers a refusal either with an error status or, for the order list's add, with a redirect to
+    // the list naming the problem (?problem=…): the redirect is followed to tell the two apart.
+    if (item.kind === 'form-post' && response.ok && new URL(response.url).searchParams.has('problem'))
+      return { result: 'refused', message: 'Nothing was added; open your order list to see why.' };
+    if (response.ok) return { result: 'sent' };
     // 412 Precondition Failed: the If-Match version is stale; the answer carries the sheet as it is now.
     if (response.status === 412 && item.kind === 'job-sheet') {
       const answer = (await response.json()) as { current: Record<string, unknown> };
@@ -52,14 +61,15 @@ export async function send(item: Waiting): Promise<Sent> {
   }
 }
 
+/** Says what waits (and `note`) in every such line of the page: the whole queue, as it is sent in one order. */
 export function render(queue: Waiting[], note = ''): void {
-  const shown = box();
-  if (!shown) return;
-  shown.hidden = queue.length === 0 && note === '';
   const offline = navigator.onLine ? '' : ' You are offline: they are sent, in order, when the connection comes back.';
-  const line = document.createElement('p');
-  line.textContent = `${queue.length > 0 ? waitingSummary(queue) + offline : ''} ${note}`.trim();
-  shown.replaceChildren(line);
+  for (const shown of document.querySelectorAll<HTMLElement>('[data-outbox]')) {
+    shown.hidden = queue.length === 0 && note === '';
+    const line = document.createElement('p');
+    line.textContent = [queue.length > 0 ? waitingSummary(queue) + offline : '', note.trim()].filter((part) => part !== '').join(' ');
+    shown.replaceChildren(line);
+  }
 }
 
 export async function hold(item: Waiting): Promise<void> {
@@ -128,7 +138,7 @@ export function start(selector: string, hooks: OutboxHooks = {}): void {
         queuedAt: new Date().toISOString(),
       };
       // The line saying it waits shows where the reader is looking: by the button just pressed.
-      void hold(item).then(() => box()?.scrollIntoView({ block: 'nearest' }));
+      void hold(item).then(() => boxAfter(form)?.scrollIntoView({ block: 'nearest' }));
     });
     // The form now waits offline instead of failing (a test waits for this before cutting the connection).
     form.dataset.outboxReady = 'yes';
