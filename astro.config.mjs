@@ -73,7 +73,7 @@ function pwaOptions() {
         '_astro/*.css',
         '_astro/*-latin-{400,600,700}-*.woff2',
         '_astro/{BaseLayout,offline,kept}.astro_astro_type_script_*.js',
-        '_astro/{preload-helper,outbox-store,keep,cache-rules,sign-out,bench-view}.*.js',
+        '_astro/{preload-helper,outbox-store,outbox,keep,cache-rules,sign-out,bench-view}.*.js',
       ],
       cleanupOutdatedCaches: true,
       clientsClaim: true,
@@ -93,7 +93,7 @@ function pwaOptions() {
             networkTimeoutSeconds: 3,
             expiration: cacheBounds.pages,
             cacheableResponse: offline.onlyOk,
-            plugins: [offline.keptOrOffline],
+            plugins: [offline.keptOrOffline, offline.markSavedCopy],
           },
         },
         {

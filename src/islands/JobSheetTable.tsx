@@ -97,7 +97,7 @@ export default function JobSheetTable({ rows }: Props) {
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
                     >
                       {hydrated ? (
-                        <button type="button" className="font-semibold text-teal" onClick={header.column.getToggleSortingHandler()}>
+                        <button type="button" className="tap font-semibold text-teal" onClick={header.column.getToggleSortingHandler()}>
                           {label}
                           {sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}
                         </button>

@@ -1,7 +1,8 @@
 // Offline in Chromium, with the real service worker: a visited fix and its photos come from the saved copy with its
-// line, an unvisited page shows the offline page, a kept fix opens with its photos and bench tools, private pages are
-// never stored and sign-out empties the pages read signed in; a job sheet saved offline is sent on reconnect, and a
-// sheet changed meanwhile shows both copies field by field.
+// line (offline, or online with a network too slow to answer in time), an unvisited page shows the offline page, a
+// kept fix opens with its photos and bench tools, private pages are never stored and sign-out empties the pages read
+// signed in; a job sheet saved offline is sent on reconnect, and a sheet changed meanwhile shows both copies field by
+// field; a bench report filed offline on a fix page waits in the same queue and is sent.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { launchBrowser, signedInContext } from '../support/browser';
@@ -131,6 +132,45 @@ describe('reading offline', () => {
     await page.goto(`${base}/machines/${fix.machine}?never-visited=1`);
     await expect(page.locator('h1').textContent()).resolves.toBe('You are offline');
     await page.screenshot({ path: '/tmp/pwa-offline-page.png' });
+    await context.close();
+  });
+
+  it('says a page came from the saved copy when the network is too slow to answer, and nothing on a normal reload', async () => {
+    const context = await browser.newContext({ viewport: { width: 360, height: 740 } });
+    const page = await installed(context);
+    const fix = photoFixes[1]!;
+    const address = `${base}/fixes/${fix.slug}`;
+    await page.goto(address);
+    expect(await cacheKeys(page, 'bl-pages')).toContain(`/fixes/${fix.slug}`);
+    await forgetHttpCache(page);
+    await page.reload();
+    expect(await page.locator('.saved-copy').count()).toBe(0);
+
+    // The network is up but slow: the page's answer is held well past the worker's 3 s timeout.
+    let held = 0;
+    await context.route(address, async (route) => {
+      held += 1;
+      await new Promise((resolve) => setTimeout(resolve, 8_000));
+      await route.continue().catch(() => {});
+    });
+    await forgetHttpCache(page);
+    await page.reload();
+    await expect(page.locator('h1').textContent()).resolves.toBe(fix.title);
+    const line = page.locator('.saved-copy');
+    await line.waitFor();
+    expect(await line.textContent()).toMatch(
+      /^Saved copy from \d{1,2} [A-Z][a-z]+ \d{4} at \d{2}:\d{2}; the connection is slow, so this may be out of date\.$/,
+    );
+    expect(held).toBeGreaterThan(0);
+    expect(await page.evaluate(() => navigator.onLine)).toBe(true);
+    await page.screenshot({ path: '/tmp/pwa-slow-360.png' });
+
+    // The connection is quick again: a reload shows the page from the network, with no line.
+    await context.unroute(address);
+    await forgetHttpCache(page);
+    await page.reload();
+    await expect(page.locator('h1').textContent()).resolves.toBe(fix.title);
+    expect(await page.locator('.saved-copy').count()).toBe(0);
     await context.close();
   });
 
@@ -322,5 +362,114 @@ describe('a job sheet offline', () => {
     const unreadable = await patch('2', 'third');
     expect(unreadable.status).toBe(400);
     expect(((await unreadable.json()) as { error: { message: string } }).error.message).toContain('If-Match: "v3"');
+  });
+});
+
+describe('a bench report offline', () => {
+  it('waits on the device with a plain line saying so, and is saved when the connection returns', async () => {
+    const member = await makeMember(knex);
+    const fix = photoFixes[0]!;
+    const note = `Filed offline ${Date.now()}: cleaned the mode switch, held a week`;
+    const context = await signedInContext(browser, base, member.email, PASSWORD, { viewport: { width: 360, height: 740 } });
+    try {
+      const page = await installed(context);
+      await page.goto(`${base}/fixes/${fix.slug}`);
+      const form = page.locator('#bench-report-form');
+      await page.waitForFunction(() => document.querySelector<HTMLElement>('#bench-report-form')?.dataset.outboxReady === 'yes');
+
+      await context.setOffline(true);
+      await form.getByLabel('Partly fixed').check();
+      await form.locator('textarea[name="note"]').fill(note);
+      await form.getByRole('button', { name: 'Save the bench report' }).click();
+      // The line under the form (the parts table has one of its own, saying the same).
+      const box = page.locator('#bench-report-form + [data-outbox]');
+      await page.waitForFunction(() =>
+        document.querySelector('#bench-report-form + [data-outbox]')?.textContent?.includes('waiting to be sent'),
+      );
+      expect(await box.textContent()).toBe(
+        `One change is waiting to be sent from this device: your bench report on “${fix.title}”. You are offline: they are sent, in order, when the connection comes back.`,
+      );
+      await page.screenshot({ path: '/tmp/pwa-bench-report-waiting-360.png', fullPage: false });
+      expect(await knex('bench_reports').where({ member_id: member.id })).toEqual([]);
+
+      await context.setOffline(false);
+      await page.waitForFunction(() =>
+        document.querySelector('#bench-report-form + [data-outbox]')?.textContent?.startsWith('Sent from this device'),
+      );
+      expect(await box.textContent()).toBe(`Sent from this device: your bench report on “${fix.title}”.`);
+      expect(await box.isVisible()).toBe(true);
+      const saved = await knex('bench_reports').where({ member_id: member.id }).select('outcome', 'note');
+      expect(saved).toEqual([{ outcome: 'partly', note }]);
+      await page.reload();
+      await expect(page.locator('.bench-note', { hasText: note }).count()).resolves.toBe(1);
+    } finally {
+      await context.close();
+      // The demo fix's bench score goes back to what other test files expect.
+      await knex('bench_reports').where({ member_id: member.id }).delete();
+    }
+  });
+
+  it('queues a part added to the order list from a fix page the same way, and adds it on reconnect', async () => {
+    const member = await makeMember(knex);
+    const fix = photoFixes[0]!;
+    const context = await signedInContext(browser, base, member.email, PASSWORD, { viewport: { width: 360, height: 740 } });
+    const page = await installed(context);
+    await page.goto(`${base}/fixes/${fix.slug}`);
+    const add = page.getByRole('button', { name: /^Add to order list/ }).first();
+    const part = ((await add.textContent()) ?? '')
+      .replace(/\s+/g, ' ')
+      .trim()
+      .replace(/^Add to order list : /, '');
+    await page.waitForFunction(() =>
+      [...document.querySelectorAll<HTMLElement>('form[data-offline-queue]')].every((form) => form.dataset.outboxReady === 'yes'),
+    );
+
+    await context.setOffline(true);
+    await add.click();
+    const line = page.locator('[data-outbox]').first();
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('waiting to be sent'));
+    expect(await line.textContent()).toBe(
+      `One change is waiting to be sent from this device: adding ${part} to your order list. You are offline: they are sent, in order, when the connection comes back.`,
+    );
+    expect(await line.isVisible()).toBe(true);
+    expect((await getOrderList(member.id)).lines).toEqual([]);
+
+    await context.setOffline(false);
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.startsWith('Sent from this device'));
+    const lines = (await getOrderList(member.id)).lines;
+    expect(lines).toHaveLength(1);
+    // The part's reference ("C851" of "C851 1000uF") is on the one line now on the list.
+    expect(lines[0]!.refs).toEqual([part.split(' ')[0]]);
+    await context.close();
+  });
+
+  it('says plainly when a waiting order-list addition is refused on reconnect, and adds nothing', async () => {
+    const member = await makeMember(knex);
+    const fix = photoFixes[0]!;
+    const context = await signedInContext(browser, base, member.email, PASSWORD);
+    const page = await installed(context);
+    await page.goto(`${base}/fixes/${fix.slug}`);
+    await page.waitForFunction(() =>
+      [...document.querySelectorAll<HTMLElement>('form[data-offline-queue]')].every((form) => form.dataset.outboxReady === 'yes'),
+    );
+    // The saved page names a part row the fix no longer has (as after a new revision with fewer parts).
+    await page.evaluate(() => {
+      const row = document.querySelector<HTMLInputElement>('form[action="/order-list/add"] input[name="row"]');
+      if (row) row.value = '999';
+    });
+
+    await context.setOffline(true);
+    await page
+      .getByRole('button', { name: /^Add to order list/ })
+      .first()
+      .click();
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('waiting to be sent'));
+    await context.setOffline(false);
+    await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('was refused'));
+    expect(await page.locator('[data-outbox]').first().textContent()).toMatch(
+      /^One change is waiting to be sent from this device: adding .+ to your order list\. “adding .+ to your order list” was refused: Nothing was added; open your order list to see why\. It stays waiting/,
+    );
+    expect((await getOrderList(member.id)).lines).toEqual([]);
+    await context.close();
   });
 });

@@ -154,12 +154,14 @@ describe('pages at 360 px wide', () => {
       '/reset',
       '/order-list',
       `/n/${own.note}`,
+      '/kept',
+      '/offline',
       '/no-such-page',
     ]);
     expect(found).toEqual([]);
   });
 
-  it('do not scroll sideways for a signed-in member: writing, job sheets, notes and the order list', async () => {
+  it('do not scroll sideways for a signed-in member: writing, job sheets, notes, the order list, kept and offline pages', async () => {
     const found = await overflowingPages(member, [
       '/',
       `/fixes/${places.fix}`,
@@ -176,6 +178,8 @@ describe('pages at 360 px wide', () => {
       `/notes/new?fix=${places.fix}`,
       '/order-list',
       '/account',
+      '/kept',
+      '/offline',
     ]);
     expect(found).toEqual([]);
   });

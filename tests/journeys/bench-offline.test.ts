@@ -1,6 +1,7 @@
 // A bench technician on a phone in a workshop with poor reception: keeps the fix for the deck on the bench, loses the
 // connection, follows the remedy in the bench view, writes the findings into the job sheet offline, and finds them
-// saved when the connection comes back.
+// saved when the connection comes back. On a connection that crawls, reads the saved copy and is told so; files a
+// bench report with no connection at all and sees it sent when the connection returns.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser } from '../support/browser';
@@ -9,12 +10,12 @@ import { createUser, type TestUser } from '../support/sign-in';
 import { createJobSheet } from '@/server/bench-work/job-sheets';
 import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
 import { closeDb } from '@/server/core/db';
-import { Journey, PHONE_WIDTH, sees } from './support/journey';
+import { base, Journey, PHONE_WIDTH, sees } from './support/journey';
 
 const knex = testDb();
 let browser: Browser;
 let technician: TestUser;
-let fix: { slug: string; title: string; number: number; machine: string };
+let fix: { slug: string; title: string; number: number; machine: string; parts: number };
 let jobId: number;
 
 beforeAll(async () => {
@@ -26,9 +27,10 @@ beforeAll(async () => {
     .join('machines as m', 'm.id', 'fm.machine_id')
     .whereNull('f.hidden_at')
     .whereRaw('jsonb_array_length(r.cautions) > 0')
+    .whereRaw('jsonb_array_length(r.parts) > 0')
     .whereExists(knex('revision_photos as rp').whereRaw('rp.revision_id = r.id'))
     .orderBy('f.id')
-    .first('f.slug', 'r.title', 'r.number', 'm.slug as machine');
+    .first('f.slug', 'r.title', 'r.number', 'm.slug as machine', knex.raw('jsonb_array_length(r.parts)::int as parts'));
   // Booked in at the counter this morning, before the technician took the deck to the bench.
   const job = await createJobSheet(
     technician.id,
@@ -38,6 +40,8 @@ beforeAll(async () => {
   jobId = job.value;
 });
 afterAll(async () => {
+  // The demo fix's bench score goes back to what other journeys expect.
+  await knex('bench_reports').where({ member_id: technician.id }).delete();
   await browser?.close();
   await knex.destroy();
   await closeDb();
@@ -113,6 +117,93 @@ describe('a bench technician with a dropping connection', () => {
         labour_minutes: 50,
       });
       await jobPage.screenshot({ path: '/tmp/pwa-journey-saved-360.png', fullPage: true });
+    });
+
+    await journey.close();
+  });
+
+  it('is told a page is a saved copy when the connection crawls, and files a bench report offline that is sent later', async () => {
+    const journey = new Journey(browser);
+    const page = await journey.page({ as: technician, width: PHONE_WIDTH });
+    const context = page.context();
+    const address = `${base}/fixes/${fix.slug}`;
+    const note = `Journey ${Date.now()}: new back tension band, verticals straight after an hour's soak test`;
+
+    await journey.step('opens the fix on the phone while the connection is good', async () => {
+      await journey.goto(page, `/fixes/${fix.slug}`);
+      await page.evaluate(async () => {
+        await navigator.serviceWorker.ready;
+        if (!navigator.serviceWorker.controller)
+          await new Promise((resolve) => navigator.serviceWorker.addEventListener('controllerchange', resolve, { once: true }));
+      });
+      await journey.reload(page);
+      await sees(page.getByRole('heading', { level: 1, name: fix.title }));
+      expect(await page.locator('.saved-copy').count()).toBe(0);
+      // Reads it through, so its photos (loaded as they scroll into view) are on the phone too.
+      const photos = page.locator('figure.photo img');
+      for (let i = 0; i < (await photos.count()); i++) await photos.nth(i).scrollIntoViewIfNeeded();
+      await page.waitForFunction(() => [...document.querySelectorAll<HTMLImageElement>('figure.photo img')].every((img) => img.complete));
+    });
+
+    await journey.step('the connection crawls: the page comes from the saved copy and says the connection is slow', async () => {
+      // Each answer for the fix page takes ten seconds, far past the few seconds the phone waits.
+      await context.route(address, async (route) => {
+        await new Promise((resolve) => setTimeout(resolve, 10_000));
+        await route.continue().catch(() => {});
+      });
+      const cdp = await context.newCDPSession(page);
+      await cdp.send('Network.clearBrowserCache');
+      await cdp.detach();
+      await journey.reload(page);
+      await sees(page.getByText(/^Saved copy from .+; the connection is slow, so this may be out of date\.$/));
+      await context.unroute(address);
+    });
+
+    await journey.step('loses the connection, files a bench report and is told it waits on the phone', async () => {
+      await context.setOffline(true);
+      const form = page.locator('#bench-report-form');
+      await form.getByLabel('Fixed', { exact: true }).check();
+      await form.getByLabel(/Note for other technicians/).fill(note);
+      await form.getByRole('button', { name: 'Save the bench report' }).click();
+      // The line under the form's button (the parts table has one of its own).
+      await sees(
+        page
+          .locator('#bench-report-form + [role="status"]')
+          .getByText(
+            `One change is waiting to be sent from this device: your bench report on “${fix.title}”. You are offline: they are sent, in order, when the connection comes back.`,
+            { exact: true },
+          ),
+      );
+    });
+
+    await journey.step('still offline, puts the fix’s parts on the order list and sees both changes waiting', async () => {
+      await page.getByRole('button', { name: 'Add all parts to the order list' }).click();
+      await sees(
+        page
+          .locator('[aria-labelledby="parts"] [role="status"]')
+          .getByText(
+            `2 changes are waiting to be sent from this device: your bench report on “${fix.title}”; adding all parts of this fix to your order list. You are offline: they are sent, in order, when the connection comes back.`,
+            { exact: true },
+          ),
+      );
+      expect(await knex('bench_reports').where({ member_id: technician.id }).count({ n: '*' })).toEqual([{ n: '0' }]);
+      await page.screenshot({ path: '/tmp/pwa-journey-bench-report-waiting-360.png' });
+    });
+
+    await journey.step('gets the connection back, sees the report sent and finds it among what other benches found', async () => {
+      await context.setOffline(false);
+      await sees(
+        page
+          .locator('#bench-report-form + [role="status"]')
+          .getByText(`Sent from this device: your bench report on “${fix.title}”; adding all parts of this fix to your order list.`, {
+            exact: true,
+          }),
+      );
+      const list = await knex('order_lists').where({ owner_id: technician.id }).first('lines');
+      expect((list?.lines as unknown[] | undefined)?.length).toBe(fix.parts);
+      await page.screenshot({ path: '/tmp/pwa-journey-bench-report-sent-360.png' });
+      await journey.reload(page);
+      await sees(page.locator('.bench-note', { hasText: note }));
     });
 
     await journey.close();

@@ -166,5 +166,9 @@ describe('savedCopyLine', () => {
     expect(savedCopyLine(new Date(2026, 11, 2, 16, 4))).toBe('Saved copy from 2 December 2026 at 16:04; you are offline.');
     expect(savedCopyLine(null)).toBe('Saved copy; you are offline.');
     expect(savedCopyLine(new Date('not a date'))).toBe('Saved copy; you are offline.');
+    expect(savedCopyLine(new Date(2026, 11, 2, 16, 4), 'slow')).toBe(
+      'Saved copy from 2 December 2026 at 16:04; the connection is slow, so this may be out of date.',
+    );
+    expect(savedCopyLine(null, 'slow')).toBe('Saved copy; the connection is slow, so this may be out of date.');
   });
 });

@@ -64,5 +64,22 @@ export const keptOrOffline = {
     Response.error(),
 };
 
+/** The Server-Timing metric a page answered from its saved copy carries (register.ts reads it to say so). */
+export const savedCopyMetric = 'bl-saved-copy';
+
+/**
+ * A page the network did not answer in time (or at all) is answered from the saved copy: the answer says so in a
+ * Server-Timing header, which the page reads from its navigation timing. (Its own source is copied into sw.js, so the
+ * metric's name is spelled out here again.)
+ */
+export const markSavedCopy = {
+  cachedResponseWillBeUsed: async ({ cachedResponse }) => {
+    if (!cachedResponse) return cachedResponse;
+    const headers = new Headers(cachedResponse.headers);
+    headers.append('Server-Timing', 'bl-saved-copy');
+    return new Response(cachedResponse.body, { status: cachedResponse.status, statusText: cachedResponse.statusText, headers });
+  },
+};
+
 /** Only whole, successful answers are stored (no redirects to sign-in, no error pages). */
 export const onlyOk = { statuses: [200] };

@@ -1,5 +1,5 @@
 // What waits on this device to be sent, and how a job sheet edit that met a newer copy is merged: pure logic,
-// no storage and no network (src/scripts/offline/outbox.ts keeps the queue in IndexedDB and sends it).
+// no storage and no network (src/scripts/offline/outbox-store.ts keeps the queue in IndexedDB, outbox.ts sends it).
 
 /** A form's fields in order, as [name, value] pairs (what FormData and URLSearchParams give). */
 export type FormEntries = [string, string][];

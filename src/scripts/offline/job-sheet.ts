@@ -1,77 +1,19 @@
 // The job sheet page's outbox: a save, bench report or order-list change made without a connection is kept on this
 // device (IndexedDB) and sent in order when the connection returns; the sheet's save carries the version it was made
 // on, and a sheet changed meanwhile elsewhere is merged field by field, asking only where both sides changed a field.
-import {
-  entriesFor,
-  formValues,
-  mergeSheet,
-  sheetFieldLabels,
-  sheetValues,
-  waitingSummary,
-  type FormEntries,
-  type FormPost,
-  type SheetEdit,
-  type Waiting,
-} from '@/lib/offline/queue';
-import { ifMatchFor } from '@/lib/offline/job-sheet-version';
-import { addToOutbox, readOutbox, removeFromOutbox, replaceInOutbox } from './outbox-store';
-
-type Sent =
-  | { result: 'sent' }
-  | { result: 'offline' }
-  | { result: 'refused'; message: string }
-  | { result: 'conflict'; sheet: Record<string, unknown> };
+import { entriesFor, formValues, mergeSheet, sheetFieldLabels, sheetValues, type FormEntries, type SheetEdit } from '@/lib/offline/queue';
+import { readOutbox, removeFromOutbox, replaceInOutbox } from './outbox-store';
+import { box as outboxBox, entriesOf, flush as flushOutbox, hold, newId, send, start, type OutboxHooks } from './outbox';
 
 const sheetForm = document.querySelector<HTMLFormElement>('form[data-offline-sheet]');
-const box = document.querySelector<HTMLElement>('[data-outbox]');
-const entriesOf = (form: HTMLFormElement, submitter?: HTMLElement | null): FormEntries =>
-  [...new FormData(form, submitter ?? null)].filter((pair): pair is [string, string] => typeof pair[1] === 'string');
-const newId = (): string => `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
+const box = outboxBox();
 const base: FormEntries = sheetForm ? entriesOf(sheetForm) : [];
-let flushing = false;
-
-async function send(item: Waiting): Promise<Sent> {
-  try {
-    const response =
-      item.kind === 'job-sheet'
-        ? await fetch(`/api/v1/job-sheets/${item.sheetId}`, {
-            method: 'PATCH',
-            headers: {
-              'Content-Type': 'application/x-www-form-urlencoded',
-              'If-Match': ifMatchFor(item.baseVersion),
-              Accept: 'application/json',
-            },
-            body: new URLSearchParams(item.fields),
-          })
-        : await fetch(item.url, { method: 'POST', body: new URLSearchParams(item.fields), redirect: 'manual' });
-    if (response.type === 'opaqueredirect' || response.ok) return { result: 'sent' };
-    // 412 Precondition Failed: the If-Match version is stale; the answer carries the sheet as it is now.
-    if (response.status === 412 && item.kind === 'job-sheet') {
-      const answer = (await response.json()) as { current: Record<string, unknown> };
-      return { result: 'conflict', sheet: answer.current };
-    }
-    const answer =
-      item.kind === 'job-sheet' ? ((await response.json().catch(() => null)) as { error?: { message?: string } } | null) : null;
-    return { result: 'refused', message: answer?.error?.message ?? `The server answered ${response.status}.` };
-  } catch {
-    return { result: 'offline' };
-  }
-}
 
 /** A select's shown text for a stored value (the machine's name, the status's words); other fields as they are. */
 function shown(field: string, value: string): string {
   if (value === '') return '(empty)';
   const option = sheetForm?.querySelector<HTMLOptionElement>(`select[name="${field}"] option[value="${CSS.escape(value)}"]`);
   return option?.textContent?.trim() || value;
-}
-
-function render(queue: Waiting[], note = ''): void {
-  if (!box) return;
-  box.hidden = queue.length === 0 && note === '';
-  const offline = navigator.onLine ? '' : ' You are offline: they are sent, in order, when the connection comes back.';
-  const line = document.createElement('p');
-  line.textContent = `${queue.length > 0 ? waitingSummary(queue) + offline : ''} ${note}`.trim();
-  box.replaceChildren(line);
 }
 
 function chooser(item: SheetEdit, sheet: Record<string, unknown>, ask: string[], mine: string[]): void {
@@ -124,48 +66,22 @@ function chooser(item: SheetEdit, sheet: Record<string, unknown>, ask: string[],
   section.querySelector<HTMLInputElement>('input')?.focus();
 }
 
-/** Sends what waits, oldest first, and stops at the first item that cannot go yet. */
-async function flush(): Promise<void> {
-  if (flushing || !navigator.onLine) return render(await readOutbox());
-  flushing = true;
-  let sentAny = false;
-  try {
-    for (;;) {
-      const [item] = await readOutbox();
-      if (!item) break;
-      const sent = await send(item);
-      if (sent.result === 'sent') {
-        await removeFromOutbox(item.id);
-        sentAny = true;
-      } else if (sent.result === 'conflict' && item.kind === 'job-sheet') {
-        const merge = mergeSheet(formValues(item.base), formValues(item.fields), sheetValues(sent.sheet));
-        if (merge.ask.length === 0) {
-          const fields = entriesFor(item.fields, merge.mine);
-          if (fields.length === 0) await removeFromOutbox(item.id);
-          else await replaceInOutbox({ ...item, fields, baseVersion: Number(sent.sheet.version) });
-          continue;
-        }
-        return chooser(item, sent.sheet, merge.ask, merge.mine);
-      } else {
-        const why =
-          sent.result === 'refused'
-            ? ` “${item.label}” was refused: ${sent.message} It stays waiting; change it on the page and save again, or sign out to drop it.`
-            : '';
-        return render(await readOutbox(), why);
-      }
-    }
-  } finally {
-    flushing = false;
+/** A sheet edit that met a newer copy: merged field by field; only fields both sides changed are asked. */
+async function conflict(item: SheetEdit, sheet: Record<string, unknown>): Promise<boolean> {
+  const merge = mergeSheet(formValues(item.base), formValues(item.fields), sheetValues(sheet));
+  if (merge.ask.length > 0) {
+    chooser(item, sheet, merge.ask, merge.mine);
+    return false;
   }
-  // Everything went: show the sheet as the server now has it.
-  if (sentAny && sheetForm) location.assign(`${location.pathname}?job=saved`);
-  else render([]);
+  const fields = entriesFor(item.fields, merge.mine);
+  if (fields.length === 0) await removeFromOutbox(item.id);
+  else await replaceInOutbox({ ...item, fields, baseVersion: Number(sheet.version) });
+  return true;
 }
 
-async function hold(item: Waiting): Promise<void> {
-  await addToOutbox(item);
-  render(await readOutbox());
-}
+// Everything went: show the sheet as the server now has it.
+const hooks: OutboxHooks = { conflict, sent: () => location.assign(`${location.pathname}?job=saved`) };
+const flush = (): Promise<void> => flushOutbox(hooks);
 
 sheetForm?.addEventListener('submit', (event) => {
   event.preventDefault();
@@ -191,28 +107,4 @@ sheetForm?.addEventListener('submit', (event) => {
 });
 
 // The page's other forms (a bench report, the order list): offline, they wait in the same queue. Deleting does not.
-for (const form of document.querySelectorAll<HTMLFormElement>('main form[method="post"]:not([data-offline-sheet])')) {
-  form.addEventListener('submit', (event) => {
-    if (navigator.onLine) return;
-    event.preventDefault();
-    const fields = entriesOf(form, event.submitter);
-    if (fields.some(([name, value]) => name === 'intent' && value === 'delete')) {
-      render([], 'Deleting a job sheet needs a connection: nothing was deleted.');
-      return;
-    }
-    const label = (event.submitter?.textContent ?? form.querySelector('button')?.textContent ?? 'a form').trim();
-    const item: FormPost = {
-      kind: 'form-post',
-      id: newId(),
-      url: form.action,
-      fields,
-      label: `“${label}”`,
-      queuedAt: new Date().toISOString(),
-    };
-    void hold(item);
-  });
-}
-
-window.addEventListener('online', () => void flush());
-window.addEventListener('offline', () => void readOutbox().then((queue) => render(queue)));
-void flush();
+start('main form[method="post"]:not([data-offline-sheet])', hooks);

@@ -22,7 +22,7 @@ export function ToolShell({ path, onSubmit, children, result, submitLabel = 'Wor
             {submitLabel}
           </button>
           {exampleHref && (
-            <a className="text-sm" href={exampleHref}>
+            <a className="tap text-sm" href={exampleHref}>
               Fill in the worked example
             </a>
           )}

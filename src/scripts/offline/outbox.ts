@@ -1,0 +1,149 @@
+// The outbox on a page: a form posted without a connection waits in the one queue on this device (IndexedDB, see
+// outbox-store.ts) and is sent, in order, when the connection returns; the page's [data-outbox] box says what waits.
+// The job sheet page adds its own save and conflict chooser (job-sheet.ts); a fix page's bench report uses this alone.
+import { waitingSummary, type FormEntries, type FormPost, type SheetEdit, type Waiting } from '@/lib/offline/queue';
+import { ifMatchFor } from '@/lib/offline/job-sheet-version';
+import { addToOutbox, readOutbox, removeFromOutbox } from './outbox-store';
+
+export type Sent =
+  | { result: 'sent' }
+  | { result: 'offline' }
+  | { result: 'refused'; message: string }
+  | { result: 'conflict'; sheet: Record<string, unknown> };
+
+export interface OutboxHooks {
+  /** A sheet edit met a newer copy: settle it and answer true to go on sending, or show a chooser and answer false. */
+  conflict?: (item: SheetEdit, sheet: Record<string, unknown>) => Promise<boolean>;
+  /** Everything waiting went. */
+  sent?: (items: Waiting[]) => void;
+}
+
+export const box = (): HTMLElement | null => document.querySelector<HTMLElement>('[data-outbox]');
+/** The page's line about what waits nearest after a form (a page may have one under each kind of form). */
+const boxAfter = (form: HTMLFormElement): HTMLElement | null =>
+  [...document.querySelectorAll<HTMLElement>('[data-outbox]')].find(
+    (shown) => form.compareDocumentPosition(shown) & Node.DOCUMENT_POSITION_FOLLOWING,
+  ) ?? box();
+export const entriesOf = (form: HTMLFormElement, submitter?: HTMLElement | null): FormEntries =>
+  [...new FormData(form, submitter ?? null)].filter((pair): pair is [string, string] => typeof pair[1] === 'string');
+export const newId = (): string => `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
+let flushing = false;
+
+export async function send(item: Waiting): Promise<Sent> {
+  try {
+    const response =
+      item.kind === 'job-sheet'
+        ? await fetch(`/api/v1/job-sheets/${item.sheetId}`, {
+            method: 'PATCH',
+            headers: {
+              'Content-Type': 'application/x-www-form-urlencoded',
+              'If-Match': ifMatchFor(item.baseVersion),
+              Accept: 'application/json',
+            },
+            body: new URLSearchParams(item.fields),
+          })
+        : await fetch(item.url, { method: 'POST', body: new URLSearchParams(item.fields) });
+    // A page form answers a refusal either with an error status or, for the order list's add, with a redirect to
+    // the list naming the problem (?problem=…): the redirect is followed to tell the two apart.
+    if (item.kind === 'form-post' && response.ok && new URL(response.url).searchParams.has('problem'))
+      return { result: 'refused', message: 'Nothing was added; open your order list to see why.' };
+    if (response.ok) return { result: 'sent' };
+    // 412 Precondition Failed: the If-Match version is stale; the answer carries the sheet as it is now.
+    if (response.status === 412 && item.kind === 'job-sheet') {
+      const answer = (await response.json()) as { current: Record<string, unknown> };
+      return { result: 'conflict', sheet: answer.current };
+    }
+    const answer =
+      item.kind === 'job-sheet' ? ((await response.json().catch(() => null)) as { error?: { message?: string } } | null) : null;
+    return { result: 'refused', message: answer?.error?.message ?? `The server answered ${response.status}.` };
+  } catch {
+    return { result: 'offline' };
+  }
+}
+
+/** Says what waits (and `note`) in every such line of the page: the whole queue, as it is sent in one order. */
+export function render(queue: Waiting[], note = ''): void {
+  const offline = navigator.onLine ? '' : ' You are offline: they are sent, in order, when the connection comes back.';
+  for (const shown of document.querySelectorAll<HTMLElement>('[data-outbox]')) {
+    shown.hidden = queue.length === 0 && note === '';
+    const line = document.createElement('p');
+    line.textContent = [queue.length > 0 ? waitingSummary(queue) + offline : '', note.trim()].filter((part) => part !== '').join(' ');
+    shown.replaceChildren(line);
+  }
+}
+
+export async function hold(item: Waiting): Promise<void> {
+  await addToOutbox(item);
+  render(await readOutbox());
+}
+
+/** Sends what waits, oldest first, and stops at the first item that cannot go yet. */
+export async function flush(hooks: OutboxHooks = {}): Promise<void> {
+  if (flushing || !navigator.onLine) return render(await readOutbox());
+  flushing = true;
+  const sent: Waiting[] = [];
+  try {
+    for (;;) {
+      const [item] = await readOutbox();
+      if (!item) break;
+      const answer = await send(item);
+      if (answer.result === 'sent') {
+        await removeFromOutbox(item.id);
+        sent.push(item);
+      } else if (answer.result === 'conflict' && item.kind === 'job-sheet') {
+        if (hooks.conflict) {
+          if (await hooks.conflict(item, answer.sheet)) continue;
+          return;
+        }
+        return render(
+          await readOutbox(),
+          `Job sheet changes met a newer copy: open ${item.label.replace(/^your changes to /, '')} to choose.`,
+        );
+      } else {
+        const why =
+          answer.result === 'refused'
+            ? ` “${item.label}” was refused: ${answer.message} It stays waiting; change it on the page and save again, or sign out to drop it.`
+            : '';
+        return render(await readOutbox(), why);
+      }
+    }
+  } finally {
+    flushing = false;
+  }
+  if (sent.length > 0 && hooks.sent) hooks.sent(sent);
+  else render([], sent.length > 0 ? `Sent from this device: ${sent.map((item) => item.label).join('; ')}.` : '');
+}
+
+/**
+ * Offline, the forms matched by `selector` wait in the queue instead of posting; deleting never waits. A form may name
+ * what it sends in data-offline-label ("your bench report on …"); otherwise its button's words are used.
+ */
+export function start(selector: string, hooks: OutboxHooks = {}): void {
+  for (const form of document.querySelectorAll<HTMLFormElement>(selector)) {
+    form.addEventListener('submit', (event) => {
+      if (navigator.onLine) return;
+      event.preventDefault();
+      const fields = entriesOf(form, event.submitter);
+      if (fields.some(([name, value]) => name === 'intent' && value === 'delete')) {
+        render([], 'Deleting a job sheet needs a connection: nothing was deleted.');
+        return;
+      }
+      const button = (event.submitter?.textContent ?? form.querySelector('button')?.textContent ?? 'a form').trim();
+      const item: FormPost = {
+        kind: 'form-post',
+        id: newId(),
+        url: form.action,
+        fields,
+        label: form.dataset.offlineLabel ?? `“${button}”`,
+        queuedAt: new Date().toISOString(),
+      };
+      // The line saying it waits shows where the reader is looking: by the button just pressed.
+      void hold(item).then(() => boxAfter(form)?.scrollIntoView({ block: 'nearest' }));
+    });
+    // The form now waits offline instead of failing (a test waits for this before cutting the connection).
+    form.dataset.outboxReady = 'yes';
+  }
+  window.addEventListener('online', () => void flush(hooks));
+  window.addEventListener('offline', () => void readOutbox().then((queue) => render(queue)));
+  void flush(hooks);
+}
