@@ -1,13 +1,13 @@
 // At 360 px wide, every control of the main pages is at least 44 by 44 px: standalone links, buttons, select boxes,
 // text inputs, checkboxes and radio buttons (by their label); links inside running text are exempt (see the helper).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, BrowserContextOptions } from 'playwright-core';
 import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { demoUsers } from '@/server/seed/demo/users';
 import { createUser, type TestUser } from '../support/sign-in';
-import { describeSmall, smallTargets } from '../support/touch-targets';
+import { describeSmall, MIN_TARGET, smallTargets } from '../support/touch-targets';
 import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
 import { applyFixToJob, createJobSheet } from '@/server/bench-work/job-sheets';
 import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
@@ -61,11 +61,13 @@ afterAll(async () => {
   await closeDb();
 });
 
-/** Opens each path at 360 px; answers every control smaller than 44 px, by page. */
-async function smallOn(user: TestUser | undefined, paths: string[]): Promise<string[]> {
-  const context = user
-    ? await signedInContext(browser, base, user.email, user.password, { viewport: PHONE })
-    : await browser.newContext({ viewport: PHONE });
+/** Opens each path at 360 px (or as `device` says); answers every control smaller than 44 px, by page. */
+async function smallOn(
+  user: TestUser | undefined,
+  paths: string[],
+  device: BrowserContextOptions = { viewport: PHONE },
+): Promise<string[]> {
+  const context = user ? await signedInContext(browser, base, user.email, user.password, device) : await browser.newContext(device);
   const page = await context.newPage();
   const found: string[] = [];
   for (const path of paths) {
@@ -120,5 +122,19 @@ describe('touch targets at 360 px wide', () => {
       '/account',
     ]);
     expect(found).toEqual([]);
+  });
+
+  it("are 44 px on a tablet's touch screen too, though a desk computer with a mouse keeps its lists compact", async () => {
+    const tablet = { viewport: { width: 1024, height: 768 }, hasTouch: true, isMobile: true };
+    const found = await smallOn(undefined, ['/', '/machines', `/fixes/${places.fix}`, '/search?q=no+power', '/tools'], tablet);
+    expect(found).toEqual([]);
+    // With a mouse on a wide screen the same links keep the height of their line of text.
+    const desk = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await desk.newPage();
+    await page.goto(`${base}/`);
+    const heights = await page.locator('.tap').evaluateAll((links) => links.map((l) => l.getBoundingClientRect().height));
+    expect(heights.length).toBeGreaterThan(5);
+    expect(Math.max(...heights)).toBeLessThan(MIN_TARGET);
+    await desk.close();
   });
 });
