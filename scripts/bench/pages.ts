@@ -111,7 +111,7 @@ export function pagesTable(result: { rows: Row[]; floor: Row; plain: Row; bytes:
   const fix = result.rows[0]!;
   const ratio = fix.requestsPerSecond / result.floor.requestsPerSecond;
   lines.push(
-    `  goal: fix page ≥ 0.90 × the floor (now ${ratio.toFixed(2)}: ${ratio >= 0.9 ? 'met' : 'not met'}), p99 ≤ 50 ms (now ${fix.p99}: ${fix.p99 <= 50 ? 'met' : 'not met'})`,
+    `  goal: fix page ≥ 0.90 × the floor (now ${ratio.toFixed(3)}: ${ratio >= 0.9 ? 'met' : 'not met'}), p99 ≤ 50 ms (now ${fix.p99}: ${fix.p99 <= 50 ? 'met' : 'not met'})`,
   );
   return lines.join('\n');
 }
