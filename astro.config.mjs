@@ -28,6 +28,9 @@ export default defineConfig({
     ],
   },
   server: { host: '127.0.0.1', port: 4321 },
+  // The stylesheet travels inside each page: on a phone's slow connection the first paint waits for no second
+  // request (about 9 KB gzipped per page; the strict CSP hashes the inlined styles like any other).
+  build: { inlineStylesheets: 'always' },
   // A strict Content-Security-Policy: each page's header lists the hashes of its own inline scripts and styles
   // (src/server/http/security-headers.ts holds the directives).
   experimental: { csp: astroCsp },

@@ -75,7 +75,8 @@ export async function runLighthouse(
       .filter((audit) => audit.score !== null && audit.score < 1 && audit.scoreDisplayMode !== 'informative')
       .map((audit) => ({
         id: audit.id,
-        title: audit.title,
+        // "First Contentful Paint 1.9 s": the figure beside the audit says how far from a full score it is.
+        title: audit.displayValue ? `${audit.title} ${audit.displayValue}` : audit.title,
         items: ((audit.details as ItemDetails | undefined)?.items ?? []).slice(0, 5).map(itemText),
       }));
   }
