@@ -1,5 +1,6 @@
 // The app's server entry (`npm run preview`, and what `npm start` and the tests run): the built app's request handler
 // in a node:http server of our own, with background work started at boot and everything stopped cleanly on SIGTERM.
+// `npm run build` bundles it into dist/serve.mjs (scripts/build-entry.mjs), which runs under plain node.
 import { createServer, type RequestListener } from 'node:http';
 import { resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';

@@ -1,10 +1,11 @@
-// `npm start`: local PostgreSQL, migrations, the demo world, a build when sources changed, then the server (scripts/serve.ts).
+// `npm start`: local PostgreSQL, migrations, the demo world, a build when sources changed, then the server (scripts/serve.ts, built as dist/serve.mjs).
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { randomBytes } from 'node:crypto';
 import { join } from 'node:path';
 import { readConfig } from '../src/server/core/config.ts';
 import { buildIfStale, ensureDatabase, migrateAndSeed } from './lib/prepare.ts';
+import { distDir } from './lib/build-stamp.ts';
 import { mailDir } from '../src/server/mail/sink-store.ts';
 import { startMailSink } from '../src/server/mail/sink-process.ts';
 
@@ -21,7 +22,7 @@ const sink = config.SMTP_URL ? null : await startMailSink({ port: config.SMTP_SI
 const port = process.env.PORT ?? '4321';
 const host = process.env.HOST ?? '127.0.0.1';
 console.log(`\nBenchlore is starting on http://${host}:${port}  (Ctrl+C stops it; \`npm run db -- stop\` stops PostgreSQL)\n`);
-const server = spawn(process.execPath, ['--import', 'tsx', 'scripts/serve.ts'], {
+const server = spawn(process.execPath, [join(distDir, 'serve.mjs')], {
   stdio: 'inherit',
   env: { ...env, HOST: host, PORT: port },
 });

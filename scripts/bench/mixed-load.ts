@@ -33,7 +33,7 @@ export interface LoadOptions {
 const PASSWORD = 'bench-demo-2026';
 
 async function startApp(port: number, env: NodeJS.ProcessEnv): Promise<{ base: string; stop(): Promise<void> }> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'scripts/serve.ts'], {
+  const child = spawn(process.execPath, [`${process.env.BENCHLORE_DIST ?? 'dist'}/serve.mjs`], {
     env: { ...env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(port), PUBLIC_ORIGIN: `http://127.0.0.1:${port}` },
     stdio: ['ignore', 'pipe', 'inherit'],
   });

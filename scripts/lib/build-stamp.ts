@@ -3,7 +3,19 @@ import { createHash } from 'node:crypto';
 import { existsSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 
-const SOURCES = ['src', 'public', 'astro.config.mjs', 'tailwind.config.cjs', 'package-lock.json', 'tsconfig.json', 'auth.config.ts'];
+const SOURCES = [
+  'src',
+  'public',
+  'astro.config.mjs',
+  'tailwind.config.cjs',
+  'package-lock.json',
+  'tsconfig.json',
+  'auth.config.ts',
+  'knexfile.js',
+  // The server entry is bundled into the build too (dist/serve.mjs).
+  'scripts/serve.ts',
+  'scripts/build-entry.mjs',
+];
 const DIST = process.env.BENCHLORE_DIST ?? 'dist';
 const STAMP = join(DIST, '.source-hash');
 
@@ -24,7 +36,12 @@ export function sourceHash(): string {
 }
 
 export function buildIsCurrent(): boolean {
-  return existsSync(join(DIST, 'server', 'entry.mjs')) && existsSync(STAMP) && readFileSync(STAMP, 'utf8') === sourceHash();
+  return (
+    existsSync(join(DIST, 'server', 'entry.mjs')) &&
+    existsSync(join(DIST, 'serve.mjs')) &&
+    existsSync(STAMP) &&
+    readFileSync(STAMP, 'utf8') === sourceHash()
+  );
 }
 
 export const distDir = DIST;

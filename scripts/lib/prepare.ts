@@ -34,6 +34,7 @@ export function buildIfStale(env: NodeJS.ProcessEnv): void {
     return;
   }
   run(process.execPath, ['node_modules/astro/astro.js', 'build', '--outDir', distDir], { ...env, NODE_ENV: 'production' });
+  run(process.execPath, ['scripts/build-entry.mjs', distDir], env);
   markBuilt();
 }
 

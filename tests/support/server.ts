@@ -1,4 +1,4 @@
-// Starts the built app for tests through its server entry (scripts/serve.ts) on a port of its own, and stops it afterwards.
+// Starts the built app for tests through its server entry (scripts/serve.ts, built as dist/serve.mjs) on a port of its own, and stops it afterwards.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { rmSync } from 'node:fs';
 import { startMailSink } from '../../src/server/mail/sink-process';
@@ -30,7 +30,7 @@ export async function startApp(
   if (!options.keepMail) rmSync(mail.BENCHLORE_MAIL_DIR, { recursive: true, force: true });
   const startSink = () => startMailSink({ port: sinkPortFor(port), dir: mail.BENCHLORE_MAIL_DIR, env: testEnv(), stdio: 'pipe' });
   let sink: Awaited<ReturnType<typeof startMailSink>> | null = options.sink === false ? null : await startSink();
-  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'scripts/serve.ts'], {
+  const child: ChildProcess = spawn(process.execPath, [`${DIST_DIR}/serve.mjs`], {
     env: {
       ...testEnv(),
       ...mail,
