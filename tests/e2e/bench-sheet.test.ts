@@ -8,7 +8,7 @@ import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
-import { demoUsers } from '@/server/seed/demo/users';
+import { demoWorldFixes } from '../support/demo-world';
 import { makeMember, PASSWORD } from '../integration/bench-work-support';
 import { createJobSheet } from '@/server/bench-work/job-sheets';
 import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
@@ -31,22 +31,7 @@ let fix: {
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  fix = await knex('fixes as f')
-    .join('revisions as r', 'r.id', 'f.current_revision_id')
-    .join('fix_machines as fm', 'fm.fix_id', 'f.id')
-    .join('machines as m', 'm.id', 'fm.machine_id')
-    .whereNull('f.hidden_at')
-    .whereNull('f.deleted_at')
-    // A fix of the demo world, written by its people: not one another test file makes and takes down meanwhile.
-    .whereIn(
-      'f.created_by',
-      knex('users')
-        .select('id')
-        .whereIn(
-          'email',
-          demoUsers.map((u) => u.email),
-        ),
-    )
+  fix = await demoWorldFixes(knex)
     .whereRaw('jsonb_array_length(r.cautions) > 0 AND jsonb_array_length(r.parts) > 0 AND jsonb_array_length(r.readings) > 0')
     .orderBy('f.id')
     .first(

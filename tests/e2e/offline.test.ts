@@ -8,7 +8,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
-import { demoUsers } from '@/server/seed/demo/users';
+import { demoWorldFixes } from '../support/demo-world';
 import { makeMember, PASSWORD } from '../integration/bench-work-support';
 import { createJobSheet, updateJobSheet } from '@/server/bench-work/job-sheets';
 import { getOrderList } from '@/server/bench-work/order-lists';
@@ -32,22 +32,7 @@ let photoFixes: PhotoFix[];
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const rows = await knex('fixes as f')
-    .join('revisions as r', 'r.id', 'f.current_revision_id')
-    .join('fix_machines as fm', 'fm.fix_id', 'f.id')
-    .join('machines as m', 'm.id', 'fm.machine_id')
-    .whereNull('f.hidden_at')
-    .whereNull('f.deleted_at')
-    // Fixes of the demo world, written by its people: not one another test file makes and takes down meanwhile.
-    .whereIn(
-      'f.created_by',
-      knex('users')
-        .select('id')
-        .whereIn(
-          'email',
-          demoUsers.map((u) => u.email),
-        ),
-    )
+  const rows: { slug: string; title: string; number: number; machine: string }[] = await demoWorldFixes(knex)
     .whereExists(knex('revision_photos as rp').whereRaw('rp.revision_id = r.id'))
     .orderByRaw('jsonb_array_length(r.parts) DESC, f.id')
     .select('f.slug', 'r.title', 'r.number', 'm.slug as machine');

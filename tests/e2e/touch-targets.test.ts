@@ -5,7 +5,7 @@ import type { Browser, BrowserContextOptions } from 'playwright-core';
 import { launchBrowser, signedInContext } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
-import { demoUsers } from '@/server/seed/demo/users';
+import { demoWorldFixes } from '../support/demo-world';
 import { createUser, type TestUser } from '../support/sign-in';
 import { describeSmall, MIN_TARGET, smallTargets } from '../support/touch-targets';
 import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
@@ -23,24 +23,9 @@ let job: number;
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const fix = await knex('fixes as f')
-    .join('revisions as r', 'r.id', 'f.current_revision_id')
-    .join('fix_machines as fm', 'fm.fix_id', 'f.id')
-    .join('machines as m', 'm.id', 'fm.machine_id')
+  const fix = await demoWorldFixes(knex)
     .join('chassis_families as c', 'c.id', 'm.chassis_family_id')
     .join('makers as mk', 'mk.id', 'm.maker_id')
-    .whereNull('f.hidden_at')
-    .whereNull('f.deleted_at')
-    // A fix of the demo world with a parts table, written by its people: not one another test file takes down.
-    .whereIn(
-      'f.created_by',
-      knex('users')
-        .select('id')
-        .whereIn(
-          'email',
-          demoUsers.map((u) => u.email),
-        ),
-    )
     .orderByRaw('jsonb_array_length(r.parts) DESC, f.id')
     .first('f.slug', 'm.slug as machine', 'c.slug as chassis', 'mk.slug as maker');
   places = { fix: fix.slug, machine: fix.machine, chassis: fix.chassis, maker: fix.maker };
