@@ -1,12 +1,13 @@
 // At 360 px wide, no main page scrolls sideways, signed out or signed in: wide tables scroll inside their own box.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext } from 'playwright-core';
-import { launchBrowser, signedInContext } from '../support/browser';
+import type { Browser } from 'playwright-core';
+import { launchBrowser } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { demoWorldFixes } from '../support/demo-world';
 import { createUser, signIn, type TestUser } from '../support/sign-in';
 import { describeOverflow, horizontalOverflow } from '../support/overflow';
+import { walkPages } from '../support/page-walk';
 import { call, completeValues, someMachineId } from '../fixtures/writing';
 import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
 import { applyFixToJob, createJobSheet } from '@/server/bench-work/job-sheets';
@@ -87,26 +88,16 @@ afterAll(async () => {
   await closeDb();
 });
 
-function phoneContext(user?: TestUser): Promise<BrowserContext> {
-  return user ? signedInContext(browser, base, user.email, user.password, { viewport: PHONE }) : browser.newContext({ viewport: PHONE });
-}
-
 /** Opens each path at 360 px; answers the pages that scroll sideways (with their widest element) or did not open. */
-async function overflowingPages(user: TestUser | undefined, paths: string[]): Promise<string[]> {
-  const context = await phoneContext(user);
-  const page = await context.newPage();
-  const found: string[] = [];
-  for (const path of paths) {
-    const response = await page.goto(`${base}${path}`);
-    // Islands render after load; give them a moment so their tables count too.
-    await page.waitForLoadState('networkidle', { timeout: 5_000 }).catch(() => {});
+function overflowingPages(user: TestUser | undefined, paths: string[]): Promise<string[]> {
+  return walkPages(browser, base, user, { viewport: PHONE }, paths, async (page, path, response) => {
+    const found: string[] = [];
     const status = response?.status() ?? 0;
     if (status >= 400 && path !== '/no-such-page') found.push(`${path} answered ${status}`);
     const overflow = await horizontalOverflow(page);
     if (overflow) found.push(describeOverflow(path, overflow));
-  }
-  await context.close();
-  return found;
+    return found;
+  });
 }
 
 describe('pages at 360 px wide', () => {

@@ -2,12 +2,13 @@
 // text inputs, checkboxes and radio buttons (by their label); links inside running text are exempt (see the helper).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContextOptions } from 'playwright-core';
-import { launchBrowser, signedInContext } from '../support/browser';
+import { launchBrowser } from '../support/browser';
 import { E2E_PORT } from '../support/test-env';
 import { testDb } from '../support/db';
 import { demoWorldFixes } from '../support/demo-world';
 import { createUser, type TestUser } from '../support/sign-in';
 import { describeSmall, MIN_TARGET, smallTargets } from '../support/touch-targets';
+import { walkPages } from '../support/page-walk';
 import { addToOrderList, fixPartsForOrder } from '@/server/bench-work/order-lists';
 import { applyFixToJob, createJobSheet } from '@/server/bench-work/job-sheets';
 import { jobSheetCreateSchema } from '@/lib/schemas/job-sheet';
@@ -47,22 +48,8 @@ afterAll(async () => {
 });
 
 /** Opens each path at 360 px (or as `device` says); answers every control smaller than 44 px, by page. */
-async function smallOn(
-  user: TestUser | undefined,
-  paths: string[],
-  device: BrowserContextOptions = { viewport: PHONE },
-): Promise<string[]> {
-  const context = user ? await signedInContext(browser, base, user.email, user.password, device) : await browser.newContext(device);
-  const page = await context.newPage();
-  const found: string[] = [];
-  for (const path of paths) {
-    await page.goto(`${base}${path}`);
-    // The page's script shows "Keep for the bench" and the like once it runs; islands render after load.
-    await page.waitForLoadState('networkidle', { timeout: 5_000 }).catch(() => {});
-    found.push(...describeSmall(path, await smallTargets(page)));
-  }
-  await context.close();
-  return found;
+function smallOn(user: TestUser | undefined, paths: string[], device: BrowserContextOptions = { viewport: PHONE }): Promise<string[]> {
+  return walkPages(browser, base, user, device, paths, async (page, path) => describeSmall(path, await smallTargets(page)));
 }
 
 describe('touch targets at 360 px wide', () => {
