@@ -15,8 +15,10 @@ const publicOrigin = new URL(process.env.PUBLIC_ORIGIN ?? 'http://127.0.0.1:4321
 
 export default defineConfig({
   output: 'server',
-  // Prerendered pages get their Content-Security-Policy as a header too (a <meta> policy cannot hold frame-ancestors).
-  adapter: node({ mode: 'standalone', experimentalStaticHeaders: true }),
+  // Middleware mode: the adapter's handler renders; our server entry (scripts/serve.ts) listens and answers the built
+  // files from memory, compressed. Prerendered pages get their Content-Security-Policy as a header too (a <meta>
+  // policy cannot hold frame-ancestors), read by the entry from the file the adapter writes.
+  adapter: node({ mode: 'middleware', experimentalStaticHeaders: true }),
   integrations: [react(), tailwind({ applyBaseStyles: false }), mdx(), auth(), AstroPWA(pwaOptions())],
   security: {
     // Astro's origin check runs from src/middleware.ts instead (src/server/http/origin-check.ts), so that its 403
@@ -28,9 +30,8 @@ export default defineConfig({
     ],
   },
   server: { host: '127.0.0.1', port: 4321 },
-  // Stylesheets stay linked, not inlined (Astro's default): inlined, the fix page scored 99 instead of 97 in
-  // Lighthouse's cold phone load, but every page grew from 24 to 71 KB (our server does not compress) and each later
-  // page a reader opens would carry the sheet again instead of reading it from the cache.
+  // Stylesheets stay linked, not inlined (Astro's default): inlined, every page would carry the sheet again instead
+  // of the reader's browser reading it from its cache; linked, it is served compressed (Brotli, made at build time).
   // A strict Content-Security-Policy: each page's header lists the hashes of its own inline scripts and styles
   // (src/server/http/security-headers.ts holds the directives).
   experimental: { csp: astroCsp },

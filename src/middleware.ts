@@ -2,6 +2,7 @@
 // away), who is asking, the route guard, and public pages answered from their validators or kept renders for anonymous readers.
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { applySecurityHeaders } from '@/server/http/security-headers';
+import { compressOnTheWay } from '@/server/http/compression';
 import { originCheck } from '@/server/http/origin-check';
 import { apiError } from '@/server/http/responses';
 import { unavailableAnswer } from '@/server/http/unavailable';
@@ -30,10 +31,11 @@ function editable(response: Response): Response {
   }
 }
 
-const securityHeaders = defineMiddleware(async (_context, next) => {
+/** Security headers on every answer; text bodies compressed for readers who accept it (a kept page is already). */
+const securityHeaders = defineMiddleware(async (context, next) => {
   const response = editable(await next());
   applySecurityHeaders(response.headers, response.status);
-  return response;
+  return compressOnTheWay(context.request, response);
 });
 
 const errorBoundary = defineMiddleware(async (context, next) => {

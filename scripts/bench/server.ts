@@ -1,4 +1,5 @@
-// Starts the built app for a benchmark on a port of its own, in production mode, and reports its process id.
+// Starts the built app for a benchmark on a port of its own, through its real server entry (dist/serve.mjs, what
+// `npm start` runs), in production mode, and reports its process id.
 import { spawn, type ChildProcess } from 'node:child_process';
 
 export interface BenchServer {
@@ -13,7 +14,7 @@ export async function startBenchServer(
   distDir = 'dist',
   nodeArgs: string[] = [],
 ): Promise<BenchServer> {
-  const child = spawn(process.execPath, [...nodeArgs, `${distDir}/server/entry.mjs`], {
+  const child = spawn(process.execPath, [...nodeArgs, `${distDir}/serve.mjs`], {
     env: { ...env, NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(port), PUBLIC_ORIGIN: `http://127.0.0.1:${port}` },
     stdio: ['ignore', 'ignore', 'pipe'],
   });

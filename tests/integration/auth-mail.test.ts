@@ -64,7 +64,7 @@ describe('dev mail pages', () => {
 
   it('answers 404 when NODE_ENV is production', async () => {
     const port = INTEGRATION_PORT + 7;
-    const child = spawn(process.execPath, [`${DIST_DIR}/server/entry.mjs`], {
+    const child = spawn(process.execPath, [`${DIST_DIR}/serve.mjs`], {
       env: { ...testEnv(), NODE_ENV: 'production', HOST: '127.0.0.1', PORT: String(port), PUBLIC_ORIGIN: `http://127.0.0.1:${port}` },
       stdio: 'ignore',
     });

@@ -1,6 +1,8 @@
 // Public pages' validators through the built server: an anonymous repeat is answered 304 from the page's key; a
 // proofing, a lock, a hide, a bench report or a catalogue edit changes the key and the text; signed-in readers
 // get their own private render, never the anonymous kept one.
+import { request as httpRequest, type IncomingHttpHeaders } from 'node:http';
+import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { client } from '../support/http';
@@ -135,6 +137,55 @@ describe('validators on public pages', () => {
       expect(after.status, path).toBe(200);
       expect(after.text, path).toContain(renamed);
     }
+  });
+});
+
+describe('compressed for a slow connection', () => {
+  /** One answer read raw (node:http does not decompress), as a phone on a workshop connection receives it. */
+  function raw(path: string, acceptEncoding: string) {
+    return new Promise<{ status: number; headers: IncomingHttpHeaders; bytes: Buffer }>((done, fail) => {
+      httpRequest(`${site.base}${path}`, { headers: { 'accept-encoding': acceptEncoding } }, (res) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (chunk: Buffer) => chunks.push(chunk));
+        res.on('end', () => done({ status: res.statusCode ?? 0, headers: res.headers, bytes: Buffer.concat(chunks) }));
+      })
+        .on('error', fail)
+        .end();
+    });
+  }
+
+  it('sends the fix page and its stylesheet in Brotli, a third of their size or less, decoding to the same bytes', async () => {
+    const path = `/fixes/${fix.slug}`;
+    const plain = await raw(path, 'identity');
+    const br = await raw(path, 'gzip, deflate, br');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.headers.vary).toContain('Accept-Encoding');
+    expect(br.headers.etag).toBe(plain.headers.etag);
+    expect(br.bytes.byteLength).toBeLessThan(plain.bytes.byteLength / 3);
+    expect(brotliDecompressSync(br.bytes).equals(plain.bytes)).toBe(true);
+
+    const sheet = /href="(\/_astro\/[^"]+\.css)"/.exec(plain.bytes.toString())?.[1];
+    expect(sheet).toBeDefined();
+    const sheetPlain = await raw(sheet!, 'identity');
+    const sheetBr = await raw(sheet!, 'br');
+    expect(sheetBr.headers['content-encoding']).toBe('br');
+    expect(sheetBr.headers['cache-control']).toContain('immutable');
+    expect(sheetBr.headers['x-content-type-options']).toBe('nosniff');
+    expect(sheetBr.bytes.byteLength).toBeLessThan(sheetPlain.bytes.byteLength / 4);
+    expect(brotliDecompressSync(sheetBr.bytes).equals(sheetPlain.bytes)).toBe(true);
+  });
+
+  it('gzips a search page rendered for each request, and leaves it whole for a reader who asks for none', async () => {
+    const path = '/search?q=validator+fault';
+    const gz = await raw(path, 'gzip');
+    const plain = await raw(path, '');
+    expect(gz.status).toBe(200);
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(gunzipSync(gz.bytes).toString()).toContain('<title>Search: validator fault');
+    expect(gunzipSync(gz.bytes).byteLength).toBe(plain.bytes.byteLength);
+    expect(gz.bytes.byteLength).toBeLessThan(plain.bytes.byteLength / 3);
   });
 });
 

@@ -67,10 +67,10 @@ export const routeAccess: Record<string, RouteRule> = {
   '/sitemaps/[file].xml': { methods: { GET: 'public' }, sharedCache: true },
 
   // Built once and stored by the service worker: the offline page and the list of fixes kept on this device.
-  // Prerendered files: the adapter serves them for any method before our middleware runs, and they hold nothing
-  // personal, so the table says what happens: every method gets the same page.
-  '/offline': { methods: { '*': 'public' } },
-  '/kept': { methods: { '*': 'public' } },
+  // Prerendered files, answered by the server entry before our middleware runs (src/server/http/static-files.ts):
+  // read with GET or HEAD by anyone; any other method gets 405 with Allow.
+  '/offline': read,
+  '/kept': read,
   '/api/v1/machines': apiRead,
   '/api/v1/machines/[slug]': apiRead,
   '/api/v1/chassis/[slug]': apiRead,

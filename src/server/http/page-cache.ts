@@ -7,6 +7,7 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import etag from 'etag';
 import fresh from 'fresh';
+import { chooseEncoding, compressOnce, MIN_COMPRESS_BYTES, varyOnEncoding, type Encoding } from './compression';
 import { cachePolicies } from './responses';
 
 export type CachePolicy = Exclude<keyof typeof cachePolicies, 'private'>;
@@ -33,7 +34,12 @@ interface Kept {
   status: number;
   headers: [string, string][];
   body: Uint8Array<ArrayBuffer>;
+  /** The body compressed once when kept, with its own headers, for readers who accept it (none for a tiny body). */
+  encoded: Partial<Record<Encoding, { body: Uint8Array<ArrayBuffer>; headers: [string, string][] }>>;
 }
+
+const sizeOf = (kept: Kept): number =>
+  kept.body.byteLength + Object.values(kept.encoded).reduce((sum, variant) => sum + variant.body.byteLength, 0);
 
 /**
  * Rendered pages by address, each with the key it was rendered at; only the newest key per address is kept, and the
@@ -56,9 +62,9 @@ export class RenderCache {
 
   set(address: string, kept: Kept): void {
     this.delete(address);
-    if (kept.body.byteLength > this.limits.bytes) return;
+    if (sizeOf(kept) > this.limits.bytes) return;
     this.entries.set(address, kept);
-    this.bytes += kept.body.byteLength;
+    this.bytes += sizeOf(kept);
     for (const [oldest] of this.entries) {
       if (this.entries.size <= this.limits.entries && this.bytes <= this.limits.bytes) break;
       this.delete(oldest);
@@ -68,7 +74,7 @@ export class RenderCache {
   delete(address: string): void {
     const kept = this.entries.get(address);
     if (!kept) return;
-    this.bytes -= kept.body.byteLength;
+    this.bytes -= sizeOf(kept);
     this.entries.delete(address);
   }
 
@@ -147,7 +153,7 @@ export async function answerPublicPage(input: {
     return new Response(null, { status: 304, headers: { ETag: tag, 'Cache-Control': cachePolicies[input.policy] } });
   }
   const kept = cache.get(input.address, input.key);
-  if (kept) return new Response(kept.body, { status: kept.status, headers: kept.headers });
+  if (kept) return keptAnswer(kept, input.request);
 
   const response = await input.render();
   // A page that names no policy (the MDX help pages) takes its route's.
@@ -159,15 +165,28 @@ export async function answerPublicPage(input: {
   const headers = new Headers(response.headers);
   headers.set('Cache-Control', cacheControl);
   headers.set('ETag', tag);
+  varyOnEncoding(headers);
   // A known length goes out in one write, without chunked encoding.
-  headers.set('Content-Length', String(body.byteLength));
-  const entry: Kept = {
-    key: input.key,
-    tag,
-    status: 200,
-    headers: [...headers].filter(([name]) => !HOP_BY_HOP.has(name.toLowerCase())),
-    body,
-  };
+  const withLength = (length: number, encoding?: Encoding): [string, string][] => [
+    ...[...headers].filter(([name]) => !HOP_BY_HOP.has(name.toLowerCase()) && name.toLowerCase() !== 'content-length'),
+    ['content-length', String(length)],
+    ...(encoding ? [['content-encoding', encoding] as [string, string]] : []),
+  ];
+  const encoded: Kept['encoded'] = {};
+  if (body.byteLength >= MIN_COMPRESS_BYTES && !headers.has('content-encoding')) {
+    for (const encoding of ['br', 'gzip'] as const) {
+      const compressed = compressOnce(body, encoding);
+      encoded[encoding] = { body: compressed, headers: withLength(compressed.byteLength, encoding) };
+    }
+  }
+  const entry: Kept = { key: input.key, tag, status: 200, headers: withLength(body.byteLength), body, encoded };
   if (input.mayKeep()) cache.set(input.address, entry);
-  return new Response(body, { status: 200, statusText: response.statusText, headers });
+  return keptAnswer(entry, input.request);
+}
+
+/** A kept render as this reader asked for it: compressed when they accept an encoding we hold, with its length known. */
+function keptAnswer(kept: Kept, request: Request): Response {
+  const encoding = chooseEncoding(request.headers.get('accept-encoding'), Object.keys(kept.encoded) as Encoding[]);
+  const answer = encoding ? kept.encoded[encoding]! : kept;
+  return new Response(answer.body, { status: kept.status, headers: answer.headers });
 }

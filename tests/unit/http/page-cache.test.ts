@@ -8,6 +8,7 @@ const kept = (key: string, size: number) => ({
   tag: `W/"${key}"`,
   status: 200,
   headers: [] as [string, string][],
+  encoded: {},
   body: new Uint8Array(size),
 });
 
@@ -197,5 +198,38 @@ describe('sharedKeyRead', () => {
     const failing = sharedKeyRead('/x', () => Promise.reject(new Error('database gone')));
     await expect(failing).rejects.toThrow('database gone');
     await expect(sharedKeyRead('/x', () => Promise.resolve('k'))).resolves.toBe('k');
+  });
+});
+
+describe('answerPublicPage, compressed', () => {
+  const text = '<main>Check the pinch roller for a glazed face before anything else.</main>'.repeat(40);
+  const render = async () =>
+    new Response(text, { status: 200, headers: { 'Content-Type': 'text/html', 'Cache-Control': 'public, max-age=60' } });
+  const ask = (acceptEncoding?: string) =>
+    new Request('http://x.test/fixes/a', { headers: acceptEncoding ? { 'Accept-Encoding': acceptEncoding } : {} });
+
+  it('keeps Brotli and gzip copies made once, serves the one the reader takes, and each decompresses to the page', async () => {
+    const { brotliDecompressSync, gunzipSync } = await import('node:zlib');
+    const cache = new RenderCache({ entries: 10, bytes: 100_000 });
+    const renderOnce = vi.fn(render);
+    const input = { address: '/fixes/a', key: 'k1', policy: 'public' as const, render: renderOnce, mayKeep: () => true, cache };
+    const br = await answerPublicPage({ ...input, request: ask('gzip, deflate, br') });
+    const gz = await answerPublicPage({ ...input, request: ask('gzip') });
+    const plain = await answerPublicPage({ ...input, request: ask() });
+    expect(renderOnce).toHaveBeenCalledTimes(1);
+    expect(br.headers.get('content-encoding')).toBe('br');
+    expect(gz.headers.get('content-encoding')).toBe('gzip');
+    expect(plain.headers.get('content-encoding')).toBeNull();
+    for (const answer of [br, gz, plain]) {
+      expect(answer.headers.get('vary')).toContain('Accept-Encoding');
+      expect(answer.headers.get('etag')).toBe(plain.headers.get('etag'));
+    }
+    const brBytes = Buffer.from(await br.arrayBuffer());
+    expect(Number(br.headers.get('content-length'))).toBe(brBytes.byteLength);
+    expect(brotliDecompressSync(brBytes).toString()).toBe(text);
+    expect(gunzipSync(Buffer.from(await gz.arrayBuffer())).toString()).toBe(text);
+    expect(await plain.text()).toBe(text);
+    // The copies count against the cache's byte limit.
+    expect(cache.size.bytes).toBeGreaterThan(text.length);
   });
 });
