@@ -13,7 +13,7 @@ import { authenticateBearer, bearerOf } from '@/server/auth/api-tokens';
 import { respond } from '@/server/http/result';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
-import { answerPublicPage, sharedKeyRead } from '@/server/http/page-cache';
+import { answerPublicPage, publicPageCache, searchPageCache, sharedKeyRead } from '@/server/http/page-cache';
 import { pageKeys } from '@/server/render/page-keys';
 import { unreadCount } from '@/server/notifications/events';
 
@@ -108,6 +108,7 @@ const publicPages = defineMiddleware(async (context, next) => {
     address: context.url.pathname + context.url.search,
     key,
     policy: page.policy,
+    cache: page.shelf === 'searches' ? searchPageCache : publicPageCache,
     render: () => next(),
     // A page that set a cookie on the way answered one reader, not everyone.
     mayKeep: () => context.cookies.headers().next().done === true,

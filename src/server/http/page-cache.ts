@@ -10,7 +10,7 @@ import fresh from 'fresh';
 import { chooseEncoding, compressOnce, MIN_COMPRESS_BYTES, varyOnEncoding, type Encoding } from './compression';
 import { cachePolicies } from './responses';
 
-export type CachePolicy = Exclude<keyof typeof cachePolicies, 'private'>;
+export type CachePolicy = Exclude<keyof typeof cachePolicies, 'private' | 'counted'>;
 
 /** The weak ETag of one address at one key: the build, the address and the key, hashed by the `etag` package. */
 export function pageEtag(build: string, address: string, key: string): string {
@@ -132,6 +132,8 @@ export function sharedKeyRead(address: string, read: () => Promise<string | null
 const HOP_BY_HOP = new Set(['set-cookie', 'date', 'transfer-encoding', 'connection', 'keep-alive']);
 
 export const publicPageCache = new RenderCache({ entries: 2000, bytes: 64 * 1024 * 1024 });
+/** Kept search pages, apart from the rest (see KeptShelf in src/server/render/page-keys.ts). */
+export const searchPageCache = new RenderCache({ entries: 500, bytes: 16 * 1024 * 1024 });
 
 /**
  * Answers an anonymous GET of a public page: 304 when the reader's ETag is current, the kept render when its key

@@ -47,6 +47,8 @@ export const cachePolicies = {
   /** A proofed revision never changes. */
   immutable: 'public, max-age=86400, s-maxage=31536000, immutable',
   private: 'private, no-store',
+  /** Public, but every view must reach us (a search that found nothing is counted as a miss each time). */
+  counted: 'no-cache',
 } as const;
 
 export function json(

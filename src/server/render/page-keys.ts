@@ -1,6 +1,7 @@
 // What each public page's rendered bytes depend on, read in one indexed query (or none): the key its kept render
 // and its ETag are derived from. The counters are raised by triggers (migration 20261222090000_page_versions), so a
 // proofing, a lock, a hide, a bench report or a catalogue edit changes the key in the same transaction.
+import { config } from '../core/config';
 import { db } from '../core/db';
 
 /** The page's dependencies as one string, or null when the page should render normally (not found, say). */
@@ -20,6 +21,7 @@ const versionsOf = (scopes: string[]) =>
   `(SELECT string_agg(scope || '.' || version, ',' ORDER BY scope) FROM page_versions WHERE scope IN (${scopes.map((s) => `'${s}'`).join(', ')}))`;
 
 const everyScope = versionsOf(['bench', 'catalogue', 'fixes', 'people', 'photos']);
+const searchScopes = versionsOf(['bench', 'catalogue', 'fixes', 'people', 'photos', 'search']);
 // A fix page reads its own row instead of the "fixes" counter, so proofing one fix leaves every other fix's key alone.
 const fixPageScopes = versionsOf(['bench', 'catalogue', 'people', 'photos']);
 
@@ -52,6 +54,18 @@ export function fixKeyOf(row: {
   return `fix.${row.id}.r${row.current_revision_id}.${row.locked_at ? `locked${row.locked_at.getTime()}` : 'open'},${row.versions ?? ''}`;
 }
 
+/**
+ * The search page and the search API: results come from the search tables (the "search" counter) and show machines,
+ * makers, bench scores, photos and names, so every counter. One query, shared by every address of the page.
+ * With Meilisearch configured, results come from an index that catches up after the commit, so a counter raised
+ * in the transaction could key results read before the index had the change: nothing is kept then.
+ */
+export const searchKey: PageKey = async () => {
+  if (config().MEILI_URL) return null;
+  const rows = await db().raw<{ rows: VersionsRow[] }>(`SELECT ${searchScopes} AS versions`);
+  return rows.rows[0]?.versions ?? null;
+};
+
 /** Help pages change only with a new build: no query at all. */
 export const buildOnlyKey: PageKey = () => Promise.resolve('build');
 
@@ -61,8 +75,14 @@ export type KeptPolicy = 'public' | 'immutable';
 const site = { key: siteKey, policy: 'public' } as const;
 const help = { key: buildOnlyKey, policy: 'public' } as const;
 
-/** The public pages whose anonymous answers are kept and validated, by route pattern. */
-export const pageKeys: Record<string, { key: PageKey; policy: KeptPolicy }> = {
+/**
+ * Where a page's kept renders go: searches have their own, smaller shelf, so a run of one-off queries (a crawler
+ * trying words) pushes out other searches, never the fix pages.
+ */
+export type KeptShelf = 'pages' | 'searches';
+
+/** The public pages (and the search API) whose anonymous answers are kept and validated, by route pattern. */
+export const pageKeys: Record<string, { key: PageKey; policy: KeptPolicy; shelf?: KeptShelf }> = {
   '/': site,
   '/machines': site,
   '/machines/[slug]': site,
@@ -72,6 +92,10 @@ export const pageKeys: Record<string, { key: PageKey; policy: KeptPolicy }> = {
   '/fixes/[slug]': { key: fixKey, policy: 'public' },
   // The revision never changes, but the page around it does (live revision, bench reports): the key still holds it.
   '/fixes/[slug]/r/[number]': { key: fixKey, policy: 'immutable' },
+  // A search that found nothing is not kept (its page says `no-cache`): every such search is counted as a miss.
+  '/search': { key: searchKey, policy: 'public', shelf: 'searches' },
+  // What the search box asks while the reader types; never counted as a miss, so an empty answer is kept too.
+  '/api/v1/search': { key: searchKey, policy: 'public', shelf: 'searches' },
   '/sitemap.xml': site,
   '/sitemaps/[file].xml': site,
   '/help': help,
