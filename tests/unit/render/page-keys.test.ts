@@ -34,7 +34,12 @@ describe('pageKeys', () => {
     ]) {
       expect(pageKeys[route], route).toBeDefined();
     }
-    for (const route of ['/search', '/n/[code]', '/account', '/jobs', '/proofing', '/write', '/fixes/[slug]/edit']) {
+    // Searches are kept for anonymous readers on their own shelf, so a run of one-off queries cannot push out fix pages.
+    for (const route of ['/search', '/api/v1/search']) {
+      expect(pageKeys[route]?.shelf, route).toBe('searches');
+    }
+    expect(pageKeys['/fixes/[slug]']?.shelf ?? 'pages').toBe('pages');
+    for (const route of ['/n/[code]', '/account', '/jobs', '/proofing', '/write', '/fixes/[slug]/edit']) {
       expect(pageKeys[route], route).toBeUndefined();
     }
   });
