@@ -144,7 +144,7 @@ describe('pages in Chromium under the policy', () => {
     await page.keyboard.press('Control+B');
     await page.keyboard.type('with isopropyl alcohol');
     const tool = (name: string) => page.getByRole('toolbar', { name: 'Remedy formatting' }).getByRole('button', { name, exact: true });
-    await tool('Numbered steps').click();
+    await tool('1. Steps, numbered').click();
     await tool('Insert table').click();
     await page.keyboard.type('TP4');
     await expect(remedy.locator('strong').textContent()).resolves.toBe('with isopropyl alcohol');

@@ -87,6 +87,21 @@ async function selectWordsBack(page: Page, words: number): Promise<void> {
 }
 
 describe('the remedy toolbar', () => {
+  it('names every button starting from the text it shows, so a voice-control user can say what they see', async () => {
+    const user = await createUser(knex, { tag: 'e2e-toolbar-names' });
+    const { page } = await openWriting(user);
+    const buttons = await page
+      .getByRole('toolbar', { name: 'Remedy formatting' })
+      .getByRole('button')
+      .evaluateAll((all) => all.map((b) => ({ shown: (b as HTMLElement).innerText, name: b.getAttribute('aria-label') ?? '' })));
+    expect(buttons.length).toBeGreaterThan(10);
+    // Letters and digits only: "• List" is shown as "List", "</>" shows no word to say.
+    const words = (text: string) => text.toLowerCase().replace(/[^a-z0-9]/g, '');
+    for (const { shown, name } of buttons) expect(words(name).includes(words(shown)), `${shown} → ${name}`).toBe(true);
+    const h2 = buttons.find((b) => b.shown.trim() === 'H2');
+    expect(words(h2!.name).startsWith('h2')).toBe(true);
+  });
+
   it('applies and removes every mark and block by mouse and by keyboard without leaving the page', async () => {
     const user = await createUser(knex, { tag: 'e2e-toolbar-marks' });
     const { page, remedy, stayed } = await openWriting(user);
@@ -116,13 +131,13 @@ describe('the remedy toolbar', () => {
     }
 
     const blocks: [string, string][] = [
-      ['Heading', 'h2'],
-      ['Subheading', 'h3'],
+      ['H2 heading', 'h2'],
+      ['H3 subheading', 'h3'],
       ['Bulleted list', 'ul li'],
-      ['Numbered steps', 'ol li'],
+      ['1. Steps, numbered', 'ol li'],
     ];
     for (const [label, selector] of blocks) {
-      await byKeyboard(page, label, label === 'Heading' ? ' ' : 'Enter');
+      await byKeyboard(page, label, label === 'H2 heading' ? ' ' : 'Enter');
       await expect(remedy.locator(selector).textContent(), `${label} by keyboard`).resolves.toBe('Loosen the idler screw');
       await stayed();
       await byMouse(page, label);

@@ -50,7 +50,7 @@ describe('writing, proofing and reading a fix', () => {
 
     const remedy = page.getByRole('textbox', { name: /Remedy/ });
     await remedy.click();
-    await page.getByRole('button', { name: 'Numbered steps' }).click();
+    await page.getByRole('button', { name: '1. Steps, numbered' }).click();
     await page.keyboard.type('Unplug the recorder and remove the top cover.');
     await page.keyboard.press('Enter');
     await page.keyboard.type('Fit a new loading belt.');
@@ -59,7 +59,7 @@ describe('writing, proofing and reading a fix', () => {
     await page.keyboard.press('ArrowRight');
     expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe('Italic');
     // The steps are in a numbered list, and the toggle says so.
-    expect(await page.getByRole('button', { name: 'Numbered steps' }).getAttribute('aria-pressed')).toBe('true');
+    expect(await page.getByRole('button', { name: '1. Steps, numbered' }).getAttribute('aria-pressed')).toBe('true');
 
     await page.getByRole('button', { name: 'Add a part' }).click();
     await page.getByLabel('Kind of part 1').selectOption('belt');

@@ -64,11 +64,11 @@ describe('a writer', () => {
     await journey.step('formats text: bold, italic, code, heading, subheading', async () => {
       await remedy.click();
       await typeSelected(page, 'Before you start');
-      await tool(page, 'Heading').click();
+      await tool(page, 'H2 heading').click();
       await expect(remedy.locator('h2').textContent()).resolves.toBe('Before you start');
       await newParagraph(page, remedy);
       await typeSelected(page, 'Drum section');
-      await tool(page, 'Subheading').click();
+      await tool(page, 'H3 subheading').click();
       await expect(remedy.locator('h3').textContent()).resolves.toBe('Drum section');
       await newParagraph(page, remedy);
       await typeSelected(page, 'dry joints');
@@ -109,7 +109,7 @@ describe('a writer', () => {
       await expect(remedy.locator('ul li').allTextContents()).resolves.toEqual(['Soldering iron', 'Desoldering braid']);
       await page.keyboard.press('Enter');
       await page.keyboard.press('Enter');
-      await tool(page, 'Numbered steps').click();
+      await tool(page, '1. Steps, numbered').click();
       await page.keyboard.type('Unplug the recorder and remove the top cover.');
       await page.keyboard.press('Enter');
       await page.keyboard.type('Replace C512 with a 105 °C part.');
@@ -117,7 +117,7 @@ describe('a writer', () => {
         'Unplug the recorder and remove the top cover.',
         'Replace C512 with a 105 °C part.',
       ]);
-      await expect(tool(page, 'Numbered steps').getAttribute('aria-pressed')).resolves.toBe('true');
+      await expect(tool(page, '1. Steps, numbered').getAttribute('aria-pressed')).resolves.toBe('true');
     });
 
     await journey.step('inserts a caution box from its panel with the mouse', async () => {

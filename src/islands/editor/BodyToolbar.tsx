@@ -34,6 +34,8 @@ export function BodyToolbar({ editor, editorId, onOpenPanel }: BodyToolbarProps)
     // lost: the remedy takes focus now, so a writer who types at once after a click loses nothing.
     editor.view.focus();
   };
+  // Each name starts with the button's visible text ("H2", "1. Steps"), so a writer using voice control can say what
+  // they see (WCAG 2.5.3, label in name).
   return (
     <Toolbar label="Remedy formatting" controls={editorId}>
       <ToolButton label="Bold" shortcut="Control+B" pressed={state.bold} onPress={run((c) => c.toggleBold())}>
@@ -49,16 +51,16 @@ export function BodyToolbar({ editor, editorId, onOpenPanel }: BodyToolbarProps)
         Link
       </ToolButton>
       <ToolSeparator />
-      <ToolButton label="Heading" pressed={state.h2} onPress={run((c) => c.toggleHeading({ level: 2 }))}>
+      <ToolButton label="H2 heading" pressed={state.h2} onPress={run((c) => c.toggleHeading({ level: 2 }))}>
         H2
       </ToolButton>
-      <ToolButton label="Subheading" pressed={state.h3} onPress={run((c) => c.toggleHeading({ level: 3 }))}>
+      <ToolButton label="H3 subheading" pressed={state.h3} onPress={run((c) => c.toggleHeading({ level: 3 }))}>
         H3
       </ToolButton>
       <ToolButton label="Bulleted list" pressed={state.bullet} onPress={run((c) => c.toggleBulletList())}>
         • List
       </ToolButton>
-      <ToolButton label="Numbered steps" pressed={state.ordered} onPress={run((c) => c.toggleOrderedList())}>
+      <ToolButton label="1. Steps, numbered" pressed={state.ordered} onPress={run((c) => c.toggleOrderedList())}>
         1. Steps
       </ToolButton>
       <ToolSeparator />
