@@ -452,9 +452,63 @@ describe('a bench report offline', () => {
     await context.setOffline(false);
     await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('was refused'));
     expect(await page.locator('[data-outbox]').first().textContent()).toMatch(
-      /^One change is waiting to be sent from this device: adding .+ to your order list\. “adding .+ to your order list” was refused: Nothing was added; open your order list to see why\. It stays waiting/,
+      /^One change is waiting to be sent from this device: adding .+ to your order list\. Adding .+ to your order list was refused: Nothing was added; open your order list to see why\. It stays waiting/,
     );
     expect((await getOrderList(member.id)).lines).toEqual([]);
+    // It no longer holds the queue: left out, nothing waits and nothing was added.
+    await page.getByRole('button', { name: 'Leave it out and send the rest' }).first().click();
+    await page.waitForFunction(() => [...document.querySelectorAll<HTMLElement>('[data-outbox]')].every((box) => box.hidden));
+    expect(await page.evaluate(() => document.querySelector('[data-outbox]')?.textContent)).toBe('');
+    expect((await getOrderList(member.id)).lines).toEqual([]);
     await context.close();
+  });
+
+  it('puts a refused bench report back in its form with the note as typed, and sends what waited behind it', async () => {
+    const member = await makeMember(knex);
+    const fix = photoFixes[0]!;
+    const note = `Typed at the bench ${Date.now()}: the mode switch was dirty`;
+    const context = await signedInContext(browser, base, member.email, PASSWORD, { viewport: { width: 360, height: 740 } });
+    try {
+      const page = await installed(context);
+      await page.goto(`${base}/fixes/${fix.slug}`);
+      await page.waitForFunction(() =>
+        [...document.querySelectorAll<HTMLElement>('form[data-offline-queue]')].every((form) => form.dataset.outboxReady === 'yes'),
+      );
+      // The saved page names a revision the fix does not have, so the server refuses the report when it arrives.
+      await page.evaluate(() => {
+        const revision = document.querySelector<HTMLInputElement>('#bench-report-form input[name="revision"]');
+        if (revision) revision.value = '999';
+      });
+      await context.setOffline(true);
+      const form = page.locator('#bench-report-form');
+      await form.getByLabel('Partly fixed').check();
+      await form.locator('textarea[name="note"]').fill(note);
+      await form.getByRole('button', { name: 'Save the bench report' }).click();
+      await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('One change is waiting'));
+      // A part added behind it waits behind it.
+      await page
+        .getByRole('button', { name: /^Add to order list/ })
+        .first()
+        .click();
+      await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.includes('2 changes are waiting'));
+      await form.locator('textarea[name="note"]').fill('');
+
+      await context.setOffline(false);
+      await page.waitForFunction(() => document.querySelector('#bench-report-form + [data-outbox]')?.textContent?.includes('was refused'));
+      const box = page.locator('#bench-report-form + [data-outbox]');
+      expect(await box.textContent()).toContain('put it back in its form to change it, or leave it out');
+      expect((await getOrderList(member.id)).lines).toEqual([]);
+      await box.screenshot({ path: '/tmp/pwa-bench-report-refused-360.png' });
+
+      await box.getByRole('button', { name: 'Put it back in the form to change it' }).click();
+      await expect(form.locator('textarea[name="note"]').inputValue()).resolves.toBe(note);
+      expect(await form.getByLabel('Partly fixed').isChecked()).toBe(true);
+      await page.waitForFunction(() => document.querySelector('[data-outbox]')?.textContent?.startsWith('Sent from this device'));
+      expect((await getOrderList(member.id)).lines).toHaveLength(1);
+      expect(await knex('bench_reports').where({ member_id: member.id })).toEqual([]);
+    } finally {
+      await context.close();
+      await knex('bench_reports').where({ member_id: member.id }).delete();
+    }
   });
 });

@@ -28,6 +28,48 @@ export const entriesOf = (form: HTMLFormElement, submitter?: HTMLElement | null)
   [...new FormData(form, submitter ?? null)].filter((pair): pair is [string, string] => typeof pair[1] === 'string');
 export const newId = (): string => `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
 let flushing = false;
+/** The page's hooks, kept from start() so a choice made on a refused item can send the rest the same way. */
+let pageHooks: OutboxHooks = {};
+
+/** The form on this page that posts where `item` goes, if any: a refused item's fields can go back into it. */
+const formFor = (item: FormPost): HTMLFormElement | undefined =>
+  [...document.querySelectorAll<HTMLFormElement>('form[data-offline-queue]')].find((form) => form.action === item.url);
+
+/** Puts a refused item's fields back into its form (what was typed is not lost), ready to change and send again. */
+function putBack(form: HTMLFormElement, item: FormPost): void {
+  for (const [name, value] of item.fields) {
+    const field = form.elements.namedItem(name);
+    if (field instanceof HTMLInputElement && (field.type === 'hidden' || field.type === 'submit')) continue;
+    if (field instanceof RadioNodeList) {
+      for (const option of field) if (option instanceof HTMLInputElement) option.checked = option.value === value;
+    } else if (field instanceof HTMLInputElement && field.type === 'checkbox') field.checked = true;
+    else if (field instanceof HTMLInputElement || field instanceof HTMLTextAreaElement || field instanceof HTMLSelectElement)
+      field.value = value;
+  }
+  form.scrollIntoView({ block: 'nearest' });
+  form.querySelector<HTMLElement>('textarea, input:not([type=hidden]), select')?.focus();
+}
+
+/** The choices under a refused item: back into its form when the form is on this page, or left out; then the rest go. */
+function refusedChoices(item: Waiting): HTMLElement {
+  const choices = document.createElement('p');
+  choices.className = 'outbox__choices';
+  const choice = (words: string, act: () => void) => {
+    const button = document.createElement('button');
+    button.type = 'button';
+    button.className = 'btn-quiet';
+    button.textContent = words;
+    button.addEventListener('click', () => {
+      act();
+      void removeFromOutbox(item.id).then(() => flush(pageHooks));
+    });
+    choices.append(button);
+  };
+  const form = item.kind === 'form-post' ? formFor(item) : undefined;
+  if (form && item.kind === 'form-post') choice('Put it back in the form to change it', () => putBack(form, item));
+  choice('Leave it out and send the rest', () => undefined);
+  return choices;
+}
 
 export async function send(item: Waiting): Promise<Sent> {
   try {
@@ -55,20 +97,28 @@ export async function send(item: Waiting): Promise<Sent> {
     }
     const answer =
       item.kind === 'job-sheet' ? ((await response.json().catch(() => null)) as { error?: { message?: string } } | null) : null;
-    return { result: 'refused', message: answer?.error?.message ?? `The server answered ${response.status}.` };
+    return {
+      result: 'refused',
+      message:
+        answer?.error?.message ??
+        `The server would not take it as it was (answer ${response.status}); send it again from its form to see why.`,
+    };
   } catch {
     return { result: 'offline' };
   }
 }
 
-/** Says what waits (and `note`) in every such line of the page: the whole queue, as it is sent in one order. */
-export function render(queue: Waiting[], note = ''): void {
+/**
+ * Says what waits (and `note`) in every such line of the page: the whole queue, as it is sent in one order. A refused
+ * item at the head of the queue gets its choices under the line.
+ */
+export function render(queue: Waiting[], note = '', refused?: Waiting): void {
   const offline = navigator.onLine ? '' : ' You are offline: they are sent, in order, when the connection comes back.';
   for (const shown of document.querySelectorAll<HTMLElement>('[data-outbox]')) {
     shown.hidden = queue.length === 0 && note === '';
     const line = document.createElement('p');
     line.textContent = [queue.length > 0 ? waitingSummary(queue) + offline : '', note.trim()].filter((part) => part !== '').join(' ');
-    shown.replaceChildren(line);
+    shown.replaceChildren(line, ...(refused ? [refusedChoices(refused)] : []));
   }
 }
 
@@ -100,11 +150,11 @@ export async function flush(hooks: OutboxHooks = {}): Promise<void> {
           `Job sheet changes met a newer copy: open ${item.label.replace(/^your changes to /, '')} to choose.`,
         );
       } else {
-        const why =
-          answer.result === 'refused'
-            ? ` “${item.label}” was refused: ${answer.message} It stays waiting; change it on the page and save again, or sign out to drop it.`
-            : '';
-        return render(await readOutbox(), why);
+        if (answer.result !== 'refused') return render(await readOutbox());
+        const kept = item.kind === 'form-post' && formFor(item) ? 'put it back in its form to change it, or leave it out' : 'leave it out';
+        // The label already reads as a phrase (“your bench report on …”, “adding … to your order list”).
+        const why = ` ${item.label.charAt(0).toUpperCase()}${item.label.slice(1)} was refused: ${answer.message} It stays waiting, and what follows it waits too: ${kept}, and the rest is sent.`;
+        return render(await readOutbox(), why, item);
       }
     }
   } finally {
@@ -119,6 +169,7 @@ export async function flush(hooks: OutboxHooks = {}): Promise<void> {
  * what it sends in data-offline-label ("your bench report on …"); otherwise its button's words are used.
  */
 export function start(selector: string, hooks: OutboxHooks = {}): void {
+  pageHooks = hooks;
   for (const form of document.querySelectorAll<HTMLFormElement>(selector)) {
     form.addEventListener('submit', (event) => {
       if (navigator.onLine) return;
