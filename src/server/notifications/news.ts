@@ -82,9 +82,18 @@ async function loadProofed(knex: Knex, revisionId: number): Promise<ProofedRevis
   };
 }
 
-/** Members following the fix, its machines, their chassis families or makers: one keyset page in user order. */
-async function followersPage(knex: Knex, fixId: number, afterUserId: number, limit: number): Promise<number[]> {
-  const rows = await knex.raw<{ rows: { user_id: number }[] }>(
+/**
+ * Members following the fix, its machines, their chassis families or makers: one keyset page in user order, each with
+ * the follow their mail should offer to stop (the most specific thing they follow: the fix, then a machine, a chassis
+ * family, a maker).
+ */
+async function followersPage(
+  knex: Knex,
+  fixId: number,
+  afterUserId: number,
+  limit: number,
+): Promise<{ userId: number; followId: number }[]> {
+  const rows = await knex.raw<{ rows: { user_id: number; follow_id: number }[] }>(
     `WITH targets(kind, id) AS (
        SELECT 'fix', ?::int
        UNION SELECT 'machine', machine_id FROM fix_machines WHERE fix_id = ?
@@ -94,13 +103,15 @@ async function followersPage(knex: Knex, fixId: number, afterUserId: number, lim
        UNION SELECT 'maker', m.maker_id FROM fix_machines fm JOIN machines m ON m.id = fm.machine_id WHERE fm.fix_id = ?
        UNION SELECT 'maker', c.maker_id FROM fix_chassis fc JOIN chassis_families c ON c.id = fc.chassis_family_id WHERE fc.fix_id = ?
      )
-     SELECT DISTINCT f.user_id FROM follows f JOIN targets t ON t.kind = f.target_kind AND t.id = f.target_id
-      JOIN users u ON u.id = f.user_id AND u.deleted_at IS NULL AND u.suspended_at IS NULL
-     WHERE f.user_id > ?
-     ORDER BY f.user_id LIMIT ?`,
+     SELECT DISTINCT ON (f.user_id) f.user_id, f.id AS follow_id
+       FROM follows f JOIN targets t ON t.kind = f.target_kind AND t.id = f.target_id
+       JOIN users u ON u.id = f.user_id AND u.deleted_at IS NULL AND u.suspended_at IS NULL
+      WHERE f.user_id > ?
+      ORDER BY f.user_id, array_position(ARRAY['fix', 'machine', 'chassis', 'maker'], f.target_kind)
+      LIMIT ?`,
     [fixId, fixId, fixId, fixId, fixId, fixId, afterUserId, limit],
   );
-  return rows.rows.map((r) => r.user_id);
+  return rows.rows.map((r) => ({ userId: r.user_id, followId: r.follow_id }));
 }
 
 /** Sends at once the events whose members chose "at once"; the rest wait for the digest or stay in the app. */
@@ -139,23 +150,6 @@ export interface FanOutFigures {
   mailed: number;
 }
 
-/** The follow a member's mail about this fix should stop: the most specific thing they follow. */
-async function followIdsFor(knex: Knex, fixId: number, userIds: number[]): Promise<Map<number, number>> {
-  const rows = await knex.raw<{ rows: { user_id: number; id: number }[] }>(
-    `SELECT DISTINCT ON (f.user_id) f.user_id, f.id FROM follows f
-      WHERE f.user_id = ANY(?) AND (
-        (f.target_kind = 'fix' AND f.target_id = ?)
-        OR (f.target_kind = 'machine' AND f.target_id IN (SELECT machine_id FROM fix_machines WHERE fix_id = ?))
-        OR (f.target_kind = 'chassis' AND (f.target_id IN (SELECT chassis_family_id FROM fix_chassis WHERE fix_id = ?)
-             OR f.target_id IN (SELECT m.chassis_family_id FROM fix_machines fm JOIN machines m ON m.id = fm.machine_id WHERE fm.fix_id = ?)))
-        OR (f.target_kind = 'maker' AND (f.target_id IN (SELECT m.maker_id FROM fix_machines fm JOIN machines m ON m.id = fm.machine_id WHERE fm.fix_id = ?)
-             OR f.target_id IN (SELECT c.maker_id FROM fix_chassis fc JOIN chassis_families c ON c.id = fc.chassis_family_id WHERE fc.fix_id = ?))))
-      ORDER BY f.user_id, array_position(ARRAY['fix','machine','chassis','maker'], f.target_kind)`,
-    [userIds, fixId, fixId, fixId, fixId, fixId, fixId],
-  );
-  return new Map(rows.rows.map((r) => [r.user_id, r.id]));
-}
-
 /**
  * Records "a fix went live" for every follower, in batches of `batchSize` members, and the hand-over-note
  * news for members whose notes cite an earlier revision. Safe to run twice: causes are recorded once.
@@ -175,11 +169,11 @@ export async function fanOutProofed(revisionId: number, options: { batchSize?: n
   for (;;) {
     const page = await followersPage(knex, revision.fixId, after, batchSize);
     if (page.length === 0) break;
-    after = page[page.length - 1]!;
+    after = page[page.length - 1]!.userId;
     // The author hears from the proofing desk itself.
-    const userIds = page.filter((id) => id !== revision.authorId);
+    const followers = page.filter((f) => f.userId !== revision.authorId);
     figures.batches++;
-    const events: NewEvent[] = userIds.map((userId) => ({
+    const events: NewEvent[] = followers.map(({ userId }) => ({
       userId,
       kind: 'fix_proofed',
       causeKey: `proofed:r${revisionId}`,
@@ -191,16 +185,7 @@ export async function fanOutProofed(revisionId: number, options: { batchSize?: n
     const recorded = await recordEvents(knex, events);
     figures.recorded += recorded.length;
     if (recorded.length)
-      figures.mailed += await mailNow(
-        knex,
-        recorded,
-        'fix_proofed',
-        await followIdsFor(
-          knex,
-          revision.fixId,
-          recorded.map((e) => e.userId),
-        ),
-      );
+      figures.mailed += await mailNow(knex, recorded, 'fix_proofed', new Map(followers.map((f) => [f.userId, f.followId])));
     if (page.length < batchSize) break;
   }
   if (!isNew) {
