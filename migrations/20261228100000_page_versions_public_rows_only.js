@@ -40,43 +40,47 @@ async function dropFilteredTriggers(knex, table) {
   for (const event of [...events, 'TRUNCATE']) await knex.raw(`DROP TRIGGER ${table}_page_version_${event.toLowerCase()} ON ${table}`);
 }
 
+/**
+ * A trigger function raising the counter named by its argument when `shown` finds a row a public page can show among
+ * the rows the statement added or changed (new_rows) or removed or changed (old_rows). Each transition table is read
+ * only inside an IF on the events that have it: PL/pgSQL plans each statement when it first runs, so a branch never
+ * reached is never planned (one condition naming both tables would fail on INSERT and on DELETE).
+ * @param {string} name
+ * @param {(rows: string) => string} shown
+ */
+function bumpWhenShown(name, shown) {
+  return `
+    CREATE FUNCTION ${name}() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      IF TG_OP IN ('INSERT', 'UPDATE') THEN
+        IF EXISTS (${shown('new_rows')}) THEN
+          UPDATE page_versions SET version = version + 1 WHERE scope = TG_ARGV[0];
+          RETURN NULL;
+        END IF;
+      END IF;
+      IF TG_OP IN ('DELETE', 'UPDATE') THEN
+        IF EXISTS (${shown('old_rows')}) THEN
+          UPDATE page_versions SET version = version + 1 WHERE scope = TG_ARGV[0];
+        END IF;
+      END IF;
+      RETURN NULL;
+    END $$`;
+}
+
 /** @param {import('knex').Knex} knex */
 export async function up(knex) {
   // A link row counts unless its revision is a draft. A row whose revision is already gone (deleted with it) counts:
   // such deletions are rare, and guessing wrong there would keep a stale page.
-  await knex.raw(`
-    CREATE FUNCTION bump_page_version_for_shown_revisions() RETURNS trigger LANGUAGE plpgsql AS $$
-    BEGIN
-      IF TG_OP IN ('INSERT', 'UPDATE') THEN
-        IF EXISTS (SELECT 1 FROM new_rows n LEFT JOIN revisions r ON r.id = n.revision_id WHERE r.state IS DISTINCT FROM 'draft') THEN
-          UPDATE page_versions SET version = version + 1 WHERE scope = TG_ARGV[0];
-          RETURN NULL;
-        END IF;
-      END IF;
-      IF TG_OP IN ('DELETE', 'UPDATE') THEN
-        IF EXISTS (SELECT 1 FROM old_rows o LEFT JOIN revisions r ON r.id = o.revision_id WHERE r.state IS DISTINCT FROM 'draft') THEN
-          UPDATE page_versions SET version = version + 1 WHERE scope = TG_ARGV[0];
-        END IF;
-      END IF;
-      RETURN NULL;
-    END $$`);
+  await knex.raw(
+    bumpWhenShown(
+      'bump_page_version_for_shown_revisions',
+      (rows) => `SELECT 1 FROM ${rows} x LEFT JOIN revisions r ON r.id = x.revision_id WHERE r.state IS DISTINCT FROM 'draft'`,
+    ),
+  );
   // A fix is shown once it has a live revision (and until it is deleted: the old row had one).
-  await knex.raw(`
-    CREATE FUNCTION bump_page_version_for_shown_fixes() RETURNS trigger LANGUAGE plpgsql AS $$
-    BEGIN
-      IF TG_OP IN ('INSERT', 'UPDATE') THEN
-        IF EXISTS (SELECT 1 FROM new_rows WHERE current_revision_id IS NOT NULL) THEN
-          UPDATE page_versions SET version = version + 1 WHERE scope = TG_ARGV[0];
-          RETURN NULL;
-        END IF;
-      END IF;
-      IF TG_OP IN ('DELETE', 'UPDATE') THEN
-        IF EXISTS (SELECT 1 FROM old_rows WHERE current_revision_id IS NOT NULL) THEN
-          UPDATE page_versions SET version = version + 1 WHERE scope = TG_ARGV[0];
-        END IF;
-      END IF;
-      RETURN NULL;
-    END $$`);
+  await knex.raw(
+    bumpWhenShown('bump_page_version_for_shown_fixes', (rows) => `SELECT 1 FROM ${rows} WHERE current_revision_id IS NOT NULL`),
+  );
   // A photo is shown through a revision past draft. Removing a photo always counts (its links may already be gone).
   await knex.raw(`
     CREATE FUNCTION bump_page_version_for_shown_photos() RETURNS trigger LANGUAGE plpgsql AS $$

@@ -41,6 +41,24 @@ async function revalidate(path: string) {
   return { first, tag, again };
 }
 
+/**
+ * A page read anonymously (kept, 304 on repeat), then by a member sending the anonymous ETag: they get a private
+ * render of their own, never the kept one.
+ */
+async function signedInAfterAnonymous(path: string, name: string) {
+  const anonymous = await revalidate(path);
+  expect(anonymous.again?.status).toBe(304);
+  expect(anonymous.first.text).not.toContain('Sign out');
+  const reader = await makeMember(knex, { name });
+  const cookie = await signIn(site.base, reader.email, PASSWORD, uniqueClientIp());
+  const mine = await get(path, { cookie, 'If-None-Match': anonymous.tag! });
+  expect(mine.status).toBe(200);
+  expect(mine.headers.get('cache-control')).toBe('private, no-store');
+  expect(mine.headers.get('etag')).toBeNull();
+  expect(mine.text).toContain('Sign out');
+  return { anonymous, mine };
+}
+
 describe('validators on public pages', () => {
   it('answers a repeated anonymous fix page with 304 and no body', async () => {
     const { first, tag, again } = await revalidate(`/fixes/${fix.slug}`);
@@ -306,32 +324,14 @@ describe('the search page for anonymous readers', () => {
   });
 
   it('renders for a signed-in reader, never from the anonymous kept search', async () => {
-    const path = `/search?q=${word}+drift`;
-    const anonymous = await revalidate(path);
-    expect(anonymous.again?.status).toBe(304);
-    const reader = await makeMember(knex, { name: 'Search Validator Reader' });
-    const cookie = await signIn(site.base, reader.email, PASSWORD, uniqueClientIp());
-    const mine = await get(path, { cookie, 'If-None-Match': anonymous.tag! });
-    expect(mine.status).toBe(200);
-    expect(mine.headers.get('cache-control')).toBe('private, no-store');
-    expect(mine.headers.get('etag')).toBeNull();
-    expect(mine.text).toContain('Sign out');
+    await signedInAfterAnonymous(`/search?q=${word}+drift`, 'Search Validator Reader');
   });
 });
 
 describe('signed-in readers', () => {
   it('get a private answer rendered for them: no ETag, no 304, never the anonymous kept body', async () => {
     const path = `/fixes/${fix.slug}`;
-    const anonymous = await revalidate(path);
-    expect(anonymous.again?.status).toBe(304);
-    expect(anonymous.first.text).not.toContain('Sign out');
-    const reader = await makeMember(knex, { name: 'Validator Reader' });
-    const cookie = await signIn(site.base, reader.email, PASSWORD, uniqueClientIp());
-    const mine = await get(path, { cookie, 'If-None-Match': anonymous.tag! });
-    expect(mine.status).toBe(200);
-    expect(mine.headers.get('cache-control')).toBe('private, no-store');
-    expect(mine.headers.get('etag')).toBeNull();
-    expect(mine.text).toContain('Sign out');
+    const { anonymous, mine } = await signedInAfterAnonymous(path, 'Validator Reader');
     expect(mine.text).toContain('Save the bench report');
     // And the signed-in render is never handed to the next anonymous reader.
     const next = await get(path);

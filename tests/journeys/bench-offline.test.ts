@@ -4,7 +4,7 @@
 // bench report with no connection at all and sees it sent when the connection returns. At the desk, finds a report
 // filed offline refused on reconnect (a field forgotten), gets it back in the form as typed, completes and sends it.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from '../support/browser';
 import { testDb } from '../support/db';
 import { createUser, type TestUser } from '../support/sign-in';
@@ -47,6 +47,23 @@ afterAll(async () => {
   await knex.destroy();
   await closeDb();
 });
+
+/** Waits until the service worker controls the page, then reloads it, so what the page loads is kept for offline. */
+async function underServiceWorker(journey: Journey, page: Page): Promise<void> {
+  await page.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+    if (!navigator.serviceWorker.controller)
+      await new Promise((resolve) => navigator.serviceWorker.addEventListener('controllerchange', resolve, { once: true }));
+  });
+  await journey.reload(page);
+}
+
+/** Reads the page through, so its photos (loaded as they scroll into view) are on the device too. */
+async function readThrough(page: Page): Promise<void> {
+  const photos = page.locator('figure.photo img');
+  for (let i = 0; i < (await photos.count()); i++) await photos.nth(i).scrollIntoViewIfNeeded();
+  await page.waitForFunction(() => [...document.querySelectorAll<HTMLImageElement>('figure.photo img')].every((img) => img.complete));
+}
 
 describe('a bench technician with a dropping connection', () => {
   it('keeps a fix, goes offline, follows the bench view, edits the job sheet and finds it saved on reconnect', async () => {
@@ -132,18 +149,10 @@ describe('a bench technician with a dropping connection', () => {
 
     await journey.step('opens the fix on the phone while the connection is good', async () => {
       await journey.goto(page, `/fixes/${fix.slug}`);
-      await page.evaluate(async () => {
-        await navigator.serviceWorker.ready;
-        if (!navigator.serviceWorker.controller)
-          await new Promise((resolve) => navigator.serviceWorker.addEventListener('controllerchange', resolve, { once: true }));
-      });
-      await journey.reload(page);
+      await underServiceWorker(journey, page);
       await sees(page.getByRole('heading', { level: 1, name: fix.title }));
       expect(await page.locator('.saved-copy').count()).toBe(0);
-      // Reads it through, so its photos (loaded as they scroll into view) are on the phone too.
-      const photos = page.locator('figure.photo img');
-      for (let i = 0; i < (await photos.count()); i++) await photos.nth(i).scrollIntoViewIfNeeded();
-      await page.waitForFunction(() => [...document.querySelectorAll<HTMLImageElement>('figure.photo img')].every((img) => img.complete));
+      await readThrough(page);
     });
 
     await journey.step('the connection crawls: the page comes from the saved copy and says the connection is slow', async () => {
@@ -217,16 +226,8 @@ describe('a bench technician with a dropping connection', () => {
     const note = `Journey ${Date.now()}: the drawer belt slipped again after the customer's move`;
     await journey.step('opens the fix with the connection up, so the page can hold a report offline', async () => {
       await journey.goto(page, `/fixes/${fix.slug}`);
-      await page.evaluate(async () => {
-        await navigator.serviceWorker.ready;
-        if (!navigator.serviceWorker.controller)
-          await new Promise((resolve) => navigator.serviceWorker.addEventListener('controllerchange', resolve, { once: true }));
-      });
-      await journey.reload(page);
-      // Reads it through, so every photo on it (loaded as it scrolls into view) is on this computer too.
-      const photos = page.locator('figure.photo img');
-      for (let i = 0; i < (await photos.count()); i++) await photos.nth(i).scrollIntoViewIfNeeded();
-      await page.waitForFunction(() => [...document.querySelectorAll<HTMLImageElement>('figure.photo img')].every((img) => img.complete));
+      await underServiceWorker(journey, page);
+      await readThrough(page);
       await page.waitForFunction(() => document.querySelector<HTMLElement>('#bench-report-form')?.dataset.outboxReady === 'yes');
     });
 
