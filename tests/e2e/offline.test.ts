@@ -496,7 +496,7 @@ describe('a bench report offline', () => {
       await context.setOffline(false);
       await page.waitForFunction(() => document.querySelector('#bench-report-form + [data-outbox]')?.textContent?.includes('was refused'));
       const box = page.locator('#bench-report-form + [data-outbox]');
-      expect(await box.textContent()).toContain('put it back in its form to change it, or leave it out');
+      expect(await box.textContent()).toContain('It stays waiting and holds up what follows it: choose below.');
       expect((await getOrderList(member.id)).lines).toEqual([]);
       await box.screenshot({ path: '/tmp/pwa-bench-report-refused-360.png' });
 

@@ -245,7 +245,7 @@ describe('a bench technician with a dropping connection', () => {
     await journey.step('back online, is told the report was refused and what it can do, by keyboard', async () => {
       await context.setOffline(false);
       const status = page.locator('#bench-report-form + [role="status"]');
-      await sees(status.getByText(/was refused: .*put it back in its form to change it, or leave it out, and the rest is sent\.$/));
+      await sees(status.getByText(/was refused: .*It stays waiting and holds up what follows it: choose below\.$/));
       await page.screenshot({ path: '/tmp/journey-bench-report-refused-1280.png' });
       const back = status.getByRole('button', { name: 'Put it back in the form to change it' });
       await back.focus();

@@ -99,9 +99,7 @@ export async function send(item: Waiting): Promise<Sent> {
       item.kind === 'job-sheet' ? ((await response.json().catch(() => null)) as { error?: { message?: string } } | null) : null;
     return {
       result: 'refused',
-      message:
-        answer?.error?.message ??
-        `The server would not take it as it was (answer ${response.status}); send it again from its form to see why.`,
+      message: answer?.error?.message ?? `The server answered ${response.status}; send it again from its form to see why.`,
     };
   } catch {
     return { result: 'offline' };
@@ -151,9 +149,8 @@ export async function flush(hooks: OutboxHooks = {}): Promise<void> {
         );
       } else {
         if (answer.result !== 'refused') return render(await readOutbox());
-        const kept = item.kind === 'form-post' && formFor(item) ? 'put it back in its form to change it, or leave it out' : 'leave it out';
         // The label already reads as a phrase (“your bench report on …”, “adding … to your order list”).
-        const why = ` ${item.label.charAt(0).toUpperCase()}${item.label.slice(1)} was refused: ${answer.message} It stays waiting, and what follows it waits too: ${kept}, and the rest is sent.`;
+        const why = ` ${item.label.charAt(0).toUpperCase()}${item.label.slice(1)} was refused: ${answer.message} It stays waiting and holds up what follows it: choose below.`;
         return render(await readOutbox(), why, item);
       }
     }
