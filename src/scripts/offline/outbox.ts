@@ -54,20 +54,20 @@ function putBack(form: HTMLFormElement, item: FormPost): void {
 function refusedChoices(item: Waiting): HTMLElement {
   const choices = document.createElement('p');
   choices.className = 'outbox__choices';
-  const choice = (words: string, act: () => void) => {
+  const choice = (words: string, act?: () => void) => {
     const button = document.createElement('button');
     button.type = 'button';
     button.className = 'btn-quiet';
     button.textContent = words;
     button.addEventListener('click', () => {
-      act();
+      act?.();
       void removeFromOutbox(item.id).then(() => flush(pageHooks));
     });
     choices.append(button);
   };
   const form = item.kind === 'form-post' ? formFor(item) : undefined;
   if (form && item.kind === 'form-post') choice('Put it back in the form to change it', () => putBack(form, item));
-  choice('Leave it out and send the rest', () => undefined);
+  choice('Leave it out and send the rest');
   return choices;
 }
 

@@ -25,11 +25,14 @@ const searchScopes = versionsOf(['bench', 'catalogue', 'fixes', 'people', 'photo
 // A fix page reads its own row instead of the "fixes" counter, so proofing one fix leaves every other fix's key alone.
 const fixPageScopes = versionsOf(['bench', 'catalogue', 'people', 'photos']);
 
-/** Pages that list across the site (home, catalogue, machine, chassis, maker): every counter. */
-export const siteKey: PageKey = async () => {
-  const rows = await db().raw<{ rows: VersionsRow[] }>(`SELECT ${everyScope} AS versions`);
+/** The named counters as one string, read in one query. */
+async function countersKey(versions: string): Promise<string | null> {
+  const rows = await db().raw<{ rows: VersionsRow[] }>(`SELECT ${versions} AS versions`);
   return rows.rows[0]?.versions ?? null;
-};
+}
+
+/** Pages that list across the site (home, catalogue, machine, chassis, maker): every counter. */
+export const siteKey: PageKey = () => countersKey(everyScope);
 
 /** A fix page or one of its revision permalinks: the fix's live revision, its lock, and the counters it shows. */
 export const fixKey: PageKey = async ({ slug }) => {
@@ -60,11 +63,7 @@ export function fixKeyOf(row: {
  * With Meilisearch configured, results come from an index that catches up after the commit, so a counter raised
  * in the transaction could key results read before the index had the change: nothing is kept then.
  */
-export const searchKey: PageKey = async () => {
-  if (config().MEILI_URL) return null;
-  const rows = await db().raw<{ rows: VersionsRow[] }>(`SELECT ${searchScopes} AS versions`);
-  return rows.rows[0]?.versions ?? null;
-};
+export const searchKey: PageKey = () => (config().MEILI_URL ? Promise.resolve(null) : countersKey(searchScopes));
 
 /** Help pages change only with a new build: no query at all. */
 export const buildOnlyKey: PageKey = () => Promise.resolve('build');
