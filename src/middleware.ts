@@ -13,7 +13,7 @@ import { authenticateBearer, bearerOf } from '@/server/auth/api-tokens';
 import { respond } from '@/server/http/result';
 import { guardRequest } from '@/server/http/route-guard';
 import { routeAccess } from '@/server/auth/route-access';
-import { answerPublicPage, publicPageCache, searchPageCache, sharedKeyRead } from '@/server/http/page-cache';
+import { answerPublicPage, publicPageCache, searchPageCache } from '@/server/http/page-cache';
 import { pageKeys } from '@/server/render/page-keys';
 import { unreadCount } from '@/server/notifications/events';
 
@@ -101,7 +101,8 @@ const guard = defineMiddleware((context, next) => guardRequest(context, context.
 const publicPages = defineMiddleware(async (context, next) => {
   const page = pageKeys[context.routePattern];
   if (!page || context.request.method !== 'GET' || context.locals.user !== null || sessionWasCleared(context.request)) return next();
-  const key = await sharedKeyRead(context.routePattern + JSON.stringify(context.params), () => page.key(context.params));
+  // Readers of a page arriving together share its key read (src/server/render/page-keys.ts).
+  const key = await page.key(context.params);
   if (key === null) return next();
   return answerPublicPage({
     request: context.request,

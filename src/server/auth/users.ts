@@ -61,7 +61,8 @@ export type SessionLookup = { user: SessionUser } | { user: null; reason: 'missi
 export async function loadSessionUser(id: number, signedInAtMs: number | undefined, knex: Knex = db()): Promise<SessionLookup> {
   const row = await knex<UserRow>('users')
     .where({ id })
-    .first('id', 'name', 'email', 'role', 'emailVerified', 'shop_name', 'suspended_at', 'deleted_at', 'sessions_valid_after');
+    .first('id', 'name', 'email', 'role', 'emailVerified', 'shop_name', 'suspended_at', 'deleted_at', 'sessions_valid_after')
+    .options({ name: 'session-user' }); // planned once per connection: every signed-in request asks
   if (!row) return { user: null, reason: 'missing' };
   if (row.deleted_at) return { user: null, reason: 'deleted' };
   if (row.suspended_at) return { user: null, reason: 'suspended' };

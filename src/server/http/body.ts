@@ -67,7 +67,12 @@ async function drain(reader: ReadableStreamDefaultReader<Uint8Array>, read: numb
 /** Reads the body as UTF-8 text, refusing it as soon as it passes the limit, whatever Content-Length claims. */
 export async function readCappedText(request: Request, limit: number): Promise<Outcome<string>> {
   const declared = Number(request.headers.get('content-length') ?? '0');
-  if (Number.isFinite(declared) && declared > limit) return tooLarge(limit);
+  if (Number.isFinite(declared) && declared > limit) {
+    // Refused by its declared length; still read and thrown away when moderately oversized, as below: answering
+    // while the client is still sending can reset the connection before it reads the 413.
+    if (request.body && declared <= limit * DRAIN_FACTOR) await drain(request.body.getReader(), 0, limit * DRAIN_FACTOR);
+    return tooLarge(limit);
+  }
   if (!request.body) return succeed('');
   const reader = request.body.getReader();
   const chunks: Uint8Array[] = [];

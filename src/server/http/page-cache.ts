@@ -114,21 +114,6 @@ export function currentBuild(): string {
   return buildId;
 }
 
-const inFlight = new Map<string, Promise<string | null>>();
-
-/**
- * One key read at a time per page address: requests arriving while the read runs share its answer (at 50 readers of
- * one page, one query instead of 50). A request arriving just after a change committed may share a read that began
- * before it, so it can be one query's time late; the next read sees the change.
- */
-export function sharedKeyRead(address: string, read: () => Promise<string | null>): Promise<string | null> {
-  const running = inFlight.get(address);
-  if (running) return running;
-  const started = read().finally(() => inFlight.delete(address));
-  inFlight.set(address, started);
-  return started;
-}
-
 const HOP_BY_HOP = new Set(['set-cookie', 'date', 'transfer-encoding', 'connection', 'keep-alive']);
 
 export const publicPageCache = new RenderCache({ entries: 2000, bytes: 64 * 1024 * 1024 });

@@ -62,17 +62,6 @@ export function toPhotoRef(row: PhotoRow): PhotoRef {
   };
 }
 
-/** The photos attached to one revision, in their order. */
-export async function photoRefsOf(knex: Knex, revisionId: number): Promise<PhotoRef[]> {
-  const rows: PhotoRow[] = await knex('revision_photos as rp')
-    .join('photos as p', 'p.id', 'rp.photo_id')
-    .where('rp.revision_id', revisionId)
-    .whereNull('p.deleted_at')
-    .orderBy('rp.position')
-    .select(photoRefColumns);
-  return rows.map(toPhotoRef);
-}
-
 export async function photoRef(knex: Knex, photoId: number): Promise<PhotoRef | null> {
   const row: PhotoRow | undefined = await knex('photos as p').where('p.id', photoId).whereNull('p.deleted_at').first(photoRefColumns);
   return row ? toPhotoRef(row) : null;

@@ -1,6 +1,7 @@
 // What each public page's rendered bytes depend on, read in one indexed query (or none): the key its kept render
 // and its ETag are derived from. The counters are raised by triggers (migration 20261222090000_page_versions), so a
 // proofing, a lock, a hide, a bench report or a catalogue edit changes the key in the same transaction.
+import { sharedReads } from '@/lib/shared-read';
 import { config } from '../core/config';
 import { db } from '../core/db';
 
@@ -25,27 +26,37 @@ const searchScopes = versionsOf(['bench', 'catalogue', 'fixes', 'people', 'photo
 // A fix page reads its own row instead of the "fixes" counter, so proofing one fix leaves every other fix's key alone.
 const fixPageScopes = versionsOf(['bench', 'catalogue', 'people', 'photos']);
 
+// Every anonymous read of a kept page asks for its key; readers arriving together share one query (never one begun
+// before they arrived, so a change committed before a request is always seen by it).
+const sharedKeys = sharedReads<string | null>();
+
 /** The named counters as one string, read in one query. */
-async function countersKey(versions: string): Promise<string | null> {
-  const rows = await db().raw<{ rows: VersionsRow[] }>(`SELECT ${versions} AS versions`);
-  return rows.rows[0]?.versions ?? null;
+function countersKey(name: string, versions: string): Promise<string | null> {
+  return sharedKeys(name, async () => {
+    const rows = await db().raw<{ rows: VersionsRow[] }>(`SELECT ${versions} AS versions`).options({ name });
+    return rows.rows[0]?.versions ?? null;
+  });
 }
 
 /** Pages that list across the site (home, catalogue, machine, chassis, maker): every counter. */
-export const siteKey: PageKey = () => countersKey(everyScope);
+export const siteKey: PageKey = () => countersKey('page-key-site', everyScope);
 
 /** A fix page or one of its revision permalinks: the fix's live revision, its lock, and the counters it shows. */
 export const fixKey: PageKey = async ({ slug }) => {
   if (!slug) return null;
-  const result = await db().raw<{ rows: FixKeyRow[] }>(
-    `SELECT f.id, f.current_revision_id, f.locked_at, ${fixPageScopes} AS versions
-       FROM fixes f WHERE f.slug = ? AND f.deleted_at IS NULL AND f.hidden_at IS NULL`,
-    [slug],
-  );
-  const row = result.rows[0];
-  // Not found, hidden or not yet live: the page answers its 404 the ordinary way.
-  if (!row?.id || row.current_revision_id === null) return null;
-  return fixKeyOf(row);
+  return sharedKeys(`fix/${slug}`, async () => {
+    const result = await db()
+      .raw<{ rows: FixKeyRow[] }>(
+        `SELECT f.id, f.current_revision_id, f.locked_at, ${fixPageScopes} AS versions
+         FROM fixes f WHERE f.slug = ? AND f.deleted_at IS NULL AND f.hidden_at IS NULL`,
+        [slug],
+      )
+      .options({ name: 'page-key-fix' });
+    const row = result.rows[0];
+    // Not found, hidden or not yet live: the page answers its 404 the ordinary way.
+    if (!row?.id || row.current_revision_id === null) return null;
+    return fixKeyOf(row);
+  });
 };
 
 export function fixKeyOf(row: {
@@ -63,7 +74,7 @@ export function fixKeyOf(row: {
  * With Meilisearch configured, results come from an index that catches up after the commit, so a counter raised
  * in the transaction could key results read before the index had the change: nothing is kept then.
  */
-export const searchKey: PageKey = () => (config().MEILI_URL ? Promise.resolve(null) : countersKey(searchScopes));
+export const searchKey: PageKey = () => (config().MEILI_URL ? Promise.resolve(null) : countersKey('page-key-search', searchScopes));
 
 /** Help pages change only with a new build: no query at all. */
 export const buildOnlyKey: PageKey = () => Promise.resolve('build');

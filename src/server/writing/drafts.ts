@@ -26,55 +26,112 @@ export function parseDraftValues(raw: unknown): Outcome<DraftContent> {
   return succeed({ values: split.values, held: split.held });
 }
 
-/** Machines, chassis families and photos named by a draft must exist; photos must be the writer's or already public. */
-async function checkReferences(knex: Knex, writer: Writer, values: FixDraft): Promise<Record<string, string[]> | null> {
+/** The machines, chassis families and photos a draft names, each id once (a repeated id keeps its first place). */
+interface DraftLinks {
+  machines: number[];
+  chassis: number[];
+  photos: number[];
+}
+
+function linksOf(values: FixDraft): DraftLinks {
+  const unique = (ids: number[]) => [...new Set(ids)];
+  return { machines: unique(values.machineIds), chassis: unique(values.chassisIds), photos: unique(values.photoIds) };
+}
+
+/**
+ * Whether a draft may name what it names, as one row: every machine and chassis family is in the catalogue, and
+ * every photo is the writer's own or already public (on a revision past draft). Takes :machines, :chassis, :photos
+ * (each id once) and :writer.
+ */
+const referencesSql = `
+  SELECT (SELECT count(*) FROM machines WHERE id = ANY (CAST(:machines AS int[])) AND deleted_at IS NULL)
+           = cardinality(CAST(:machines AS int[])) AS machines_ok,
+         (SELECT count(*) FROM chassis_families WHERE id = ANY (CAST(:chassis AS int[])) AND deleted_at IS NULL)
+           = cardinality(CAST(:chassis AS int[])) AS chassis_ok,
+         (SELECT count(*) FROM photos p
+           WHERE p.id = ANY (CAST(:photos AS int[])) AND p.deleted_at IS NULL
+             AND (p.owner_id = :writer OR EXISTS (
+                   SELECT 1 FROM revision_photos rp JOIN revisions r ON r.id = rp.revision_id
+                    WHERE rp.photo_id = p.id AND r.state <> 'draft')))
+           = cardinality(CAST(:photos AS int[])) AS photos_ok`;
+
+interface ReferencesRow {
+  machines_ok: boolean;
+  chassis_ok: boolean;
+  photos_ok: boolean;
+}
+
+/** What the writer is told for each reference that failed its check; null when every one passed. */
+function refusedReferences(row: ReferencesRow): Record<string, string[]> | null {
   const fields: Record<string, string[]> = {};
-  const count = async (q: Knex.QueryBuilder) => Number((await q.count<{ n: string }[]>('* as n').first())?.n ?? 0);
-  const machines = new Set(values.machineIds);
-  if (
-    machines.size &&
-    (await count(
-      knex('machines')
-        .whereIn('id', [...machines])
-        .whereNull('deleted_at'),
-    )) !== machines.size
-  ) {
-    fields.machineIds = ['One of the machines is not in the catalogue (any more); pick it again.'];
-  }
-  const chassis = new Set(values.chassisIds);
-  if (
-    chassis.size &&
-    (await count(
-      knex('chassis_families')
-        .whereIn('id', [...chassis])
-        .whereNull('deleted_at'),
-    )) !== chassis.size
-  ) {
-    fields.chassisIds = ['One of the chassis families is not in the catalogue (any more); pick it again.'];
-  }
-  const photos = new Set(values.photoIds);
-  if (photos.size) {
-    const usable = await count(
-      knex('photos as p')
-        .whereIn('p.id', [...photos])
-        .whereNull('p.deleted_at')
-        .where((q) =>
-          q
-            .where('p.owner_id', writer.id)
-            .orWhereExists(
-              knex('revision_photos as rp')
-                .join('revisions as r', 'r.id', 'rp.revision_id')
-                .whereRaw('rp.photo_id = p.id')
-                .whereNot('r.state', 'draft'),
-            ),
-        ),
-    );
-    if (usable !== photos.size) fields.photoIds = ['One of the photos is not yours or no longer exists; upload it again.'];
-  }
+  if (!row.machines_ok) fields.machineIds = ['One of the machines is not in the catalogue (any more); pick it again.'];
+  if (!row.chassis_ok) fields.chassisIds = ['One of the chassis families is not in the catalogue (any more); pick it again.'];
+  if (!row.photos_ok) fields.photoIds = ['One of the photos is not yours or no longer exists; upload it again.'];
   return Object.keys(fields).length ? fields : null;
 }
 
-/** Writes a draft's content, the fields it holds as typed, and what it applies to. */
+async function checkReferences(knex: Knex, writer: Writer, values: FixDraft): Promise<Record<string, string[]> | null> {
+  const result = await knex
+    .raw<{ rows: ReferencesRow[] }>(`WITH refs AS (${referencesSql}) SELECT * FROM refs`, { ...linksOf(values), writer: writer.id })
+    .options({ name: 'draft-references' });
+  return refusedReferences(result.rows[0]!);
+}
+
+/**
+ * What a draft applies to and the photos it holds, brought to the given lists, as statements of a WITH clause for the
+ * revision `idSql` names: links no longer listed are removed, new ones added, a photo that moved gets its new
+ * position, and links that stay are not touched (an autosave comes every few seconds while a writer types). Every
+ * part works on rows the others leave alone, so their order inside the statement does not matter. Takes :machines,
+ * :chassis and :photos (each id once).
+ */
+function linksSql(idSql: string): string {
+  return `
+    machines_out AS (
+      DELETE FROM revision_machines
+       WHERE revision_id IN (${idSql}) AND machine_id <> ALL (CAST(:machines AS int[]))),
+    machines_in AS (
+      INSERT INTO revision_machines (revision_id, machine_id)
+      SELECT rev.id, m FROM (${idSql}) AS rev (id), unnest(CAST(:machines AS int[])) AS m
+      ON CONFLICT DO NOTHING),
+    chassis_out AS (
+      DELETE FROM revision_chassis
+       WHERE revision_id IN (${idSql}) AND chassis_family_id <> ALL (CAST(:chassis AS int[]))),
+    chassis_in AS (
+      INSERT INTO revision_chassis (revision_id, chassis_family_id)
+      SELECT rev.id, c FROM (${idSql}) AS rev (id), unnest(CAST(:chassis AS int[])) AS c
+      ON CONFLICT DO NOTHING),
+    photos_out AS (
+      DELETE FROM revision_photos
+       WHERE revision_id IN (${idSql}) AND photo_id <> ALL (CAST(:photos AS int[]))),
+    photos_in AS (
+      INSERT INTO revision_photos (revision_id, photo_id, position)
+      SELECT rev.id, p, o - 1 FROM (${idSql}) AS rev (id), unnest(CAST(:photos AS int[])) WITH ORDINALITY AS t (p, o)
+      ON CONFLICT (revision_id, photo_id) DO UPDATE SET position = EXCLUDED.position
+      WHERE revision_photos.position <> EXCLUDED.position)`;
+}
+
+/** A draft's columns as the writer's values and the fields it holds as typed set them. */
+function contentColumns(values: FixDraft, held: HeldFields) {
+  return {
+    title: values.title,
+    body: JSON.stringify(values.body),
+    symptoms: values.symptoms,
+    error_codes: values.errorCodes,
+    cause: values.cause,
+    parts: JSON.stringify(values.parts),
+    readings: JSON.stringify(values.readings),
+    cautions: JSON.stringify(values.cautions),
+    difficulty: values.difficulty,
+    time_minutes: values.timeMinutes,
+    edit_summary: values.editSummary,
+    held_fields: JSON.stringify(held),
+  };
+}
+
+/**
+ * Writes a draft's content, the fields it holds as typed, and what it applies to, inside a transaction that holds the
+ * revision (just inserted, or locked): the links statement then sees every save committed before it.
+ */
 export async function writeRevisionContent(
   trx: Knex.Transaction,
   revisionId: number,
@@ -83,40 +140,33 @@ export async function writeRevisionContent(
 ): Promise<void> {
   await trx('revisions')
     .where({ id: revisionId })
-    .update({
-      title: values.title,
-      body: JSON.stringify(values.body),
-      symptoms: values.symptoms,
-      error_codes: values.errorCodes,
-      cause: values.cause,
-      parts: JSON.stringify(values.parts),
-      readings: JSON.stringify(values.readings),
-      cautions: JSON.stringify(values.cautions),
-      difficulty: values.difficulty,
-      time_minutes: values.timeMinutes,
-      edit_summary: values.editSummary,
-      held_fields: JSON.stringify(held),
-      updated_at: trx.fn.now(),
-    });
-  // What the draft applies to and the photos it holds are written afresh; the three old lists go in one statement
-  // (an autosave comes every few seconds while a writer types, and each statement is a round trip).
-  await trx.raw(
-    `WITH machines AS (DELETE FROM revision_machines WHERE revision_id = :id),
-          chassis AS (DELETE FROM revision_chassis WHERE revision_id = :id)
-     DELETE FROM revision_photos WHERE revision_id = :id`,
-    { id: revisionId },
-  );
-  const unique = (ids: number[]) => [...new Set(ids)];
-  if (values.machineIds.length)
-    await trx('revision_machines').insert(unique(values.machineIds).map((machine_id) => ({ revision_id: revisionId, machine_id })));
-  if (values.chassisIds.length)
-    await trx('revision_chassis').insert(
-      unique(values.chassisIds).map((chassis_family_id) => ({ revision_id: revisionId, chassis_family_id })),
-    );
-  if (values.photoIds.length)
-    await trx('revision_photos').insert(
-      unique(values.photoIds).map((photo_id, position) => ({ revision_id: revisionId, photo_id, position })),
-    );
+    .update({ ...contentColumns(values, held), updated_at: trx.fn.now() });
+  await trx.raw(`WITH ${linksSql('SELECT CAST(:id AS int)')} SELECT 1`, { id: revisionId, ...linksOf(values) });
+}
+
+/**
+ * An autosave in one statement, with no transaction around it: the references are checked, the row is written only
+ * while it is the writer's draft and all references pass, and the links follow. The statement sees the database as
+ * it was when it began; a save of the same draft that committed after that (another window) would leave links this
+ * statement cannot see, so the row is written only if it is still the version the statement began with (its xmin):
+ * otherwise nothing is written and `saved` is false with the row still an open draft, and the caller runs it again.
+ */
+const autosaveSql = (columns: string[]) => `
+  WITH seen AS (SELECT author_id, state, xmin AS version FROM revisions WHERE id = :id),
+       refs AS (${referencesSql}),
+       saved AS (
+         UPDATE revisions r SET ${columns.map((c) => `${c} = :${c}`).join(', ')}, updated_at = now()
+           FROM seen, refs
+          WHERE r.id = :id AND r.author_id = :writer AND r.state = 'draft' AND r.xmin = seen.version
+            AND refs.machines_ok AND refs.chassis_ok AND refs.photos_ok
+         RETURNING r.id),
+       ${linksSql('SELECT id FROM saved')}
+  SELECT refs.*, seen.author_id, seen.state, EXISTS (SELECT 1 FROM saved) AS saved FROM refs LEFT JOIN seen ON true`;
+
+interface AutosaveRow extends ReferencesRow {
+  author_id: number | null;
+  state: string | null;
+  saved: boolean;
 }
 
 /** Inserts an empty draft revision numbered after every revision of the fix (the fix row is locked meanwhile). */
@@ -209,13 +259,18 @@ export async function ownDraft(
   const query = knex('revisions').where({ id: revisionId });
   if (options.lock) void query.forUpdate();
   const row = await query.first('id', 'fix_id', 'author_id', 'state', 'parent_revision_id');
+  return draftRefusal(row, writer) ?? succeed({ id: row.id, fixId: row.fix_id, parentId: row.parent_revision_id });
+}
+
+/** Why a revision row cannot be changed by this writer as their draft, or null when it can. */
+function draftRefusal(row: { author_id: number; state: string } | undefined, writer: Writer): Outcome<never> | null {
   if (!row || row.author_id !== writer.id) return refuse('not_found', 'There is no such draft among yours.');
   if (row.state !== 'draft')
     return refuse(
       'conflict',
       `This revision is ${row.state} and can no longer change. Your text is still in this browser; start a new revision to carry it on.`,
     );
-  return succeed({ id: row.id, fixId: row.fix_id, parentId: row.parent_revision_id });
+  return null;
 }
 
 /**
@@ -230,18 +285,43 @@ export async function saveDraft(
   const values = parseDraftValues(input.values);
   if (!values.ok) return values;
   const knex = db();
-  const refs = await checkReferences(knex, writer, values.value.values);
+  if (input.baseRevisionId !== undefined) return moveAndSave(knex, writer, revisionId, input.baseRevisionId, values.value);
+  const columns = contentColumns(values.value.values, values.value.held);
+  const sql = autosaveSql(Object.keys(columns)); // the same text every time: PostgreSQL plans it once per connection
+  const bindings = { id: revisionId, writer: writer.id, ...linksOf(values.value.values), ...columns };
+  // A second try only follows a save of the same draft from elsewhere in the same moment; a third is rarer still.
+  for (let attempt = 0; attempt < 3; attempt++) {
+    const result = await knex.raw<{ rows: AutosaveRow[] }>(sql, bindings).options({ name: 'draft-autosave' });
+    const row = result.rows[0]!;
+    const refused = refusedReferences(row);
+    if (refused) return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', refused);
+    if (row.saved) return saved(knex, revisionId);
+    const why = draftRefusal(row.author_id === null ? undefined : { author_id: row.author_id, state: row.state! }, writer);
+    if (why) return why;
+  }
+  return refuse('conflict', 'This draft was being saved from another window at the same moment; nothing was saved. Save again.');
+}
+
+/** Moves a draft onto the fix's live revision (how a writer carries their text over) and saves it, in one transaction. */
+async function moveAndSave(
+  knex: Knex,
+  writer: Writer,
+  revisionId: number,
+  baseRevisionId: number | null,
+  content: DraftContent,
+): Promise<Outcome<DraftSaved>> {
+  const refs = await checkReferences(knex, writer, content.values);
   if (refs) return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', refs);
   const outcome = await knex.transaction(async (trx): Promise<Outcome<null>> => {
     const draft = await ownDraft(trx, writer, revisionId, { lock: true });
     if (!draft.ok) return draft;
-    if (input.baseRevisionId !== undefined && input.baseRevisionId !== draft.value.parentId) {
+    if (baseRevisionId !== draft.value.parentId) {
       const fix = await trx('fixes').where({ id: draft.value.fixId }).first('current_revision_id');
-      if (input.baseRevisionId !== fix?.current_revision_id)
+      if (baseRevisionId !== fix?.current_revision_id)
         return refuse('conflict', 'A draft can only be moved onto the live revision of its fix.');
-      await trx('revisions').where({ id: revisionId }).update({ parent_revision_id: input.baseRevisionId });
+      await trx('revisions').where({ id: revisionId }).update({ parent_revision_id: baseRevisionId });
     }
-    await writeRevisionContent(trx, revisionId, values.value.values, values.value.held);
+    await writeRevisionContent(trx, revisionId, content.values, content.held);
     return succeed(null);
   });
   if (!outcome.ok) return outcome;

@@ -78,7 +78,7 @@ describe('readBody', () => {
     expect(bad).toMatchObject({ ok: false, code: 'bad_request' });
   });
 
-  it('refuses a body over its cap by the declared length, without reading it', async () => {
+  it('refuses a body over its cap by its declared length', async () => {
     const declared = await readBody(post('{}', 'application/json', { 'Content-Length': String(bodyLimits.tools + 1) }), {
       json: 'tools',
     });
@@ -118,6 +118,29 @@ describe('readCappedText', () => {
     const result = await readCappedText(post(source, 'application/json'), limit);
     expect(result).toMatchObject({ ok: false, code: 'payload_too_large' });
     expect(pulled).toBe(limit * 4);
+  });
+
+  it('drains a body whose declared length is moderately over the cap, and reads none of one declared far over it', async () => {
+    const limit = 1024;
+    const counted = (bytes: number) => {
+      const source = { pulled: 0, stream: undefined as unknown as ReadableStream<Uint8Array> };
+      source.stream = new ReadableStream<Uint8Array>({
+        pull(controller) {
+          if (source.pulled >= bytes) return controller.close();
+          source.pulled += 256;
+          controller.enqueue(new Uint8Array(256));
+        },
+      });
+      return source;
+    };
+    const moderate = counted(limit * 4);
+    const refused = await readCappedText(post(moderate.stream, 'application/json', { 'Content-Length': String(limit * 4) }), limit);
+    expect(refused).toMatchObject({ ok: false, code: 'payload_too_large', headers: { Connection: 'close' } });
+    expect(moderate.pulled).toBe(limit * 4);
+    const huge = counted(limit * 64);
+    const cut = await readCappedText(post(huge.stream, 'application/json', { 'Content-Length': String(limit * 64) }), limit);
+    expect(cut).toMatchObject({ ok: false, code: 'payload_too_large' });
+    expect(huge.pulled).toBeLessThanOrEqual(256); // at most the one chunk a stream queues before anyone reads
   });
 
   it('stops draining at eight times the cap and cuts the rest', async () => {

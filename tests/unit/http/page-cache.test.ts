@@ -1,7 +1,7 @@
 // The public pages' validators and kept renders: ETags from keys, If-None-Match, the bounded cache, and what is
 // never kept (errors, cookies, a page that said so).
 import { describe, expect, it, vi } from 'vitest';
-import { RenderCache, answerPublicPage, pageEtag, readerHasCurrent, sharedKeyRead } from '@/server/http/page-cache';
+import { RenderCache, answerPublicPage, pageEtag, readerHasCurrent } from '@/server/http/page-cache';
 
 const kept = (key: string, size: number) => ({
   key,
@@ -171,33 +171,6 @@ describe('answerPublicPage', () => {
     expect(res.headers.get('cache-control')).toContain('public');
     expect(res.headers.get('etag')).toMatch(/^W\//);
     expect(cache.size.entries).toBe(1);
-  });
-});
-
-describe('sharedKeyRead', () => {
-  it('shares one running read among requests for the same address, and reads afresh once it is done', async () => {
-    let reads = 0;
-    let release: (key: string) => void = () => undefined;
-    const read = () => {
-      reads += 1;
-      return new Promise<string | null>((resolve) => (release = resolve));
-    };
-    const first = sharedKeyRead('/fixes/a', read);
-    const second = sharedKeyRead('/fixes/a', read);
-    const other = sharedKeyRead('/fixes/b', () => Promise.resolve('b1'));
-    release('a1');
-    expect(await Promise.all([first, second, other])).toEqual(['a1', 'a1', 'b1']);
-    expect(reads).toBe(1);
-    const later = sharedKeyRead('/fixes/a', read);
-    release('a2');
-    expect(await later).toBe('a2');
-    expect(reads).toBe(2);
-  });
-
-  it('lets a failed read fail every request that shared it, and not the next one', async () => {
-    const failing = sharedKeyRead('/x', () => Promise.reject(new Error('database gone')));
-    await expect(failing).rejects.toThrow('database gone');
-    await expect(sharedKeyRead('/x', () => Promise.resolve('k'))).resolves.toBe('k');
   });
 });
 
