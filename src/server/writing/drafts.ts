@@ -5,7 +5,7 @@ import { can } from '@/lib/permissions';
 import { splitDraft, type FixDraft, type HeldFields } from '@/lib/schemas/fix-draft';
 import { db } from '../core/db';
 import { refuse, succeed, type Outcome, type Writer } from '../http/result';
-import { loadRevision, type RevisionRecord } from './revisions';
+import { loadRevision, revisionColumns, revisionJoins, toRevisionRecord, type LinkSources, type RevisionRecord } from './revisions';
 
 export interface DraftSaved {
   revision: RevisionRecord;
@@ -146,7 +146,7 @@ export async function writeRevisionContent(
 
 /**
  * An autosave in one statement, with no transaction around it: the references are checked, the row is written only
- * while it is the writer's draft and all references pass, and the links follow. The statement sees the database as
+ * while it is the writer's draft and all references pass, the links follow, and the answer is the revision as saved. The statement sees the database as
  * it was when it began; a save of the same draft that committed after that (another window) would leave links this
  * statement cannot see, so the row is written only if it is still the version the statement began with (its xmin):
  * otherwise nothing is written and `saved` is false with the row still an open draft, and the caller runs it again.
@@ -159,14 +159,25 @@ const autosaveSql = (columns: string[]) => `
            FROM seen, refs
           WHERE r.id = :id AND r.author_id = :writer AND r.state = 'draft' AND r.xmin = seen.version
             AND refs.machines_ok AND refs.chassis_ok AND refs.photos_ok
-         RETURNING r.id),
+         RETURNING r.*),
        ${linksSql('SELECT id FROM saved')}
-  SELECT refs.*, seen.author_id, seen.state, EXISTS (SELECT 1 FROM saved) AS saved FROM refs LEFT JOIN seen ON true`;
+  SELECT refs.*, seen.author_id AS seen_author, seen.state AS seen_state, EXISTS (SELECT 1 FROM saved) AS saved, answer.*
+    FROM refs LEFT JOIN seen ON true
+    LEFT JOIN (SELECT ${revisionColumns(writtenLinks)} FROM saved r ${revisionJoins}) AS answer ON true`;
+
+/** The lists the autosave writes, as `revisionColumns` reads links: its answer is the revision as saved. */
+const writtenLinks: LinkSources = {
+  machines: 'SELECT m AS id FROM unnest(CAST(:machines AS int[])) AS m',
+  chassis: 'SELECT c AS id FROM unnest(CAST(:chassis AS int[])) AS c',
+  photos: 'SELECT p AS id, o AS place FROM unnest(CAST(:photos AS int[])) WITH ORDINALITY AS t (p, o)',
+};
 
 interface AutosaveRow extends ReferencesRow {
-  author_id: number | null;
-  state: string | null;
+  seen_author: number | null;
+  seen_state: string | null;
   saved: boolean;
+  /** The revision as saved, a row of `revisionColumns` (null when nothing was saved). */
+  id: number | null;
 }
 
 /** Inserts an empty draft revision numbered after every revision of the fix (the fix row is locked meanwhile). */
@@ -295,8 +306,12 @@ export async function saveDraft(
     const row = result.rows[0]!;
     const refused = refusedReferences(row);
     if (refused) return refuse('bad_request', 'Some fields of the draft are not valid; nothing was saved.', refused);
-    if (row.saved) return saved(knex, revisionId);
-    const why = draftRefusal(row.author_id === null ? undefined : { author_id: row.author_id, state: row.state! }, writer);
+    if (row.saved) {
+      if (row.id === null) return refuse('not_found', 'The draft disappeared while it was saved.');
+      const revision = toRevisionRecord(row);
+      return succeed({ revision, baseIsStale: revision.baseRevisionId !== revision.liveRevisionId });
+    }
+    const why = draftRefusal(row.seen_author === null ? undefined : { author_id: row.seen_author, state: row.seen_state! }, writer);
     if (why) return why;
   }
   return refuse('conflict', 'This draft was being saved from another window at the same moment; nothing was saved. Save again.');

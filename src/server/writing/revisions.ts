@@ -45,66 +45,61 @@ export interface RevisionRecord {
 const iso = (d: Date | null): string | null => (d ? new Date(d).toISOString() : null);
 
 /**
- * What a revision applies to and its photos, as JSON arrays beside its row, so a revision loads in one query (the
+ * Where a revision's links are read from, as SQL giving `id` rows (photos also `place`): its link tables, or the lists
+ * a statement has just written (it cannot read back its own writes).
+ */
+export interface LinkSources {
+  machines: string;
+  chassis: string;
+  photos: string;
+}
+
+const storedLinks: LinkSources = {
+  machines: 'SELECT machine_id AS id FROM revision_machines WHERE revision_id = r.id',
+  chassis: 'SELECT chassis_family_id AS id FROM revision_chassis WHERE revision_id = r.id',
+  photos: 'SELECT photo_id AS id, position AS place FROM revision_photos WHERE revision_id = r.id',
+};
+
+/**
+ * The columns of a revision record for a revision row `r` (with the joins of `revisionJoins`): the row, its fix, the
+ * names around it, and what it applies to and its photos as JSON arrays, so a revision loads in one query (the
  * editor's autosave answers with it every few seconds). Labels read as writers read them: "Orvane DR-410 (PAL)",
  * "Orvane deck mechanism DM-3".
  */
-const linkedColumns = `
-  COALESCE((SELECT json_agg(json_build_object('id', m.id, 'slug', m.slug,
-                   'label', mk.name || ' ' || m.model_number || ' (' || m.region || ')')
-                   ORDER BY mk.name, m.model_number, m.region)
-              FROM revision_machines rm JOIN machines m ON m.id = rm.machine_id JOIN makers mk ON mk.id = m.maker_id
-             WHERE rm.revision_id = r.id), '[]') AS linked_machines,
-  COALESCE((SELECT json_agg(json_build_object('id', c.id, 'slug', c.slug, 'label', c.name || ' ' || c.code) ORDER BY c.name)
-              FROM revision_chassis rc JOIN chassis_families c ON c.id = rc.chassis_family_id
-             WHERE rc.revision_id = r.id), '[]') AS linked_chassis,
-  COALESCE((SELECT json_agg(json_build_object(${photoRefColumns.map((c) => `'${c.slice(2)}', ${c}`).join(', ')}) ORDER BY rp.position)
-              FROM revision_photos rp JOIN photos p ON p.id = rp.photo_id
-             WHERE rp.revision_id = r.id AND p.deleted_at IS NULL), '[]') AS linked_photos`;
-
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- a raw revisions row from Knex
-function valuesOf(row: Record<string, any>, machineIds: number[], chassisIds: number[], photoIds: number[]): FixDraft {
-  return {
-    title: row.title,
-    symptoms: row.symptoms,
-    errorCodes: row.error_codes,
-    cause: row.cause,
-    body: row.body as BodyDoc,
-    parts: row.parts,
-    readings: row.readings,
-    cautions: row.cautions,
-    difficulty: row.difficulty,
-    timeMinutes: row.time_minutes,
-    editSummary: row.edit_summary,
-    machineIds,
-    chassisIds,
-    photoIds,
-  };
+export function revisionColumns(links: LinkSources): string {
+  return `r.*, f.slug AS fix_slug, f.current_revision_id, f.locked_at, f.hidden_at,
+    a.name AS author_name, pr.name AS proofer_name, base.number AS base_number,
+    COALESCE((SELECT json_agg(json_build_object('id', m.id, 'slug', m.slug,
+                     'label', mk.name || ' ' || m.model_number || ' (' || m.region || ')')
+                     ORDER BY mk.name, m.model_number, m.region)
+                FROM (${links.machines}) AS l JOIN machines m ON m.id = l.id JOIN makers mk ON mk.id = m.maker_id), '[]')
+      AS linked_machines,
+    COALESCE((SELECT json_agg(json_build_object('id', c.id, 'slug', c.slug, 'label', c.name || ' ' || c.code) ORDER BY c.name)
+                FROM (${links.chassis}) AS l JOIN chassis_families c ON c.id = l.id), '[]') AS linked_chassis,
+    COALESCE((SELECT json_agg(json_build_object(${photoRefColumns.map((c) => `'${c.slice(2)}', ${c}`).join(', ')}) ORDER BY l.place)
+                FROM (${links.photos}) AS l JOIN photos p ON p.id = l.id WHERE p.deleted_at IS NULL), '[]') AS linked_photos`;
 }
+
+/** What `revisionColumns` reads beside the revision row `r`; a revision of a deleted fix is not found. */
+export const revisionJoins = `
+  JOIN fixes f ON f.id = r.fix_id AND f.deleted_at IS NULL
+  JOIN users a ON a.id = r.author_id
+  LEFT JOIN users pr ON pr.id = r.proofer_id
+  LEFT JOIN revisions base ON base.id = r.parent_revision_id`;
 
 /** Loads one revision with its fix, labels and photos; null when there is none. */
 export async function loadRevision(knex: Knex, revisionId: number): Promise<RevisionRecord | null> {
-  const row = await knex('revisions as r')
-    .join('fixes as f', 'f.id', 'r.fix_id')
-    .join('users as a', 'a.id', 'r.author_id')
-    .leftJoin('users as p', 'p.id', 'r.proofer_id')
-    .leftJoin('revisions as base', 'base.id', 'r.parent_revision_id')
-    .where('r.id', revisionId)
-    .whereNull('f.deleted_at')
-    .first(
-      'r.*',
-      'f.slug as fix_slug',
-      'f.current_revision_id',
-      'f.locked_at',
-      'f.hidden_at',
-      'a.name as author_name',
-      'p.name as proofer_name',
-      'base.number as base_number',
-      knex.raw(linkedColumns),
-    )
-    // Named: PostgreSQL keeps its plan per connection instead of planning the joins on every autosave's answer.
+  const result = await knex
+    .raw(`SELECT ${revisionColumns(storedLinks)} FROM revisions r ${revisionJoins} WHERE r.id = ?`, [revisionId])
+    // Named: PostgreSQL keeps its plan per connection instead of planning the joins on every load.
     .options({ name: 'load-revision' });
-  if (!row) return null;
+  const row = result.rows[0];
+  return row ? toRevisionRecord(row) : null;
+}
+
+/** A row of `revisionColumns` as the editor, the desk and the API read it. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- a raw row of revisionColumns
+export function toRevisionRecord(row: Record<string, any>): RevisionRecord {
   const machines: LabelledRef[] = row.linked_machines;
   const chassis: LabelledRef[] = row.linked_chassis;
   const photos = (row.linked_photos as PhotoRow[]).map(toPhotoRef);
@@ -128,12 +123,22 @@ export async function loadRevision(knex: Knex, revisionId: number): Promise<Revi
     updatedAt: iso(row.updated_at)!,
     submittedAt: iso(row.submitted_at),
     proofedAt: iso(row.proofed_at),
-    values: valuesOf(
-      row,
-      machines.map((m) => m.id),
-      chassis.map((c) => c.id),
-      photos.map((p) => p.id),
-    ),
+    values: {
+      title: row.title,
+      symptoms: row.symptoms,
+      errorCodes: row.error_codes,
+      cause: row.cause,
+      body: row.body as BodyDoc,
+      parts: row.parts,
+      readings: row.readings,
+      cautions: row.cautions,
+      difficulty: row.difficulty,
+      timeMinutes: row.time_minutes,
+      editSummary: row.edit_summary,
+      machineIds: machines.map((m) => m.id),
+      chassisIds: chassis.map((c) => c.id),
+      photoIds: photos.map((p) => p.id),
+    },
     held: (row.held_fields ?? {}) as HeldFields,
     machines,
     chassis,
