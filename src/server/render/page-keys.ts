@@ -26,8 +26,8 @@ const searchScopes = versionsOf(['bench', 'catalogue', 'fixes', 'people', 'photo
 // A fix page reads its own row instead of the "fixes" counter, so proofing one fix leaves every other fix's key alone.
 const fixPageScopes = versionsOf(['bench', 'catalogue', 'people', 'photos']);
 
-// Every anonymous read of a kept page asks for its key; readers arriving together share one query (never one begun
-// before they arrived, so a change committed before a request is always seen by it).
+// Every anonymous read of a kept page asks for its key; readers arriving while a key query runs share it (so a
+// reader may miss a change committed within that query's time; the next query sees it).
 const sharedKeys = sharedReads<string | null>();
 
 /** The named counters as one string, read in one query. */
