@@ -77,6 +77,12 @@ async function checkReferences(knex: Knex, writer: Writer, values: FixDraft): Pr
   return refusedReferences(result.rows[0]!);
 }
 
+/** The link lists that are plain sets (photos also keep an order): binding name, table, column. */
+const plainLinks = [
+  ['machines', 'revision_machines', 'machine_id'],
+  ['chassis', 'revision_chassis', 'chassis_family_id'],
+] as const;
+
 /**
  * What a draft applies to and the photos it holds, brought to the given lists, as statements of a WITH clause for the
  * revision `idSql` names: links no longer listed are removed, new ones added, a photo that moved gets its new
@@ -85,21 +91,17 @@ async function checkReferences(knex: Knex, writer: Writer, values: FixDraft): Pr
  * :chassis and :photos (each id once).
  */
 function linksSql(idSql: string): string {
-  return `
-    machines_out AS (
-      DELETE FROM revision_machines
-       WHERE revision_id IN (${idSql}) AND machine_id <> ALL (CAST(:machines AS int[]))),
-    machines_in AS (
-      INSERT INTO revision_machines (revision_id, machine_id)
-      SELECT rev.id, m FROM (${idSql}) AS rev (id), unnest(CAST(:machines AS int[])) AS m
-      ON CONFLICT DO NOTHING),
-    chassis_out AS (
-      DELETE FROM revision_chassis
-       WHERE revision_id IN (${idSql}) AND chassis_family_id <> ALL (CAST(:chassis AS int[]))),
-    chassis_in AS (
-      INSERT INTO revision_chassis (revision_id, chassis_family_id)
-      SELECT rev.id, c FROM (${idSql}) AS rev (id), unnest(CAST(:chassis AS int[])) AS c
-      ON CONFLICT DO NOTHING),
+  const plain = plainLinks.map(
+    ([list, table, column]) => `
+    ${list}_out AS (
+      DELETE FROM ${table}
+       WHERE revision_id IN (${idSql}) AND ${column} <> ALL (CAST(:${list} AS int[]))),
+    ${list}_in AS (
+      INSERT INTO ${table} (revision_id, ${column})
+      SELECT rev.id, x FROM (${idSql}) AS rev (id), unnest(CAST(:${list} AS int[])) AS x
+      ON CONFLICT DO NOTHING),`,
+  );
+  return `${plain.join('')}
     photos_out AS (
       DELETE FROM revision_photos
        WHERE revision_id IN (${idSql}) AND photo_id <> ALL (CAST(:photos AS int[]))),
