@@ -352,4 +352,19 @@ describe('scale and privacy', () => {
     expect(await knex('notification_events').where({ user_id: leaving.id }).first()).toBeUndefined();
     expect((await mailsTo(INTEGRATION_PORT, leaving.email)).filter((m) => m.subject.includes('goes live'))).toHaveLength(0);
   });
+
+  it('records no news for an account already gone (a fan-out that read its followers just before the deletion)', async () => {
+    const gone = await session(knex, base, 'member', 'news-gone');
+    const staying = await session(knex, base, 'member', 'news-staying');
+    const { anonymiseAccount } = await import('@/server/auth/delete-account');
+    expect(await anonymiseAccount(gone.id, gone.id, knex)).toBe(true);
+    const { recordEvents } = await import('@/server/notifications/events');
+    const event = { kind: 'fix_proofed' as const, causeKey: 'proofed:late', fixId: null, title: 'A fix went live', line: '', path: '/' };
+    const recorded = await recordEvents(knex, [
+      { ...event, userId: gone.id },
+      { ...event, userId: staying.id },
+    ]);
+    expect(recorded.map((r) => r.userId)).toEqual([staying.id]);
+    expect(await knex('notification_events').where({ user_id: gone.id }).first()).toBeUndefined();
+  });
 });

@@ -18,26 +18,36 @@ export interface RecordedEvent extends NewEvent {
   id: number;
 }
 
-/** Records events; returns only those that are new (a repeat of a cause is silently kept once). */
+/**
+ * Records events; returns only those that are new (a repeat of a cause is silently kept once). A member whose account
+ * is gone gets none: each member's row is read with a share lock, so an account being deleted at that moment is
+ * waited for and then skipped (the deletion removes their news; a row written just after it would outlive it).
+ */
 export async function recordEvents(knex: Knex, events: NewEvent[]): Promise<RecordedEvent[]> {
   if (events.length === 0) return [];
-  const rows = await knex('notification_events')
-    .insert(
-      events.map((e) => ({
-        user_id: e.userId,
-        kind: e.kind,
-        cause_key: e.causeKey,
-        fix_id: e.fixId,
-        title: e.title.slice(0, 300),
-        line: e.line.slice(0, 500),
-        path: e.path,
-      })),
-    )
-    .onConflict(['user_id', 'cause_key'])
-    .ignore()
-    .returning(['id', 'user_id', 'cause_key']);
+  const rows = events.map((e) => ({
+    user_id: e.userId,
+    kind: e.kind,
+    cause_key: e.causeKey,
+    fix_id: e.fixId,
+    title: e.title.slice(0, 300),
+    line: e.line.slice(0, 500),
+    path: e.path,
+  }));
+  const inserted = await knex.raw<{ rows: { id: string | number; user_id: number; cause_key: string }[] }>(
+    `INSERT INTO notification_events (user_id, kind, cause_key, fix_id, title, line, path)
+     SELECT e.user_id, e.kind, e.cause_key, e.fix_id, e.title, e.line, e.path
+       FROM json_to_recordset(CAST(? AS json))
+            AS e (user_id int, kind text, cause_key text, fix_id int, title text, line text, path text)
+       JOIN users u ON u.id = e.user_id
+      WHERE u.deleted_at IS NULL
+        FOR SHARE OF u
+     ON CONFLICT (user_id, cause_key) DO NOTHING
+     RETURNING id, user_id, cause_key`,
+    [JSON.stringify(rows)],
+  );
   const byKey = new Map(events.map((e) => [`${e.userId}\u0000${e.causeKey}`, e]));
-  return rows.map((row: { id: string | number; user_id: number; cause_key: string }) => ({
+  return inserted.rows.map((row) => ({
     ...byKey.get(`${row.user_id}\u0000${row.cause_key}`)!,
     id: Number(row.id),
   }));
