@@ -17,8 +17,10 @@ const text = (max: number, what: string, example: string) =>
     .string({ error: `${what} is text, e.g. ${example}.` })
     .trim()
     .max(max, `${what} is at most ${max} characters, e.g. ${example}.`);
+/** The largest id PostgreSQL's integer columns hold: a larger one is no id of ours, and the database would refuse it. */
+const LARGEST_ID = 2_147_483_647;
 const ids = (max: number, message: string) =>
-  z.array(z.number({ error: message }).int(message).positive(message), { error: message }).max(max, message);
+  z.array(z.number({ error: message }).int(message).positive(message).max(LARGEST_ID, message), { error: message }).max(max, message);
 
 /** A parts row while it is being typed: every cell may still be empty. */
 export const draftPartRowSchema = z.object(

@@ -20,6 +20,13 @@ const fieldsOf = (input: FixDraftInput) => {
 };
 
 describe('fixDraftSchema', () => {
+  it('refuses an id larger than the database holds, in the field’s own sentence', () => {
+    const result = fixDraftSchema.safeParse({ ...emptyDraft(), machineIds: [2_147_483_648] });
+    expect(result.success).toBe(false);
+    expect(result.error!.issues[0]!.path).toEqual(['machineIds', 0]);
+    expect(fixDraftSchema.safeParse({ ...emptyDraft(), machineIds: [2_147_483_647] }).success).toBe(true);
+  });
+
   it('accepts an empty draft so autosave never refuses work in progress', () => {
     expect(fixDraftSchema.safeParse(emptyDraft()).success).toBe(true);
   });
